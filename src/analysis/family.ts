@@ -1,0 +1,221 @@
+/**
+ * Curve families: for one (basis, shape, arrangement, γ), the normalised interaction curves
+ * Pn/Ag–Mn/(Ag·h) and φPn/Ag–φMn/(Ag·h) for each ρg, with their key points.
+ * Points run from pure tension (c/h → 0) to pure compression (c/h → ∞).
+ */
+import type { Basis, CapContext } from '../codes/types.js';
+import { layoutBars } from '../section/arrangements.js';
+import type { Arrangement, Bar, Shape } from '../section/types.js';
+import { designAt, nominalAt, prepareSection, R, RESPONSE_SIZE, type PreparedSection } from './prepared-section.js';
+import { findRoot, findRootOnGrid } from './solve.js';
+import { tensionStrain } from './section-forces.js';
+
+/** Ends of the sweep: they stand for the limits c → 0 (pure tension) and c → ∞ (pure compression). */
+export const C_OVER_H_MIN = 1e-6;
+export const C_OVER_H_MAX = 1e6;
+
+export interface FamilyRequest {
+  basis: Basis;
+  shape: Shape;
+  arrangement: Arrangement;
+  /** outer-row spacing over depth */
+  gamma: number;
+  gammaX?: number;
+  rhos: readonly number[];
+  capContext?: CapContext;
+  /** base points per curve before key points are added (default 400) */
+  basePoints?: number;
+}
+
+export const KEY_POINT_IDS = [
+  'pure-compression',
+  'axial-cap',
+  'decompression',
+  'balanced',
+  'tension-controlled',
+  'pure-bending',
+  'pure-tension',
+] as const;
+export type KeyPointId = (typeof KEY_POINT_IDS)[number] | string;
+
+/** A point on one family, normalised (stress units). */
+export interface PointValues {
+  cOverH: number;
+  epsT: number;
+  phi: number;
+  P: number;
+  M: number;
+}
+
+export interface KeyPoint {
+  id: KeyPointId;
+  label: string;
+  /** on the nominal curve (null where the curve never reaches it) */
+  nominal: PointValues | null;
+  /** on the factored curve, cap included */
+  design: PointValues | null;
+}
+
+export interface Curve {
+  rho: number;
+  Pn: Float64Array;
+  Mn: Float64Array;
+  phiPn: Float64Array;
+  phiMn: Float64Array;
+  keyPoints: KeyPoint[];
+}
+
+export interface CurveFamily {
+  basis: Basis;
+  /** unit-depth shape */
+  shape: Shape;
+  arrangement: Arrangement;
+  gamma: number;
+  /** unit-depth bars with areas adding to Ag (ρg = 1) */
+  bars: readonly Bar[];
+  sweep: { cOverH: Float64Array; epsT: Float64Array; phi: Float64Array };
+  curves: Curve[];
+  /** the prepared section, for further queries on the same family */
+  section: PreparedSection;
+}
+
+/** Base grid: c/h = ½·tan θ with θ uniform, which spreads points evenly along the curve's length. */
+export function baseGrid(n: number): number[] {
+  const g: number[] = [C_OVER_H_MIN, C_OVER_H_MAX];
+  for (let i = 0; i < n - 2; i++) {
+    const theta = ((i + 0.5) / (n - 2)) * (Math.PI / 2);
+    g.push(Math.min(C_OVER_H_MAX, Math.max(C_OVER_H_MIN, 0.5 * Math.tan(theta))));
+  }
+  return g.sort((a, b) => a - b);
+}
+
+/** c/h at which the extreme tension bar reaches strain εt (monotone in c; solved numerically for any basis). */
+export function depthForTensionStrain(section: PreparedSection, epsT: number): number {
+  const f = (logC: number) => tensionStrain(section.basis.profile(Math.exp(logC), 1), section.dt) - epsT;
+  const x = findRoot(f, Math.log(C_OVER_H_MIN), Math.log(C_OVER_H_MAX), 1e-14);
+  return Number.isNaN(x) ? NaN : Math.exp(x);
+}
+
+/** Builds a family from a request. */
+export function computeFamily(req: FamilyRequest): CurveFamily {
+  const bars = layoutBars(req.shape, req.arrangement, 1, { gamma: req.gamma, ...(req.gammaX !== undefined ? { gammaX: req.gammaX } : {}) });
+  const section = prepareSection(req.basis, req.shape, bars, req.capContext ?? {});
+  return familyOf(section, req.arrangement, req.gamma, req.rhos, req.basePoints ?? 400);
+}
+
+/** Builds a family on a prepared section (custom bars, checks). */
+export function familyOf(section: PreparedSection, arrangement: Arrangement, gamma: number, rhos: readonly number[], basePoints = 400): CurveFamily {
+  const basis = section.basis;
+  const base = baseGrid(basePoints);
+  const r = new Float64Array(RESPONSE_SIZE);
+
+  // 1. c/h of the strain states (shared by every ρg), with close neighbours so the curve bends sharply there.
+  const stateDepths = basis.strainStates.map((s) => depthForTensionStrain(section, s.epsT));
+  // 2. ρg-dependent roots: P = 0 and P = cap, nominal and factored.
+  const roots = rhos.map((rho) => rootsFor(section, rho, base));
+
+  const cs = new Set<number>(base);
+  for (const c of stateDepths) {
+    if (!Number.isFinite(c)) continue;
+    for (const k of [1, 0.98, 0.995, 1.005, 1.02]) cs.add(c * k);
+  }
+  for (const rt of roots) for (const c of Object.values(rt)) if (Number.isFinite(c)) cs.add(c);
+  const cOverH = Float64Array.from([...cs].filter((c) => c >= C_OVER_H_MIN && c <= C_OVER_H_MAX).sort((a, b) => a - b));
+
+  // 3. One sweep for all ρg.
+  const n = cOverH.length;
+  const cols = Array.from({ length: RESPONSE_SIZE }, () => new Float64Array(n));
+  for (let i = 0; i < n; i++) {
+    section.respond(cOverH[i]!, r);
+    for (let k = 0; k < RESPONSE_SIZE; k++) cols[k]![i] = r[k]!;
+  }
+  const epsT = cols[R.epsT]!;
+  const phi = cols[R.factor]!;
+
+  const curves: Curve[] = rhos.map((rho, j) => {
+    const Pn = new Float64Array(n);
+    const Mn = new Float64Array(n);
+    const phiPn = new Float64Array(n);
+    const phiMn = new Float64Array(n);
+    const capD = section.cap('design', rho);
+    for (let i = 0; i < n; i++) {
+      Pn[i] = cols[R.PcN]![i]! + rho * cols[R.PsN]![i]!;
+      Mn[i] = cols[R.McN]![i]! + rho * cols[R.MsN]![i]!;
+      const f = phi[i]!;
+      phiPn[i] = Math.min(f * (cols[R.PcD]![i]! + rho * cols[R.PsD]![i]!), capD);
+      phiMn[i] = f * (cols[R.McD]![i]! + rho * cols[R.MsD]![i]!);
+    }
+    return { rho, Pn, Mn, phiPn, phiMn, keyPoints: keyPointsFor(section, rho, stateDepths, roots[j]!) };
+  });
+
+  return { basis, shape: section.shape, arrangement, gamma, bars: section.bars, sweep: { cOverH, epsT, phi }, curves, section };
+}
+
+interface Roots {
+  bendingN: number;
+  bendingD: number;
+  capN: number;
+  capD: number;
+}
+
+function rootsFor(section: PreparedSection, rho: number, grid: readonly number[]): Roots {
+  const r = new Float64Array(RESPONSE_SIZE);
+  const pN = (c: number) => nominalAt(section.respond(c, r), rho)[0];
+  const pD = (c: number) => designAt(section.respond(c, r), rho)[0];
+  const capN = section.cap('nominal', rho);
+  const capD = section.cap('design', rho);
+  return {
+    bendingN: findRootOnGrid(pN, grid),
+    bendingD: findRootOnGrid(pD, grid),
+    // scan from the compression end: the cap is crossed once on the way down from pure compression
+    capN: Number.isFinite(capN) ? findRootOnGrid((c) => pN(c) - capN, grid, true) : NaN,
+    capD: Number.isFinite(capD) ? findRootOnGrid((c) => pD(c) - capD, grid, true) : NaN,
+  };
+}
+
+function pointAt(section: PreparedSection, rho: number, c: number, kind: 'nominal' | 'design', cap = Infinity): PointValues | null {
+  if (!Number.isFinite(c)) return null;
+  const r = section.respond(c, new Float64Array(RESPONSE_SIZE));
+  const [P, M] = kind === 'nominal' ? nominalAt(r, rho) : designAt(r, rho);
+  return { cOverH: c, epsT: r[R.epsT]!, phi: kind === 'nominal' ? 1 : r[R.factor]!, P: Math.min(P, cap), M };
+}
+
+function keyPointsFor(section: PreparedSection, rho: number, stateDepths: readonly number[], roots: Roots): KeyPoint[] {
+  const { basis } = section;
+  const capD = section.cap('design', rho);
+  const out: KeyPoint[] = [];
+  const top = pointAt(section, rho, C_OVER_H_MAX, 'nominal')!;
+  const topD = pointAt(section, rho, C_OVER_H_MAX, 'design')!;
+  out.push({
+    id: 'pure-compression',
+    label: 'pure compression (Po)',
+    nominal: { ...top, P: section.squash('nominal', rho) },
+    design: { ...topD, P: topD.phi * section.squash('design', rho) },
+  });
+  const capN = section.cap('nominal', rho);
+  if (Number.isFinite(capN) || Number.isFinite(capD)) {
+    out.push({
+      id: 'axial-cap',
+      label: 'axial cap (Pn,max)',
+      nominal: Number.isFinite(capN) ? pointAt(section, rho, roots.capN, 'nominal') : null,
+      design: Number.isFinite(capD) ? pointAt(section, rho, roots.capD, 'design', capD) : null,
+    });
+  }
+  basis.strainStates.forEach((s, k) => {
+    const c = stateDepths[k]!;
+    out.push({ id: s.id, label: s.label, nominal: pointAt(section, rho, c, 'nominal'), design: pointAt(section, rho, c, 'design', capD) });
+  });
+  out.push({
+    id: 'pure-bending',
+    label: 'pure bending (P = 0)',
+    nominal: pointAt(section, rho, roots.bendingN, 'nominal'),
+    design: pointAt(section, rho, roots.bendingD, 'design', capD),
+  });
+  out.push({
+    id: 'pure-tension',
+    label: 'pure tension',
+    nominal: pointAt(section, rho, C_OVER_H_MIN, 'nominal'),
+    design: pointAt(section, rho, C_OVER_H_MIN, 'design'),
+  });
+  return out;
+}

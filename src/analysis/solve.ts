@@ -1,0 +1,52 @@
+/**
+ * Bracketed root finding by bisection with a secant step where it helps (Illinois variant of
+ * regula falsi; Dowell & Jarratt, BIT 11 (1971) 168–174). Returns NaN when [a, b] does not bracket.
+ */
+export function findRoot(f: (x: number) => number, a: number, b: number, tol = 1e-12, maxIter = 200): number {
+  let fa = f(a);
+  let fb = f(b);
+  if (fa === 0) return a;
+  if (fb === 0) return b;
+  if (Number.isNaN(fa) || Number.isNaN(fb) || fa * fb > 0) return NaN;
+  let side = 0;
+  let x = a;
+  for (let i = 0; i < maxIter; i++) {
+    x = (a * fb - b * fa) / (fb - fa);
+    if (!(x > Math.min(a, b) && x < Math.max(a, b))) x = (a + b) / 2;
+    const fx = f(x);
+    if (fx === 0 || Math.abs(b - a) < tol * (1 + Math.abs(x))) return x;
+    if (fx * fb > 0) {
+      b = x;
+      fb = fx;
+      if (side === -1) fa /= 2;
+      side = -1;
+    } else {
+      a = x;
+      fa = fx;
+      if (side === 1) fb /= 2;
+      side = 1;
+    }
+  }
+  return x;
+}
+
+/**
+ * Finds x in a sorted grid where f changes sign, then refines; scans from the high end when `fromHigh`.
+ * Returns NaN when f keeps one sign on the grid.
+ */
+export function findRootOnGrid(f: (x: number) => number, grid: ArrayLike<number>, fromHigh = false, tol = 1e-12): number {
+  const n = grid.length;
+  if (n === 0) return NaN;
+  let prevX = grid[fromHigh ? n - 1 : 0]!;
+  let prevF = f(prevX);
+  if (prevF === 0) return prevX;
+  for (let k = 1; k < n; k++) {
+    const x = grid[fromHigh ? n - 1 - k : k]!;
+    const fx = f(x);
+    if (fx === 0) return x;
+    if (prevF * fx < 0) return findRoot(f, Math.min(prevX, x), Math.max(prevX, x), tol);
+    prevX = x;
+    prevF = fx;
+  }
+  return NaN;
+}

@@ -1,0 +1,157 @@
+/**
+ * ACI 318-19 and ACI 318-14 design bases. The two editions differ here only in the strain that
+ * ends the transition zone: εty + 0.003 (318-19 Table 21.2.2) against 0.005 (318-14 Table 21.2.2).
+ */
+import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
+import { rectangularBlock } from '../materials/rectangular-block.js';
+import { stressToMPa, type UnitSystem } from '../units/index.js';
+import type { Basis, BasisInput, CodeId, DesignCode, ResistanceModel, StrainClass, StrainProfile } from './types.js';
+
+/** ACI 318-19 22.2.2.1: maximum usable strain at the extreme concrete compression fibre. */
+export const ACI_EPS_CU = 0.003;
+
+/** ACI 318-19 20.2.2.2: Es = 29,000,000 psi (US) or 200,000 MPa (SI). */
+export const aciSteelModulus = (units: UnitSystem): number => (units === 'us' ? 29_000 : 200_000);
+
+/** ACI 318-19 Table 22.2.2.4.3: β1 from f′c, in psi units (fc given in ksi) or MPa units. */
+export function aciBeta1(fc: number, units: UnitSystem): number {
+  const beta = units === 'us' ? 0.85 - (0.05 * (fc - 4)) / 1 : 0.85 - (0.05 * (fc - 28)) / 7;
+  return Math.min(0.85, Math.max(0.65, beta));
+}
+
+/** ACI 318-19 22.4.2.1 caps fy in Po at 80,000 psi (550 MPa). */
+export const aciPoYieldCap = (units: UnitSystem): number => (units === 'us' ? 80 : 550);
+
+/** ACI 318-19 Table 21.2.2: φ from εt, linear between εty and the tension-controlled limit. */
+export function aciPhi(epsT: number, epsTy: number, epsTension: number, phiCompression: number): number {
+  if (epsT <= epsTy) return phiCompression;
+  if (epsT >= epsTension) return 0.9;
+  return phiCompression + ((0.9 - phiCompression) * (epsT - epsTy)) / (epsTension - epsTy);
+}
+
+interface Edition {
+  id: CodeId;
+  title: string;
+  /** tension-controlled limit strain given εty */
+  tensionLimit(epsTy: number): number;
+  tensionLimitText: string;
+  clause: string;
+}
+
+const EDITIONS: Record<'aci318-19' | 'aci318-14', Edition> = {
+  'aci318-19': {
+    id: 'aci318-19',
+    title: 'ACI 318-19',
+    tensionLimit: (epsTy) => epsTy + 0.003,
+    tensionLimitText: 'εty + 0.003',
+    clause: 'ACI 318-19 Table 21.2.2',
+  },
+  'aci318-14': {
+    id: 'aci318-14',
+    title: 'ACI 318-14',
+    tensionLimit: () => 0.005,
+    tensionLimitText: '0.005',
+    clause: 'ACI 318-14 Table 21.2.2',
+  },
+};
+
+function makeAci(edition: Edition): DesignCode {
+  return {
+    id: edition.id,
+    title: edition.title,
+    limits: (units) =>
+      units === 'us'
+        ? { fc: [2.5, 20], fy: [40, 100] }
+        : { fc: [17, 140], fy: [280, 690] },
+    resolve: (input: BasisInput): Basis => resolveAci(edition, input),
+  };
+}
+
+function resolveAci(edition: Edition, input: BasisInput): Basis {
+  const { units, fc, fy, transverse } = input;
+  const Es = aciSteelModulus(units);
+  const beta1 = aciBeta1(fc, units);
+  const epsTy = fy / Es; // ACI 318-19 21.2.2.1
+  const epsTc = edition.tensionLimit(epsTy);
+  const phiC = transverse === 'spiral' ? 0.75 : 0.65; // Table 21.2.2
+  const capRatio = transverse === 'spiral' ? 0.85 : 0.8; // 22.4.2.1
+  const concrete = rectangularBlock(0.85 * fc, beta1, ACI_EPS_CU, `0.85·f′c block over a = β1·c, β1 = ${beta1.toFixed(3)}`);
+  const steel = elasticPlasticSteel(fy, Es);
+  const squash = { concreteStress: 0.85 * fc, steelStress: Math.min(fy, aciPoYieldCap(units)) };
+  const nominal: ResistanceModel = {
+    label: 'nominal',
+    concrete,
+    steel,
+    factor: () => 1,
+    squash,
+    capFactor: () => capRatio,
+  };
+  const design: ResistanceModel = {
+    label: 'φ-factored',
+    concrete,
+    steel,
+    factor: (epsT) => aciPhi(epsT, epsTy, epsTc, phiC),
+    squash,
+    capFactor: () => phiC * capRatio,
+  };
+  const fcMPa = stressToMPa(fc, units);
+  const su = units === 'us' ? 'ksi' : 'MPa';
+  return {
+    code: edition.id,
+    title: edition.title,
+    units,
+    fc,
+    fy,
+    Es,
+    transverse,
+    profile: (c: number, h: number): StrainProfile => aciProfile(c, h),
+    nominal,
+    design,
+    strainStates: [
+      { id: 'decompression', label: 'εt = 0', epsT: 0 },
+      { id: 'balanced', label: 'εt = εty (balanced)', epsT: epsTy },
+      { id: 'tension-controlled', label: `εt = ${edition.tensionLimitText} (tension-controlled limit)`, epsT: epsTc },
+    ],
+    classify: (epsT: number): StrainClass =>
+      epsT <= epsTy ? 'compression-controlled' : epsT >= epsTc ? 'tension-controlled' : 'transition',
+    normalisingStress: fc,
+    symbols: {
+      nominalAxial: 'Pn',
+      nominalMoment: 'Mn',
+      designAxial: 'φPn',
+      designMoment: 'φMn',
+      designFamily: 'φ-factored',
+      nominalFamily: 'nominal',
+      normalisingStress: 'f′c',
+    },
+    rhoLimits: { min: 0.01, max: 0.08 }, // 10.6.1.1
+    parameters: {
+      'β1': Number(beta1.toFixed(4)),
+      'εcu': ACI_EPS_CU,
+      Es: Es,
+      'εty': Number(epsTy.toFixed(6)),
+      'tension-controlled εt': Number(epsTc.toFixed(6)),
+      'φ (compression-controlled)': phiC,
+      'Pn,max / Po': capRatio,
+      'fy in Po': squash.steelStress,
+    },
+    notes: [
+      `Equivalent rectangular stress block 0.85·f′c over a = β1·c, β1 = ${beta1.toFixed(3)} (${edition.title} 22.2.2.4, Table 22.2.2.4.3); concrete tensile strength neglected (22.2.2.2).`,
+      `Extreme-fibre concrete strain εcu = 0.003 (22.2.2.1); plane sections (22.2.1.2).`,
+      `Reinforcement elastic–perfectly plastic, Es = ${Es} ${su} (20.2.2.1, 20.2.2.2); εty = fy/Es = ${epsTy.toFixed(5)}.`,
+      `Displaced concrete is deducted for bars inside the stress block; moments are taken about the gross-section centroid.`,
+      `φ per ${edition.clause}: ${phiC} (${transverse}) for εt ≤ εty, 0.90 for εt ≥ ${edition.tensionLimitText}, linear between.`,
+      `Axial cap Pn,max = ${capRatio}·Po (22.4.2.1) with Po = 0.85·f′c·(Ag − Ast) + fy·Ast (22.4.2.2), fy in Po ≤ ${aciPoYieldCap(units)} ${su}.`,
+      `Column steel 0.01·Ag ≤ Ast ≤ 0.08·Ag (10.6.1.1). f′c = ${fc} ${su} (${fcMPa.toFixed(1)} MPa).`,
+    ],
+  };
+}
+
+/** ACI 318-19 22.2.1.2 and 22.2.2.1: plane strain with εcu = 0.003 at the extreme compression fibre. */
+export function aciProfile(c: number, _h: number): StrainProfile {
+  if (!Number.isFinite(c)) return { top: ACI_EPS_CU, curvature: 0 };
+  return { top: ACI_EPS_CU, curvature: ACI_EPS_CU / c };
+}
+
+export const ACI_318_19: DesignCode = makeAci(EDITIONS['aci318-19']);
+export const ACI_318_14: DesignCode = makeAci(EDITIONS['aci318-14']);

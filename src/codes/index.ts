@@ -1,0 +1,3 @@
+export * from './types.js';
+export * from './aci318.js';
+export * from './registry.js';

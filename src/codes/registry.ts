@@ -1,0 +1,31 @@
+import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
+import { DISPLAY_UNITS } from '../units/index.js';
+import { ACI_318_14, ACI_318_19 } from './aci318.js';
+import type { Basis, BasisInput, CodeId, DesignCode } from './types.js';
+
+/** Every design basis pmchart knows, keyed by the `--code` value. */
+export const DESIGN_CODES: Partial<Record<CodeId, DesignCode>> = {
+  'aci318-19': ACI_318_19,
+  'aci318-14': ACI_318_14,
+};
+
+export function designCode(id: string, path = '--code'): DesignCode {
+  const code = DESIGN_CODES[id as CodeId];
+  if (!code) {
+    throw new PmError(ERROR_CODES.invalidValue, path, 'is not a known design basis', {
+      value: id,
+      allowed: Object.keys(DESIGN_CODES).join(', '),
+    });
+  }
+  return code;
+}
+
+/** Checks material strengths against the code's limits, then resolves the basis. */
+export function resolveBasis(id: string, input: BasisInput, paths = { code: '--code', fc: '--fc', fy: '--fy' }): Basis {
+  const code = designCode(id, paths.code);
+  const lim = code.limits(input.units);
+  const su = DISPLAY_UNITS[input.units].stress;
+  requireInRange(paths.fc, input.fc, lim.fc[0], lim.fc[1], su);
+  requireInRange(paths.fy, input.fy, lim.fy[0], lim.fy[1], su);
+  return code.resolve(input);
+}

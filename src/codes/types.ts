@@ -1,0 +1,125 @@
+/**
+ * The one interface every design basis implements. Analysis asks a basis for its strain profile,
+ * its material laws and its factors; it never branches on a code's name.
+ */
+import type { ConcreteLaw, SteelLaw } from '../materials/types.js';
+import type { UnitSystem } from '../units/index.js';
+
+export const CODE_IDS = ['aci318-19', 'aci318-14', 'en1992-1-1', 'csa-a23.3-19'] as const;
+export type CodeId = (typeof CODE_IDS)[number];
+export const isCodeId = (s: unknown): s is CodeId => CODE_IDS.includes(s as CodeId);
+
+export const TRANSVERSE_TYPES = ['tied', 'spiral'] as const;
+export type Transverse = (typeof TRANSVERSE_TYPES)[number];
+export const isTransverse = (s: unknown): s is Transverse => TRANSVERSE_TYPES.includes(s as Transverse);
+
+/** Linear strain over the depth: ε(depth) = top − curvature·depth, compression positive, depth from the compression face. */
+export interface StrainProfile {
+  top: number;
+  curvature: number;
+}
+
+/** Context some caps need, e.g. CSA A23.3 ties the tied-column cap to h in mm. */
+export interface CapContext {
+  /** section depth in the system's length unit, when known */
+  depth?: number;
+}
+
+/** A set of material laws plus the factor applied to the section resultant. */
+export interface ResistanceModel {
+  /** e.g. "nominal", "φ-factored", "design (γc = 1.5, γs = 1.15)" */
+  readonly label: string;
+  readonly concrete: ConcreteLaw;
+  readonly steel: SteelLaw;
+  /** factor on the section resultant at extreme-tension strain εt (ACI φ); 1 where factors sit in the materials */
+  factor(epsT: number): number;
+  /** Po/Ag = concreteStress·(1 − ρ) + steelStress·ρ for this model (ACI 318-19 22.4.2.2 form) */
+  readonly squash: { readonly concreteStress: number; readonly steelStress: number };
+  /** maximum axial resistance as a multiple of this model's Po (ACI 318-19 22.4.2.1); Infinity where the code sets none */
+  capFactor(ctx: CapContext): number;
+}
+
+/** A named strain state of the extreme tension bar, marked on charts and listed in tables. */
+export interface StrainState {
+  readonly id: 'decompression' | 'balanced' | 'tension-controlled' | string;
+  readonly label: string;
+  /** extreme-tension-bar strain, tension positive */
+  readonly epsT: number;
+}
+
+export interface BasisInput {
+  units: UnitSystem;
+  /** specified concrete strength (f′c or fck) in the system's stress unit */
+  fc: number;
+  /** specified yield strength (fy or fyk) in the system's stress unit */
+  fy: number;
+  transverse: Transverse;
+  options?: BasisOptions;
+}
+
+/** Options some bases read; others ignore them. Defaults are each basis's recommended values. */
+export interface BasisOptions {
+  /** EN 1992-1-1 3.1.6(1) αcc (recommended 1.0) */
+  alphaCc?: number;
+  /** EN 1992-1-1 2.4.2.4 γc (recommended 1.5) */
+  gammaC?: number;
+  /** EN 1992-1-1 2.4.2.4 γs (recommended 1.15) */
+  gammaS?: number;
+  /** concrete law where a code offers more than one */
+  concreteLaw?: 'parabola-rectangle' | 'rectangular-block';
+  /** EN 1992-1-1 3.2.7(2) steel branch */
+  steelBranch?: 'horizontal' | 'inclined';
+}
+
+export type StrainClass = 'compression-controlled' | 'transition' | 'tension-controlled';
+
+export interface Basis {
+  readonly code: CodeId;
+  /** e.g. "ACI 318-19" */
+  readonly title: string;
+  readonly units: UnitSystem;
+  readonly fc: number;
+  readonly fy: number;
+  readonly Es: number;
+  readonly transverse: Transverse;
+  /** strain profile for neutral-axis depth c ≥ 0 in a section of depth h (c = Infinity: uniform compression) */
+  profile(c: number, h: number): StrainProfile;
+  readonly nominal: ResistanceModel;
+  readonly design: ResistanceModel;
+  readonly strainStates: readonly StrainState[];
+  /** classification of the extreme-tension strain for reports */
+  classify(epsT: number): StrainClass;
+  /** stress that makes the normalised values dimensionless (f′c, or fcd for EN 1992-1-1) */
+  readonly normalisingStress: number;
+  /** symbols used on charts and tables */
+  readonly symbols: BasisSymbols;
+  /** allowed gross reinforcement ratio for columns */
+  readonly rhoLimits: { readonly min: number; readonly max: number };
+  /** derived parameters worth printing (β1, εcu, αcc …), name → value */
+  readonly parameters: Readonly<Record<string, number | string>>;
+  /** assumptions with their clauses, for sheets, reports and the README */
+  readonly notes: readonly string[];
+}
+
+export interface BasisSymbols {
+  /** e.g. "Pn", "NRk"; the unfactored family */
+  nominalAxial: string;
+  nominalMoment: string;
+  /** e.g. "φPn", "NRd", "Pr" */
+  designAxial: string;
+  designMoment: string;
+  /** name of the factored family: "φ-factored", "design" */
+  designFamily: string;
+  nominalFamily: string;
+  /** symbol of the normalising stress, e.g. "f′c", "fcd" */
+  normalisingStress: string;
+}
+
+/** A design code: input limits and a resolver from materials to a Basis. */
+export interface DesignCode {
+  readonly id: CodeId;
+  readonly title: string;
+  /** allowed specified strengths in the given system's stress unit */
+  limits(units: UnitSystem): { fc: [number, number]; fy: [number, number] };
+  resolve(input: BasisInput): Basis;
+}

@@ -1,0 +1,62 @@
+/**
+ * Problems are data: a code, a path (flag or config field) and the facts.
+ * Turning them into one line of text happens in `formatError` only.
+ */
+export const ERROR_CODES = {
+  outOfRange: 'out-of-range',
+  invalidValue: 'invalid-value',
+  invalidUnit: 'invalid-unit',
+  missing: 'missing',
+  conflict: 'conflict',
+  io: 'io',
+  environment: 'environment',
+  notPossible: 'not-possible',
+} as const;
+export type ErrorCode = (typeof ERROR_CODES)[keyof typeof ERROR_CODES];
+
+export interface ErrorFacts {
+  /** the value given, as the user wrote it */
+  value?: unknown;
+  /** allowed range or set, as text, e.g. "0.3–0.95" */
+  allowed?: string;
+  [key: string]: unknown;
+}
+
+/** The one error type commands throw; the CLI handler prints `message` and exits with `exitCode`. */
+export class PmError extends Error {
+  readonly code: ErrorCode;
+  readonly path: string;
+  readonly facts: ErrorFacts;
+  readonly exitCode: number;
+
+  constructor(code: ErrorCode, path: string, detail: string, facts: ErrorFacts = {}, exitCode = 2) {
+    super(formatError(path, detail, facts));
+    this.name = 'PmError';
+    this.code = code;
+    this.path = path;
+    this.facts = facts;
+    this.exitCode = exitCode;
+  }
+}
+
+/** One line: "<path>: <value> <detail> (allowed: …)"; `detail` may already name the range. */
+export function formatError(path: string, detail: string, facts: ErrorFacts): string {
+  const shown = facts.value === undefined ? '' : `${String(facts.value)} `;
+  const allowed = facts.allowed === undefined || detail.includes(facts.allowed) ? '' : ` (allowed: ${facts.allowed})`;
+  const where = path ? `${path}: ` : '';
+  return `${where}${shown}${detail}${allowed}`.replace(/\s+/g, ' ').trim();
+}
+
+/** Throws an out-of-range error unless lo ≤ value ≤ hi. */
+export function requireInRange(path: string, value: number, lo: number, hi: number, unit = ''): number {
+  if (!Number.isFinite(value) || value < lo || value > hi) {
+    const u = unit ? ` ${unit}` : '';
+    const allowed = `${lo}–${hi}${u}`;
+    throw new PmError(ERROR_CODES.outOfRange, path, `is outside ${allowed}`, { value: `${value}${u}`, allowed });
+  }
+  return value;
+}
+
+export function isPmError(e: unknown): e is PmError {
+  return e instanceof PmError;
+}

@@ -1,0 +1,4 @@
+export type { ConcreteLaw, SteelLaw } from './types.js';
+export { rectangularBlock } from './rectangular-block.js';
+export { parabolaRectangle } from './parabola-rectangle.js';
+export { elasticPlasticSteel } from './elastic-plastic-steel.js';

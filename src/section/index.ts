@@ -1,0 +1,3 @@
+export * from './types.js';
+export * from './geometry.js';
+export * from './arrangements.js';

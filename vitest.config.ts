@@ -1,0 +1,10 @@
+import { defineConfig } from 'vitest/config';
+
+// node-canvas segfaults in worker threads, so tests stay on the default `forks` pool.
+export default defineConfig({
+  test: {
+    include: ['tests/**/*.test.ts'],
+    pool: 'forks',
+    testTimeout: 60_000,
+  },
+});
