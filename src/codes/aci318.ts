@@ -125,6 +125,9 @@ function resolveAci(edition: Edition, input: BasisInput): Basis {
       normalisingStress: 'f′c',
     },
     rhoLimits: { min: 0.01, max: 0.08 }, // 10.6.1.1
+    steelAreaLimits: (_p: number, ag: number) => ({ min: 0.01 * ag, max: 0.08 * ag }), // 10.6.1.1
+    minimumMoment: () => 0, // no minimum eccentricity for short columns; the cap 22.4.2.1 stands in for it
+    barSet: units === 'us' ? 'astm-a615' : 'metric',
     parameters: {
       'β1': Number(beta1.toFixed(4)),
       'εcu': ACI_EPS_CU,

@@ -71,6 +71,9 @@ export interface BasisOptions {
   steelBranch?: 'horizontal' | 'inclined';
 }
 
+export const BAR_SET_IDS = ['astm-a615', 'metric', 'en-common', 'csa-g30.18'] as const;
+export type BarSetId = (typeof BAR_SET_IDS)[number];
+
 export type StrainClass = 'compression-controlled' | 'transition' | 'tension-controlled';
 
 export interface Basis {
@@ -95,6 +98,18 @@ export interface Basis {
   readonly symbols: BasisSymbols;
   /** allowed gross reinforcement ratio for columns */
   readonly rhoLimits: { readonly min: number; readonly max: number };
+  /**
+   * Allowed total longitudinal steel area for an axial demand (same internal units as the section):
+   * ACI 318-19 10.6.1.1 is a fixed 1–8 % of Ag; EN 1992-1-1 9.5.2 depends on NEd.
+   */
+  steelAreaLimits(axialDemand: number, grossArea: number): { min: number; max: number };
+  /**
+   * Smallest design moment the code requires for an axial demand in a section of the given depth
+   * (EN 1992-1-1 6.1(4) minimum eccentricity); 0 where the basis sets none for short columns.
+   */
+  minimumMoment(axialDemand: number, depth: number): number;
+  /** which bar-size table proposals draw from (src/section/bar-tables.ts) */
+  readonly barSet: BarSetId;
   /** derived parameters worth printing (β1, εcu, αcc …), name → value */
   readonly parameters: Readonly<Record<string, number | string>>;
   /** assumptions with their clauses, for sheets, reports and the README */

@@ -1,3 +1,4 @@
 export * from './types.js';
 export * from './geometry.js';
 export * from './arrangements.js';
+export * from './bar-tables.js';

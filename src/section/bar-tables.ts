@@ -1,0 +1,64 @@
+/**
+ * Bar-size tables. Diameters and areas in the table's own system: in and in² (US), mm and mm² (SI).
+ */
+import type { BarSetId } from '../codes/types.js';
+import type { UnitSystem } from '../units/index.js';
+
+export interface BarSize {
+  /** designation as written on drawings, e.g. "#8", "25", "25M" */
+  name: string;
+  diameter: number;
+  area: number;
+}
+
+export interface BarSet {
+  id: BarSetId;
+  units: UnitSystem;
+  source: string;
+  sizes: readonly BarSize[];
+}
+
+/** ASTM A615/A615M Table 1 nominal dimensions (inch-pound designations). */
+const ASTM_A615: BarSet = {
+  id: 'astm-a615',
+  units: 'us',
+  source: 'ASTM A615/A615M, Table 1 (nominal diameter and area)',
+  sizes: [
+    { name: '#3', diameter: 0.375, area: 0.11 },
+    { name: '#4', diameter: 0.5, area: 0.2 },
+    { name: '#5', diameter: 0.625, area: 0.31 },
+    { name: '#6', diameter: 0.75, area: 0.44 },
+    { name: '#7', diameter: 0.875, area: 0.6 },
+    { name: '#8', diameter: 1.0, area: 0.79 },
+    { name: '#9', diameter: 1.128, area: 1.0 },
+    { name: '#10', diameter: 1.27, area: 1.27 },
+    { name: '#11', diameter: 1.41, area: 1.56 },
+    { name: '#14', diameter: 1.693, area: 2.25 },
+    { name: '#18', diameter: 2.257, area: 4.0 },
+  ],
+};
+
+/** Common metric diameters 10–40 mm; area = π·d²/4 (common practice, rounded to 0.1 mm²). */
+const metric = (id: BarSetId, source: string, diameters: number[]): BarSet => ({
+  id,
+  units: 'si',
+  source,
+  sizes: diameters.map((d) => ({ name: `${d}`, diameter: d, area: Math.round((Math.PI * d * d * 10) / 4) / 10 })),
+});
+
+export const BAR_SETS: Record<string, BarSet> = {
+  'astm-a615': ASTM_A615,
+  metric: metric('metric', 'common metric bar diameters 10–40 mm (common practice), area = π·d²/4', [10, 12, 14, 16, 20, 25, 28, 32, 36, 40]),
+};
+
+export function barSet(id: BarSetId): BarSet {
+  const set = BAR_SETS[id];
+  if (!set) throw new Error(`bar set ${id} is not registered`);
+  return set;
+}
+
+/** Finds a bar size by name ("#9", "9", "25", "25M") in a set. */
+export function findBar(set: BarSet, name: string): BarSize | undefined {
+  const n = name.trim().toUpperCase().replace(/^NO\.?\s*/, '#');
+  return set.sizes.find((s) => s.name.toUpperCase() === n || s.name.toUpperCase() === `#${n}` || s.name.toUpperCase().replace(/M$/, '') === n.replace(/M$/, ''));
+}
