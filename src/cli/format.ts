@@ -1,0 +1,40 @@
+/** Deterministic number and CSV formatting shared by every command's output. */
+
+/** Seven significant digits, no −0, no exponent noise below 1e-12 in magnitude. */
+export function fmt(x: number, digits = 7): string {
+  if (!Number.isFinite(x)) return x > 0 ? 'inf' : x < 0 ? '-inf' : '';
+  if (Math.abs(x) < 1e-12) return '0';
+  return String(Number(x.toPrecision(digits)));
+}
+
+/** A number rounded as `fmt` shows it, for JSON. */
+export function num(x: number, digits = 7): number | null {
+  if (!Number.isFinite(x)) return null;
+  if (Math.abs(x) < 1e-12) return 0;
+  return Number(x.toPrecision(digits));
+}
+
+const csvCell = (v: string | number): string => {
+  const s = typeof v === 'number' ? fmt(v) : v;
+  return /[",\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
+};
+
+export function csvLine(cells: readonly (string | number)[]): string {
+  return cells.map(csvCell).join(',');
+}
+
+/** Parses "0.01:0.08:0.01" (inclusive range) or "0.01,0.02,0.04" into a sorted list. */
+export function parseNumberList(text: string): number[] | null {
+  const t = text.trim();
+  const range = /^([^:]+):([^:]+):([^:]+)$/.exec(t);
+  if (range) {
+    const [a, b, s] = [Number(range[1]), Number(range[2]), Number(range[3])];
+    if (![a, b, s].every(Number.isFinite) || s <= 0 || b < a) return null;
+    const n = Math.floor((b - a) / s + 1e-9);
+    if (n > 10_000) return null;
+    return Array.from({ length: n + 1 }, (_, i) => Number((a + i * s).toPrecision(12)));
+  }
+  const parts = t.split(',').map((p) => Number(p.trim()));
+  if (parts.length === 0 || !parts.every(Number.isFinite)) return null;
+  return parts;
+}

@@ -1,0 +1,160 @@
+/**
+ * `pmchart table`: normalised curve families as CSV or JSON. Needs no section size.
+ * CSV columns (stable interface): rho_g,c_over_h,eps_t,phi,Pn_norm,Mn_norm,phiPn_norm,phiMn_norm
+ */
+import type { Command } from 'commander';
+import { computeFamily, type CurveFamily, type KeyPoint, type PointValues } from '../analysis/family.js';
+import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
+import { DISPLAY_UNITS } from '../units/index.js';
+import { generatorLabel } from '../version.js';
+import { csvLine, fmt, num, parseNumberList } from './format.js';
+import { addSectionOptions, resolveSectionFlags, type ResolvedSection, type SectionFlags } from './section-flags.js';
+
+export const TABLE_COLUMNS = ['rho_g', 'c_over_h', 'eps_t', 'phi', 'Pn_norm', 'Mn_norm', 'phiPn_norm', 'phiMn_norm'] as const;
+
+export interface TableOptions extends SectionFlags {
+  rho?: string;
+  format?: string;
+  dimensionless?: boolean;
+  points?: string;
+}
+
+/** Parses a ρg list flag against the allowed 0.001–0.10 span. */
+export function parseRhoList(text: string | undefined, path = '--rho'): number[] {
+  const list = parseNumberList(text ?? '0.01:0.08:0.01');
+  if (!list || list.length === 0) {
+    throw new PmError(ERROR_CODES.invalidValue, path, 'is not a list (0.01,0.02) or a range start:stop:step', { value: text });
+  }
+  for (const r of list) requireInRange(path, r, 0.001, 0.1);
+  return list;
+}
+
+export interface TableRequest {
+  section: ResolvedSection;
+  rhos: number[];
+  dimensionless: boolean;
+  basePoints: number;
+}
+
+export function resolveTableOptions(o: TableOptions): TableRequest {
+  const section = resolveSectionFlags(o);
+  const format = o.format ?? 'csv';
+  if (format !== 'csv' && format !== 'json') {
+    throw new PmError(ERROR_CODES.invalidValue, '--format', 'is not one of the allowed values', { value: format, allowed: 'csv, json' });
+  }
+  const basePoints = o.points === undefined ? 400 : Number(o.points);
+  if (!Number.isInteger(basePoints)) throw new PmError(ERROR_CODES.invalidValue, '--points', 'is not a whole number', { value: o.points });
+  requireInRange('--points', basePoints, 400, 20000);
+  return { section, rhos: parseRhoList(o.rho), dimensionless: o.dimensionless === true, basePoints };
+}
+
+export function familyFor(req: TableRequest): CurveFamily {
+  const s = req.section;
+  return computeFamily({
+    basis: s.basis,
+    shape: s.shape,
+    arrangement: s.arrangement,
+    gamma: s.gamma,
+    rhos: req.rhos,
+    capContext: s.capContext,
+    basePoints: req.basePoints,
+  });
+}
+
+/** Runs the command and returns the text it prints (tests call this without the parser). */
+export function runTable(o: TableOptions): string {
+  const req = resolveTableOptions(o);
+  const family = familyFor(req);
+  return (o.format ?? 'csv') === 'json' ? tableJson(family, req) : tableCsv(family, req);
+}
+
+export function tableCsv(family: CurveFamily, req: TableRequest): string {
+  const k = req.dimensionless ? 1 / family.basis.normalisingStress : 1;
+  const { cOverH, epsT, phi } = family.sweep;
+  const lines = [csvLine(TABLE_COLUMNS)];
+  for (const c of family.curves) {
+    for (let i = 0; i < cOverH.length; i++) {
+      lines.push(csvLine([c.rho, cOverH[i]!, epsT[i]!, phi[i]!, c.Pn[i]! * k, c.Mn[i]! * k, c.phiPn[i]! * k, c.phiMn[i]! * k]));
+    }
+  }
+  return lines.join('\n') + '\n';
+}
+
+const pointJson = (p: PointValues | null, k: number, prefix: 'n' | 'phi') =>
+  p === null
+    ? null
+    : {
+        c_over_h: num(p.cOverH),
+        eps_t: num(p.epsT),
+        phi: num(p.phi),
+        [prefix === 'n' ? 'Pn_norm' : 'phiPn_norm']: num(p.P * k),
+        [prefix === 'n' ? 'Mn_norm' : 'phiMn_norm']: num(p.M * k),
+      };
+
+export const keyPointJson = (kp: KeyPoint, k: number) => ({
+  id: kp.id,
+  label: kp.label,
+  nominal: pointJson(kp.nominal, k, 'n'),
+  factored: pointJson(kp.design, k, 'phi'),
+});
+
+export function normalisationInfo(family: CurveFamily, dimensionless: boolean) {
+  const b = family.basis;
+  const su = DISPLAY_UNITS[b.units].stress;
+  const s = b.symbols;
+  const ag = family.shape.kind === 'circle' ? 'Ag·D' : 'b·h²';
+  const ap = family.shape.kind === 'circle' ? 'Ag' : 'b·h';
+  return dimensionless
+    ? { kind: 'dimensionless', unit: '1', axial: `${s.nominalAxial}/(${s.normalisingStress}·${ap})`, moment: `${s.nominalMoment}/(${s.normalisingStress}·${ag})`, divisor: num(b.normalisingStress) }
+    : { kind: 'stress', unit: su, axial: `${s.nominalAxial}/(${ap})`, moment: `${s.nominalMoment}/(${ag})`, divisor: 1 };
+}
+
+export function tableJson(family: CurveFamily, req: TableRequest): string {
+  const b = family.basis;
+  const k = req.dimensionless ? 1 / b.normalisingStress : 1;
+  const su = DISPLAY_UNITS[b.units].stress;
+  const s = req.section;
+  const { cOverH, epsT, phi } = family.sweep;
+  const out = {
+    generator: generatorLabel(),
+    code: b.code,
+    codeTitle: b.title,
+    units: b.units,
+    normalisation: normalisationInfo(family, req.dimensionless),
+    inputs: {
+      fc: num(b.fc),
+      fy: num(b.fy),
+      stressUnit: su,
+      shape: family.shape.kind,
+      gamma: num(family.gamma),
+      gammaSource: s.gammaSource,
+      arrangement: family.arrangement,
+      transverse: b.transverse,
+      rho_g: req.rhos,
+    },
+    basis: { parameters: b.parameters, notes: b.notes, symbols: b.symbols },
+    columns: TABLE_COLUMNS,
+    curves: family.curves.map((c) => ({
+      rho_g: c.rho,
+      key_points: c.keyPoints.map((kp) => keyPointJson(kp, k)),
+      points: Array.from(cOverH, (_, i) => [c.rho, num(cOverH[i]!), num(epsT[i]!), num(phi[i]!), num(c.Pn[i]! * k), num(c.Mn[i]! * k), num(c.phiPn[i]! * k), num(c.phiMn[i]! * k)]),
+    })),
+    caution: CAUTION,
+  };
+  return JSON.stringify(out, null, 1) + '\n';
+}
+
+export const CAUTION =
+  'For use by qualified engineers only. Check every result against the governing code edition and local practice; local codes and licensed engineering judgement take precedence.';
+
+export function registerTable(program: Command, run: (fn: () => Promise<void> | void) => Promise<void>): void {
+  const cmd = program.command('table').description('normalised interaction-curve family as CSV or JSON (no section size needed)');
+  addSectionOptions(cmd)
+    .option('--rho <list>', 'ρg values: start:stop:step or a comma list', '0.01:0.08:0.01')
+    .option('--format <fmt>', 'csv or json', 'csv')
+    .option('--dimensionless', 'divide the normalised values by the normalising stress (f′c, or fcd for EN 1992-1-1)')
+    .option('--points <n>', 'base points per curve before key points are added (≥ 400)', '400')
+    .action((opts: TableOptions) => run(() => void process.stdout.write(runTable(opts))));
+}
+
+export { fmt };
