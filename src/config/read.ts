@@ -1,0 +1,178 @@
+/**
+ * Reading a chart set, in stages:
+ *
+ *   text ──1 parse──▶ JSON ──2 schema──▶ ChartSetFile ──3 resolve──▶ ResolvedChartSet ──4 rules──▶ checked set
+ *
+ * Every stage reports problems as PmError with the field path, e.g. `sheets[3].gamma: 1.2 is outside 0.3–0.95`.
+ * Pure: the caller reads the file; `now` stands in for the clock.
+ */
+import type { z } from 'zod';
+import { CODE_IDS, type CodeId } from '../codes/types.js';
+import { ERROR_CODES, PmError } from '../errors.js';
+import { parseQuantity, type UnitSystem } from '../units/index.js';
+import { DEFAULT_TITLE_PATTERN, fileStemFor, fillPattern, titleFields } from './describe.js';
+import { expandNumbers } from './expand.js';
+import { checkRules } from './rules.js';
+import { ChartSetFileSchema, type ChartSetFile, type ShapeFile } from './schema.js';
+import { PAPER_POINTS, type ResolvedChartSet, type ResolvedShape, type ResolvedSheet } from './types.js';
+
+export interface ReadOptions {
+  /** shown in JSON syntax errors; default "chart set" */
+  source?: string;
+  /** the issue date when the file gives none and SOURCE_DATE_EPOCH is unset */
+  now?: Date;
+  /** SOURCE_DATE_EPOCH (seconds), when set */
+  sourceDateEpoch?: string;
+}
+
+/** Reads a chart set from its text: throws PmError on the first problem. */
+export function readChartSet(text: string, opts: ReadOptions = {}): ResolvedChartSet {
+  // 1. parse
+  let json: unknown;
+  try {
+    json = JSON.parse(text);
+  } catch (e) {
+    throw new PmError(ERROR_CODES.invalidValue, opts.source ?? 'chart set', `is not valid JSON (${(e as Error).message})`);
+  }
+  // 2. schema
+  const file = checkSchema(json);
+  // 3. resolve
+  const set = resolveChartSet(file, opts);
+  // 4. rules
+  const { errors } = checkRules(set, file);
+  if (errors.length > 0) throw errors[0]!;
+  return set;
+}
+
+/** Stage 2: the schema check, with zod's first issue turned into one line naming the field. */
+export function checkSchema(json: unknown): ChartSetFile {
+  const r = ChartSetFileSchema.safeParse(json);
+  if (r.success) return r.data;
+  const issue = deepestIssue(r.error.issues);
+  throw new PmError(ERROR_CODES.invalidValue, formatPath(issue.path), describeIssue(issue), {});
+}
+
+type Issue = z.core.$ZodIssue;
+
+/** In a union, the branch that got furthest says most about what was meant. */
+function deepestIssue(issues: readonly Issue[]): Issue {
+  let best = issues[0]!;
+  for (const i of issues) {
+    if (i.code === 'invalid_union' && i.errors.length > 0) {
+      const inner = i.errors.map((branch) => deepestIssue(branch.map((b) => ({ ...b, path: [...i.path, ...b.path] }) as Issue)));
+      const deepest = inner.reduce((a, b) => (b.path.length > a.path.length ? b : a));
+      if (deepest.path.length > i.path.length) return deepest;
+    }
+    if (i.path.length > best.path.length) best = i;
+  }
+  return best;
+}
+
+function describeIssue(i: Issue): string {
+  switch (i.code) {
+    case 'invalid_type':
+      return `must be ${i.expected === 'array' ? 'a list' : `a ${i.expected}`}`;
+    case 'unrecognized_keys':
+      return `has unknown field${i.keys.length > 1 ? 's' : ''} ${i.keys.map((k) => `"${k}"`).join(', ')}`;
+    case 'invalid_value':
+      return `must be one of ${i.values.map((v) => JSON.stringify(v)).join(', ')}`;
+    case 'invalid_union':
+      return 'has the wrong form (see charts-config/chart-set.schema.json)';
+    default:
+      return i.message;
+  }
+}
+
+/** ["sheets", 3, "gamma"] → "sheets[3].gamma" */
+export function formatPath(path: readonly PropertyKey[]): string {
+  let out = '';
+  for (const p of path) out += typeof p === 'number' ? `[${p}]` : out ? `.${String(p)}` : String(p);
+  return out || '(file)';
+}
+
+/** Stage 3: defaults, units and cross products. */
+export function resolveChartSet(file: ChartSetFile, opts: ReadOptions = {}): ResolvedChartSet {
+  const units = file.units;
+  const code = file.basis.code as CodeId;
+  if (!CODE_IDS.includes(code)) {
+    throw new PmError(ERROR_CODES.invalidValue, 'basis.code', 'is not a known design basis', { value: file.basis.code, allowed: CODE_IDS.join(', ') });
+  }
+  const size = file.paper?.size ?? (units === 'us' ? 'tabloid' : 'a3');
+  const orientation = file.paper?.orientation ?? 'landscape';
+  const [pw, ph] = PAPER_POINTS[size];
+  const families = file.families ?? 'design';
+  const familyText = families === 'both' ? 'nominal and factored' : families === 'nominal' ? 'nominal' : 'factored';
+  const pattern = file.sheetTitle ?? DEFAULT_TITLE_PATTERN;
+
+  const partial: Omit<ResolvedSheet, 'title' | 'fileStem'>[] = [];
+  file.sheets.forEach((g, gi) => {
+    const at = `sheets[${gi}]`;
+    const shapes = listOf(g.shape ?? 'rectangle').map(resolveShape);
+    const fcs = listOf(g.fc).map((q, k) => parseQuantity(q, 'stress', units, indexed(`${at}.fc`, g.fc, k)));
+    const fys = listOf(g.fy).map((q, k) => parseQuantity(q, 'stress', units, indexed(`${at}.fy`, g.fy, k)));
+    const gammas = expandNumbers(g.gamma, `${at}.gamma`);
+    const arrangements = listOf(g.arrangement);
+    const transverses = listOf(g.transverse ?? 'tied');
+    for (const shape of shapes)
+      for (const fc of fcs)
+        for (const fy of fys)
+          for (const gamma of gammas)
+            for (const arrangement of arrangements)
+              for (const transverse of transverses) partial.push({ index: partial.length + 1, origin: at, shape, fc, fy, gamma, arrangement, transverse });
+  });
+  const sheets: ResolvedSheet[] = partial.map((s) => ({
+    ...s,
+    title: capitalise(fillPattern(pattern, titleFields(s, units, familyText))),
+    fileStem: fileStemFor(s, units, partial.length),
+  }));
+
+  return {
+    name: file.name,
+    titleBlock: {
+      office: file.titleBlock.office,
+      project: file.titleBlock.project,
+      preparedBy: file.titleBlock.preparedBy ?? '',
+      checkedBy: file.titleBlock.checkedBy ?? '',
+      revision: file.titleBlock.revision ?? '0',
+      date: file.titleBlock.date ?? defaultDate(opts),
+    },
+    paper: { size, orientation, widthPt: orientation === 'landscape' ? ph : pw, heightPt: orientation === 'landscape' ? pw : ph },
+    units,
+    code,
+    basisOptions: { ...(file.basis.options ?? {}) },
+    normalisation: file.normalisation ?? 'stress',
+    families,
+    rhos: file.rhoG === undefined ? expandNumbers({ from: 0.01, to: 0.08, step: 0.01 }, 'rhoG') : expandNumbers(file.rhoG, 'rhoG'),
+    referenceLines: {
+      strainStates: file.referenceLines?.strainStates ?? true,
+      eccentricities: file.referenceLines?.eccentricities ?? [0.1, 0.25, 0.5, 1],
+      axialCap: file.referenceLines?.axialCap ?? true,
+    },
+    outputs: {
+      pdf: file.outputs?.pdf ?? true,
+      svg: file.outputs?.svg ?? false,
+      png: file.outputs?.png ?? false,
+      pngScale: file.outputs?.pngScale ?? 2,
+      tables: file.outputs?.tables ?? true,
+    },
+    sheets,
+  };
+}
+
+const listOf = <T>(v: T | T[]): T[] => (Array.isArray(v) ? v : [v]);
+const indexed = (path: string, v: unknown, k: number): string => (Array.isArray(v) ? `${path}[${k}]` : path);
+const capitalise = (s: string): string => s.charAt(0).toUpperCase() + s.slice(1);
+
+function resolveShape(s: ShapeFile): ResolvedShape {
+  if (s === 'circle' || (typeof s === 'object' && s.kind === 'circle')) return { kind: 'circle' };
+  return { kind: 'rectangle', aspect: typeof s === 'object' && s.kind === 'rectangle' ? (s.aspect ?? 1) : 1 };
+}
+
+function defaultDate(opts: ReadOptions): string {
+  if (opts.sourceDateEpoch !== undefined && /^\d+$/.test(opts.sourceDateEpoch)) {
+    return new Date(Number(opts.sourceDateEpoch) * 1000).toISOString().slice(0, 10);
+  }
+  return (opts.now ?? new Date()).toISOString().slice(0, 10);
+}
+
+export type { UnitSystem };

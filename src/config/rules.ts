@@ -1,0 +1,104 @@
+/**
+ * Stage 4 of reading a chart set: named rule checks on the resolved set. Problems are data
+ * (PmError with code, path and facts); the reader throws the first error.
+ */
+import { DESIGN_CODES } from '../codes/registry.js';
+import { ERROR_CODES, PmError } from '../errors.js';
+import { DISPLAY_UNITS, parseQuantity } from '../units/index.js';
+import { expandNumbers } from './expand.js';
+import type { ChartSetFile } from './schema.js';
+import type { ResolvedChartSet } from './types.js';
+
+/** γ range a sheet may use (common practice: outer rows closer than 0.3·h or beyond 0.95·h are not buildable). */
+export const GAMMA_RANGE = [0.3, 0.95] as const;
+/** ρg values a family may hold; the basis's own column limits are printed on the sheet. */
+export const RHO_RANGE = [0.001, 0.1] as const;
+export const ECCENTRICITY_RANGE = [0.01, 10] as const;
+export const ASPECT_RANGE = [0.2, 5] as const;
+export const PNG_SCALE_RANGE = [0.5, 8] as const;
+export const MAX_SHEETS = 5000;
+
+export interface RuleReport {
+  errors: PmError[];
+  warnings: string[];
+}
+
+const outside = (path: string, value: number, [lo, hi]: readonly [number, number], unit = ''): PmError => {
+  const u = unit ? ` ${unit}` : '';
+  return new PmError(ERROR_CODES.outOfRange, path, `is outside ${lo}–${hi}${u}`, { value: `${value}${u}`, allowed: `${lo}–${hi}${u}` });
+};
+const inRange = (v: number, [lo, hi]: readonly [number, number]) => Number.isFinite(v) && v >= lo && v <= hi;
+
+export function checkRules(set: ResolvedChartSet, file: ChartSetFile): RuleReport {
+  const errors: PmError[] = [];
+  const warnings: string[] = [];
+
+  if (!/^[A-Za-z0-9][A-Za-z0-9_-]{0,79}$/.test(set.name)) {
+    errors.push(new PmError(ERROR_CODES.invalidValue, 'name', 'must be 1–80 letters, digits, "-" or "_", starting with a letter or digit', { value: JSON.stringify(set.name) }));
+  }
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(set.titleBlock.date) || Number.isNaN(Date.parse(`${set.titleBlock.date}T00:00:00Z`))) {
+    errors.push(new PmError(ERROR_CODES.invalidValue, 'titleBlock.date', 'is not a date in the form YYYY-MM-DD', { value: set.titleBlock.date }));
+  }
+  set.rhos.forEach((r, k) => {
+    const path = Array.isArray(file.rhoG) ? `rhoG[${k}]` : 'rhoG';
+    if (!inRange(r, RHO_RANGE)) errors.push(outside(path, r, RHO_RANGE));
+    else if (k > 0 && !(r > set.rhos[k - 1]!)) errors.push(new PmError(ERROR_CODES.invalidValue, path, 'must be larger than the value before it', { value: r }));
+  });
+  if (set.rhos.length === 0) errors.push(new PmError(ERROR_CODES.missing, 'rhoG', 'must hold at least one value'));
+  if (set.rhos.length > 20) errors.push(outside('rhoG', set.rhos.length, [1, 20], 'curves'));
+  set.referenceLines.eccentricities.forEach((e, k) => {
+    if (!inRange(e, ECCENTRICITY_RANGE)) errors.push(outside(`referenceLines.eccentricities[${k}]`, e, ECCENTRICITY_RANGE));
+  });
+  if (!inRange(set.outputs.pngScale, PNG_SCALE_RANGE)) errors.push(outside('outputs.pngScale', set.outputs.pngScale, PNG_SCALE_RANGE));
+  const o = set.outputs;
+  if (!o.pdf && !o.svg && !o.png && !o.tables) errors.push(new PmError(ERROR_CODES.missing, 'outputs', 'asks for no output; turn on at least one of pdf, svg, png, tables'));
+
+  const code = DESIGN_CODES[set.code];
+  if (!code) {
+    errors.push(new PmError(ERROR_CODES.invalidValue, 'basis.code', 'is not available in this build', { value: set.code, allowed: Object.keys(DESIGN_CODES).join(', ') }));
+  }
+  const su = DISPLAY_UNITS[set.units].stress;
+
+  file.sheets.forEach((g, gi) => {
+    const at = `sheets[${gi}]`;
+    const each = <T>(v: T | T[], name: string, f: (x: T, path: string) => void) =>
+      (Array.isArray(v) ? v : [v]).forEach((x, k) => f(x, Array.isArray(v) ? `${at}.${name}[${k}]` : `${at}.${name}`));
+    const gammas = expandNumbers(g.gamma, `${at}.gamma`);
+    gammas.forEach((gm, k) => {
+      if (!inRange(gm, GAMMA_RANGE)) errors.push(outside(Array.isArray(g.gamma) ? `${at}.gamma[${k}]` : `${at}.gamma`, gm, GAMMA_RANGE));
+    });
+    if (code) {
+      const lim = code.limits(set.units);
+      each(g.fc, 'fc', (q, path) => {
+        const v = parseQuantity(q, 'stress', set.units, path);
+        if (!inRange(v, lim.fc)) errors.push(outside(path, Number(v.toFixed(4)), lim.fc, su));
+      });
+      each(g.fy, 'fy', (q, path) => {
+        const v = parseQuantity(q, 'stress', set.units, path);
+        if (!inRange(v, lim.fy)) errors.push(outside(path, Number(v.toFixed(4)), lim.fy, su));
+      });
+    }
+    const shapes = Array.isArray(g.shape) ? g.shape : [g.shape ?? 'rectangle'];
+    const hasCircle = shapes.some((s) => s === 'circle' || (typeof s === 'object' && s.kind === 'circle'));
+    each(g.shape ?? 'rectangle', 'shape', (s, path) => {
+      if (typeof s === 'object' && s.kind === 'rectangle' && s.aspect !== undefined && !inRange(s.aspect, ASPECT_RANGE)) errors.push(outside(`${path}.aspect`, s.aspect, ASPECT_RANGE));
+    });
+    each(g.arrangement, 'arrangement', (a, path) => {
+      if (a.kind === 'ring') {
+        if (!inRange(a.bars, [4, 48])) errors.push(outside(`${path}.bars`, a.bars, [4, 48]));
+      } else {
+        const lo = a.kind === 'two-faces' ? 1 : 2;
+        if (!inRange(a.barsPerFace, [lo, 20])) errors.push(outside(`${path}.barsPerFace`, a.barsPerFace, [lo, 20]));
+        if (hasCircle) errors.push(new PmError(ERROR_CODES.conflict, `${path}.kind`, 'cannot be used with a circular shape; use "ring"', { value: a.kind }));
+      }
+    });
+  });
+  if (set.sheets.length === 0) errors.push(new PmError(ERROR_CODES.missing, 'sheets', 'must describe at least one sheet'));
+  if (set.sheets.length > MAX_SHEETS) errors.push(outside('sheets', set.sheets.length, [1, MAX_SHEETS], 'sheets'));
+  const stems = new Set<string>();
+  for (const s of set.sheets) {
+    if (stems.has(s.fileStem.replace(/^\d+-/, ''))) warnings.push(`${s.origin}: sheet ${s.index} repeats an earlier sheet`);
+    stems.add(s.fileStem.replace(/^\d+-/, ''));
+  }
+  return { errors, warnings };
+}

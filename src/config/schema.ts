@@ -1,0 +1,144 @@
+/**
+ * The chart-set file as written: one zod schema is the source of the TypeScript types and of the
+ * JSON Schema committed as charts-config/chart-set.schema.json (regenerate with `npm run schema`).
+ * Ranges and cross-field rules are checked after resolution (src/config/rules.ts), so that errors
+ * can name the allowed range in the trade's terms.
+ */
+import { z } from 'zod';
+
+/** A number in the set's unit system, or a string with a unit: 7, "7ksi", "48MPa". */
+const Quantity = z.union([z.number(), z.string()]);
+
+/** A list of values or an inclusive range with a step. */
+const NumberRange = z
+  .object({
+    from: z.number().describe('first value'),
+    to: z.number().describe('last value (included when the steps reach it)'),
+    step: z.number().describe('step between values'),
+  })
+  .strict();
+
+const oneOrMany = <T extends z.ZodType>(t: T) => z.union([t, z.array(t)]);
+
+export const PAPER_SIZES = ['a4', 'a3', 'letter', 'tabloid'] as const;
+export type PaperSize = (typeof PAPER_SIZES)[number];
+export const ORIENTATIONS = ['landscape', 'portrait'] as const;
+export const NORMALISATIONS = ['stress', 'dimensionless'] as const;
+export type Normalisation = (typeof NORMALISATIONS)[number];
+export const FAMILY_CHOICES = ['design', 'nominal', 'both'] as const;
+export type FamilyChoice = (typeof FAMILY_CHOICES)[number];
+
+const Shape = z.union([
+  z.literal('rectangle').describe('square section (b = h)'),
+  z.literal('circle'),
+  z
+    .object({
+      kind: z.literal('rectangle'),
+      aspect: z.number().describe('width over depth, b/h; default 1').optional(),
+    })
+    .strict(),
+  z.object({ kind: z.literal('circle') }).strict(),
+]);
+
+const Arrangement = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('two-faces'), barsPerFace: z.number().int().describe('bars in each of the two faces parallel to the bending axis') }).strict(),
+  z.object({ kind: z.literal('four-faces'), barsPerFace: z.number().int().describe('bars along each of the four faces, corners counted on both') }).strict(),
+  z.object({ kind: z.literal('side-faces'), barsPerFace: z.number().int().describe('bars along each of the two faces perpendicular to the bending axis') }).strict(),
+  z.object({ kind: z.literal('ring'), bars: z.number().int().describe('bars equally spaced on a circle of diameter γ·h') }).strict(),
+]);
+
+/** One entry of `sheets`: every list field multiplies (cross product); a single value makes one sheet. */
+const SheetGroup = z
+  .object({
+    shape: oneOrMany(Shape).describe('section shape(s); default "rectangle"').optional(),
+    fc: oneOrMany(Quantity).describe('specified concrete strength(s) f′c, e.g. "7ksi" or 48 (set units)'),
+    fy: oneOrMany(Quantity).describe('specified yield strength(s) fy of the bars, e.g. "80ksi"'),
+    gamma: z.union([z.number(), z.array(z.number()), NumberRange]).describe('γ: centre-to-centre distance of the outer bar rows over h'),
+    arrangement: oneOrMany(Arrangement).describe('bar arrangement(s)'),
+    transverse: oneOrMany(z.enum(['tied', 'spiral'])).describe('transverse reinforcement; default "tied"').optional(),
+  })
+  .strict();
+
+export const ChartSetFileSchema = z
+  .object({
+    $schema: z.string().describe('path of this JSON Schema, for editors').optional(),
+    name: z.string().describe('set name; also the output folder name (letters, digits, "-", "_")'),
+    titleBlock: z
+      .object({
+        office: z.string().describe('office name on every sheet'),
+        project: z.string().describe('project name on every sheet'),
+        preparedBy: z.string().describe('initials or name; default ""').optional(),
+        checkedBy: z.string().describe('initials or name; default ""').optional(),
+        revision: z.string().describe('revision mark; default "0"').optional(),
+        date: z.string().describe('issue date YYYY-MM-DD printed on sheets and used as the PDF dates; default: SOURCE_DATE_EPOCH, else today (UTC)').optional(),
+      })
+      .strict(),
+    paper: z
+      .object({
+        size: z.enum(PAPER_SIZES).describe('default "tabloid" for US units, "a3" for SI').optional(),
+        orientation: z.enum(ORIENTATIONS).describe('default "landscape"').optional(),
+      })
+      .strict()
+      .optional(),
+    units: z.enum(['us', 'si']).describe('unit system: "us" (kip, in, ksi) or "si" (N, mm, MPa)'),
+    basis: z
+      .object({
+        code: z.string().describe('design basis and edition, e.g. "aci318-19"'),
+        options: z
+          .object({
+            alphaCc: z.number().optional(),
+            gammaC: z.number().optional(),
+            gammaS: z.number().optional(),
+            concreteLaw: z.enum(['parabola-rectangle', 'rectangular-block']).optional(),
+            steelBranch: z.enum(['horizontal', 'inclined']).optional(),
+          })
+          .strict()
+          .describe('options some bases read (EN 1992-1-1 partial factors and laws); default: each basis’s recommended values')
+          .optional(),
+      })
+      .strict(),
+    normalisation: z.enum(NORMALISATIONS).describe('"stress": P/Ag and M/(Ag·h) in the stress unit; "dimensionless": also divided by the basis’s normalising stress (f′c); default "stress"').optional(),
+    families: z.enum(FAMILY_CHOICES).describe('curves to draw: "design" (φ-factored), "nominal" or "both"; default "design"').optional(),
+    rhoG: z.union([z.array(z.number()), NumberRange]).describe('ρg family; default 0.01 to 0.08 in 0.01 steps').optional(),
+    referenceLines: z
+      .object({
+        strainStates: z.boolean().describe('lines through the basis’s strain states (εt = 0, εt = εty, tension-controlled limit); default true').optional(),
+        eccentricities: z.array(z.number()).describe('radial lines of constant e/h; default [0.1, 0.25, 0.5, 1]').optional(),
+        axialCap: z.boolean().describe('line through the points where each curve meets its axial cap; default true').optional(),
+      })
+      .strict()
+      .optional(),
+    sheetTitle: z
+      .string()
+      .describe('office pattern for sheet titles with {shape} {fc} {fy} {gamma} {arrangement} {transverse} {family} {index}; default spells the parameters out')
+      .optional(),
+    outputs: z
+      .object({
+        pdf: z.boolean().describe('bound book.pdf; default true').optional(),
+        svg: z.boolean().describe('sheets/*.svg; default false').optional(),
+        png: z.boolean().describe('sheets/*.png; default false').optional(),
+        pngScale: z.number().describe('PNG pixels per point; default 2').optional(),
+        tables: z.boolean().describe('tables/*.csv and *.json; default true').optional(),
+      })
+      .strict()
+      .optional(),
+    sheets: z.array(SheetGroup).describe('sheet groups; each is the cross product of its lists'),
+  })
+  .strict();
+
+/** The chart-set file as written (before defaults and units are resolved). */
+export type ChartSetFile = z.infer<typeof ChartSetFileSchema>;
+export type SheetGroupFile = z.infer<typeof SheetGroup>;
+export type ShapeFile = z.infer<typeof Shape>;
+export type ArrangementFile = z.infer<typeof Arrangement>;
+
+/** JSON Schema of the file format (draft 2020-12), as committed in charts-config/. */
+export function chartSetJsonSchema(): Record<string, unknown> {
+  const schema = z.toJSONSchema(ChartSetFileSchema, { io: 'input' }) as Record<string, unknown>;
+  return {
+    ...schema,
+    $id: 'https://pmchart.invalid/charts-config/chart-set.schema.json',
+    title: 'pmchart chart set',
+    description: 'A chart set: title-block text, basis, ρg family, reference lines, outputs and the sheets (cross products of f′c × fy × γ × arrangement × transverse × shape).',
+  };
+}

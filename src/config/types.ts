@@ -1,0 +1,66 @@
+/** The resolved, complete chart set: defaults filled, units converted, cross products expanded. */
+import type { BasisOptions, CodeId, Transverse } from '../codes/types.js';
+import type { Arrangement } from '../section/types.js';
+import type { UnitSystem } from '../units/index.js';
+import type { FamilyChoice, Normalisation, PaperSize } from './schema.js';
+
+export interface ResolvedTitleBlock {
+  office: string;
+  project: string;
+  preparedBy: string;
+  checkedBy: string;
+  revision: string;
+  /** ISO date YYYY-MM-DD */
+  date: string;
+}
+
+export interface ResolvedPaper {
+  size: PaperSize;
+  orientation: 'landscape' | 'portrait';
+  /** page size in PDF points (1/72 in) */
+  widthPt: number;
+  heightPt: number;
+}
+
+export type ResolvedShape = { kind: 'rectangle'; aspect: number } | { kind: 'circle' };
+
+export interface ResolvedSheet {
+  /** 1-based position in the set */
+  index: number;
+  /** where it came from in the file, e.g. "sheets[1]" */
+  origin: string;
+  shape: ResolvedShape;
+  /** f′c in the set's stress unit */
+  fc: number;
+  /** fy in the set's stress unit */
+  fy: number;
+  gamma: number;
+  arrangement: Exclude<Arrangement, { kind: 'custom' }>;
+  transverse: Transverse;
+  title: string;
+  /** file name without extension for sheets/ and tables/ */
+  fileStem: string;
+}
+
+export interface ResolvedChartSet {
+  name: string;
+  titleBlock: ResolvedTitleBlock;
+  paper: ResolvedPaper;
+  units: UnitSystem;
+  code: CodeId;
+  basisOptions: BasisOptions;
+  normalisation: Normalisation;
+  families: FamilyChoice;
+  rhos: number[];
+  referenceLines: { strainStates: boolean; eccentricities: number[]; axialCap: boolean };
+  outputs: { pdf: boolean; svg: boolean; png: boolean; pngScale: number; tables: boolean };
+  sheets: ResolvedSheet[];
+}
+
+/** Paper sizes in PDF points, portrait (ISO 216; ANSI/ASME Y14.1 for Letter and Tabloid). */
+export const PAPER_POINTS: Record<PaperSize, [number, number]> = {
+  a4: [595.28, 841.89],
+  a3: [841.89, 1190.55],
+  letter: [612, 792],
+  tabloid: [792, 1224],
+};
