@@ -1,0 +1,84 @@
+/**
+ * The lookup table of a sheet: per ρg, the core's key points (src/analysis/family.ts KeyPoint) in the
+ * sheet's normalisation. The same rows feed the sheet, tables/*.csv and tables/*.json.
+ */
+import type { CurveFamily, KeyPoint, PointValues } from '../analysis/family.js';
+
+export type FamilyKind = 'design' | 'nominal';
+
+export interface LookupPoint {
+  id: string;
+  label: string;
+  nominal: PointValues | null;
+  design: PointValues | null;
+}
+
+export interface LookupRow {
+  rhoG: number;
+  points: LookupPoint[];
+}
+
+export interface LookupTable {
+  /** values divided by this (1 for stress normalisation, f′c for dimensionless) */
+  divisor: number;
+  rows: LookupRow[];
+}
+
+const scaled = (p: PointValues | null, d: number): PointValues | null => (p === null ? null : { ...p, P: p.P / d, M: p.M / d });
+
+/** Key points of every curve, P and M divided by `divisor`; c/h, εt and φ as computed. */
+export function lookupTable(family: CurveFamily, divisor: number): LookupTable {
+  return {
+    divisor,
+    rows: family.curves.map((c) => ({
+      rhoG: c.rho,
+      points: c.keyPoints.map((k: KeyPoint) => ({ id: String(k.id), label: k.label, nominal: scaled(k.nominal, divisor), design: scaled(k.design, divisor) })),
+    })),
+  };
+}
+
+/** Which values a column group shows for a key point. */
+export function columnsFor(id: string): ('P' | 'M')[] {
+  if (id === 'pure-compression' || id === 'pure-tension') return ['P'];
+  if (id === 'pure-bending') return ['M'];
+  return ['P', 'M'];
+}
+
+const SHORT: Record<string, string> = {
+  'pure-compression': 'pure axial',
+  'axial-cap': 'axial cap',
+  decompression: 'εt = 0',
+  balanced: 'εt = εty',
+  'pure-bending': 'P = 0',
+  'pure-tension': 'pure tension',
+};
+
+/** Short column-group heading for a key point. */
+export function shortLabel(p: Pick<LookupPoint, 'id' | 'label'>): string {
+  if (SHORT[p.id]) return SHORT[p.id]!;
+  if (p.id === 'tension-controlled') return 'tension-ctl. limit';
+  const cut = p.label.indexOf(' (');
+  return cut > 0 ? p.label.slice(0, cut) : p.label;
+}
+
+/** Rounds for files: six significant digits keeps CSV/JSON readable and deterministic. */
+export const sig = (x: number): number => (Number.isFinite(x) ? Number(x.toPrecision(6)) : x);
+
+export function tableCsv(t: LookupTable): string {
+  const lines = ['rhoG,point,label,family,cOverH,epsT,phi,P,M'];
+  for (const r of t.rows) {
+    for (const p of r.points) {
+      for (const fam of ['nominal', 'design'] as const) {
+        const v = p[fam];
+        if (!v) continue;
+        const label = `"${p.label.replace(/"/g, '""')}"`;
+        lines.push([r.rhoG, p.id, label, fam, sig(v.cOverH), sig(v.epsT), sig(v.phi), sig(v.P), sig(v.M)].join(','));
+      }
+    }
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+export function roundPoint(v: PointValues | null): PointValues | null {
+  return v === null ? null : { cOverH: sig(v.cOverH), epsT: sig(v.epsT), phi: sig(v.phi), P: sig(v.P), M: sig(v.M) };
+}

@@ -1,0 +1,131 @@
+/**
+ * Sheet → vega-lite spec (plain JSON). The template depends only on TemplateParams; the sheet's
+ * content travels in named `datasets`, so a renderer can compile once and swap data per sheet.
+ * Decoration layers use `scale: null` so their x/y are points from the plot origin; `autosize: none`
+ * and `padding` make the view exactly one page.
+ */
+import type { SheetData, TemplateParams } from './sheet-data.js';
+import { COLOURS, FONT_FAMILY, TEXT_STYLES, type TextStyle } from './style.js';
+
+export type VlSpec = Record<string, unknown>;
+export const DATASET_NAMES = ['curves', 'curveLabels', 'refs', 'refLabels', 'frame', 'texts', 'rects', 'rules', 'dots', 'rings'] as const satisfies readonly (keyof SheetData)[];
+
+const q = (field: string, title?: string) => ({ field, type: 'quantitative' as const, ...(title !== undefined ? { title } : {}) });
+const raw = (field: string) => ({ field, type: 'quantitative' as const, scale: null });
+const lit = (field: string) => ({ field, type: 'nominal' as const, scale: null });
+
+export function sheetTemplate(t: TemplateParams): VlSpec {
+  const { layout: L } = t;
+  const u = L.u;
+  const x = { field: 'M', type: 'quantitative', scale: { zero: true, nice: true } };
+  const y = { field: 'P', type: 'quantitative', scale: { zero: true, nice: true } };
+  const plotLine = (name: string, kind: string, mark: Record<string, unknown>) => ({
+    name,
+    data: { name: 'refs' },
+    transform: [{ filter: `datum.kind === '${kind}'` }],
+    mark: { type: 'line', clip: true, ...mark },
+    encoding: { x, y, detail: { field: 'line' }, order: { field: 'i' } },
+  });
+  const textLayer = (style: TextStyle) => {
+    const s = TEXT_STYLES[style];
+    return {
+      name: `text_${style}`,
+      data: { name: 'texts' },
+      transform: [{ filter: `datum.style === '${style}'` }],
+      mark: { type: 'text', align: s.align, baseline: 'alphabetic', fontSize: Math.round(s.size * u * 100) / 100, fontWeight: s.weight, color: s.colour },
+      encoding: { x: raw('x'), y: raw('y'), text: { field: 'text' } },
+    };
+  };
+
+  const layers: Record<string, unknown>[] = [
+    { name: 'frame', data: { name: 'frame' }, mark: { type: 'point', opacity: 0 }, encoding: { x, y } },
+    { name: 'rects', data: { name: 'rects' }, mark: { type: 'rect' }, encoding: { x: raw('x'), x2: { field: 'x2' }, y: raw('y'), y2: { field: 'y2' }, fill: lit('fill'), stroke: lit('stroke'), strokeWidth: raw('strokeWidth') } },
+    plotLine('rays', 'ray', { color: COLOURS.ray, strokeWidth: 0.7, strokeDash: [1.2, 2.6] }),
+    plotLine('zero', 'zero', { color: COLOURS.muted, strokeWidth: 0.8 }),
+    plotLine('strain_lines', 'strain', { color: COLOURS.strain, strokeWidth: 0.9, strokeDash: [5, 2.5] }),
+    plotLine('cap_line', 'cap', { color: COLOURS.cap, strokeWidth: 0.9, strokeDash: [7, 2, 1.5, 2] }),
+  ];
+  for (const fam of t.families) {
+    const design = fam === 'design';
+    const faded = t.families.length > 1 && !design;
+    layers.push({
+      name: `curves_${fam}`,
+      data: { name: 'curves' },
+      transform: [{ filter: `datum.family === '${fam}'` }],
+      mark: { type: 'line', strokeWidth: faded ? 0.8 : 1.5, ...(faded ? { strokeDash: [4, 2.5], opacity: 0.75 } : {}), strokeJoin: 'round' },
+      encoding: { x, y, detail: { field: 'curve' }, order: { field: 'i' }, stroke: lit('colour') },
+    });
+  }
+  const refLabel = (kind: string, colour: string, dx: number, dy: number) => ({
+    name: `labels_${kind}`,
+    data: { name: 'refLabels' },
+    transform: [{ filter: `datum.kind === '${kind}'` }],
+    mark: { type: 'text', align: 'left', baseline: 'middle', dx, dy, fontSize: round2(0.78 * u), color: colour },
+    encoding: { x, y, text: { field: 'text' } },
+  });
+  layers.push(
+    refLabel('ray', COLOURS.muted, 2, -2),
+    refLabel('strain', COLOURS.strain, 5, 0),
+    refLabel('cap', COLOURS.cap, 5, -1),
+    {
+      name: 'curve_label_halo',
+      data: { name: 'curveLabels' },
+      mark: { type: 'text', align: 'center', baseline: 'middle', fontSize: round2(0.82 * u), fontWeight: 'bold', stroke: COLOURS.paper, strokeWidth: 3, strokeJoin: 'round' },
+      encoding: { x, y, text: { field: 'text' } },
+    },
+    {
+      name: 'curve_labels',
+      data: { name: 'curveLabels' },
+      mark: { type: 'text', align: 'center', baseline: 'middle', fontSize: round2(0.82 * u), fontWeight: 'bold' },
+      encoding: { x, y, text: { field: 'text' }, fill: lit('colour') },
+    },
+    { name: 'rules', data: { name: 'rules' }, mark: { type: 'rule' }, encoding: { x: raw('x'), x2: { field: 'x2' }, y: raw('y'), y2: { field: 'y2' }, stroke: lit('stroke'), strokeWidth: raw('strokeWidth') } },
+    { name: 'rings', data: { name: 'rings' }, mark: { type: 'point', shape: 'circle', filled: false, strokeWidth: 1.1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), stroke: lit('fill') } },
+    { name: 'dots', data: { name: 'dots' }, mark: { type: 'point', shape: 'circle', filled: true, opacity: 1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), fill: lit('fill') } },
+    ...(Object.keys(TEXT_STYLES) as TextStyle[]).map(textLayer),
+  );
+
+  return {
+    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
+    width: round2(L.plot.w),
+    height: round2(L.plot.h),
+    autosize: { type: 'none' },
+    padding: {
+      left: round2(L.plot.x),
+      top: round2(L.plot.y),
+      right: round2(L.page.w - L.plot.x - L.plot.w),
+      bottom: round2(L.page.h - L.plot.y - L.plot.h),
+    },
+    background: COLOURS.paper,
+    config: {
+      font: FONT_FAMILY,
+      view: { stroke: COLOURS.faint, strokeWidth: 0.7 },
+      axis: {
+        labelFont: FONT_FAMILY,
+        titleFont: FONT_FAMILY,
+        labelFontSize: round2(0.82 * u),
+        titleFontSize: round2(0.95 * u),
+        titleFontWeight: 'normal',
+        titleColor: COLOURS.ink,
+        labelColor: COLOURS.muted,
+        gridColor: '#e4e9ed',
+        gridWidth: 0.5,
+        domainColor: COLOURS.faint,
+        tickColor: COLOURS.faint,
+        titlePadding: round2(0.8 * u),
+      },
+    },
+    encoding: {
+      x: { ...x, axis: { title: t.xTitle, tickCount: 12, orient: 'bottom' } },
+      y: { ...y, axis: { title: t.yTitle, tickCount: 14 } },
+    },
+    layer: layers,
+  };
+}
+
+/** The full spec of one sheet: the template plus its datasets. */
+export function sheetSpec(t: TemplateParams, data: SheetData): VlSpec {
+  return { ...sheetTemplate(t), datasets: data };
+}
+
+const round2 = (v: number) => Math.round(v * 100) / 100;
