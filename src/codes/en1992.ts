@@ -224,7 +224,7 @@ function resolveEc2(input: BasisInput): Basis {
         ? `Partial factors differ from the recommended values (αcc = 1.0, γc = 1.5, γs = 1.15): ${nonDefault.join(', ')}; check them against the National Annex that applies.`
         : `Recommended partial factors αcc = 1.0, γc = 1.5, γs = 1.15 (2.4.2.4 Table 2.1N, 3.1.6(1)); National Annexes may set other values.`,
       lawName === 'rectangular-block'
-        ? `Concrete: rectangular block η·fcd over λ·x with λ = ${fmt(t.lambda)}, η = ${fmt(t.eta)} (3.1.7(3)); the 10 % reduction of η·fcd for compression zones that narrow toward the extreme fibre (circles) is not applied; use the parabola–rectangle law for circular sections.`
+        ? `Concrete: rectangular block η·fcd over λ·x with λ = ${fmt(t.lambda)}, η = ${fmt(t.eta)} (3.1.7(3)), strain limits εcu2 and εc2 as for the parabola–rectangle law; the 10 % reduction of η·fcd for compression zones that narrow toward the extreme fibre (circles) is not applied; use the parabola–rectangle law for circular sections.`
         : `Concrete: parabola–rectangle with εc2 = ${fmt(t.epsC2 * 1000)} ‰, εcu2 = ${fmt(t.epsCu2 * 1000)} ‰, n = ${fmt(t.n)} (3.1.7(1), Table 3.1); tensile strength neglected (6.1(2)).`,
       `Strain limits per 6.1(5) and Fig. 6.1: εcu2 at the compression face while x ≤ h; for x > h the profile pivots about εc2 at (1 − εc2/εcu2)·h, so pure compression is a uniform εc2 (steel stress σs(εc2) = ${fmt(design.squash.steelStress)} MPa, not fyd).`,
       branch === 'inclined'
