@@ -120,13 +120,13 @@ function resolveEc2(input: BasisInput): Basis {
   const { units, fc: fck, fy: fyk, transverse } = input;
   if (units !== 'si') rejectUnits(units);
   const o = input.options ?? {};
-  const alphaCc = requireInRange('alphaCc', o.alphaCc ?? EC2_RECOMMENDED.alphaCc, 0.8, 1.0); // 3.1.6(1) Note
-  const gammaC = requireInRange('gammaC', o.gammaC ?? EC2_RECOMMENDED.gammaC, 1.0, 2.0);
-  const gammaS = requireInRange('gammaS', o.gammaS ?? EC2_RECOMMENDED.gammaS, 1.0, 1.5);
+  const alphaCc = requireInRange('--alpha-cc', o.alphaCc ?? EC2_RECOMMENDED.alphaCc, 0.8, 1.0); // 3.1.6(1) Note
+  const gammaC = requireInRange('--gamma-c', o.gammaC ?? EC2_RECOMMENDED.gammaC, 1.0, 2.0);
+  const gammaS = requireInRange('--gamma-s', o.gammaS ?? EC2_RECOMMENDED.gammaS, 1.0, 1.5);
   const lawName = o.concreteLaw ?? 'parabola-rectangle';
   const branch = o.steelBranch ?? 'horizontal';
-  const k = requireInRange('steelK', o.steelK ?? EC2_CLASS_B.k, 1.0, 1.35); // Table C.1 classes A–C
-  const epsUk = requireInRange('steelEpsUk', o.steelEpsUk ?? EC2_CLASS_B.epsUk, 0.025, 0.15);
+  const k = requireInRange('--steel-k', o.steelK ?? EC2_CLASS_B.k, 1.0, 1.35); // Table C.1 classes A–C
+  const epsUk = requireInRange('--steel-eps-uk', o.steelEpsUk ?? EC2_CLASS_B.epsUk, 0.025, 0.15);
   const epsUd = branch === 'inclined' ? EC2_EPS_UD_RATIO * epsUk : Infinity; // 3.2.7(2)b: no limit on the horizontal branch
 
   const Es = EC2_STEEL_MODULUS;

@@ -33,6 +33,12 @@ describe('pmchart table --code en1992-1-1 (source: EN 1992-1-1:2004, first princ
     expectClose(kp(list, 'balanced').phiPn_norm, 0.4341, 0.001);
     expectClose(kp(list, 'balanced').phiMn_norm, 0.2934, 0.001);
   });
+  it('takes the inclined branch with --steel-k and --steel-eps-uk: pure tension at σs(εud) (3.2.7(2)a, hand calculation)', () => {
+    // k = 1.15, εuk = 7.5 %, εud = 6.75 %: σs = 434.783·[1 + 0.15·(0.0675 − 0.0021739)/(0.075 − 0.0021739)] = 493.29 MPa
+    const list = keyPoints(runTable({ ...ec2, rho: '0.02', format: 'json', steelBranch: 'inclined', steelK: '1.15', steelEpsUk: '0.075' }));
+    expectClose(kp(list, 'pure-tension').phiPn_norm, -0.02 * 493.29, 1e-3);
+    expect(() => runTable({ ...ec2, steelBranch: 'inclined', steelK: '2' })).toThrowError('--steel-k: 2 is outside 1–1.35');
+  });
   it('draws families per ω with --omega: ω = 0.4348 is ρ = 0.02 (ω = ρ·fyd/fcd, hand calculation)', () => {
     const out = JSON.parse(runTable({ ...ec2, omega: '0.2,0.434783', format: 'json' }));
     expect(out.inputs.omega).toEqual([0.2, 0.434783]);

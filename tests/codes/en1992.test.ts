@@ -241,6 +241,6 @@ describe('EN 1992-1-1 parameters and input', () => {
   });
   it('rejects fck outside C12–C90 and αcc outside 0.8–1.0', () => {
     expect(() => ec2(100)).toThrowError(/--fc: 100 MPa is outside 12–90 MPa/);
-    expect(() => ec2(30, { alphaCc: 0.7 })).toThrowError(/alphaCc: 0.7 is outside 0.8–1/);
+    expect(() => ec2(30, { alphaCc: 0.7 })).toThrowError(/--alpha-cc: 0.7 is outside 0.8–1/);
   });
 });
