@@ -34,7 +34,9 @@ export const CSA_ASSUMED_DEPTH_MM = 300;
 /**
  * CSA A23.3-19 10.10.4 (from memory): Pr,max = 0.90·Pro for spiral columns, and
  * Pr,max = (0.2 + 0.002·h)·Pro ≤ 0.80·Pro for tied columns with h in mm.
- * Without a depth, h ≥ 300 mm is assumed, which gives 0.80.
+ * Without a depth, h ≥ 300 mm is assumed, which gives 0.80. `depthMm` is the section depth in the
+ * bending plane (CapContext.depth); for non-square sections the standard's h may be meant as the
+ * overall column dimension — check it against the clause text (from memory).
  */
 export function csaCapRatio(transverse: 'tied' | 'spiral', depthMm?: number): number {
   if (transverse === 'spiral') return 0.9;
