@@ -91,7 +91,7 @@ export function baseGrid(n: number): number[] {
 
 /** c/h at which the extreme tension bar reaches strain εt (monotone in c; solved numerically for any basis). */
 export function depthForTensionStrain(section: PreparedSection, epsT: number): number {
-  const f = (logC: number) => tensionStrain(section.basis.profile(Math.exp(logC), 1), section.dt) - epsT;
+  const f = (logC: number) => tensionStrain(section.basis.profile(Math.exp(logC), 1, section.dt), section.dt) - epsT;
   const x = findRoot(f, Math.log(C_OVER_H_MIN), Math.log(C_OVER_H_MAX), 1e-14);
   return Number.isNaN(x) ? NaN : Math.exp(x);
 }

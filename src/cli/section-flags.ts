@@ -35,6 +35,8 @@ export interface SectionFlags {
   gammaS?: string;
   concreteLaw?: string;
   steelBranch?: string;
+  steelK?: string;
+  steelEpsUk?: string;
 }
 
 export interface ResolvedSection {
@@ -82,7 +84,9 @@ export function addSectionOptions(cmd: Command): Command {
     .option('--gamma-c <value>', 'EN 1992-1-1 γc (National Annex)')
     .option('--gamma-s <value>', 'EN 1992-1-1 γs (National Annex)')
     .option('--concrete-law <law>', 'parabola-rectangle or rectangular-block, where the basis offers both')
-    .option('--steel-branch <branch>', 'horizontal or inclined top branch, where the basis offers both');
+    .option('--steel-branch <branch>', 'horizontal or inclined top branch, where the basis offers both')
+    .option('--steel-k <ratio>', 'EN 1992-1-1 inclined branch: k = (ft/fy)k, 1.0–1.35 (default 1.08, class B)')
+    .option('--steel-eps-uk <strain>', 'EN 1992-1-1 inclined branch: εuk, 0.025–0.15 (default 0.05, class B); εud = 0.9·εuk');
 }
 
 const oneOf = (path: string, value: string, allowed: readonly string[]): never => {
@@ -164,6 +168,12 @@ export function resolveSectionFlags(f: SectionFlags, needSize = false): Resolved
     if (!branches.includes(f.steelBranch as (typeof branches)[number])) oneOf('--steel-branch', f.steelBranch, branches);
     options.steelBranch = f.steelBranch as (typeof branches)[number];
   }
+
+  // ranges are checked by the basis that reads them (EN 1992-1-1 names these flags in its errors)
+  const steelK = plainNumber('--steel-k', f.steelK);
+  const steelEpsUk = plainNumber('--steel-eps-uk', f.steelEpsUk);
+  if (steelK !== undefined) options.steelK = steelK;
+  if (steelEpsUk !== undefined) options.steelEpsUk = steelEpsUk;
 
   const fc = parseQuantity(f.fc, 'stress', u, '--fc');
   const fy = parseQuantity(f.fy, 'stress', u, '--fy');
