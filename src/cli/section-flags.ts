@@ -4,7 +4,7 @@
  */
 import { readFileSync } from 'node:fs';
 import type { Command } from 'commander';
-import { resolveBasis } from '../codes/registry.js';
+import { designCode, resolveBasis } from '../codes/registry.js';
 import { isTransverse, TRANSVERSE_TYPES, type Basis, type BasisOptions, type CapContext, type CodeId } from '../codes/types.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { barSet, findBar, type BarSize } from '../section/bar-tables.js';
@@ -64,7 +64,7 @@ export const GAMMA_RANGE: [number, number] = [0.3, 0.95];
 export function addSectionOptions(cmd: Command): Command {
   return cmd
     .option('--code <id>', 'design basis: aci318-19, aci318-14, en1992-1-1, csa-a23.3-19', 'aci318-19')
-    .option('--units <system>', 'unit system: us (kip, in, ksi) or si (kN, mm, MPa)', 'us')
+    .option('--units <system>', "unit system: us (kip, in, ksi) or si (kN, mm, MPa); default: the basis's first (us for ACI, si otherwise)")
     .option('--fc <stress>', "specified concrete strength f′c (fck), e.g. 4, 4ksi, 28MPa")
     .option('--fy <stress>', 'specified yield strength fy (fyk), e.g. 60, 420MPa')
     .option('--shape <shape>', 'rectangle or circle', 'rectangle')
@@ -142,7 +142,7 @@ function readCustomBars(path: string, file: string): CustomBar[] {
 
 /** Resolves the shared flags; `needSize` makes b/h or D mandatory (checks). */
 export function resolveSectionFlags(f: SectionFlags, needSize = false): ResolvedSection {
-  const units = f.units ?? 'us';
+  const units = f.units ?? designCode(f.code ?? 'aci318-19').unitSystems[0]!;
   if (!isUnitSystem(units)) oneOf('--units', units, UNIT_SYSTEMS);
   const u = units as UnitSystem;
   const su = DISPLAY_UNITS[u];

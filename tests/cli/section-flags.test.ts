@@ -46,3 +46,11 @@ describe('GENERATOR', () => {
     expect(GENERATOR).toEqual({ name: pkg.name, version: pkg.version });
   });
 });
+
+describe('resolveSectionFlags: default units follow the basis', () => {
+  it('takes si for EN 1992-1-1 and CSA A23.3, us for ACI', () => {
+    expect(resolveSectionFlags({ code: 'en1992-1-1', fc: '30', fy: '500', gamma: '0.8' }).units).toBe('si');
+    expect(resolveSectionFlags({ code: 'csa-a23.3-19', fc: '35', fy: '400', gamma: '0.8' }).units).toBe('si');
+    expect(resolveSectionFlags({ fc: '4', fy: '60', gamma: '0.8' }).units).toBe('us');
+  });
+});
