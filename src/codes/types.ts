@@ -67,8 +67,12 @@ export interface BasisOptions {
   gammaS?: number;
   /** concrete law where a code offers more than one */
   concreteLaw?: 'parabola-rectangle' | 'rectangular-block';
-  /** EN 1992-1-1 3.2.7(2) steel branch */
+  /** EN 1992-1-1 3.2.7(2) steel branch (default horizontal) */
   steelBranch?: 'horizontal' | 'inclined';
+  /** EN 1992-1-1 Annex C Table C.1 ratio k = (ft/fy)k for the inclined branch (default 1.08, class B) */
+  steelK?: number;
+  /** EN 1992-1-1 Annex C Table C.1 characteristic strain at maximum force εuk (default 0.05, class B); εud = 0.9·εuk (3.2.7(2) Note 1) */
+  steelEpsUk?: number;
 }
 
 export const BAR_SET_IDS = ['astm-a615', 'metric', 'en-common', 'csa-g30.18'] as const;
@@ -85,8 +89,12 @@ export interface Basis {
   readonly fy: number;
   readonly Es: number;
   readonly transverse: Transverse;
-  /** strain profile for neutral-axis depth c ≥ 0 in a section of depth h (c = Infinity: uniform compression) */
-  profile(c: number, h: number): StrainProfile;
+  /**
+   * Strain profile for neutral-axis depth c ≥ 0 in a section of depth h (c = Infinity: uniform compression).
+   * `tensionDepth` is the depth of the extreme tension bar below the compression face (default h); bases
+   * with a steel strain limit pivot about it (EN 1992-1-1 Fig. 6.1, pivot A), the others ignore it.
+   */
+  profile(c: number, h: number, tensionDepth?: number): StrainProfile;
   readonly nominal: ResistanceModel;
   readonly design: ResistanceModel;
   readonly strainStates: readonly StrainState[];
@@ -134,6 +142,8 @@ export interface BasisSymbols {
 export interface DesignCode {
   readonly id: CodeId;
   readonly title: string;
+  /** unit systems the basis accepts (EN 1992-1-1 and CSA A23.3 are SI-only; ACI 318 has both) */
+  readonly unitSystems: readonly UnitSystem[];
   /** allowed specified strengths in the given system's stress unit */
   limits(units: UnitSystem): { fc: [number, number]; fy: [number, number] };
   resolve(input: BasisInput): Basis;
