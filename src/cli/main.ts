@@ -7,6 +7,8 @@
 import { Command, CommanderError } from 'commander';
 import { isPmError } from '../errors.js';
 import { GENERATOR } from '../version.js';
+import { registerSet } from './set.js';
+import { registerSheet } from './sheet.js';
 import { registerTable } from './table.js';
 
 /** The single error handler: one line on stderr, exit code from the error, no stack trace. */
@@ -36,6 +38,8 @@ export function buildProgram(): Command {
     .showHelpAfterError(false)
     .configureOutput({ outputError: (str, write) => write(`pmchart: ${str.replace(/^error: /, '').trim()}\n`) });
   registerTable(program, runAction);
+  registerSet(program, runAction);
+  registerSheet(program, runAction);
   return program;
 }
 

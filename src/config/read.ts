@@ -27,6 +27,11 @@ export interface ReadOptions {
 
 /** Reads a chart set from its text: throws PmError on the first problem. */
 export function readChartSet(text: string, opts: ReadOptions = {}): ResolvedChartSet {
+  return readChartSetReport(text, opts).set;
+}
+
+/** As readChartSet, also returning the rule checks' warnings. */
+export function readChartSetReport(text: string, opts: ReadOptions = {}): { set: ResolvedChartSet; warnings: string[] } {
   // 1. parse
   let json: unknown;
   try {
@@ -39,9 +44,9 @@ export function readChartSet(text: string, opts: ReadOptions = {}): ResolvedChar
   // 3. resolve
   const set = resolveChartSet(file, opts);
   // 4. rules
-  const { errors } = checkRules(set, file);
+  const { errors, warnings } = checkRules(set, file);
   if (errors.length > 0) throw errors[0]!;
-  return set;
+  return { set, warnings };
 }
 
 /** Stage 2: the schema check, with zod's first issue turned into one line naming the field. */

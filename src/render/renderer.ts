@@ -54,36 +54,49 @@ export class SheetRenderer {
     return canvas.toBuffer('image/png', { compressionLevel: 6 });
   }
 
-  /**
-   * Renders pages into one vector PDF (page size from the first template). `onPage` reports progress.
-   * Metadata is left to the binder (src/sheet/book.ts), which fixes dates for deterministic output.
-   */
-  async pdf(pages: Iterable<SheetPage> | AsyncIterable<SheetPage>, onPage?: (n: number) => void): Promise<Buffer> {
-    let canvas: import('canvas').Canvas | undefined;
-    let ctx: import('canvas').CanvasRenderingContext2D | undefined;
-    let n = 0;
-    for await (const page of pages) {
-      const { w, h } = page.template.layout.page;
-      if (!canvas || !ctx) {
-        canvas = this.env.canvas.createCanvas(w, h, 'pdf');
-        ctx = canvas.getContext('2d');
-      } else {
-        (ctx as unknown as { addPage(w: number, h: number): void }).addPage(w, h);
-      }
-      ctx.textDrawingMode = 'glyph';
-      const view = await this.show(page);
-      ctx.save();
-      await view.toCanvas(1, { externalContext: ctx } as never);
-      ctx.restore();
-      onPage?.(++n);
-    }
-    if (!canvas) throw new Error('pdf() needs at least one page');
-    return canvas.toBuffer('application/pdf');
+  /** A vector PDF surface that takes pages one by one (see PdfPages). */
+  pdfPages(): PdfPages {
+    return new PdfPages(this);
   }
 
   finalize(): void {
     for (const v of this.views.values()) v.finalize();
     this.views.clear();
     this.current = undefined;
+  }
+}
+
+/**
+ * Many sheets on one node-canvas PDF surface: each page is drawn through `externalContext` between
+ * save/restore, with text kept as glyphs so the PDF stays searchable. Metadata is left to the binder
+ * (src/sheet/book.ts), which fixes the dates for deterministic output.
+ */
+export class PdfPages {
+  private canvas: import('canvas').Canvas | undefined;
+  private ctx: import('canvas').CanvasRenderingContext2D | undefined;
+  count = 0;
+
+  constructor(private readonly renderer: SheetRenderer) {}
+
+  async add(page: SheetPage): Promise<void> {
+    const { w, h } = page.template.layout.page;
+    if (!this.canvas || !this.ctx) {
+      this.canvas = this.renderer.env.canvas.createCanvas(w, h, 'pdf');
+      this.ctx = this.canvas.getContext('2d');
+    } else {
+      (this.ctx as unknown as { addPage(w: number, h: number): void }).addPage(w, h);
+    }
+    const ctx = this.ctx;
+    ctx.textDrawingMode = 'glyph';
+    const view = await this.renderer.show(page);
+    ctx.save();
+    await view.toCanvas(1, { externalContext: ctx } as never);
+    ctx.restore();
+    this.count++;
+  }
+
+  toBuffer(): Buffer {
+    if (!this.canvas) throw new Error('PdfPages: no page was added');
+    return this.canvas.toBuffer('application/pdf');
   }
 }

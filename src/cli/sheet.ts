@@ -1,0 +1,128 @@
+/**
+ * `pmchart sheet <section flags>`: one sheet for a quick look, as SVG, PNG or PDF (from the --out
+ * extension). Same section flags as `pmchart table`; render modules are imported lazily.
+ */
+import { extname, resolve } from 'node:path';
+import type { Command } from 'commander';
+import type { ResolvedChartSet } from '../config/types.js';
+import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
+import { sectionDepth, sectionWidth } from '../section/geometry.js';
+import { generatorLabel } from '../version.js';
+import { parseNumberList } from './format.js';
+import { addSectionOptions, resolveSectionFlags, type SectionFlags } from './section-flags.js';
+
+export interface SheetOptions extends SectionFlags {
+  rho?: string;
+  out?: string;
+  families?: string;
+  dimensionless?: boolean;
+  paper?: string;
+  portrait?: boolean;
+  office?: string;
+  project?: string;
+  date?: string;
+  eccentricities?: string;
+}
+
+/** Builds a one-sheet chart set from section flags (pure apart from reading --custom-bars). */
+export async function sheetSetFromFlags(o: SheetOptions): Promise<{ set: ResolvedChartSet; basis: ReturnType<typeof resolveSectionFlags>['basis']; capContext: ReturnType<typeof resolveSectionFlags>['capContext'] }> {
+  const section = resolveSectionFlags(o);
+  if (section.arrangement.kind === 'custom') {
+    throw new PmError(ERROR_CODES.invalidValue, '--arrangement', 'custom is not available for sheets yet', { value: 'custom', allowed: 'two-faces, four-faces, side-faces, ring' });
+  }
+  const { PAPER_POINTS } = await import('../config/types.js');
+  const { PAPER_SIZES, FAMILY_CHOICES } = await import('../config/schema.js');
+  const { DEFAULT_TITLE_PATTERN, fileStemFor, fillPattern, titleFields } = await import('../config/describe.js');
+  const rhos = parseNumberList(o.rho ?? '0.01:0.08:0.01');
+  if (!rhos || rhos.length === 0) throw new PmError(ERROR_CODES.invalidValue, '--rho', 'is not a list (0.01,0.02) or a range start:stop:step', { value: o.rho });
+  for (const r of rhos) requireInRange('--rho', r, 0.001, 0.1);
+  if (rhos.length > 20) throw new PmError(ERROR_CODES.outOfRange, '--rho', 'gives more than 20 curves', { value: rhos.length, allowed: '1–20' });
+  const families = o.families ?? 'design';
+  if (!(FAMILY_CHOICES as readonly string[]).includes(families)) throw new PmError(ERROR_CODES.invalidValue, '--families', 'is not one of the allowed values', { value: families, allowed: FAMILY_CHOICES.join(', ') });
+  const size = o.paper ?? (section.units === 'us' ? 'tabloid' : 'a3');
+  if (!(PAPER_SIZES as readonly string[]).includes(size)) throw new PmError(ERROR_CODES.invalidValue, '--paper', 'is not one of the allowed values', { value: size, allowed: PAPER_SIZES.join(', ') });
+  const date = o.date ?? (process.env.SOURCE_DATE_EPOCH ? new Date(Number(process.env.SOURCE_DATE_EPOCH) * 1000) : new Date()).toISOString().slice(0, 10);
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(date)) throw new PmError(ERROR_CODES.invalidValue, '--date', 'is not a date in the form YYYY-MM-DD', { value: date });
+  const ecc = o.eccentricities === undefined ? [0.1, 0.25, 0.5, 1] : parseNumberList(o.eccentricities);
+  if (!ecc) throw new PmError(ERROR_CODES.invalidValue, '--eccentricities', 'is not a comma list of e/h values', { value: o.eccentricities });
+  for (const e of ecc) requireInRange('--eccentricities', e, 0.01, 10);
+  const [pw, ph] = PAPER_POINTS[size as keyof typeof PAPER_POINTS];
+  const shape = section.shape.kind === 'circle' ? ({ kind: 'circle' } as const) : ({ kind: 'rectangle', aspect: sectionWidth(section.shape) / sectionDepth(section.shape) } as const);
+  const partial = {
+    index: 1,
+    origin: 'flags',
+    shape,
+    fc: section.basis.fc,
+    fy: section.basis.fy,
+    gamma: section.gamma,
+    arrangement: section.arrangement,
+    transverse: section.basis.transverse,
+  };
+  const fam = families === 'both' ? 'nominal and factored' : families;
+  const set: ResolvedChartSet = {
+    name: 'sheet',
+    titleBlock: { office: o.office ?? '', project: o.project ?? '', preparedBy: '', checkedBy: '', revision: '—', date },
+    paper: { size: size as ResolvedChartSet['paper']['size'], orientation: o.portrait ? 'portrait' : 'landscape', widthPt: o.portrait ? pw : ph, heightPt: o.portrait ? ph : pw },
+    units: section.units,
+    code: section.code,
+    basisOptions: {},
+    normalisation: o.dimensionless ? 'dimensionless' : 'stress',
+    families: families as ResolvedChartSet['families'],
+    rhos,
+    referenceLines: { strainStates: true, eccentricities: ecc, axialCap: true },
+    outputs: { pdf: true, svg: false, png: false, pngScale: 2, tables: false },
+    sheets: [{ ...partial, title: (() => { const t = fillPattern(DEFAULT_TITLE_PATTERN, titleFields(partial, section.units, fam)); return t.charAt(0).toUpperCase() + t.slice(1); })(), fileStem: fileStemFor(partial, section.units, 1) }],
+  };
+  return { set, basis: section.basis, capContext: section.capContext };
+}
+
+/** Writes the sheet; returns the path written. */
+export async function runSheet(o: SheetOptions): Promise<string> {
+  const out = resolve(o.out ?? 'sheet.pdf');
+  const kind = extname(out).toLowerCase();
+  if (!['.svg', '.png', '.pdf'].includes(kind)) throw new PmError(ERROR_CODES.invalidValue, '--out', 'must end in .svg, .png or .pdf', { value: o.out });
+  const { set, basis, capContext } = await sheetSetFromFlags(o);
+  const sheet = set.sheets[0]!;
+  const { computeFamily } = await import('../analysis/family.js');
+  const { SHEET_BASE_POINTS, sheetShape } = await import('../sheet/curves.js');
+  const { buildSheet } = await import('../chart/sheet-data.js');
+  const { SheetRenderer } = await import('../render/renderer.js');
+  const { writeFileAtomic } = await import('../sheet/files.js');
+  const family = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: set.rhos, capContext, basePoints: SHEET_BASE_POINTS });
+  const built = buildSheet({ set, sheet, family, sheetNumber: 1, sheetCount: 1, generator: generatorLabel() });
+  const page = { template: built.template, data: built.data };
+  const renderer = await SheetRenderer.create();
+  try {
+    if (kind === '.svg') writeFileAtomic(out, await renderer.svg(page));
+    else if (kind === '.png') writeFileAtomic(out, await renderer.png(page, 2));
+    else {
+      const pdf = renderer.pdfPages();
+      await pdf.add(page);
+      const { fixPdfMetadata } = await import('../sheet/book.js');
+      writeFileAtomic(out, await fixPdfMetadata(pdf.toBuffer(), { title: sheet.title, date: set.titleBlock.date, generator: generatorLabel(), subject: basis.title }));
+    }
+  } finally {
+    renderer.finalize();
+  }
+  return out;
+}
+
+export function registerSheet(program: Command, run: (fn: () => Promise<void> | void) => Promise<void>): void {
+  const cmd = program.command('sheet').description('one chart sheet from section flags, for a quick look (SVG, PNG or PDF by the --out extension)');
+  addSectionOptions(cmd)
+    .option('--rho <list>', 'ρg values: start:stop:step or a comma list (default 0.01:0.08:0.01)')
+    .option('--families <which>', 'design, nominal or both', 'design')
+    .option('--dimensionless', 'divide by the normalising stress (f′c, or fcd for EN 1992-1-1)')
+    .option('--eccentricities <list>', 'e/h of the radial lines (default 0.1,0.25,0.5,1)')
+    .option('--paper <size>', 'a4, a3, letter or tabloid (default tabloid for US units, a3 for SI)')
+    .option('--portrait', 'portrait instead of landscape')
+    .option('--office <text>', 'office name for the title block')
+    .option('--project <text>', 'project name for the title block')
+    .option('--date <yyyy-mm-dd>', 'date for the title block and PDF metadata (default SOURCE_DATE_EPOCH, else today)')
+    .option('--out <file>', 'output file: .svg, .png or .pdf', 'sheet.pdf')
+    .action((opts: SheetOptions) =>
+      run(async () => {
+        process.stdout.write(`${await runSheet(opts)}\n`);
+      }),
+    );
+}

@@ -1,0 +1,225 @@
+/**
+ * Binding a book with pdf-lib: a cover, an index of every sheet with its parameters and page
+ * number, the sheet pages (copied from the chunk PDFs in order), one outline entry per sheet,
+ * and fixed metadata so that the same set gives the same bytes.
+ * pdf-lib's standard fonts cannot encode φ or ρ, so DejaVu Sans is embedded (subset).
+ */
+import fontkit from '@pdf-lib/fontkit';
+import { readFileSync } from 'node:fs';
+import { PDFArray, PDFDocument, PDFName, PDFNumber, PDFHexString, rgb, type PDFFont, type PDFPage, type PDFRef, type RGB } from 'pdf-lib';
+import { describeArrangement, describeShape, describeTransverse, fmt, stressText } from '../config/describe.js';
+import type { ResolvedChartSet } from '../config/types.js';
+import { COLOURS } from '../chart/style.js';
+import { wrap } from '../chart/sheet-data.js';
+
+export interface BookInput {
+  set: ResolvedChartSet;
+  /** chunk PDFs in sheet order */
+  chunks: Uint8Array[];
+  fonts: { regular: string; bold: string };
+  generator: string;
+  /** basis title and notes for the cover (from the first sheet's basis) */
+  basisTitle: string;
+  basisNotes: readonly string[];
+}
+
+const hex = (h: string): RGB => rgb(parseInt(h.slice(1, 3), 16) / 255, parseInt(h.slice(3, 5), 16) / 255, parseInt(h.slice(5, 7), 16) / 255);
+
+export const INDEX_ROWS_PER_PAGE = (heightPt: number): number => Math.max(10, Math.floor((heightPt - 170) / 15));
+
+/** Pages before the first sheet: the cover and the index pages. */
+export function frontMatterPages(set: ResolvedChartSet): number {
+  return 1 + Math.ceil(set.sheets.length / INDEX_ROWS_PER_PAGE(set.paper.heightPt));
+}
+
+export async function bindBook(input: BookInput): Promise<Uint8Array> {
+  const { set } = input;
+  const doc = await PDFDocument.create({ updateMetadata: false });
+  doc.registerFontkit(fontkit);
+  const regular = await doc.embedFont(readFileSync(input.fonts.regular), { subset: true });
+  const bold = await doc.embedFont(readFileSync(input.fonts.bold), { subset: true });
+  const W = set.paper.widthPt;
+  const H = set.paper.heightPt;
+  const front = frontMatterPages(set);
+
+  const cover = doc.addPage([W, H]);
+  drawCover(cover, input, regular, bold, front);
+  const rowsPerPage = INDEX_ROWS_PER_PAGE(H);
+  const indexPages: PDFPage[] = [];
+  for (let start = 0, p = 0; start < set.sheets.length; start += rowsPerPage, p++) {
+    const page = doc.addPage([W, H]);
+    indexPages.push(page);
+    drawIndex(page, input, regular, bold, start, Math.min(set.sheets.length, start + rowsPerPage), front, p + 2, front);
+  }
+
+  const sheetPages: PDFPage[] = [];
+  for (const bytes of input.chunks) {
+    const src = await PDFDocument.load(bytes, { updateMetadata: false });
+    for (const p of await doc.copyPages(src, src.getPageIndices())) sheetPages.push(doc.addPage(p));
+  }
+  if (sheetPages.length !== set.sheets.length) throw new Error(`book: ${sheetPages.length} sheet pages for ${set.sheets.length} sheets`);
+
+  addOutline(doc, [
+    { title: 'Cover', page: cover },
+    { title: 'Index of sheets', page: indexPages[0]! },
+    ...set.sheets.map((s, i) => ({ title: `Sheet ${s.index}: ${s.title}`, page: sheetPages[i]! })),
+  ]);
+
+  const date = new Date(`${set.titleBlock.date}T00:00:00Z`);
+  doc.setTitle(`${set.titleBlock.project}: interaction chart set ${set.name}`);
+  doc.setAuthor(set.titleBlock.office);
+  doc.setSubject(`Normalised P–M interaction charts, ${input.basisTitle}, ${set.sheets.length} sheets`);
+  doc.setKeywords(['interaction chart', 'reinforced concrete column', input.basisTitle, set.name]);
+  doc.setCreator(input.generator);
+  doc.setProducer(`${input.generator} (pdf-lib, node-canvas)`);
+  doc.setCreationDate(date);
+  doc.setModificationDate(date);
+  return doc.save({ useObjectStreams: true });
+}
+
+function drawCover(page: PDFPage, input: BookInput, regular: PDFFont, bold: PDFFont, front: number): void {
+  const { set } = input;
+  const { width: W, height: H } = page.getSize();
+  const u = Math.min(W, H) / 100 + 0.8;
+  const m = 5 * u;
+  const tb = set.titleBlock;
+  page.drawRectangle({ x: 0, y: 0, width: 2.2 * u, height: H, color: hex(COLOURS.accent) });
+  let y = H - m - 3 * u;
+  const line = (text: string, size: number, font: PDFFont, colour: string = COLOURS.ink, gap = 1.5) => {
+    for (const l of wrap(text, W - 2 * m - 4 * u, size)) {
+      page.drawText(l, { x: m + 2 * u, y, size, font, color: hex(colour) });
+      y -= size * gap;
+    }
+  };
+  line(tb.office, 1.5 * u, regular, COLOURS.muted);
+  y -= 2 * u;
+  line(tb.project, 3.4 * u, bold, COLOURS.ink, 1.25);
+  y -= 0.5 * u;
+  line(`Interaction chart set “${set.name}”`, 2.2 * u, regular, COLOURS.accent);
+  y -= 2.5 * u;
+  const sheets = set.sheets.length;
+  const fcs = [...new Set(set.sheets.map((s) => stressText(s.fc, set.units)))].join(', ');
+  const fys = [...new Set(set.sheets.map((s) => stressText(s.fy, set.units)))].join(', ');
+  const gammas = [...new Set(set.sheets.map((s) => s.gamma.toFixed(2)))].join(', ');
+  const facts: [string, string][] = [
+    ['Design basis', input.basisTitle],
+    ['Sheets', `${sheets} (index on page 2, sheets from page ${front + 1})`],
+    ['Concrete f′c', fcs],
+    ['Bars fy', fys],
+    ['γ', gammas],
+    ['ρg family', set.rhos.map((r) => fmt(r, 4)).join(', ')],
+    ['Curves', set.families === 'both' ? 'nominal and factored' : set.families === 'design' ? 'factored (design)' : 'nominal'],
+    ['Normalisation', set.normalisation === 'dimensionless' ? 'dimensionless (divided by the normalising stress)' : `stress, ${set.units === 'us' ? 'ksi' : 'MPa'}`],
+    ['Prepared · checked', [tb.preparedBy, tb.checkedBy].filter(Boolean).join(' · ') || '—'],
+    ['Revision · date', `${tb.revision} · ${tb.date}`],
+    ['Generated by', input.generator],
+  ];
+  for (const [k, v] of facts) {
+    page.drawText(k.toUpperCase(), { x: m + 2 * u, y, size: 0.8 * u, font: regular, color: hex(COLOURS.muted) });
+    page.drawText(v, { x: m + 20 * u, y, size: 1.1 * u, font: regular, color: hex(COLOURS.ink) });
+    y -= 1.9 * u;
+  }
+  y -= 1.5 * u;
+  page.drawText('Assumptions of the basis', { x: m + 2 * u, y, size: 1.1 * u, font: bold, color: hex(COLOURS.accent) });
+  y -= 1.7 * u;
+  for (const n of input.basisNotes) line(`•  ${n}`, 0.95 * u, regular, COLOURS.ink, 1.4);
+  const caution =
+    'For use by qualified engineers only. The sheets are aids to design: check every value against the governing code edition, the project specification and local practice. They do not replace the judgement of the engineer of record.';
+  const cl = wrap(caution, W - 2 * m - 8 * u, 1.05 * u);
+  const ch = cl.length * 1.05 * u * 1.4 + 2 * u;
+  page.drawRectangle({ x: m + 2 * u, y: m, width: W - 2 * m - 4 * u, height: ch, color: hex('#fbf1ef'), borderColor: hex(COLOURS.caution), borderWidth: 0.7 });
+  let cy = m + ch - 1.0 * u - 1.05 * u;
+  for (const l of cl) {
+    page.drawText(l, { x: m + 3 * u, y: cy, size: 1.05 * u, font: bold, color: hex(COLOURS.caution) });
+    cy -= 1.05 * u * 1.4;
+  }
+}
+
+function drawIndex(page: PDFPage, input: BookInput, regular: PDFFont, bold: PDFFont, from: number, to: number, front: number, pageNo: number, frontCount: number): void {
+  const { set } = input;
+  const { width: W, height: H } = page.getSize();
+  const u = Math.min(W, H) / 100 + 0.8;
+  const m = 4 * u;
+  page.drawRectangle({ x: 0, y: 0, width: 1.0 * u, height: H, color: hex(COLOURS.accent) });
+  page.drawText('Index of sheets', { x: m, y: H - m - 1.5 * u, size: 2.2 * u, font: bold, color: hex(COLOURS.ink) });
+  page.drawText(`${set.titleBlock.project} · ${set.name} · page ${pageNo} of ${frontCount + set.sheets.length}`, {
+    x: m,
+    y: H - m - 4 * u,
+    size: 1.0 * u,
+    font: regular,
+    color: hex(COLOURS.muted),
+  });
+  const cols: [string, number, 'l' | 'r'][] = [
+    ['sheet', 4, 'r'],
+    ['shape', 9, 'l'],
+    ['f′c', 6, 'r'],
+    ['fy', 6, 'r'],
+    ['γ', 4.5, 'r'],
+    ['bars', 26, 'l'],
+    ['transverse', 7, 'l'],
+    ['file', 34, 'l'],
+    ['page', 4.5, 'r'],
+  ];
+  const total = cols.reduce((s, c) => s + c[1], 0);
+  const scale = (W - 2 * m) / total;
+  const size = 0.95 * u;
+  let y = H - m - 8 * u;
+  const row = (cells: string[], font: PDFFont, colour: string) => {
+    let x = m;
+    cells.forEach((t, k) => {
+      const [, w, al] = cols[k]!;
+      const cw = w * scale;
+      let s = t;
+      while (s.length > 1 && font.widthOfTextAtSize(s, size) > cw - 0.8 * u) s = `${s.slice(0, -2)}…`;
+      const tw = font.widthOfTextAtSize(s, size);
+      page.drawText(s, { x: al === 'r' ? x + cw - 0.8 * u - tw : x, y, size, font, color: hex(colour) });
+      x += cw;
+    });
+  };
+  row(cols.map((c) => c[0]), bold, COLOURS.ink);
+  page.drawLine({ start: { x: m, y: y - 0.5 * u }, end: { x: W - m, y: y - 0.5 * u }, thickness: 0.7, color: hex(COLOURS.faint) });
+  y -= 15;
+  for (let i = from; i < to; i++) {
+    const s = set.sheets[i]!;
+    if ((i - from) % 2 === 1) page.drawRectangle({ x: m, y: y - 0.45 * u, width: W - 2 * m, height: 15, color: hex('#f3f5f7') });
+    row(
+      [String(s.index), describeShape(s.shape), stressText(s.fc, set.units), stressText(s.fy, set.units), s.gamma.toFixed(2), describeArrangement(s.arrangement), describeTransverse(s.transverse), s.fileStem, String(front + i + 1)],
+      regular,
+      COLOURS.ink,
+    );
+    y -= 15;
+  }
+}
+
+/** A flat PDF outline (ISO 32000-1 12.3.3): one item per entry, each opening its page. */
+function addOutline(doc: PDFDocument, entries: { title: string; page: PDFPage }[]): void {
+  const ctx = doc.context;
+  const rootRef = ctx.nextRef();
+  const refs: PDFRef[] = entries.map(() => ctx.nextRef());
+  entries.forEach((e, i) => {
+    const dict: Record<string, unknown> = {
+      Title: PDFHexString.fromText(e.title),
+      Parent: rootRef,
+      Dest: ctx.obj([e.page.ref, PDFName.of('Fit')]) as PDFArray,
+    };
+    if (i > 0) dict.Prev = refs[i - 1];
+    if (i < entries.length - 1) dict.Next = refs[i + 1];
+    ctx.assign(refs[i]!, ctx.obj(dict as never));
+  });
+  ctx.assign(rootRef, ctx.obj({ Type: 'Outlines', First: refs[0]!, Last: refs[refs.length - 1]!, Count: PDFNumber.of(entries.length) } as never));
+  doc.catalog.set(PDFName.of('Outlines'), rootRef);
+  doc.catalog.set(PDFName.of('PageMode'), PDFName.of('UseOutlines'));
+}
+
+/** Fixes the metadata of a single-sheet PDF made by node-canvas (its own dates are the clock's). */
+export async function fixPdfMetadata(bytes: Uint8Array, m: { title: string; subject: string; date: string; generator: string }): Promise<Uint8Array> {
+  const doc = await PDFDocument.load(bytes, { updateMetadata: false });
+  const date = new Date(`${m.date}T00:00:00Z`);
+  doc.setTitle(m.title);
+  doc.setSubject(m.subject);
+  doc.setCreator(m.generator);
+  doc.setProducer(`${m.generator} (pdf-lib, node-canvas)`);
+  doc.setCreationDate(date);
+  doc.setModificationDate(date);
+  return doc.save({ useObjectStreams: true });
+}

@@ -1,0 +1,146 @@
+/**
+ * Start reading here: how a chart set becomes files.
+ *
+ *   config file ──1──▶ resolved set ──2──▶ curves ──3──▶ chart spec ──4──▶ bytes ──5──▶ files
+ *   (src/config)       ResolvedChartSet    CurveFamily    vega-lite JSON    SVG/PNG/PDF    out/<set>/
+ *                      read.ts             curves.ts      src/chart          src/render     files.ts, book.ts
+ *
+ * 1. The caller reads and resolves the config (src/config/read.ts) — defaults, units, rule checks.
+ * 2–4. Sheets are made in fixed-size chunks (render-chunk.ts), in this process or in child
+ *      processes (worker.ts); each chunk writes its tables, SVG and PNG files and one chunk PDF.
+ * 5. The binder (book.ts) joins the chunk PDFs behind a cover and index, adds the outline and the
+ *    fixed metadata. Everything is made in a staging folder that replaces out/<set-name>/ at the end.
+ */
+import { fork } from 'node:child_process';
+import { mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
+import { dirname, extname, join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import type { ResolvedChartSet } from '../config/types.js';
+import { ERROR_CODES, PmError } from '../errors.js';
+import { SheetRenderer } from '../render/renderer.js';
+import { bindBook } from './book.js';
+import { familyForSheet } from './curves.js';
+import { swapInFolder, writeFileAtomic } from './files.js';
+import { chunksOf, type ChunkTask } from './render-chunk.js';
+import { renderChunk } from './render-chunk.js';
+import type { WorkerMessage } from './worker.js';
+
+export interface MakeSetOptions {
+  /** parent folder; the set goes to <outDir>/<set.name>/ (default "out") */
+  outDir?: string;
+  /** processes rendering sheets (default: available cores, at most 4; 1 renders in this process) */
+  jobs?: number;
+  /** called after every sheet */
+  onSheet?: (done: number, total: number) => void;
+  /** e.g. "pmchart 0.1.0" */
+  generator: string;
+}
+
+export interface MadeSet {
+  dir: string;
+  sheets: number;
+  book?: string;
+  files: { sheets: number; tables: number };
+}
+
+/** Makes every output of a resolved chart set. */
+export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions): Promise<MadeSet> {
+  const target = resolve(opts.outDir ?? 'out', set.name);
+  const staging = `${target}.partial-${process.pid}`;
+  rmSync(staging, { recursive: true, force: true });
+  mkdirSync(staging, { recursive: true });
+  try {
+    // 2–4: curves → spec → bytes, chunk by chunk
+    const tasks = chunksOf(set, staging, opts.generator);
+    let done = 0;
+    const tick = () => opts.onSheet?.(++done, set.sheets.length);
+    const jobs = Math.max(1, Math.min(opts.jobs ?? Math.min(4, availableParallelism()), tasks.length));
+    const pdfs = jobs === 1 ? await renderHere(tasks, tick) : await renderInChildren(tasks, jobs, tick);
+
+    // 5: bind the book
+    let book: string | undefined;
+    if (set.outputs.pdf) {
+      const { fontPaths } = await import('../render/environment.js');
+      const basis = familyForSheet(set, set.sheets[0]!).basis;
+      const bytes = await bindBook({
+        set,
+        chunks: pdfs.map((p) => readFileSync(p!)),
+        fonts: fontPaths(),
+        generator: opts.generator,
+        basisTitle: basis.title,
+        basisNotes: basis.notes,
+      });
+      for (const p of pdfs) if (p) rmSync(p, { force: true });
+      writeFileAtomic(join(staging, 'book.pdf'), bytes);
+      book = join(target, 'book.pdf');
+    }
+    swapInFolder(staging, target);
+    const o = set.outputs;
+    return {
+      dir: target,
+      sheets: set.sheets.length,
+      ...(book ? { book } : {}),
+      files: { sheets: set.sheets.length * ((o.svg ? 1 : 0) + (o.png ? 1 : 0)), tables: o.tables ? 2 * set.sheets.length : 0 },
+    };
+  } catch (e) {
+    rmSync(staging, { recursive: true, force: true });
+    throw e;
+  }
+}
+
+async function renderHere(tasks: ChunkTask[], tick: () => void): Promise<(string | undefined)[]> {
+  const renderer = await SheetRenderer.create();
+  try {
+    const out: (string | undefined)[] = [];
+    for (const t of tasks) out.push(await renderChunk(t, renderer, tick));
+    return out;
+  } finally {
+    renderer.finalize();
+  }
+}
+
+/** Chunks handed to `jobs` child processes as they become free (node-canvas cannot run in worker threads). */
+async function renderInChildren(tasks: ChunkTask[], jobs: number, tick: () => void): Promise<(string | undefined)[]> {
+  const here = fileURLToPath(import.meta.url);
+  const ext = extname(here);
+  const workerPath = join(dirname(here), `worker${ext}`);
+  const execArgv = ext === '.ts' ? ['--import', 'tsx'] : [];
+  const results: (string | undefined)[] = new Array(tasks.length);
+  let next = 0;
+  const children = Array.from({ length: jobs }, () => fork(workerPath, [], { execArgv, stdio: ['ignore', 'inherit', 'inherit', 'ipc'] }));
+  try {
+    await Promise.all(
+      children.map(
+        (child) =>
+          new Promise<void>((resolveChild, reject) => {
+            const give = () => {
+              const t = tasks[next++];
+              if (t) child.send({ type: 'task', task: t });
+              else {
+                child.send({ type: 'exit' });
+                resolveChild();
+              }
+            };
+            child.on('message', (m: WorkerMessage) => {
+              if (m.type === 'sheet') tick();
+              else if (m.type === 'done') {
+                results[m.chunk] = m.pdf;
+                give();
+              } else if (m.type === 'error') {
+                const pm = m.error.pm;
+                reject(pm ? new PmError(pm.code as never, '', pm.detail, {}, pm.exitCode) : new Error(m.error.message));
+              }
+            });
+            child.on('exit', (code, signal) => {
+              if (code !== 0 && next <= tasks.length) reject(new PmError(ERROR_CODES.environment, 'render process', `stopped (${signal ?? `exit code ${code}`})`, {}, 1));
+            });
+            give();
+          }),
+      ),
+    );
+  } finally {
+    for (const c of children) if (c.connected) c.disconnect();
+  }
+  return results;
+}

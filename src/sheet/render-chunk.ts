@@ -1,0 +1,62 @@
+/**
+ * Stages "curves → chart spec → bytes → files" for a run of sheets. A chunk's sheets share one
+ * vector PDF surface; the binder joins the chunk PDFs in order. Chunks are a fixed size so the book's
+ * bytes do not depend on how many processes made it.
+ */
+import { join } from 'node:path';
+import { tableCsv } from '../chart/lookup-table.js';
+import { buildSheet, primaryFamily } from '../chart/sheet-data.js';
+import type { ResolvedChartSet } from '../config/types.js';
+import type { SheetRenderer } from '../render/renderer.js';
+import { familyForSheet } from './curves.js';
+import { writeFileAtomic } from './files.js';
+import { tableJson } from './tables.js';
+
+/** Sheets per chunk PDF. */
+export const CHUNK_SIZE = 50;
+
+export interface ChunkTask {
+  set: ResolvedChartSet;
+  chunk: number;
+  /** 0-based sheet positions */
+  indices: number[];
+  /** the set's staging folder */
+  staging: string;
+  generator: string;
+}
+
+export function chunksOf(set: ResolvedChartSet, staging: string, generator: string): ChunkTask[] {
+  const tasks: ChunkTask[] = [];
+  for (let start = 0, k = 0; start < set.sheets.length; start += CHUNK_SIZE, k++) {
+    const indices = Array.from({ length: Math.min(CHUNK_SIZE, set.sheets.length - start) }, (_, i) => start + i);
+    tasks.push({ set, chunk: k, indices, staging, generator });
+  }
+  return tasks;
+}
+
+export const chunkPdfPath = (staging: string, chunk: number): string => join(staging, `.chunk-${String(chunk).padStart(4, '0')}.pdf`);
+
+/** Renders one chunk; returns the path of its PDF (when the set asks for a book). */
+export async function renderChunk(task: ChunkTask, renderer: SheetRenderer, onSheet?: () => void): Promise<string | undefined> {
+  const { set, staging, generator } = task;
+  const out = set.outputs;
+  const pdf = out.pdf ? renderer.pdfPages() : undefined;
+  for (const i of task.indices) {
+    const sheet = set.sheets[i]!;
+    const family = familyForSheet(set, sheet);
+    const built = buildSheet({ set, sheet, family, sheetNumber: i + 1, sheetCount: set.sheets.length, generator });
+    if (out.tables) {
+      writeFileAtomic(join(staging, 'tables', `${sheet.fileStem}.csv`), tableCsv(built.table));
+      writeFileAtomic(join(staging, 'tables', `${sheet.fileStem}.json`), tableJson(set, sheet, family.basis, built.table, primaryFamily(set), generator));
+    }
+    const page = { template: built.template, data: built.data };
+    if (out.svg) writeFileAtomic(join(staging, 'sheets', `${sheet.fileStem}.svg`), await renderer.svg(page));
+    if (out.png) writeFileAtomic(join(staging, 'sheets', `${sheet.fileStem}.png`), await renderer.png(page, out.pngScale));
+    if (pdf) await pdf.add(page);
+    onSheet?.();
+  }
+  if (!pdf) return undefined;
+  const path = chunkPdfPath(staging, task.chunk);
+  writeFileAtomic(path, pdf.toBuffer());
+  return path;
+}

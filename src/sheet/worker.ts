@@ -1,0 +1,39 @@
+/**
+ * Child process for rendering chunks (node-canvas crashes in worker threads, so sets parallelise
+ * across processes). Messages: parent → {type:'task', task}; child → {type:'sheet'} per sheet,
+ * {type:'done', chunk, pdf} per chunk, {type:'error', error}.
+ */
+import { isPmError } from '../errors.js';
+import { SheetRenderer } from '../render/renderer.js';
+import { renderChunk, type ChunkTask } from './render-chunk.js';
+
+export type WorkerMessage =
+  | { type: 'sheet' }
+  | { type: 'done'; chunk: number; pdf: string | undefined }
+  | { type: 'error'; error: { message: string; pm?: { code: string; path: string; facts: Record<string, unknown>; exitCode: number; detail: string } } };
+
+const send = (m: WorkerMessage) => process.send?.(m);
+let renderer: Promise<SheetRenderer> | undefined;
+
+process.on('message', (msg: { type: 'task'; task: ChunkTask } | { type: 'exit' }) => {
+  if (msg.type === 'exit') {
+    process.disconnect?.();
+    return;
+  }
+  void (async () => {
+    try {
+      renderer ??= SheetRenderer.create();
+      const pdf = await renderChunk(msg.task, await renderer, () => send({ type: 'sheet' }));
+      send({ type: 'done', chunk: msg.task.chunk, pdf });
+    } catch (e) {
+      const err = e as Error;
+      send({
+        type: 'error',
+        error: {
+          message: err.message,
+          ...(isPmError(e) ? { pm: { code: e.code, path: e.path, facts: e.facts, exitCode: e.exitCode, detail: e.message } } : {}),
+        },
+      });
+    }
+  })();
+});
