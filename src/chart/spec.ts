@@ -23,7 +23,7 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
     name,
     data: { name: 'refs' },
     transform: [{ filter: `datum.kind === '${kind}'` }],
-    mark: { type: 'line', clip: true, ...mark },
+    mark: { type: 'line', ...mark },
     encoding: { x, y, detail: { field: 'line' }, order: { field: 'i' } },
   });
   const textLayer = (style: TextStyle) => {

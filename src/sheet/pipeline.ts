@@ -35,6 +35,8 @@ export interface MakeSetOptions {
   onSheet?: (done: number, total: number) => void;
   /** e.g. "pmchart 0.1.0" */
   generator: string;
+  /** sheets per chunk PDF (default CHUNK_SIZE); the book's bytes depend on it, not on `jobs` */
+  chunkSize?: number;
 }
 
 export interface MadeSet {
@@ -52,7 +54,7 @@ export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions):
   mkdirSync(staging, { recursive: true });
   try {
     // 2–4: curves → spec → bytes, chunk by chunk
-    const tasks = chunksOf(set, staging, opts.generator);
+    const tasks = chunksOf(set, staging, opts.generator, opts.chunkSize);
     let done = 0;
     const tick = () => opts.onSheet?.(++done, set.sheets.length);
     const jobs = Math.max(1, Math.min(opts.jobs ?? Math.min(4, availableParallelism()), tasks.length));

@@ -25,10 +25,10 @@ export interface ChunkTask {
   generator: string;
 }
 
-export function chunksOf(set: ResolvedChartSet, staging: string, generator: string): ChunkTask[] {
+export function chunksOf(set: ResolvedChartSet, staging: string, generator: string, size = CHUNK_SIZE): ChunkTask[] {
   const tasks: ChunkTask[] = [];
-  for (let start = 0, k = 0; start < set.sheets.length; start += CHUNK_SIZE, k++) {
-    const indices = Array.from({ length: Math.min(CHUNK_SIZE, set.sheets.length - start) }, (_, i) => start + i);
+  for (let start = 0, k = 0; start < set.sheets.length; start += size, k++) {
+    const indices = Array.from({ length: Math.min(size, set.sheets.length - start) }, (_, i) => start + i);
     tasks.push({ set, chunk: k, indices, staging, generator });
   }
   return tasks;
