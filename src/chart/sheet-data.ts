@@ -26,15 +26,19 @@ export interface SheetContext {
 }
 
 export interface CurveRow { curve: string; family: FamilyKind; i: number; M: number; P: number; colour: string }
-export interface CurveLabelRow { M: number; P: number; text: string; colour: string }
+export interface CurveLabelRow { M: number; P: number; text: string; colour: string; z: number }
 export interface RefRow { line: string; kind: 'strain' | 'ray' | 'cap' | 'zero'; i: number; M: number; P: number }
-export interface RefLabelRow { kind: 'strain' | 'ray' | 'cap'; M: number; P: number; text: string }
+export interface RefLabelRow { kind: 'strain' | 'ray' | 'cap'; M: number; P: number; text: string; z: number }
 export interface FrameRow { M: number; P: number }
-export interface TextRow { style: TextStyle; x: number; y: number; text: string }
-export interface RectRow { x: number; y: number; x2: number; y2: number; fill: string; stroke: string; strokeWidth: number }
-export interface RuleRow { x: number; y: number; x2: number; y2: number; stroke: string; strokeWidth: number }
-export interface DotRow { x: number; y: number; size: number; fill: string }
+export interface TextRow { style: TextStyle; x: number; y: number; text: string; z: number }
+export interface RectRow { x: number; y: number; x2: number; y2: number; fill: string; stroke: string; strokeWidth: number; z: number }
+export interface RuleRow { x: number; y: number; x2: number; y2: number; stroke: string; strokeWidth: number; z: number }
+export interface DotRow { x: number; y: number; size: number; fill: string; z: number }
 
+/**
+ * Rows of decoration datasets carry `z`, their drawing order (the vega-lite `order` channel), so the
+ * output never depends on the order in which a renderer happened to receive them.
+ */
 export interface SheetData {
   curves: CurveRow[];
   curveLabels: CurveLabelRow[];
@@ -61,6 +65,9 @@ export interface BuiltSheet {
   data: SheetData;
   table: LookupTable;
 }
+
+/** Where a ρg label sits on its curve, as a fraction of the curve's pure-tension force. */
+const LABEL_LEVEL = 0.33;
 
 /** Largest distance, in page points, between a drawn curve and a computed point it leaves out. */
 export const SIMPLIFY_TOLERANCE_PT = 0.08;
@@ -140,10 +147,11 @@ function plotLayers(ctx: SheetContext, templateLayout: SheetLayout, families: Fa
     }
   });
 
-  // ρg labels sit on the tension branch, where the curves run nearly parallel and well apart.
+  // ρg labels sit on the tension branch, each at a third of its own pure-tension force: the labels
+  // step down diagonally, where the curves run nearly parallel and well apart.
   const tensionP = (k: number) => (family.curves[k]!.keyPoints.find((p) => p.id === 'pure-tension')?.[primary]?.P ?? 0) / d;
-  const level = 0.42 * tensionP(0);
   family.curves.forEach((c, k) => {
+    const level = LABEL_LEVEL * tensionP(k);
     const P = primary === 'design' ? c.phiPn : c.Pn;
     const M = primary === 'design' ? c.phiMn : c.Mn;
     for (let i = 1; i < P.length; i++) {
@@ -152,7 +160,7 @@ function plotLayers(ctx: SheetContext, templateLayout: SheetLayout, families: Fa
       if (p0 <= level && p1 >= level) {
         const t = p1 === p0 ? 0 : (level - p0) / (p1 - p0);
         const m = (M[i - 1]! + t * (M[i]! - M[i - 1]!)) / d;
-        out.curveLabels.push({ M: r5(m), P: r5(level), text: `ρg ${fmt(c.rho, 4)}`, colour: curveColour(k, n) });
+        out.curveLabels.push({ M: r5(m), P: r5(level), text: `ρg ${fmt(c.rho, 4)}`, colour: curveColour(k, n), z: out.curveLabels.length });
         break;
       }
     }
@@ -180,7 +188,7 @@ function plotLayers(ctx: SheetContext, templateLayout: SheetLayout, families: Fa
       const pts = pointsOf(s.id);
       pts.forEach((p, i) => out.refs.push({ line: `strain-${s.id}`, kind: 'strain', i, M: r5(p.v.M / d), P: r5(p.v.P / d) }));
       const last = pts[pts.length - 1];
-      if (last) out.refLabels.push({ kind: 'strain', M: r5(last.v.M / d), P: r5(last.v.P / d), text: shortLabel({ id: s.id, label: s.label }) });
+      if (last) out.refLabels.push({ kind: 'strain', M: r5(last.v.M / d), P: r5(last.v.P / d), text: shortLabel({ id: s.id, label: s.label }), z: out.refLabels.length });
     }
   }
   if (set.referenceLines.axialCap) {
@@ -188,7 +196,7 @@ function plotLayers(ctx: SheetContext, templateLayout: SheetLayout, families: Fa
     pts.forEach((p, i) => out.refs.push({ line: 'cap', kind: 'cap', i, M: r5(p.v.M / d), P: r5(p.v.P / d) }));
     const last = pts[pts.length - 1];
     const sy = family.basis.symbols;
-    if (last) out.refLabels.push({ kind: 'cap', M: r5(last.v.M / d), P: r5(last.v.P / d), text: `${primary === 'design' ? sy.designAxial : sy.nominalAxial},max` });
+    if (last) out.refLabels.push({ kind: 'cap', M: r5(last.v.M / d), P: r5(last.v.P / d), text: `${primary === 'design' ? sy.designAxial : sy.nominalAxial},max`, z: out.refLabels.length });
   }
   // e/h rays: M/(Ag·h) = e/h · P/Ag, from the origin to just past the outermost curve.
   const outer = family.curves[n - 1];
@@ -209,7 +217,7 @@ function plotLayers(ctx: SheetContext, templateLayout: SheetLayout, families: Fa
       if (!hit) continue;
       const [m, p] = [hit[0] * 1.07, hit[1] * 1.07];
       out.refs.push({ line: `ray-${e}`, kind: 'ray', i: 0, M: 0, P: 0 }, { line: `ray-${e}`, kind: 'ray', i: 1, M: r5(m), P: r5(p) });
-      out.refLabels.push({ kind: 'ray', M: r5(m), P: r5(p), text: `e/h ${fmt(e)}` });
+      out.refLabels.push({ kind: 'ray', M: r5(m), P: r5(p), text: `e/h ${fmt(e)}`, z: out.refLabels.length });
     }
   }
   // invisible frame: room right of the outermost curve for line labels
@@ -228,16 +236,17 @@ class Deco {
   size = (style: TextStyle) => TEXT_STYLES[style].size * this.L.u;
   text(style: TextStyle, x: number, y: number, text: string, maxW?: number): void {
     const t = maxW === undefined ? text : truncate(text, maxW, this.size(style));
-    this.out.texts.push({ style, x: this.ox(x), y: this.oy(y), text: t });
+    this.out.texts.push({ style, x: this.ox(x), y: this.oy(y), text: t, z: this.out.texts.length });
   }
   rect(b: Box, fill: string, stroke = 'transparent', strokeWidth = 0): void {
-    this.out.rects.push({ x: this.ox(b.x), y: this.oy(b.y), x2: this.ox(b.x + b.w), y2: this.oy(b.y + b.h), fill, stroke, strokeWidth });
+    this.out.rects.push({ x: this.ox(b.x), y: this.oy(b.y), x2: this.ox(b.x + b.w), y2: this.oy(b.y + b.h), fill, stroke, strokeWidth, z: this.out.rects.length });
   }
   rule(x: number, y: number, x2: number, y2: number, stroke: string = COLOURS.rule, strokeWidth = 0.6): void {
-    this.out.rules.push({ x: this.ox(x), y: this.oy(y), x2: this.ox(x2), y2: this.oy(y2), stroke, strokeWidth });
+    this.out.rules.push({ x: this.ox(x), y: this.oy(y), x2: this.ox(x2), y2: this.oy(y2), stroke, strokeWidth, z: this.out.rules.length });
   }
   dot(x: number, y: number, diameter: number, fill: string, ring = false): void {
-    (ring ? this.out.rings : this.out.dots).push({ x: this.ox(x), y: this.oy(y), size: round(diameter * diameter, 3), fill });
+    const list = ring ? this.out.rings : this.out.dots;
+    list.push({ x: this.ox(x), y: this.oy(y), size: round(diameter * diameter, 3), fill, z: list.length });
   }
   /** wraps text into lines at an estimated width; returns the y after the last line */
   paragraph(style: TextStyle, x: number, y: number, w: number, text: string, leading = 1.38): number {
@@ -430,15 +439,15 @@ function titleBlock(ctx: SheetContext, g: Deco): void {
     ],
     [
       ['design basis', basis.title, 1.3],
-      ['materials', `f′c ${stressText(sheet.fc, set.units)} · fy ${stressText(sheet.fy, set.units)}`, 2.2],
-      ['γ', sheet.gamma.toFixed(2), 0.7],
-      ['shape · bars', `${describeShape(sheet.shape)} · ${describeArrangement(sheet.arrangement)}`, 2.8],
-      ['transverse', describeTransverse(sheet.transverse), 1.0],
-      ['curves', fam, 1.4],
-      ['prepared · checked', [tb.preparedBy, tb.checkedBy].filter(Boolean).join(' · ') || '—', 1.6],
-      ['rev.', tb.revision, 0.6],
-      ['date', tb.date, 1.2],
-      ['generated by', ctx.generator, 1.6],
+      ['materials', `f′c ${stressText(sheet.fc, set.units)} · fy ${stressText(sheet.fy, set.units)}`, 1.9],
+      ['γ', sheet.gamma.toFixed(2), 0.6],
+      ['shape · bars', `${describeShape(sheet.shape)} · ${describeArrangement(sheet.arrangement)}`, 3.7],
+      ['transverse', describeTransverse(sheet.transverse), 0.9],
+      ['curves', fam, 1.5],
+      ['prepared · checked', [tb.preparedBy, tb.checkedBy].filter(Boolean).join(' · ') || '—', 1.5],
+      ['rev.', tb.revision, 0.5],
+      ['date', tb.date, 1.1],
+      ['generated by', ctx.generator, 1.4],
     ],
   ];
   g.rect(b, COLOURS.paper, COLOURS.ink, 0.9);

@@ -13,6 +13,8 @@ export const DATASET_NAMES = ['curves', 'curveLabels', 'refs', 'refLabels', 'fra
 const q = (field: string, title?: string) => ({ field, type: 'quantitative' as const, ...(title !== undefined ? { title } : {}) });
 const raw = (field: string) => ({ field, type: 'quantitative' as const, scale: null });
 const lit = (field: string) => ({ field, type: 'nominal' as const, scale: null });
+/** drawing order within a layer */
+const z = { field: 'z', type: 'quantitative' as const };
 
 export function sheetTemplate(t: TemplateParams): VlSpec {
   const { layout: L } = t;
@@ -33,13 +35,13 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
       data: { name: 'texts' },
       transform: [{ filter: `datum.style === '${style}'` }],
       mark: { type: 'text', align: s.align, baseline: 'alphabetic', fontSize: Math.round(s.size * u * 100) / 100, fontWeight: s.weight, color: s.colour },
-      encoding: { x: raw('x'), y: raw('y'), text: { field: 'text' } },
+      encoding: { x: raw('x'), y: raw('y'), text: { field: 'text' }, order: z },
     };
   };
 
   const layers: Record<string, unknown>[] = [
     { name: 'frame', data: { name: 'frame' }, mark: { type: 'point', opacity: 0 }, encoding: { x, y } },
-    { name: 'rects', data: { name: 'rects' }, mark: { type: 'rect' }, encoding: { x: raw('x'), x2: { field: 'x2' }, y: raw('y'), y2: { field: 'y2' }, fill: lit('fill'), stroke: lit('stroke'), strokeWidth: raw('strokeWidth') } },
+    { name: 'rects', data: { name: 'rects' }, mark: { type: 'rect' }, encoding: { x: raw('x'), x2: { field: 'x2' }, y: raw('y'), y2: { field: 'y2' }, fill: lit('fill'), stroke: lit('stroke'), strokeWidth: raw('strokeWidth'), order: z } },
     plotLine('rays', 'ray', { color: COLOURS.ray, strokeWidth: 0.7, strokeDash: [1.2, 2.6] }),
     plotLine('zero', 'zero', { color: COLOURS.muted, strokeWidth: 0.8 }),
     plotLine('strain_lines', 'strain', { color: COLOURS.strain, strokeWidth: 0.9, strokeDash: [5, 2.5] }),
@@ -61,7 +63,7 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
     data: { name: 'refLabels' },
     transform: [{ filter: `datum.kind === '${kind}'` }],
     mark: { type: 'text', align: 'left', baseline: 'middle', dx, dy, fontSize: round2(0.78 * u), color: colour },
-    encoding: { x, y, text: { field: 'text' } },
+    encoding: { x, y, text: { field: 'text' }, order: z },
   });
   layers.push(
     refLabel('ray', COLOURS.muted, 2, -2),
@@ -71,17 +73,17 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
       name: 'curve_label_halo',
       data: { name: 'curveLabels' },
       mark: { type: 'text', align: 'center', baseline: 'middle', fontSize: round2(0.82 * u), fontWeight: 'bold', stroke: COLOURS.paper, strokeWidth: 3, strokeJoin: 'round' },
-      encoding: { x, y, text: { field: 'text' } },
+      encoding: { x, y, text: { field: 'text' }, order: z },
     },
     {
       name: 'curve_labels',
       data: { name: 'curveLabels' },
       mark: { type: 'text', align: 'center', baseline: 'middle', fontSize: round2(0.82 * u), fontWeight: 'bold' },
-      encoding: { x, y, text: { field: 'text' }, fill: lit('colour') },
+      encoding: { x, y, text: { field: 'text' }, fill: lit('colour'), order: z },
     },
-    { name: 'rules', data: { name: 'rules' }, mark: { type: 'rule' }, encoding: { x: raw('x'), x2: { field: 'x2' }, y: raw('y'), y2: { field: 'y2' }, stroke: lit('stroke'), strokeWidth: raw('strokeWidth') } },
-    { name: 'rings', data: { name: 'rings' }, mark: { type: 'point', shape: 'circle', filled: false, strokeWidth: 1.1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), stroke: lit('fill') } },
-    { name: 'dots', data: { name: 'dots' }, mark: { type: 'point', shape: 'circle', filled: true, opacity: 1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), fill: lit('fill') } },
+    { name: 'rules', data: { name: 'rules' }, mark: { type: 'rule' }, encoding: { x: raw('x'), x2: { field: 'x2' }, y: raw('y'), y2: { field: 'y2' }, stroke: lit('stroke'), strokeWidth: raw('strokeWidth'), order: z } },
+    { name: 'rings', data: { name: 'rings' }, mark: { type: 'point', shape: 'circle', filled: false, strokeWidth: 1.1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), stroke: lit('fill'), order: z } },
+    { name: 'dots', data: { name: 'dots' }, mark: { type: 'point', shape: 'circle', filled: true, opacity: 1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), fill: lit('fill'), order: z } },
     ...(Object.keys(TEXT_STYLES) as TextStyle[]).map(textLayer),
   );
 

@@ -8,14 +8,27 @@ import { DATASET_NAMES, sheetTemplate } from '../chart/spec.js';
 import type { SheetData, TemplateParams } from '../chart/sheet-data.js';
 import { renderEnvironment, type RenderEnvironment } from './environment.js';
 
+type Row = Record<string, string | number>;
+interface ViewEntry {
+  view: View;
+  /** the tuples vega holds per dataset, in row order */
+  rows: Map<string, Row[]>;
+}
+
+/** Rows hold primitives only, so a shallow comparison decides. */
+function sameRow(a: Row, b: Row): boolean {
+  for (const k in b) if (a[k] !== b[k]) return false;
+  return true;
+}
+
 export interface SheetPage {
   template: TemplateParams;
   data: SheetData;
 }
 
 export class SheetRenderer {
-  private readonly views = new Map<string, View>();
-  private current: { view: View; data: SheetData } | undefined;
+  private readonly views = new Map<string, ViewEntry>();
+  private current: { entry: ViewEntry; data: SheetData } | undefined;
 
   private constructor(readonly env: RenderEnvironment) {}
 
@@ -27,20 +40,46 @@ export class SheetRenderer {
   async show(page: SheetPage): Promise<View> {
     const spec = sheetTemplate(page.template);
     const key = JSON.stringify(spec);
-    let view = this.views.get(key);
-    if (!view) {
+    let entry = this.views.get(key);
+    if (!entry) {
       const { vega, vegaLite } = this.env;
       const compiled = vegaLite.compile({ ...spec, datasets: Object.fromEntries(DATASET_NAMES.map((n) => [n, []])) } as never).spec;
-      view = new vega.View(vega.parse(compiled), { renderer: 'none' });
-      this.views.set(key, view);
+      entry = { view: new vega.View(vega.parse(compiled), { renderer: 'none' }), rows: new Map() };
+      this.views.set(key, entry);
     }
-    if (this.current?.view !== view || this.current.data !== page.data) {
-      // vega tags ingested tuples, so each swap gets fresh row objects
-      for (const name of DATASET_NAMES) view.data(name, page.data[name].map((r) => ({ ...r })));
-      await view.runAsync();
-      this.current = { view, data: page.data };
+    if (this.current?.entry !== entry || this.current.data !== page.data) {
+      for (const name of DATASET_NAMES) this.update(entry, name, page.data[name] as unknown as Row[]);
+      await entry.view.runAsync();
+      this.current = { entry, data: page.data };
     }
-    return view;
+    return entry.view;
+  }
+
+  /**
+   * Sends vega only the rows that changed since the last sheet on this view: consecutive sheets share
+   * most of their decoration (notes, captions, grid of the table), and unchanged tuples cost nothing.
+   */
+  private update(entry: ViewEntry, name: string, next: readonly Row[]): void {
+    const prev = entry.rows.get(name) ?? [];
+    const kept: Row[] = [];
+    const remove: Row[] = [];
+    const insert: Row[] = [];
+    const n = Math.max(prev.length, next.length);
+    for (let i = 0; i < n; i++) {
+      const a = prev[i];
+      const b = next[i];
+      if (a && b && sameRow(a, b)) kept.push(a);
+      else {
+        if (a) remove.push(a);
+        if (b) {
+          const t = { ...b }; // vega tags ingested tuples, so it gets its own copy
+          insert.push(t);
+          kept.push(t);
+        }
+      }
+    }
+    entry.rows.set(name, kept);
+    if (remove.length > 0 || insert.length > 0) entry.view.change(name, this.env.vega.changeset().remove(remove).insert(insert));
   }
 
   async svg(page: SheetPage): Promise<string> {
@@ -60,7 +99,7 @@ export class SheetRenderer {
   }
 
   finalize(): void {
-    for (const v of this.views.values()) v.finalize();
+    for (const v of this.views.values()) v.view.finalize();
     this.views.clear();
     this.current = undefined;
   }
@@ -83,6 +122,7 @@ export class PdfPages {
     if (!this.canvas || !this.ctx) {
       this.canvas = this.renderer.env.canvas.createCanvas(w, h, 'pdf');
       this.ctx = this.canvas.getContext('2d');
+      skipRepeatedCompositeMode(this.ctx);
     } else {
       (this.ctx as unknown as { addPage(w: number, h: number): void }).addPage(w, h);
     }
@@ -99,4 +139,31 @@ export class PdfPages {
     if (!this.canvas) throw new Error('PdfPages: no page was added');
     return this.canvas.toBuffer('application/pdf');
   }
+}
+
+/**
+ * vega sets globalCompositeOperation before every item it draws; on a cairo context each set costs a
+ * native call. Sheets never blend, so repeated sets of the same value are skipped.
+ */
+function skipRepeatedCompositeMode(ctx: object): void {
+  const proto = Object.getPrototypeOf(ctx) as object;
+  const desc = Object.getOwnPropertyDescriptor(proto, 'globalCompositeOperation');
+  if (!desc?.set || !desc.get) return;
+  let current: unknown = desc.get.call(ctx);
+  Object.defineProperty(ctx, 'globalCompositeOperation', {
+    configurable: true,
+    get: () => current,
+    set(v: unknown) {
+      if (v === current) return;
+      current = v;
+      desc.set!.call(ctx, v);
+    },
+  });
+  // restore() brings back the saved mode inside cairo; read it back so the cache stays true
+  const c = ctx as { restore(): void };
+  const restore = c.restore.bind(ctx);
+  c.restore = () => {
+    restore();
+    current = desc.get!.call(ctx);
+  };
 }

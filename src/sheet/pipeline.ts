@@ -44,6 +44,8 @@ export interface MadeSet {
   sheets: number;
   book?: string;
   files: { sheets: number; tables: number };
+  /** peak resident memory of this process and of the largest child, MB */
+  peakRssMb: number;
 }
 
 /** Makes every output of a resolved chart set. */
@@ -58,7 +60,8 @@ export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions):
     let done = 0;
     const tick = () => opts.onSheet?.(++done, set.sheets.length);
     const jobs = Math.max(1, Math.min(opts.jobs ?? Math.min(4, availableParallelism()), tasks.length));
-    const pdfs = jobs === 1 ? await renderHere(tasks, tick) : await renderInChildren(tasks, jobs, tick);
+    const childRss = { kb: 0 };
+    const pdfs = jobs === 1 ? await renderHere(tasks, tick) : await renderInChildren(tasks, jobs, tick, childRss);
 
     // 5: bind the book
     let book: string | undefined;
@@ -84,6 +87,7 @@ export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions):
       sheets: set.sheets.length,
       ...(book ? { book } : {}),
       files: { sheets: set.sheets.length * ((o.svg ? 1 : 0) + (o.png ? 1 : 0)), tables: o.tables ? 2 * set.sheets.length : 0 },
+      peakRssMb: Math.max(process.resourceUsage().maxRSS, childRss.kb) / 1024,
     };
   } catch (e) {
     rmSync(staging, { recursive: true, force: true });
@@ -103,7 +107,7 @@ async function renderHere(tasks: ChunkTask[], tick: () => void): Promise<(string
 }
 
 /** Chunks handed to `jobs` child processes as they become free (node-canvas cannot run in worker threads). */
-async function renderInChildren(tasks: ChunkTask[], jobs: number, tick: () => void): Promise<(string | undefined)[]> {
+async function renderInChildren(tasks: ChunkTask[], jobs: number, tick: () => void, rss: { kb: number }): Promise<(string | undefined)[]> {
   const here = fileURLToPath(import.meta.url);
   const ext = extname(here);
   const workerPath = join(dirname(here), `worker${ext}`);
@@ -128,6 +132,7 @@ async function renderInChildren(tasks: ChunkTask[], jobs: number, tick: () => vo
               if (m.type === 'sheet') tick();
               else if (m.type === 'done') {
                 results[m.chunk] = m.pdf;
+                rss.kb = Math.max(rss.kb, m.maxRssKb);
                 give();
               } else if (m.type === 'error') {
                 const pm = m.error.pm;

@@ -9,7 +9,7 @@ import { renderChunk, type ChunkTask } from './render-chunk.js';
 
 export type WorkerMessage =
   | { type: 'sheet' }
-  | { type: 'done'; chunk: number; pdf: string | undefined }
+  | { type: 'done'; chunk: number; pdf: string | undefined; maxRssKb: number }
   | { type: 'error'; error: { message: string; pm?: { code: string; path: string; facts: Record<string, unknown>; exitCode: number; detail: string } } };
 
 const send = (m: WorkerMessage) => process.send?.(m);
@@ -24,7 +24,7 @@ process.on('message', (msg: { type: 'task'; task: ChunkTask } | { type: 'exit' }
     try {
       renderer ??= SheetRenderer.create();
       const pdf = await renderChunk(msg.task, await renderer, () => send({ type: 'sheet' }));
-      send({ type: 'done', chunk: msg.task.chunk, pdf });
+      send({ type: 'done', chunk: msg.task.chunk, pdf, maxRssKb: process.resourceUsage().maxRSS });
     } catch (e) {
       const err = e as Error;
       send({
