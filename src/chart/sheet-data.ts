@@ -299,6 +299,7 @@ function lookupPanel(ctx: SheetContext, table: LookupTable, primary: FamilyKind,
   const first = table.rows[0];
   if (!first) return;
   const groups = first.points.map((p) => ({ p, cols: columnsFor(p.id) }));
+  const resultantFactor = table.rows.some((r) => r.points.some((p) => p.design !== null && p.design.phi !== 1));
   const nCols = groups.reduce((s, gr) => s + gr.cols.length, 0);
   const rhoW = 5.2 * u;
   const colW = (b.w - rhoW) / nCols;
@@ -325,7 +326,8 @@ function lookupPanel(ctx: SheetContext, table: LookupTable, primary: FamilyKind,
     });
     const facts: string[] = [];
     if (v && shared && Number.isFinite(v.cOverH) && v.cOverH < 1e3 && v.cOverH > 1e-3) facts.push(`c/h ${v.cOverH.toFixed(3)}`);
-    if (v && primary === 'design' && p.id !== 'axial-cap') facts.push(`${basis.code.startsWith('aci') ? 'φ' : 'k'} ${v.phi.toFixed(2)}`);
+    // the resultant factor (ACI φ) where the basis has one; bases with factors in the materials report 1
+    if (v && primary === 'design' && p.id !== 'axial-cap' && resultantFactor) facts.push(`φ ${v.phi.toFixed(2)}`);
     if (primary === 'design' && p.id === 'axial-cap') facts.push('per ρg');
     g.text('cellSub', mid, top + 1.9 * line, facts.join(' · '), w - 0.2 * u);
     cols.forEach((c, k) => g.text('cellSub', x + colW * (k + 0.5), top + 2.85 * line, c));
