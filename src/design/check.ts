@@ -253,7 +253,7 @@ export function checkLoads(req: CheckRequest): CheckOutcome {
   const checked = req.layout
     ? { kind: 'layout' as const, rho: req.layout.area / ctx.area, description: req.layout.description }
     : req.rho !== undefined
-      ? { kind: 'rho' as const, rho: req.rho, description: `ρg = ${req.rho}` }
+      ? { kind: 'rho' as const, rho: req.rho, description: `given ρg` }
       : null;
   if (req.arrangement.kind === 'custom') notes.push('custom bar layout: the moment sign is ignored, so the layout is taken as symmetric about the bending axis');
   return {
