@@ -7,6 +7,7 @@
 import { Command, CommanderError } from 'commander';
 import { isPmError } from '../errors.js';
 import { GENERATOR } from '../version.js';
+import { registerCheck } from './check.js';
 import { registerContour } from './contour.js';
 import { registerTable } from './table.js';
 
@@ -37,6 +38,7 @@ export function buildProgram(): Command {
     .showHelpAfterError(false)
     .configureOutput({ outputError: (str, write) => write(`pmchart: ${str.replace(/^error: /, '').trim()}\n`) });
   registerTable(program, runAction);
+  registerCheck(program, runAction);
   registerContour(program, runAction);
   return program;
 }
