@@ -72,6 +72,8 @@ export interface LoadResult {
   extraSteelRoundedDown: number | null;
   /** at the checked reinforcement, else at rhoRequired (at the maximum when not possible) */
   strain: { cOverH: number; epsT: number; phi: number; class: StrainClass; atRho: number; capGoverns: boolean };
+  /** demand ÷ capacity along the ray at strain.atRho (ranks loads that need the same ρg) */
+  demandRatio: number;
   /** demand ÷ capacity along the ray for the given ρg or layout; null when neither is given */
   utilisation: number | null;
   /** capacity along the ray for the checked reinforcement, internal units */
@@ -180,6 +182,7 @@ export function checkLoad(ctx: CheckContext, load: FactoredLoad, index: number):
     chartSheets: reading.sheets,
     extraSteelRoundedDown: req.rho === null || reading.rhoRoundedDown === null ? null : (reading.rhoRoundedDown - req.rho) * area,
     strain: { ...s, atRho: strainRho, capGoverns: cap.capGoverns },
+    demandRatio: cap.utilisation,
     utilisation: ctx.checked ? cap.utilisation : null,
     capacity: ctx.checked && !zero ? { P: cap.P * area, M: cap.M * area * ctx.depth } : null,
     governing: false,
@@ -195,25 +198,13 @@ function governingOrder(a: LoadResult, b: LoadResult): number {
   const ra = a.rhoStatus === 'not-possible' ? Infinity : a.rhoRequired!;
   const rb = b.rhoStatus === 'not-possible' ? Infinity : b.rhoRequired!;
   if (ra !== rb) return rb - ra;
-  return a.index - b.index;
+  return b.demandRatio - a.demandRatio || a.index - b.index;
 }
 
 export function checkLoads(req: CheckRequest): CheckOutcome {
   const ctx = prepareCheck(req);
   const results = req.loads.map((l, i) => checkLoad(ctx, l, i));
-  // rank loads not possible by their utilisation at the maximum ρg, so the worst is first
-  const worstAtMax = new Map<number, number>();
-  for (const r of results) {
-    if (r.rhoStatus !== 'not-possible') continue;
-    const n = normaliseLoad(req.basis, req.shape, req.loads[r.index]!).load;
-    worstAtMax.set(r.index, capacityAlongRay(ctx.table, rhoLimitsFor(req.basis, r.Pu, ctx.area).max, n).utilisation);
-  }
-  results.sort((a, b) => {
-    if (a.rhoStatus === 'not-possible' && b.rhoStatus === 'not-possible' && a.utilisation === null) {
-      return worstAtMax.get(b.index)! - worstAtMax.get(a.index)! || a.index - b.index;
-    }
-    return governingOrder(a, b);
-  });
+  results.sort(governingOrder);
   if (results[0]) results[0].governing = true;
 
   const notes: string[] = [];
