@@ -16,8 +16,9 @@ import { generatorLabel } from '../version.js';
 import { fmt, num } from './format.js';
 import { addSectionOptions, resolveSectionFlags, type ResolvedSection, type SectionFlags } from './section-flags.js';
 import { CAUTION } from './table.js';
+import { addEffectsOptions, applySlenderness, effectsAssumptions, effectsJson, effectsReport, effectsText, finishEffects, resolveEffects, type CheckEffects, type EffectsFlags } from './check-effects.js';
 
-export interface CheckOptions extends SectionFlags {
+export interface CheckOptions extends SectionFlags, EffectsFlags {
   pu?: string;
   mu?: string;
   loads?: string;
@@ -40,6 +41,8 @@ export interface ResolvedCheck {
   json: boolean;
   report?: string;
   aggregate?: number;
+  /** Muy and slenderness (check-effects.ts); absent when neither is asked for */
+  effects?: CheckEffects;
 }
 
 /** Parses a load file: a header naming id, Pu and Mu (any order, other columns ignored), one row per combination. */
@@ -62,7 +65,14 @@ export function parseLoadsCsv(text: string, units: UnitSystem, path = '--loads')
     };
     const Pu = parseQuantity(cell(iP, 'Pu'), 'force', units, `${path} line ${line} Pu`);
     const Mu = parseQuantity(cell(iM, 'Mu'), 'moment', units, `${path} line ${line} Mu`);
-    return { id: cell(iId, 'id'), Pu, Mu };
+    const load: FactoredLoad = { id: cell(iId, 'id'), Pu, Mu };
+    for (const [name, key] of [['Muy', 'Muy'], ['M1', 'M1'], ['M2', 'M2'], ['M1y', 'M1y'], ['M2y', 'M2y']] as const) {
+      const i = col(name);
+      const v = i < 0 ? undefined : cells[i]?.trim();
+      if (v !== undefined && v !== '') load[key] = parseQuantity(v, 'moment', units, `${path} line ${line} ${name}`);
+      else if (name === 'Muy' && i >= 0) load.Muy = 0;
+    }
+    return load;
   });
 }
 
@@ -165,13 +175,18 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
       section.cover !== undefined ? { kind: 'cover', cover: section.cover, tieDiameter: section.tieDiameter ?? 0 } : { kind: 'gamma', gamma: section.gamma };
     request.barSelection = { detailing, sizes, count: proposals, ...(aggregate !== undefined ? { aggregate } : {}) };
   }
-  return { section, request, json: o.json === true, ...(o.report !== undefined ? { report: o.report } : {}), ...(aggregate !== undefined ? { aggregate } : {}) };
+  const rc: ResolvedCheck = { section, request, json: o.json === true, ...(o.report !== undefined ? { report: o.report } : {}), ...(aggregate !== undefined ? { aggregate } : {}) };
+  const fx = resolveEffects(o, rc, o.loads === undefined);
+  if (fx.slenderness || loads.some((l) => l.Muy !== undefined)) rc.effects = fx;
+  return rc;
 }
 
 /** Runs the command and returns what it prints; writes the report file when asked. */
 export function runCheck(o: CheckOptions): string {
   const rc = resolveCheckOptions(o);
+  if (rc.effects) applySlenderness(rc, rc.effects);
   const outcome = checkLoads(rc.request);
+  if (rc.effects) finishEffects(rc, rc.effects, outcome);
   if (rc.report !== undefined) {
     const body = extname(rc.report).toLowerCase() === '.json' ? checkJson(rc, outcome) : checkReportText(rc, outcome);
     writeAtomic(rc.report, body);
@@ -208,7 +223,9 @@ export function checkAssumptions(rc: ResolvedCheck, outcome: CheckOutcome): stri
   const b = rc.section.basis;
   const lim = outcome.limits;
   const out = [
-    `Short column: factored Pu and Mu are taken as given (slenderness effects are not added here).`,
+    rc.effects?.slenderness
+      ? `Slender column: Mu is the magnified moment (${rc.effects.loads[0]?.magnified?.x.method ?? 'basis method'}); every step is listed per load.`
+      : `Short column: factored Pu and Mu are taken as given (slenderness effects are not added here).`,
     `Uniaxial bending about the axis across b; the moment sign is ignored (bars symmetric about the bending axis).`,
     `ρg required is solved exactly at the actual γ = ${fmt(rc.section.gamma, 4)} with the bars smeared in the chosen arrangement; the ${b.symbols.designFamily} curve includes the axial cap.`,
     `Chart readings emulate sheets at γ steps of ${outcome.chart.gammaStep} with curves at ρg ${outcome.chart.rhos.map((r) => fmt(r, 3)).join(', ')}: linear between curves along the load ray, linear in γ between sheets; the traditional reading takes the next lower sheet and the next curve out.`,
@@ -223,6 +240,7 @@ export function checkAssumptions(rc: ResolvedCheck, outcome: CheckOutcome): stri
     );
     if (rc.aggregate === undefined) out.push('No maximum aggregate size given: the aggregate term of the spacing rule is not checked.');
   }
+  out.push(...effectsAssumptions(rc.effects));
   return out;
 }
 
@@ -313,6 +331,8 @@ export function checkText(rc: ResolvedCheck, outcome: CheckOutcome): string {
   if (gov && gov.extraSteelRoundedDown !== null && gov.extraSteelRoundedDown > 0) {
     lines.push(`Reading the next lower sheet and rounding up would cost ${f(gov.extraSteelRoundedDown, 3)} ${un.area} more steel than the exact ρg for ${gov.id}.`);
   }
+  const fxText = effectsText(rc, rc.effects, outcome);
+  if (fxText) lines.push('', fxText.trimEnd());
   lines.push('', barsTable(rc, outcome), '', CAUTION, '');
   return lines.join('\n');
 }
@@ -339,6 +359,7 @@ export function checkReportText(rc: ResolvedCheck, outcome: CheckOutcome): strin
       .slice(outcome.checked ? 4 : 3)
       .filter((l) => l !== CAUTION)
       .map((l) => (l ? `  ${l}` : l)),
+    ...effectsReport(rc, rc.effects, outcome),
     'CAUTION',
     `  ${CAUTION}`,
     '',
@@ -369,7 +390,7 @@ export function checkJson(rc: ResolvedCheck, outcome: CheckOutcome): string {
     rhoLimits: { min: num(outcome.limits.min), max: num(outcome.limits.max) },
     checked: outcome.checked,
     governing: outcome.governingId,
-    results: outcome.results.map((r) => resultJson(r, u)),
+    results: outcome.results.map((r) => ({ ...resultJson(r, u), ...effectsJson(rc, rc.effects, r) })),
     bars: outcome.bars.map((p) => ({
       layout: p.layout,
       size: p.size,
@@ -416,7 +437,7 @@ export function resultJson(r: LoadResult, u: UnitSystem) {
 
 export function registerCheck(program: Command, run: (fn: () => Promise<void> | void) => Promise<void>): void {
   const cmd = program.command('check').description('check factored loads on a sized column: exact ρg required, chart readings, utilisation, bar proposals');
-  addSectionOptions(cmd)
+  addEffectsOptions(addSectionOptions(cmd))
     .option('--pu <force>', 'factored axial load, compression positive (default unit kip or kN)')
     .option('--mu <moment>', 'factored moment (default unit kip-ft or kN-m)')
     .option('--loads <file>', 'CSV of load combinations with columns id,Pu,Mu (tension negative Pu)')

@@ -23,6 +23,13 @@ export interface FactoredLoad {
   id: string;
   Pu: number;
   Mu: number;
+  /** moment about the y axis for the biaxial check (src/cli/check-effects.ts); absent: uniaxial */
+  Muy?: number;
+  /** end moments for the slenderness check (src/design/column-effects.ts) */
+  M1?: number;
+  M2?: number;
+  M1y?: number;
+  M2y?: number;
 }
 
 /** A given layout to check: discrete bars of total area `area` at `gamma`. */
