@@ -23,6 +23,8 @@ export interface StrainProfile {
 export interface CapContext {
   /** section depth in the system's length unit, when known */
   depth?: number;
+  /** smallest overall dimension of the cross-section (min(b, h), or D), when known */
+  leastDimension?: number;
 }
 
 /** A set of material laws plus the factor applied to the section resultant. */
