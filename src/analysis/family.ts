@@ -7,7 +7,7 @@ import type { Basis, CapContext } from '../codes/types.js';
 import { layoutBars } from '../section/arrangements.js';
 import type { Arrangement, Bar, Shape } from '../section/types.js';
 import { designAt, nominalAt, prepareSection, R, RESPONSE_SIZE, type PreparedSection } from './prepared-section.js';
-import { findRoot, findRootOnGrid } from './solve.js';
+import { findRoot } from './solve.js';
 import { tensionStrain } from './section-forces.js';
 
 /** Ends of the sweep: they stand for the limits c → 0 (pure tension) and c → ∞ (pure compression). */
@@ -91,7 +91,7 @@ export function baseGrid(n: number): number[] {
 
 /** c/h at which the extreme tension bar reaches strain εt (monotone in c; solved numerically for any basis). */
 export function depthForTensionStrain(section: PreparedSection, epsT: number): number {
-  const f = (logC: number) => tensionStrain(section.basis.profile(Math.exp(logC), 1), section.dt) - epsT;
+  const f = (logC: number) => tensionStrain(section.basis.profile(Math.exp(logC), 1, section.dt), section.dt) - epsT;
   const x = findRoot(f, Math.log(C_OVER_H_MIN), Math.log(C_OVER_H_MAX), 1e-14);
   return Number.isNaN(x) ? NaN : Math.exp(x);
 }
@@ -106,32 +106,27 @@ export function computeFamily(req: FamilyRequest): CurveFamily {
 /** Builds a family on a prepared section (custom bars, checks). */
 export function familyOf(section: PreparedSection, arrangement: Arrangement, gamma: number, rhos: readonly number[], basePoints = 400): CurveFamily {
   const basis = section.basis;
-  const base = baseGrid(basePoints);
-  const r = new Float64Array(RESPONSE_SIZE);
 
-  // 1. c/h of the strain states (shared by every ρg), with close neighbours so the curve bends sharply there.
+  // 1. Base grid plus the c/h of the strain states (shared by every ρg), with close neighbours so the curve bends sharply there.
   const stateDepths = basis.strainStates.map((s) => depthForTensionStrain(section, s.epsT));
-  // 2. ρg-dependent roots: P = 0 and P = cap, nominal and factored.
-  const roots = rhos.map((rho) => rootsFor(section, rho, base));
-
-  const cs = new Set<number>(base);
+  const cs = new Set<number>(baseGrid(basePoints));
   for (const c of stateDepths) {
     if (!Number.isFinite(c)) continue;
     for (const k of [1, 0.98, 0.995, 1.005, 1.02]) cs.add(c * k);
   }
-  for (const rt of roots) for (const c of Object.values(rt)) if (Number.isFinite(c)) cs.add(c);
-  const cOverH = Float64Array.from([...cs].filter((c) => c >= C_OVER_H_MIN && c <= C_OVER_H_MAX).sort((a, b) => a - b));
+  const sweep = evaluate(section, [...cs].filter((c) => c >= C_OVER_H_MIN && c <= C_OVER_H_MAX).sort((a, b) => a - b));
 
-  // 3. One sweep for all ρg.
+  // 2. ρg-dependent roots (P = 0 and P = cap, nominal and factored): bracket on the sweep, refine on the section.
+  const roots = rhos.map((rho) => rootsFor(section, rho, sweep));
+  const extra = new Set<number>();
+  for (const rt of roots) for (const c of Object.values(rt)) if (Number.isFinite(c) && !cs.has(c)) extra.add(c);
+  const all = extra.size === 0 ? sweep : merge(sweep, evaluate(section, [...extra].sort((a, b) => a - b)));
+
+  // 3. One sweep serves every ρg.
+  const { cOverH, cols } = all;
   const n = cOverH.length;
-  const cols = Array.from({ length: RESPONSE_SIZE }, () => new Float64Array(n));
-  for (let i = 0; i < n; i++) {
-    section.respond(cOverH[i]!, r);
-    for (let k = 0; k < RESPONSE_SIZE; k++) cols[k]![i] = r[k]!;
-  }
   const epsT = cols[R.epsT]!;
   const phi = cols[R.factor]!;
-
   const curves: Curve[] = rhos.map((rho, j) => {
     const Pn = new Float64Array(n);
     const Mn = new Float64Array(n);
@@ -151,6 +146,40 @@ export function familyOf(section: PreparedSection, arrangement: Arrangement, gam
   return { basis, shape: section.shape, arrangement, gamma, bars: section.bars, sweep: { cOverH, epsT, phi }, curves, section };
 }
 
+/** Response columns at sorted depths. */
+interface Sweep {
+  cOverH: Float64Array;
+  cols: Float64Array[];
+}
+
+function evaluate(section: PreparedSection, depths: readonly number[]): Sweep {
+  const n = depths.length;
+  const cols = Array.from({ length: RESPONSE_SIZE }, () => new Float64Array(n));
+  const r = new Float64Array(RESPONSE_SIZE);
+  for (let i = 0; i < n; i++) {
+    section.respond(depths[i]!, r);
+    for (let k = 0; k < RESPONSE_SIZE; k++) cols[k]![i] = r[k]!;
+  }
+  return { cOverH: Float64Array.from(depths), cols };
+}
+
+/** Merges two sorted sweeps. */
+function merge(a: Sweep, b: Sweep): Sweep {
+  const n = a.cOverH.length + b.cOverH.length;
+  const cOverH = new Float64Array(n);
+  const cols = Array.from({ length: RESPONSE_SIZE }, () => new Float64Array(n));
+  let i = 0;
+  let j = 0;
+  for (let k = 0; k < n; k++) {
+    const takeA = j >= b.cOverH.length || (i < a.cOverH.length && a.cOverH[i]! <= b.cOverH[j]!);
+    const src = takeA ? a : b;
+    const at = takeA ? i++ : j++;
+    cOverH[k] = src.cOverH[at]!;
+    for (let q = 0; q < RESPONSE_SIZE; q++) cols[q]![k] = src.cols[q]![at]!;
+  }
+  return { cOverH, cols };
+}
+
 interface Roots {
   bendingN: number;
   bendingD: number;
@@ -158,18 +187,42 @@ interface Roots {
   capD: number;
 }
 
-function rootsFor(section: PreparedSection, rho: number, grid: readonly number[]): Roots {
+/**
+ * Roots of g(c) = P(c) − target: the sign change is found on the swept columns (no new evaluations),
+ * then refined on the section. Scans from the compression end when `fromHigh`.
+ */
+function sweptRoot(section: PreparedSection, sweep: Sweep, rho: number, kind: 'nominal' | 'design', target: number, fromHigh: boolean): number {
+  const { cOverH, cols } = sweep;
+  const n = cOverH.length;
+  const at = (i: number) =>
+    kind === 'nominal'
+      ? cols[R.PcN]![i]! + rho * cols[R.PsN]![i]! - target
+      : cols[R.factor]![i]! * (cols[R.PcD]![i]! + rho * cols[R.PsD]![i]!) - target;
   const r = new Float64Array(RESPONSE_SIZE);
-  const pN = (c: number) => nominalAt(section.respond(c, r), rho)[0];
-  const pD = (c: number) => designAt(section.respond(c, r), rho)[0];
+  const g = (c: number) => (kind === 'nominal' ? nominalAt(section.respond(c, r), rho)[0] : designAt(section.respond(c, r), rho)[0]) - target;
+  let prev = fromHigh ? n - 1 : 0;
+  let gPrev = at(prev);
+  if (gPrev === 0) return cOverH[prev]!;
+  for (let k = 1; k < n; k++) {
+    const i = fromHigh ? n - 1 - k : k;
+    const gi = at(i);
+    if (gi === 0) return cOverH[i]!;
+    if (gi * gPrev < 0) return findRoot(g, Math.min(cOverH[i]!, cOverH[prev]!), Math.max(cOverH[i]!, cOverH[prev]!));
+    prev = i;
+    gPrev = gi;
+  }
+  return NaN;
+}
+
+function rootsFor(section: PreparedSection, rho: number, sweep: Sweep): Roots {
   const capN = section.cap('nominal', rho);
   const capD = section.cap('design', rho);
   return {
-    bendingN: findRootOnGrid(pN, grid),
-    bendingD: findRootOnGrid(pD, grid),
-    // scan from the compression end: the cap is crossed once on the way down from pure compression
-    capN: Number.isFinite(capN) ? findRootOnGrid((c) => pN(c) - capN, grid, true) : NaN,
-    capD: Number.isFinite(capD) ? findRootOnGrid((c) => pD(c) - capD, grid, true) : NaN,
+    bendingN: sweptRoot(section, sweep, rho, 'nominal', 0, false),
+    bendingD: sweptRoot(section, sweep, rho, 'design', 0, false),
+    // from the compression end: the cap is crossed once on the way down from pure compression
+    capN: Number.isFinite(capN) ? sweptRoot(section, sweep, rho, 'nominal', capN, true) : NaN,
+    capD: Number.isFinite(capD) ? sweptRoot(section, sweep, rho, 'design', capD, true) : NaN,
   };
 }
 

@@ -62,7 +62,7 @@ export function prepareSection(basis: Basis, shape: Shape, bars: readonly Bar[],
   const capFactor = { nominal: nominal.capFactor(capContext), design: design.capFactor(capContext) };
 
   const partial = (model: ResistanceModel, cOverH: number, out: Float64Array, at: number): void => {
-    const p = basis.profile(cOverH, 1);
+    const p = basis.profile(cOverH, 1, dt);
     const c = concreteResultant(u, model.concrete, p);
     const s = barResultant(unitBars, 1, model.steel, model.concrete, p);
     out[at] = c.P / area;
@@ -80,7 +80,7 @@ export function prepareSection(basis: Basis, shape: Shape, bars: readonly Bar[],
     dt,
     area,
     respond(cOverH: number, out = new Float64Array(RESPONSE_SIZE)): Float64Array {
-      const epsT = tensionStrain(basis.profile(cOverH, 1), dt);
+      const epsT = tensionStrain(basis.profile(cOverH, 1, dt), dt);
       out[R.epsT] = epsT;
       out[R.factor] = design.factor(epsT);
       partial(nominal, cOverH, out, R.PcN);

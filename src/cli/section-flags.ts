@@ -4,11 +4,11 @@
  */
 import { readFileSync } from 'node:fs';
 import type { Command } from 'commander';
-import { resolveBasis } from '../codes/registry.js';
+import { designCode, resolveBasis } from '../codes/registry.js';
 import { isTransverse, TRANSVERSE_TYPES, type Basis, type BasisOptions, type CapContext, type CodeId } from '../codes/types.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { barSet, findBar, type BarSize } from '../section/bar-tables.js';
-import { gammaFromCover, sectionDepth } from '../section/geometry.js';
+import { gammaFromCover, sectionDepth, sectionWidth } from '../section/geometry.js';
 import { ARRANGEMENTS, isArrangementKind, isShapeKind, SHAPES, type Arrangement, type CustomBar, type Shape } from '../section/types.js';
 import { DISPLAY_UNITS, isUnitSystem, parseQuantity, systemFactor, UNIT_SYSTEMS, type UnitSystem } from '../units/index.js';
 
@@ -35,6 +35,8 @@ export interface SectionFlags {
   gammaS?: string;
   concreteLaw?: string;
   steelBranch?: string;
+  steelK?: string;
+  steelEpsUk?: string;
 }
 
 export interface ResolvedSection {
@@ -62,7 +64,7 @@ export const GAMMA_RANGE: [number, number] = [0.3, 0.95];
 export function addSectionOptions(cmd: Command): Command {
   return cmd
     .option('--code <id>', 'design basis: aci318-19, aci318-14, en1992-1-1, csa-a23.3-19', 'aci318-19')
-    .option('--units <system>', 'unit system: us (kip, in, ksi) or si (kN, mm, MPa)', 'us')
+    .option('--units <system>', "unit system: us (kip, in, ksi) or si (kN, mm, MPa); default: the basis's first (us for ACI, si otherwise)")
     .option('--fc <stress>', "specified concrete strength f′c (fck), e.g. 4, 4ksi, 28MPa")
     .option('--fy <stress>', 'specified yield strength fy (fyk), e.g. 60, 420MPa')
     .option('--shape <shape>', 'rectangle or circle', 'rectangle')
@@ -82,7 +84,9 @@ export function addSectionOptions(cmd: Command): Command {
     .option('--gamma-c <value>', 'EN 1992-1-1 γc (National Annex)')
     .option('--gamma-s <value>', 'EN 1992-1-1 γs (National Annex)')
     .option('--concrete-law <law>', 'parabola-rectangle or rectangular-block, where the basis offers both')
-    .option('--steel-branch <branch>', 'horizontal or inclined top branch, where the basis offers both');
+    .option('--steel-branch <branch>', 'horizontal or inclined top branch, where the basis offers both')
+    .option('--steel-k <ratio>', 'EN 1992-1-1 inclined branch: k = (ft/fy)k, 1.0–1.35 (default 1.08, class B)')
+    .option('--steel-eps-uk <strain>', 'EN 1992-1-1 inclined branch: εuk, 0.025–0.15 (default 0.05, class B); εud = 0.9·εuk');
 }
 
 const oneOf = (path: string, value: string, allowed: readonly string[]): never => {
@@ -138,7 +142,7 @@ function readCustomBars(path: string, file: string): CustomBar[] {
 
 /** Resolves the shared flags; `needSize` makes b/h or D mandatory (checks). */
 export function resolveSectionFlags(f: SectionFlags, needSize = false): ResolvedSection {
-  const units = f.units ?? 'us';
+  const units = f.units ?? designCode(f.code ?? 'aci318-19').unitSystems[0]!;
   if (!isUnitSystem(units)) oneOf('--units', units, UNIT_SYSTEMS);
   const u = units as UnitSystem;
   const su = DISPLAY_UNITS[u];
@@ -164,6 +168,12 @@ export function resolveSectionFlags(f: SectionFlags, needSize = false): Resolved
     if (!branches.includes(f.steelBranch as (typeof branches)[number])) oneOf('--steel-branch', f.steelBranch, branches);
     options.steelBranch = f.steelBranch as (typeof branches)[number];
   }
+
+  // ranges are checked by the basis that reads them (EN 1992-1-1 names these flags in its errors)
+  const steelK = plainNumber('--steel-k', f.steelK);
+  const steelEpsUk = plainNumber('--steel-eps-uk', f.steelEpsUk);
+  if (steelK !== undefined) options.steelK = steelK;
+  if (steelEpsUk !== undefined) options.steelEpsUk = steelEpsUk;
 
   const fc = parseQuantity(f.fc, 'stress', u, '--fc');
   const fy = parseQuantity(f.fy, 'stress', u, '--fy');
@@ -259,6 +269,6 @@ export function resolveSectionFlags(f: SectionFlags, needSize = false): Resolved
     ...(bar ? { bar } : {}),
     ...(cover !== undefined ? { cover } : {}),
     ...(tieDiameter !== undefined ? { tieDiameter } : {}),
-    capContext: sized ? { depth: sectionDepth(shape) } : {},
+    capContext: sized ? { depth: sectionDepth(shape), leastDimension: Math.min(sectionDepth(shape), sectionWidth(shape)) } : {},
   };
 }

@@ -4,6 +4,8 @@
  */
 import type { Command } from 'commander';
 import { computeFamily, type CurveFamily, type KeyPoint, type PointValues } from '../analysis/family.js';
+import { omegaFromRho, rhoFromOmega } from '../codes/mechanical-ratio.js';
+import type { Basis } from '../codes/types.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { DISPLAY_UNITS } from '../units/index.js';
 import { generatorLabel } from '../version.js';
@@ -14,10 +16,15 @@ export const TABLE_COLUMNS = ['rho_g', 'c_over_h', 'eps_t', 'phi', 'Pn_norm', 'M
 
 export interface TableOptions extends SectionFlags {
   rho?: string;
+  /** mechanical ratios ω = As·fyd/(Ac·fcd) instead of --rho */
+  omega?: string;
   format?: string;
   dimensionless?: boolean;
   points?: string;
 }
+
+/** ρg span every family must stay inside (for --rho and --omega alike). */
+export const RHO_RANGE: [number, number] = [0.001, 0.1];
 
 /** Parses a ρg list flag against the allowed 0.001–0.10 span. */
 export function parseRhoList(text: string | undefined, path = '--rho'): number[] {
@@ -25,13 +32,30 @@ export function parseRhoList(text: string | undefined, path = '--rho'): number[]
   if (!list || list.length === 0) {
     throw new PmError(ERROR_CODES.invalidValue, path, 'is not a list (0.01,0.02) or a range start:stop:step', { value: text });
   }
-  for (const r of list) requireInRange(path, r, 0.001, 0.1);
+  for (const r of list) requireInRange(path, r, RHO_RANGE[0], RHO_RANGE[1]);
   return list;
+}
+
+/**
+ * Parses an ω list flag and turns it into ρg with the basis's design laws (ρ = ω·fcd/fyd);
+ * the allowed ω span is the one that maps onto 0.001–0.10 in ρg.
+ */
+export function parseOmegaList(text: string, basis: Basis, path = '--omega'): { omegas: number[]; rhos: number[] } {
+  const list = parseNumberList(text);
+  if (!list || list.length === 0) {
+    throw new PmError(ERROR_CODES.invalidValue, path, 'is not a list (0.1,0.2) or a range start:stop:step', { value: text });
+  }
+  const lo = Number(omegaFromRho(basis, RHO_RANGE[0]).toPrecision(3));
+  const hi = Number(omegaFromRho(basis, RHO_RANGE[1]).toPrecision(3));
+  for (const w of list) requireInRange(path, w, lo, hi);
+  return { omegas: list, rhos: list.map((w) => Number(rhoFromOmega(basis, w).toPrecision(12))) };
 }
 
 export interface TableRequest {
   section: ResolvedSection;
   rhos: number[];
+  /** the ω values the families were asked for, when --omega was given (same order as rhos) */
+  omegas?: number[];
   dimensionless: boolean;
   basePoints: number;
 }
@@ -45,6 +69,11 @@ export function resolveTableOptions(o: TableOptions): TableRequest {
   const basePoints = o.points === undefined ? 400 : Number(o.points);
   if (!Number.isInteger(basePoints)) throw new PmError(ERROR_CODES.invalidValue, '--points', 'is not a whole number', { value: o.points });
   requireInRange('--points', basePoints, 400, 20000);
+  if (o.omega !== undefined) {
+    if (o.rho !== undefined) throw new PmError(ERROR_CODES.conflict, '--omega', 'and --rho both set the families; give one of them');
+    const { omegas, rhos } = parseOmegaList(o.omega, section.basis);
+    return { section, rhos, omegas, dimensionless: o.dimensionless === true, basePoints };
+  }
   return { section, rhos: parseRhoList(o.rho), dimensionless: o.dimensionless === true, basePoints };
 }
 
@@ -131,11 +160,13 @@ export function tableJson(family: CurveFamily, req: TableRequest): string {
       arrangement: family.arrangement,
       transverse: b.transverse,
       rho_g: req.rhos,
+      ...(req.omegas ? { omega: req.omegas } : {}),
     },
     basis: { parameters: b.parameters, notes: b.notes, symbols: b.symbols },
     columns: TABLE_COLUMNS,
-    curves: family.curves.map((c) => ({
+    curves: family.curves.map((c, j) => ({
       rho_g: c.rho,
+      ...(req.omegas ? { omega: req.omegas[j] } : {}),
       key_points: c.keyPoints.map((kp) => keyPointJson(kp, k)),
       points: Array.from(cOverH, (_, i) => [c.rho, num(cOverH[i]!), num(epsT[i]!), num(phi[i]!), num(c.Pn[i]! * k), num(c.Mn[i]! * k), num(c.phiPn[i]! * k), num(c.phiMn[i]! * k)]),
     })),
@@ -150,7 +181,8 @@ export const CAUTION =
 export function registerTable(program: Command, run: (fn: () => Promise<void> | void) => Promise<void>): void {
   const cmd = program.command('table').description('normalised interaction-curve family as CSV or JSON (no section size needed)');
   addSectionOptions(cmd)
-    .option('--rho <list>', 'ρg values: start:stop:step or a comma list', '0.01:0.08:0.01')
+    .option('--rho <list>', 'ρg values: start:stop:step or a comma list (default 0.01:0.08:0.01)')
+    .option('--omega <list>', 'instead of --rho: mechanical ratios ω = As·fyd/(Ac·fcd) (fy/f′c for ACI and CSA), start:stop:step or a comma list')
     .option('--format <fmt>', 'csv or json', 'csv')
     .option('--dimensionless', 'divide the normalised values by the normalising stress (f′c, or fcd for EN 1992-1-1)')
     .option('--points <n>', 'base points per curve before key points are added (≥ 400)', '400')

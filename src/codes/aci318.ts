@@ -60,6 +60,7 @@ function makeAci(edition: Edition): DesignCode {
   return {
     id: edition.id,
     title: edition.title,
+    unitSystems: ['us', 'si'],
     limits: (units) =>
       units === 'us'
         ? { fc: [2.5, 20], fy: [40, 100] }

@@ -1,12 +1,16 @@
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { DISPLAY_UNITS } from '../units/index.js';
 import { ACI_318_14, ACI_318_19 } from './aci318.js';
+import { CSA_A23_3_19 } from './csa-a23.js';
+import { EN_1992_1_1 } from './en1992.js';
 import type { Basis, BasisInput, CodeId, DesignCode } from './types.js';
 
 /** Every design basis pmchart knows, keyed by the `--code` value. */
 export const DESIGN_CODES: Partial<Record<CodeId, DesignCode>> = {
   'aci318-19': ACI_318_19,
   'aci318-14': ACI_318_14,
+  'en1992-1-1': EN_1992_1_1,
+  'csa-a23.3-19': CSA_A23_3_19,
 };
 
 export function designCode(id: string, path = '--code'): DesignCode {
@@ -23,6 +27,12 @@ export function designCode(id: string, path = '--code'): DesignCode {
 /** Checks material strengths against the code's limits, then resolves the basis. */
 export function resolveBasis(id: string, input: BasisInput, paths = { code: '--code', fc: '--fc', fy: '--fy' }): Basis {
   const code = designCode(id, paths.code);
+  if (!code.unitSystems.includes(input.units)) {
+    throw new PmError(ERROR_CODES.invalidValue, '--units', `is not available for ${code.title}`, {
+      value: input.units,
+      allowed: code.unitSystems.join(', '),
+    });
+  }
   const lim = code.limits(input.units);
   const su = DISPLAY_UNITS[input.units].stress;
   requireInRange(paths.fc, input.fc, lim.fc[0], lim.fc[1], su);

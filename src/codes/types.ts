@@ -24,6 +24,8 @@ export interface StrainProfile {
 export interface CapContext {
   /** section depth in the system's length unit, when known */
   depth?: number;
+  /** smallest overall dimension of the cross-section (min(b, h), or D), when known */
+  leastDimension?: number;
 }
 
 /** A set of material laws plus the factor applied to the section resultant. */
@@ -68,8 +70,12 @@ export interface BasisOptions {
   gammaS?: number;
   /** concrete law where a code offers more than one */
   concreteLaw?: 'parabola-rectangle' | 'rectangular-block';
-  /** EN 1992-1-1 3.2.7(2) steel branch */
+  /** EN 1992-1-1 3.2.7(2) steel branch (default horizontal) */
   steelBranch?: 'horizontal' | 'inclined';
+  /** EN 1992-1-1 Annex C Table C.1 ratio k = (ft/fy)k for the inclined branch (default 1.08, class B) */
+  steelK?: number;
+  /** EN 1992-1-1 Annex C Table C.1 characteristic strain at maximum force εuk (default 0.05, class B); εud = 0.9·εuk (3.2.7(2) Note 1) */
+  steelEpsUk?: number;
 }
 
 export const BAR_SET_IDS = ['astm-a615', 'metric', 'en-common', 'csa-g30.18'] as const;
@@ -156,6 +162,8 @@ export interface BasisSymbols {
 export interface DesignCode {
   readonly id: CodeId;
   readonly title: string;
+  /** unit systems the basis accepts (EN 1992-1-1 and CSA A23.3 are SI-only; ACI 318 has both) */
+  readonly unitSystems: readonly UnitSystem[];
   /** allowed specified strengths in the given system's stress unit */
   limits(units: UnitSystem): { fc: [number, number]; fy: [number, number] };
   resolve(input: BasisInput): Basis;

@@ -46,9 +46,32 @@ const metric = (id: BarSetId, source: string, diameters: number[]): BarSet => ({
   sizes: diameters.map((d) => ({ name: `${d}`, diameter: d, area: Math.round((Math.PI * d * d * 10) / 4) / 10 })),
 });
 
+/**
+ * CSA G30.18 metric bar designations with nominal diameter (mm) and area (mm²), from memory of
+ * CSA G30.18 Table 1 as quoted in CSA A23.3 practice; areas are the nominal (rounded) values.
+ */
+const CSA_G30_18: BarSet = {
+  id: 'csa-g30.18',
+  units: 'si',
+  source: 'CSA G30.18, Table 1 nominal dimensions (from memory)',
+  sizes: [
+    { name: '10M', diameter: 11.3, area: 100 },
+    { name: '15M', diameter: 16.0, area: 200 },
+    { name: '20M', diameter: 19.5, area: 300 },
+    { name: '25M', diameter: 25.2, area: 500 },
+    { name: '30M', diameter: 29.9, area: 700 },
+    { name: '35M', diameter: 35.7, area: 1000 },
+    { name: '45M', diameter: 43.7, area: 1500 },
+    { name: '55M', diameter: 56.4, area: 2500 },
+  ],
+};
+
 export const BAR_SETS: Record<string, BarSet> = {
   'astm-a615': ASTM_A615,
   metric: metric('metric', 'common metric bar diameters 10–40 mm (common practice), area = π·d²/4', [10, 12, 14, 16, 20, 25, 28, 32, 36, 40]),
+  // Diameters commonly stocked for EN 1992-1-1 work (common practice; EN 10080 leaves the range to product standards).
+  'en-common': metric('en-common', 'common European bar diameters 12–40 mm (common practice), area = π·d²/4', [12, 14, 16, 20, 25, 28, 32, 40]),
+  'csa-g30.18': CSA_G30_18,
 };
 
 export function barSet(id: BarSetId): BarSet {

@@ -1,0 +1,146 @@
+/**
+ * CSA A23.3-19 design basis for column sections.
+ *
+ * The material resistance factors act inside the section analysis (CSA A23.3-19 8.4.2, 8.4.3):
+ * the factored family uses α1·φc·f′c on the concrete block and φs·fs in the steel, with factor 1
+ * on the resultant. The nominal family is the same analysis with φc = φs = 1.
+ *
+ * Clause numbers and the Pr,max rule are from memory of CSA A23.3-19 (and -14, which introduced
+ * the (0.2 + 0.002h) term); check them against the standard text.
+ *
+ * CSA A23.3 is an SI code: the basis accepts `units: 'si'` only (N, mm, MPa).
+ */
+import { ERROR_CODES, PmError } from '../errors.js';
+import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
+import { rectangularBlock } from '../materials/rectangular-block.js';
+import type { Basis, BasisInput, CapContext, DesignCode, ResistanceModel, StrainClass, StrainProfile } from './types.js';
+
+/** CSA A23.3-19 10.1.3: maximum usable strain at the extreme concrete compression fibre (from memory). */
+export const CSA_EPS_CU = 0.0035;
+/** CSA A23.3-19 8.5.4.1: Es = 200 000 MPa (from memory). */
+export const CSA_STEEL_MODULUS = 200_000;
+/** CSA A23.3-19 8.4.2 and 8.4.3(a): φc = 0.65, φs = 0.85 (from memory). */
+export const CSA_PHI_C = 0.65;
+export const CSA_PHI_S = 0.85;
+
+/** CSA A23.3-19 10.1.7: α1 = 0.85 − 0.0015·f′c ≥ 0.67 (f′c in MPa). */
+export const csaAlpha1 = (fc: number): number => Math.max(0.67, 0.85 - 0.0015 * fc);
+/** CSA A23.3-19 10.1.7: β1 = 0.97 − 0.0025·f′c ≥ 0.67 (f′c in MPa). */
+export const csaBeta1 = (fc: number): number => Math.max(0.67, 0.97 - 0.0025 * fc);
+
+/** Depth assumed for the tied-column cap when a table has no size (it makes the cap 0.80·Pro). */
+export const CSA_ASSUMED_DEPTH_MM = 300;
+
+/**
+ * CSA A23.3-19 10.10.4 (from memory): Pr,max = 0.90·Pro for spiral columns, and
+ * Pr,max = (0.2 + 0.002·h)·Pro ≤ 0.80·Pro for tied columns with h in mm.
+ * Without a size, h ≥ 300 mm is assumed, which gives 0.80. pmchart takes h as the least overall
+ * dimension of the section when it is known (the lower, conservative cap for non-square sections),
+ * else the depth in the bending plane — check it against the clause text (from memory).
+ */
+export function csaCapRatio(transverse: 'tied' | 'spiral', depthMm?: number): number {
+  if (transverse === 'spiral') return 0.9;
+  const h = depthMm ?? CSA_ASSUMED_DEPTH_MM;
+  return Math.min(0.8, 0.2 + 0.002 * h);
+}
+
+/** CSA A23.3-19 10.1.2 and 10.1.3: plane strain with εcu = 0.0035 at the extreme compression fibre. */
+export function csaProfile(c: number, _h: number): StrainProfile {
+  if (!Number.isFinite(c)) return { top: CSA_EPS_CU, curvature: 0 };
+  return { top: CSA_EPS_CU, curvature: CSA_EPS_CU / c };
+}
+
+export const CSA_A23_3_19: DesignCode = {
+  id: 'csa-a23.3-19',
+  title: 'CSA A23.3-19',
+  unitSystems: ['si'],
+  // 8.6.1.1: 20 ≤ f′c ≤ 80 MPa; 8.5.1: fy ≤ 500 MPa (from memory); 300 MPa is pmchart's lower bound.
+  limits: () => ({ fc: [20, 80], fy: [300, 500] }),
+  resolve: (input: BasisInput): Basis => resolveCsa(input),
+};
+
+function resolveCsa(input: BasisInput): Basis {
+  const { units, fc, fy, transverse } = input;
+  if (units !== 'si') {
+    throw new PmError(ERROR_CODES.invalidValue, '--units', 'is not available for CSA A23.3-19, an SI code', { value: units, allowed: 'si' });
+  }
+  const Es = CSA_STEEL_MODULUS;
+  const alpha1 = csaAlpha1(fc);
+  const beta1 = csaBeta1(fc);
+  const epsY = fy / Es;
+
+  const model = (label: string, phiC: number, phiS: number): ResistanceModel => ({
+    label,
+    concrete: rectangularBlock(alpha1 * phiC * fc, beta1, CSA_EPS_CU, `block ${phiC === 1 ? '' : 'φc·'}α1·f′c over a = β1·c, α1 = ${fmt(alpha1)}, β1 = ${fmt(beta1)}`),
+    // φs·fs with fs = Es·ε ≤ fy is the elastic–plastic law with yield stress φs·fy and modulus φs·Es.
+    steel: elasticPlasticSteel(phiS * fy, phiS * Es, `${phiS === 1 ? '' : 'φs·'}elastic–plastic fy = ${fy} MPa, Es = ${Es} MPa`),
+    factor: () => 1,
+    // 10.10.4: Pro = α1·φc·f′c·(Ag − Ast) + φs·fy·Ast
+    squash: { concreteStress: alpha1 * phiC * fc, steelStress: phiS * fy },
+    capFactor: (ctx: CapContext) => csaCapRatio(transverse, ctx.leastDimension ?? ctx.depth),
+  });
+  const nominal = model('nominal (φc = φs = 1)', 1, 1);
+  const design = model(`factored (φc = ${CSA_PHI_C}, φs = ${CSA_PHI_S})`, CSA_PHI_C, CSA_PHI_S);
+
+  const capText =
+    transverse === 'spiral'
+      ? 'Pr,max = 0.90·Pro (spiral, 10.10.4)'
+      : `Pr,max = (0.2 + 0.002·h)·Pro ≤ 0.80·Pro (tied, 10.10.4, h in mm); charts without a section size assume h ≥ ${CSA_ASSUMED_DEPTH_MM} mm, i.e. 0.80·Pro`;
+
+  return {
+    code: 'csa-a23.3-19',
+    title: 'CSA A23.3-19',
+    units,
+    fc,
+    fy,
+    Es,
+    transverse,
+    profile: (c: number, h: number): StrainProfile => csaProfile(c, h),
+    nominal,
+    design,
+    strainStates: [
+      { id: 'decompression', label: 'εt = 0', epsT: 0 },
+      { id: 'balanced', label: 'εt = εy (balanced)', epsT: epsY },
+    ],
+    // CSA A23.3 has no strain-dependent φ; the classes only say whether the tension steel has yielded.
+    classify: (epsT: number): StrainClass => (epsT < epsY ? 'compression-controlled' : 'tension-controlled'),
+    normalisingStress: fc,
+    symbols: {
+      nominalAxial: 'Pn',
+      nominalMoment: 'Mn',
+      designAxial: 'Pr',
+      designMoment: 'Mr',
+      designFamily: 'factored',
+      nominalFamily: 'nominal',
+      normalisingStress: 'f′c',
+    },
+    rhoLimits: { min: 0.01, max: 0.08 }, // 10.9.1, 10.9.2
+    steelAreaLimits: (_p: number, ag: number) => ({ min: 0.01 * ag, max: 0.08 * ag }), // 10.9.1, 10.9.2
+    // Short columns: no minimum eccentricity; the cap Pr,max stands in (the 15 + 0.03h minimum of 10.15.3 is for slender columns).
+    minimumMoment: () => 0,
+    barSet: 'csa-g30.18',
+    parameters: {
+      'α1': r4(alpha1),
+      'β1': r4(beta1),
+      'εcu': CSA_EPS_CU,
+      'φc': CSA_PHI_C,
+      'φs': CSA_PHI_S,
+      Es,
+      'εy': r6(epsY),
+      'Pr,max / Pro': transverse === 'spiral' ? 0.9 : '(0.2 + 0.002h) ≤ 0.80',
+    },
+    notes: [
+      `Equivalent rectangular stress block α1·φc·f′c over a = β1·c with α1 = ${fmt(alpha1)}, β1 = ${fmt(beta1)} (10.1.7); concrete tensile strength neglected.`,
+      `Extreme-fibre concrete strain εcu = 0.0035 (10.1.3); plane sections (10.1.2).`,
+      `Material resistance factors inside the analysis: φc = ${CSA_PHI_C} on concrete (8.4.2), φs = ${CSA_PHI_S} on reinforcement (8.4.3); the nominal family uses φc = φs = 1.`,
+      `Reinforcement elastic–perfectly plastic, Es = ${Es} MPa (8.5.4.1); εy = fy/Es = ${fmt(epsY)}.`,
+      `Displaced concrete is deducted for bars inside the stress block; moments about the gross-section centroid.`,
+      `Pro = α1·φc·f′c·(Ag − Ast) + φs·fy·Ast; ${capText}.`,
+      `Column steel 0.01·Ag ≤ Ast ≤ 0.08·Ag (10.9.1, 10.9.2). Slenderness (10.15, 10.16) is not included. Clause numbers from memory of CSA A23.3-19.`,
+    ],
+  };
+}
+
+const fmt = (x: number): string => String(Number(x.toPrecision(4)));
+const r4 = (x: number): number => Number(x.toFixed(4));
+const r6 = (x: number): number => Number(x.toFixed(6));
