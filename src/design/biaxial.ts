@@ -152,7 +152,7 @@ export function checkBiaxial(sec: BiaxialSection, load: BiaxialLoad): BiaxialRes
       Mnox: mxo,
       Mnoy: myo,
       cap,
-      note: 'Pn < 0.1·f′c·Ag (or tension): linear moment interaction Mux/φMnox + Muy/φMnoy ≤ 1 at Pu',
+      note: 'Pn < 0.1·f′c·Ag (or tension): linear moment interaction Mux/Mxo + Muy/Myo ≤ 1 with the design capacities at Pu',
     };
   }
 
@@ -175,7 +175,7 @@ export function checkBiaxial(sec: BiaxialSection, load: BiaxialLoad): BiaxialRes
       Mnoy: myo,
       termX,
       termY,
-      note: '(Mux/φMnox)^α + (Muy/φMnoy)^α ≤ 1, uniaxial capacities at Pu; utilisation is the left-hand side',
+      note: '(Mux/Mxo)^α + (Muy/Myo)^α ≤ 1 with the design uniaxial moment capacities at Pu; utilisation is the left-hand side',
     };
   }
   return { exact, reciprocalLoad: rl, loadContour: lc };
