@@ -374,3 +374,24 @@ export function uniaxialAxialAt(sec: BiaxialSection, axis: 'x' | 'y', Pu: number
   const pt = surfacePoint(sec, theta, c, kind);
   return { P: pt.P, point: pt };
 }
+
+/**
+ * Moment utilisation at fixed axial load: |Mu| ÷ the capacity moment in the load's direction on the
+ * contour at P = Pu (the measure the load-contour method approximates). NaN when Pu is out of reach.
+ */
+export function momentUtilisationAtAxial(sec: BiaxialSection, Pu: number, Mux: number, Muy: number, kind: ModelKind = 'design'): number {
+  const Mu = Math.hypot(Mux, Muy);
+  if (Pu > sec.cap[kind]) return NaN;
+  const psi = Math.atan2(Muy, Mux);
+  const resid = (theta: number): { r: number } => {
+    const c = depthForAxial(sec, theta, Pu, kind);
+    if (!Number.isFinite(c)) return { r: NaN };
+    const q = surfacePoint(sec, theta, c, kind);
+    return { r: wrap(Math.atan2(q.My, q.Mx) - psi) };
+  };
+  const theta = solveAngle(resid, psi);
+  const c = depthForAxial(sec, theta, Pu, kind);
+  if (!Number.isFinite(c)) return NaN;
+  const q = surfacePoint(sec, theta, c, kind);
+  return Mu / Math.hypot(q.Mx, q.My);
+}

@@ -149,6 +149,10 @@ const pick = (l: { M1?: number; M2?: number; M1y?: number; M2y?: number }) => ({
 
 /** After `checkLoads`: the biaxial check of each load on the checked reinforcement; governing load by the exact utilisation. */
 export function finishEffects(rc: ResolvedCheck, fx: CheckEffects, outcome: CheckOutcome): void {
+  for (const r of outcome.results) {
+    const m = fx.loads[r.index]?.magnified;
+    for (const [axis, s] of [['x', m?.x], ['y', m?.y]] as const) if (s && !s.ok) r.notes.push(`slenderness about ${axis}: ${shortWarning(s)}`);
+  }
   if (fx.bars) {
     const sec = biaxialSectionFor(rc.section.basis, rc.request.shape, fx.bars, rc.section.capContext);
     rc.request.loads.forEach((l, i) => {
@@ -201,6 +205,7 @@ export function effectsJson(rc: ResolvedCheck, fx: CheckEffects | undefined, r: 
             phi: num(b.exact.phi),
             class: b.exact.strainClass,
             capGoverns: b.exact.capGoverns,
+            momentUtilisationAtPu: num(b.exact.momentUtilisation),
           },
           reciprocalLoad: {
             method: b.reciprocalLoad.method,
@@ -217,6 +222,7 @@ export function effectsJson(rc: ResolvedCheck, fx: CheckEffects | undefined, r: 
             alpha: num(b.loadContour.alpha),
             alphaSource: b.loadContour.alphaSource,
             axialRatio: num(b.loadContour.axialRatio),
+            momentScale: num(b.loadContour.momentScale),
             Mnox: disp(b.loadContour.Mnox, 'moment', u),
             Mnoy: disp(b.loadContour.Mnoy, 'moment', u),
             note: b.loadContour.note,
@@ -234,6 +240,9 @@ function table(headers: string[], rows: string[][]): string {
   const line = (cells: string[]) => cells.map((c, i) => (i === 0 ? c.padEnd(w[i]!) : c.padStart(w[i]!))).join('  ').trimEnd();
   return [line(headers), line(w.map((n) => '-'.repeat(n))), ...rows.map(line)].join('\n');
 }
+
+const shortWarning = (s: SlendernessResult): string =>
+  s.ok ? '' : s.delta === Infinity ? 'unstable: Pu ≥ 0.75·Pc' : 'over 1.4 × first-order (6.2.5.3)';
 
 /** Tables for the readable output: slenderness per axis, then the biaxial methods side by side. */
 export function effectsText(rc: ResolvedCheck, fx: CheckEffects | undefined, outcome: CheckOutcome): string {
@@ -258,7 +267,7 @@ export function effectsText(rc: ResolvedCheck, fx: CheckEffects | undefined, out
           f(s.delta, 4),
           M(s.firstOrderMoment),
           M(s.magnifiedMoment),
-          s.ok ? '' : s.warnings.join('; ') || 'not ok',
+          s.ok ? '' : shortWarning(s),
         ]);
       }
     }
@@ -280,10 +289,13 @@ export function effectsText(rc: ResolvedCheck, fx: CheckEffects | undefined, out
         b.reciprocalLoad.method,
         f(b.loadContour.utilisation, 3),
         f(b.loadContour.alpha, 3),
+        f(b.exact.momentUtilisation, 3),
+        f(b.loadContour.momentScale, 3),
       ];
     });
-    parts.push('Biaxial (checked reinforcement, actual bars; utilisation > 1 fails; load contour and linear values are the left-hand sides):');
-    parts.push(table(['id', `Pu ${un.force}`, `Mux ${un.moment}`, `Muy ${un.moment}`, 'exact', 'NA angle°', 'reciprocal', 'method', 'contour', 'α'], rows));
+    parts.push('Biaxial (checked reinforcement, actual bars; > 1 fails). exact: along the load ray in (P, Mx, My); reciprocal: Pu/Pn (or the linear moment sum);');
+    parts.push('contour: left-hand side (Mux/Mxo)^α + (Muy/Myo)^α. The M@Pu columns compare moments at fixed Pu: exact, and the contour value^(1/α).');
+    parts.push(table(['id', `Pu ${un.force}`, `Mux ${un.moment}`, `Muy ${un.moment}`, 'exact', 'NA angle°', 'reciprocal', 'method', 'contour', 'α', 'exact M@Pu', 'contour M@Pu'], rows));
   } else if (rc.request.loads.some((l) => (l.Muy ?? 0) !== 0)) {
     parts.push('Muy given without a checked reinforcement: give --rho or a bar layout for the biaxial check (ρg required above is for Mux alone).');
   }
@@ -317,7 +329,7 @@ export function effectsReport(rc: ResolvedCheck, fx: CheckEffects | undefined, o
       lines.push(
         `  ${r.id}: exact ${f(b.exact.utilisation, 4)} (neutral axis ${f(b.exact.neutralAxisAngleDeg, 4)}°, depth ${f(b.exact.neutralAxisDepth, 4)}, εt = ${f(b.exact.epsT, 3)}, φ = ${f(b.exact.phi, 3)}${b.exact.capGoverns ? ', axial cap governs' : ''})`,
         `    reciprocal load: Pnx = ${F(b.reciprocalLoad.Pnx)}, Pny = ${F(b.reciprocalLoad.Pny)}, Po = ${F(b.reciprocalLoad.Po)}, Pn = ${F(b.reciprocalLoad.Pn)} (0.1·f′c·Ag = ${F(b.reciprocalLoad.validityLimit)}) → ${b.reciprocalLoad.method} ${f(b.reciprocalLoad.utilisation, 4)}; ${b.reciprocalLoad.note}`,
-        `    load contour: Mnox = ${M(b.loadContour.Mnox)}, Mnoy = ${M(b.loadContour.Mnoy)} at Pu, α = ${f(b.loadContour.alpha, 3)} (${b.loadContour.alphaSource}) → ${f(b.loadContour.utilisation, 4)}`,
+        `    load contour: Mnox = ${M(b.loadContour.Mnox)}, Mnoy = ${M(b.loadContour.Mnoy)} at Pu, α = ${f(b.loadContour.alpha, 3)} (${b.loadContour.alphaSource}) → ${f(b.loadContour.utilisation, 4)}; moments may scale by 1/${f(b.loadContour.momentScale, 4)} at fixed Pu (exact: 1/${f(b.exact.momentUtilisation, 4)})`,
       );
     }
     lines.push('');

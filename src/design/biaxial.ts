@@ -5,6 +5,7 @@
  */
 import {
   capacityAlongRay,
+  momentUtilisationAtAxial,
   squashPoint,
   uniaxialAxialAt,
   uniaxialMomentAt,
@@ -51,6 +52,8 @@ export interface ExactResult {
   phi: number;
   strainClass: StrainClass;
   capGoverns: boolean;
+  /** |Mu| ÷ exact capacity moment in the load's direction at P = Pu (compare with the load contour's momentScale) */
+  momentUtilisation: number;
 }
 
 export interface ReciprocalLoadResult {
@@ -84,6 +87,8 @@ export interface LoadContourResult {
   Mnoy: number;
   termX: number;
   termY: number;
+  /** utilisation^(1/α): the factor on both moments at fixed Pu, comparable with exact.momentUtilisation */
+  momentScale: number;
   note: string;
 }
 
@@ -110,6 +115,7 @@ export function checkBiaxial(sec: BiaxialSection, load: BiaxialLoad): BiaxialRes
     phi: ray.point.phi,
     strainClass: basis.classify(ray.point.epsT),
     capGoverns: ray.capGoverns,
+    momentUtilisation: Pu <= cap ? momentUtilisationAtAxial(sec, Pu, Mux, Muy) : NaN,
   };
 
   // uniaxial moment capacities at Pu (for the linear and load-contour methods)
@@ -161,7 +167,7 @@ export function checkBiaxial(sec: BiaxialSection, load: BiaxialLoad): BiaxialRes
   const ex = loadContourExponent(basis, axialRatio, sec.shape.kind);
   let lc: LoadContourResult;
   if (!reach) {
-    lc = { utilisation: Pu / cap, alpha: ex.alpha, alphaSource: ex.source, axialRatio, Mnox: NaN, Mnoy: NaN, termX: NaN, termY: NaN, note: 'Pu exceeds the axial cap; no moment capacity at this load' };
+    lc = { utilisation: Pu / cap, alpha: ex.alpha, alphaSource: ex.source, axialRatio, Mnox: NaN, Mnoy: NaN, termX: NaN, termY: NaN, momentScale: NaN, note: 'Pu exceeds the axial cap; no moment capacity at this load' };
   } else {
     const termX = Math.pow(Math.abs(Mux) / mxo, ex.alpha);
     const termY = Math.pow(Math.abs(Muy) / myo, ex.alpha);
@@ -175,6 +181,7 @@ export function checkBiaxial(sec: BiaxialSection, load: BiaxialLoad): BiaxialRes
       Mnoy: myo,
       termX,
       termY,
+      momentScale: Math.pow(u, 1 / ex.alpha),
       note: '(Mux/Mxo)^α + (Muy/Myo)^α ≤ 1 with the design uniaxial moment capacities at Pu; utilisation is the left-hand side',
     };
   }

@@ -143,7 +143,7 @@ export function aciMomentMagnification(basis: Basis, section: SlendernessSection
   steps.push({ label: 'M1/M2 (negative in single curvature, 6.2.5.1)', value: ratio });
   const limit = Math.min(34 + 12 * ratio, 40);
   steps.push({ label: 'limit 34 + 12(M1/M2) ≤ 40 (6.2.5.1(b))', value: limit });
-  const neglected = slenderness <= limit;
+  const neglected = slenderness <= limit * (1 + 1e-12); // equal counts as within (floating-point rounding)
   steps.push({ label: 'slenderness may be neglected (6.2.5.1)', value: neglected });
   if (neglected) {
     return { method: 'ACI 318-19 6.6.4 moment magnification (non-sway)', neglected, delta: 1, magnifiedMoment: M2, firstOrderMoment: M2, ok: true, warnings, steps };

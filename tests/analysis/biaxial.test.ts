@@ -10,6 +10,7 @@ import {
   contourAtAxial,
   prepareBiaxial,
   surfacePoint,
+  momentUtilisationAtAxial,
   uniaxialMomentAt,
 } from '../../src/analysis/biaxial.js';
 import { designAt, nominalAt, prepareSection } from '../../src/analysis/prepared-section.js';
@@ -139,6 +140,11 @@ describe('square section with four-face bars', () => {
     const r = capacityAlongRay(sec, 600, 10, 10);
     expect(r.capGoverns).toBe(true);
     expectClose(r.utilisation, 600 / sec.cap.design, 1e-12);
+  });
+  it('moment utilisation at fixed P along 45° is |Mu| over the contour point at θ = 45° (symmetry)', () => {
+    const p45 = contourAtAxial(sec, 300, 8)[1]!;
+    expectClose(momentUtilisationAtAxial(sec, 300, 1000, 1000), Math.hypot(1000, 1000) / Math.hypot(p45.Mx, p45.My), 1e-7);
+    expectClose(momentUtilisationAtAxial(sec, 300, 1000, 0), 1000 / uniaxialMomentAt(sec, 'x', 300).moment, 1e-7);
   });
   it('contour end points equal the uniaxial moment capacities at the same P', () => {
     const pts = contourAtAxial(sec, 300, 4);
