@@ -7,6 +7,7 @@
 import { Command, CommanderError } from 'commander';
 import { isPmError } from '../errors.js';
 import { GENERATOR } from '../version.js';
+import { registerCheck } from './check.js';
 import { registerTable } from './table.js';
 
 /** The single error handler: one line on stderr, exit code from the error, no stack trace. */
@@ -36,6 +37,7 @@ export function buildProgram(): Command {
     .showHelpAfterError(false)
     .configureOutput({ outputError: (str, write) => write(`pmchart: ${str.replace(/^error: /, '').trim()}\n`) });
   registerTable(program, runAction);
+  registerCheck(program, runAction);
   return program;
 }
 
