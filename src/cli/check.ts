@@ -245,7 +245,7 @@ export function checkAssumptions(rc: ResolvedCheck, outcome: CheckOutcome): stri
 }
 
 const statusText = (r: LoadResult): string =>
-  r.rhoStatus === 'not-possible' ? 'not possible' : r.rhoStatus === 'minimum-governs' ? 'minimum' : r.governedBy === 'cap' ? 'cap' : '';
+  r.rhoStatus === 'not-possible' ? `not possible (ρg > ${fmt(r.strain.atRho, 3)})` : r.rhoStatus === 'minimum-governs' ? 'minimum' : r.governedBy === 'cap' ? 'cap' : '';
 
 function table(headers: string[], rows: string[][]): string {
   const w = headers.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? '').length)));

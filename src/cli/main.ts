@@ -44,6 +44,11 @@ export function buildProgram(): Command {
 }
 
 export async function main(argv: string[]): Promise<void> {
+  // `pmchart table … | head` closes the pipe early; that is the reader's choice, not an error.
+  process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+    if (e.code === 'EPIPE') process.exit(0);
+    throw e;
+  });
   const program = buildProgram();
   try {
     await program.parseAsync(argv);

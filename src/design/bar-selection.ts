@@ -125,7 +125,8 @@ export function clearSpacing(shape: Shape, kind: SelectableKind, perFace: number
   return centres - barDiameter;
 }
 
-export function describeLayout(kind: SelectableKind, count: number, perFace: number, size: string): string {
+export function describeLayout(kind: SelectableKind, count: number, perFace: number, name: string): string {
+  const size = /^\d/.test(name) ? `× ${name} mm` : name; // metric sizes are bare diameters
   switch (kind) {
     case 'two-faces':
       return `${count} ${size} (${perFace} per face, 2 faces)`;

@@ -144,7 +144,7 @@ export function capacityAlongRay(t: RayTable, rho: number, load: NormalisedLoad,
   const [epsT, phi, Pc, Mc, Ps, Ms] = responseAt(t, c, exact);
   const P = phi * (Pc + rho * Ps);
   const M = phi * (Mc + rho * Ms);
-  if (p === 0 && m === 0) return { scale: Infinity, curveScale: Infinity, utilisation: 0, P, M, cOverH: c, epsT, phi, capGoverns: false };
+  if (isNegligibleLoad(load)) return { scale: Infinity, curveScale: Infinity, utilisation: 0, P, M, cOverH: c, epsT, phi, capGoverns: false };
   // component with the larger demand is the better-conditioned ratio
   const curveScale = Math.abs(p) >= Math.abs(m) ? P / p : M / m;
   let scale = curveScale;
@@ -166,6 +166,12 @@ export function capacityAlongRay(t: RayTable, rho: number, load: NormalisedLoad,
     capGoverns,
   };
 }
+
+/**
+ * Demands below 1e-12 in normalised stress units (far under any real load) count as zero: their ray
+ * direction is round-off, and denormal components overflow the ratios.
+ */
+export const isNegligibleLoad = (load: NormalisedLoad): boolean => Math.abs(load.P) < 1e-12 && Math.abs(load.M) < 1e-12;
 
 /** The strain state at a capacity point, for reports. */
 export interface StrainReport {

@@ -12,7 +12,7 @@
 import { C_OVER_H_MAX, C_OVER_H_MIN } from '../analysis/family.js';
 import { R } from '../analysis/prepared-section.js';
 import { findRoot } from '../analysis/solve.js';
-import { capacityAlongRay, type NormalisedLoad, type RayTable } from './ray.js';
+import { capacityAlongRay, isNegligibleLoad, type NormalisedLoad, type RayTable } from './ray.js';
 
 export type RhoStatus = 'ok' | 'minimum-governs' | 'not-possible';
 
@@ -101,6 +101,7 @@ export function rhoForCap(t: RayTable, p: number): number {
 
 /** The exact required ρg at the table's section, within `limits` (basis.rhoLimits or steelAreaLimits/Ag). */
 export function rhoRequired(t: RayTable, load: NormalisedLoad, limits: RhoLimits): RhoRequirement {
+  if (isNegligibleLoad(load)) return { rho: limits.min, status: 'minimum-governs', governedBy: 'minimum', rhoCurve: -Infinity, rhoCap: -Infinity };
   const curve = rhoCurve(t, load, limits);
   const cap = load.P > 0 ? rhoForCap(t, load.P) : -Infinity;
   const need = Math.max(curve, cap);

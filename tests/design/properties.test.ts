@@ -52,6 +52,8 @@ describe('rhoRequired', () => {
     const t = contexts[2]!.ctx.table;
     expect(rhoRequired(t, { P: 0.2, M: 0.05 }, limits)).toMatchObject({ rho: 0.01, status: 'minimum-governs' });
     expect(rhoRequired(t, { P: 0, M: 0 }, limits)).toMatchObject({ rho: 0.01, status: 'minimum-governs' });
+    expect(rhoRequired(t, { P: -5e-324, M: 5e-324 }, limits)).toMatchObject({ rho: 0.01, status: 'minimum-governs' }); // found by fast-check
+    expect(capacityAlongRay(t, 0.02, { P: 1e-300, M: 0 }).utilisation).toBe(0);
     expect(rhoRequired(t, { P: 7, M: 0.3 }, limits)).toMatchObject({ rho: null, status: 'not-possible' });
     expect(rhoRequired(t, { P: 0.5, M: 3 }, limits)).toMatchObject({ rho: null, status: 'not-possible' });
   });
