@@ -287,42 +287,43 @@ export function capacityAlongRay(sec: BiaxialSection, Pu: number, Mux: number, M
 }
 
 /**
- * Neutral-axis angle where the resultant moment direction matches the load: a scan of 16 angles
- * around ψ, then bracketed refinement (Illinois regula falsi) on the wrapped direction residual.
+ * Neutral-axis angle where the resultant moment direction matches the load: 16 angles over a full turn
+ * around ψ, tried outward from ψ (the answer usually lies close to the load's own angle, so most checks
+ * stop after a few), then bracketed refinement (Illinois regula falsi) on the wrapped direction residual.
  */
 function solveAngle(resid: (theta: number) => { r: number }, psi: number): number {
   const N = 16;
-  const span = Math.PI;
-  const thetas: number[] = [];
-  const rs: number[] = [];
-  for (let i = 0; i <= N; i++) {
-    const t = psi - span + (2 * span * i) / N;
-    thetas.push(t);
-    rs.push(resid(t).r);
-  }
-  // nearest bracket to θ = ψ whose ends are both within a quarter turn (skips the ±π wrap)
-  let best = -1;
-  let bestDist = Infinity;
-  for (let i = 0; i < N; i++) {
-    const a = rs[i]!;
-    const z = rs[i + 1]!;
-    if (a === 0) return thetas[i]!;
-    if (a * z < 0 && Math.abs(a) < Math.PI / 2 && Math.abs(z) < Math.PI / 2) {
-      const dist = Math.abs((thetas[i]! + thetas[i + 1]!) / 2 - psi);
-      if (dist < bestDist) {
-        bestDist = dist;
-        best = i;
+  const mid = N / 2;
+  const thetaAt = (i: number) => psi - Math.PI + (2 * Math.PI * i) / N;
+  const rs = new Map<number, number>();
+  const r = (i: number): number => {
+    let v = rs.get(i);
+    if (v === undefined) {
+      v = resid(thetaAt(i)).r;
+      rs.set(i, v);
+    }
+    return v;
+  };
+  // a bracket whose ends are both within a quarter turn (skips the ±π wrap)
+  const brackets = (i: number): boolean => {
+    const a = r(i);
+    const z = r(i + 1);
+    return a * z < 0 && Math.abs(a) < Math.PI / 2 && Math.abs(z) < Math.PI / 2;
+  };
+  if (r(mid) === 0) return psi;
+  for (let d = 0; d < mid; d++) {
+    for (const i of [mid - d - 1, mid + d]) {
+      if (r(i) === 0) return thetaAt(i);
+      if (brackets(i)) {
+        const t = findRoot((x) => resid(x).r, thetaAt(i), thetaAt(i + 1), 1e-11, 100);
+        return Number.isNaN(t) ? thetaAt(i) : t;
       }
     }
   }
-  if (best < 0) {
-    // no clean bracket: take the scanned angle with the smallest residual
-    let k = 0;
-    for (let i = 1; i <= N; i++) if (Math.abs(rs[i]!) < Math.abs(rs[k]!)) k = i;
-    return thetas[k]!;
-  }
-  const t = findRoot((x) => resid(x).r, thetas[best]!, thetas[best + 1]!, 1e-11, 100);
-  return Number.isNaN(t) ? thetas[best]! : t;
+  // no clean bracket: take the scanned angle with the smallest residual
+  let k = 0;
+  for (let i = 1; i <= N; i++) if (Math.abs(r(i)) < Math.abs(r(k))) k = i;
+  return thetaAt(k);
 }
 
 /**
