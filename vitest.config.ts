@@ -5,6 +5,7 @@ export default defineConfig({
   test: {
     include: ['tests/**/*.test.ts'],
     pool: 'forks',
+    setupFiles: ['tests/helpers/fast-check-setup.ts'],
     testTimeout: 60_000,
   },
 });

@@ -7,6 +7,8 @@
 import { Command, CommanderError } from 'commander';
 import { isPmError } from '../errors.js';
 import { GENERATOR } from '../version.js';
+import { registerCheck } from './check.js';
+import { registerContour } from './contour.js';
 import { registerSet } from './set.js';
 import { registerSheet } from './sheet.js';
 import { registerTable } from './table.js';
@@ -38,12 +40,19 @@ export function buildProgram(): Command {
     .showHelpAfterError(false)
     .configureOutput({ outputError: (str, write) => write(`pmchart: ${str.replace(/^error: /, '').trim()}\n`) });
   registerTable(program, runAction);
+  registerCheck(program, runAction);
+  registerContour(program, runAction);
   registerSet(program, runAction);
   registerSheet(program, runAction);
   return program;
 }
 
 export async function main(argv: string[]): Promise<void> {
+  // `pmchart table … | head` closes the pipe early; that is the reader's choice, not an error.
+  process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+    if (e.code === 'EPIPE') process.exit(0);
+    throw e;
+  });
   const program = buildProgram();
   try {
     await program.parseAsync(argv);

@@ -8,7 +8,7 @@ import { designCode, resolveBasis } from '../codes/registry.js';
 import { isTransverse, TRANSVERSE_TYPES, type Basis, type BasisOptions, type CapContext, type CodeId } from '../codes/types.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { barSet, findBar, type BarSize } from '../section/bar-tables.js';
-import { gammaFromCover, sectionDepth } from '../section/geometry.js';
+import { gammaFromCover, sectionDepth, sectionWidth } from '../section/geometry.js';
 import { ARRANGEMENTS, isArrangementKind, isShapeKind, SHAPES, type Arrangement, type CustomBar, type Shape } from '../section/types.js';
 import { DISPLAY_UNITS, isUnitSystem, parseQuantity, systemFactor, UNIT_SYSTEMS, type UnitSystem } from '../units/index.js';
 
@@ -269,6 +269,6 @@ export function resolveSectionFlags(f: SectionFlags, needSize = false): Resolved
     ...(bar ? { bar } : {}),
     ...(cover !== undefined ? { cover } : {}),
     ...(tieDiameter !== undefined ? { tieDiameter } : {}),
-    capContext: sized ? { depth: sectionDepth(shape) } : {},
+    capContext: sized ? { depth: sectionDepth(shape), leastDimension: Math.min(sectionDepth(shape), sectionWidth(shape)) } : {},
   };
 }

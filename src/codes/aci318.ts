@@ -5,6 +5,7 @@
 import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
 import { rectangularBlock } from '../materials/rectangular-block.js';
 import { stressToMPa, type UnitSystem } from '../units/index.js';
+import { bresslerBiaxialExponent } from './biaxial-exponent.js';
 import type { Basis, BasisInput, CodeId, DesignCode, ResistanceModel, StrainClass, StrainProfile } from './types.js';
 
 /** ACI 318-19 22.2.2.1: maximum usable strain at the extreme concrete compression fibre. */
@@ -139,6 +140,8 @@ function resolveAci(edition: Edition, input: BasisInput): Basis {
       'Pn,max / Po': capRatio,
       'fy in Po': squash.steelStress,
     },
+    biaxialExponent: bresslerBiaxialExponent,
+    slendernessMethod: 'moment-magnification-aci318',
     notes: [
       `Equivalent rectangular stress block 0.85·f′c over a = β1·c, β1 = ${beta1.toFixed(3)} (${edition.title} 22.2.2.4, Table 22.2.2.4.3); concrete tensile strength neglected (22.2.2.2).`,
       `Extreme-fibre concrete strain εcu = 0.003 (22.2.2.1); plane sections (22.2.1.2).`,

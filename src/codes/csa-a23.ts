@@ -34,9 +34,9 @@ export const CSA_ASSUMED_DEPTH_MM = 300;
 /**
  * CSA A23.3-19 10.10.4 (from memory): Pr,max = 0.90·Pro for spiral columns, and
  * Pr,max = (0.2 + 0.002·h)·Pro ≤ 0.80·Pro for tied columns with h in mm.
- * Without a depth, h ≥ 300 mm is assumed, which gives 0.80. `depthMm` is the section depth in the
- * bending plane (CapContext.depth); for non-square sections the standard's h may be meant as the
- * overall column dimension — check it against the clause text (from memory).
+ * Without a size, h ≥ 300 mm is assumed, which gives 0.80. pmchart takes h as the least overall
+ * dimension of the section when it is known (the lower, conservative cap for non-square sections),
+ * else the depth in the bending plane — check it against the clause text (from memory).
  */
 export function csaCapRatio(transverse: 'tied' | 'spiral', depthMm?: number): number {
   if (transverse === 'spiral') return 0.9;
@@ -77,7 +77,7 @@ function resolveCsa(input: BasisInput): Basis {
     factor: () => 1,
     // 10.10.4: Pro = α1·φc·f′c·(Ag − Ast) + φs·fy·Ast
     squash: { concreteStress: alpha1 * phiC * fc, steelStress: phiS * fy },
-    capFactor: (ctx: CapContext) => csaCapRatio(transverse, ctx.depth),
+    capFactor: (ctx: CapContext) => csaCapRatio(transverse, ctx.leastDimension ?? ctx.depth),
   });
   const nominal = model('nominal (φc = φs = 1)', 1, 1);
   const design = model(`factored (φc = ${CSA_PHI_C}, φs = ${CSA_PHI_S})`, CSA_PHI_C, CSA_PHI_S);

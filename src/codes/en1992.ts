@@ -14,6 +14,7 @@ import { inclinedBranchSteel } from '../materials/inclined-branch-steel.js';
 import { parabolaRectangle } from '../materials/parabola-rectangle.js';
 import { rectangularBlock } from '../materials/rectangular-block.js';
 import type { ConcreteLaw, SteelLaw } from '../materials/types.js';
+import { en1992BiaxialExponent } from './biaxial-exponent.js';
 import type { Basis, BasisInput, DesignCode, ResistanceModel, StrainClass, StrainProfile } from './types.js';
 
 /** EN 1992-1-1 3.2.7(4): design value of the modulus of elasticity of reinforcing steel, MPa. */
@@ -203,6 +204,8 @@ function resolveEc2(input: BasisInput): Basis {
     // 6.1(4): e0 = max(h/30, 20 mm) for compression; N in N, h in mm, moment in N·mm.
     minimumMoment: (NEd: number, h: number) => Math.max(0, NEd) * Math.max(h / 30, 20),
     barSet: 'en-common',
+    biaxialExponent: en1992BiaxialExponent, // 5.8.9(4) Eq. 5.39
+    slendernessMethod: 'nominal-curvature-en1992', // 5.8.8
     parameters: {
       fcd: r4(fcd),
       fyd: r4(fyd),

@@ -3,6 +3,7 @@
  * its material laws and its factors; it never branches on a code's name.
  */
 import type { ConcreteLaw, SteelLaw } from '../materials/types.js';
+import type { ShapeKind } from '../section/types.js';
 import type { UnitSystem } from '../units/index.js';
 
 export const CODE_IDS = ['aci318-19', 'aci318-14', 'en1992-1-1', 'csa-a23.3-19'] as const;
@@ -23,6 +24,8 @@ export interface StrainProfile {
 export interface CapContext {
   /** section depth in the system's length unit, when known */
   depth?: number;
+  /** smallest overall dimension of the cross-section (min(b, h), or D), when known */
+  leastDimension?: number;
 }
 
 /** A set of material laws plus the factor applied to the section resultant. */
@@ -122,7 +125,24 @@ export interface Basis {
   readonly parameters: Readonly<Record<string, number | string>>;
   /** assumptions with their clauses, for sheets, reports and the README */
   readonly notes: readonly string[];
+  /**
+   * Load-contour exponent α in (Mx/Mxo)^α + (My/Myo)^α ≤ 1 at axial ratio NEd/NRd (EN 1992-1-1 5.8.9
+   * Eq. 5.39). Optional: without it, `loadContourExponent` (src/design/biaxial.ts) uses Bresler's
+   * documented exponent.
+   */
+  biaxialExponent?(axialRatio: number, shape: ShapeKind): BiaxialExponent;
+  /** second-order method for slender columns the basis offers (src/design/slenderness.ts); none when absent */
+  readonly slendernessMethod?: SlendernessMethodId;
 }
+
+/** An exponent with where it comes from. */
+export interface BiaxialExponent {
+  alpha: number;
+  source: string;
+}
+
+export const SLENDERNESS_METHODS = ['moment-magnification-aci318', 'nominal-curvature-en1992'] as const;
+export type SlendernessMethodId = (typeof SLENDERNESS_METHODS)[number];
 
 export interface BasisSymbols {
   /** e.g. "Pn", "NRk"; the unfactored family */

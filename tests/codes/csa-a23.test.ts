@@ -115,3 +115,11 @@ describe('CSA A23.3-19 parameters', () => {
     expect(() => csa(90, 400)).toThrowError(/--fc: 90 MPa is outside 20–80 MPa/);
   });
 });
+
+describe('CSA A23.3-19 cap with a known size (10.10.4, from memory)', () => {
+  it('takes the least overall dimension: a 250 × 600 mm tied column gets (0.2 + 0.002·250) = 0.70', async () => {
+    const { resolveSectionFlags } = await import('../../src/cli/section-flags.js');
+    const s = resolveSectionFlags({ code: 'csa-a23.3-19', fc: '35', fy: '400', b: '250', h: '600', gamma: '0.8' });
+    expectClose(s.basis.design.capFactor(s.capContext), 0.7, 1e-12);
+  });
+});

@@ -1,0 +1,72 @@
+/**
+ * Bar proposals. Spacing rule: ACI 318-19 25.2.3 (max(1.5 in, 1.5·db, 4/3·aggregate)); steel limits
+ * ACI 318-19 10.6.1.1; bar sizes ASTM A615/A615M Table 1; γ from cover + tie + db/2 (common practice).
+ */
+import { describe, expect, it } from 'vitest';
+import { resolveBasis } from '../../src/codes/registry.js';
+import { barsForArea, clearSpacing, perFaceFor, proposeBars, requiredClearSpacing } from '../../src/design/bar-selection.js';
+import { barSet } from '../../src/section/bar-tables.js';
+
+describe('requiredClearSpacing (ACI 318-19 25.2.3)', () => {
+  it('is 1.5 in for small bars, 1.5·db for large, 4/3 of the aggregate when that is larger', () => {
+    expect(requiredClearSpacing('us', 0.75)).toBe(1.5);
+    expect(requiredClearSpacing('us', 1.41)).toBeCloseTo(2.115, 12);
+    expect(requiredClearSpacing('us', 0.75, 1.5)).toBeCloseTo(2, 12);
+    expect(requiredClearSpacing('si', 20)).toBe(38);
+    expect(requiredClearSpacing('si', 32)).toBe(48);
+  });
+});
+
+describe('counts per face', () => {
+  it('follow the arrangement and the 4-bar (tied) / 6-bar (spiral) minimum', () => {
+    expect(perFaceFor('two-faces', 11, 4)).toBe(6);
+    expect(perFaceFor('four-faces', 12, 4)).toBe(4); // 4·(4 − 1) = 12
+    expect(perFaceFor('ring', 3, 6)).toBe(6);
+    expect(barsForArea(0.5, { area: 1 }, 'two-faces')).toEqual({ count: 4, perFace: 2 });
+  });
+  it('clear spacing of 6 #11 per face across 24 in with 2 in to centres is 20/5 − 1.41 in', () => {
+    expect(clearSpacing({ kind: 'rectangle', b: 24, h: 24 }, 'two-faces', 6, 20 / 24, 1.41)).toBeCloseTo(4 - 1.41, 12);
+  });
+});
+
+describe('proposeBars', () => {
+  const basis = resolveBasis('aci318-19', { units: 'us', fc: 4, fy: 60, transverse: 'tied' });
+  const shape = { kind: 'rectangle', b: 24, h: 24 } as const;
+  const sizes = barSet('astm-a615').sizes.filter((s) => s.diameter >= 0.625);
+  const loads = [{ P: 900 / 576, M: 7200 / (576 * 24) }];
+  const props = proposeBars({
+    basis,
+    shape,
+    kind: 'two-faces',
+    detailing: { kind: 'cover', cover: 1.5, tieDiameter: 0.5 },
+    sizes,
+    requiredArea: 0.024 * 576,
+    areaLimits: { min: 5.76, max: 46.08 },
+    loads,
+    aggregate: 1,
+  });
+
+  it('returns layouts sorted by steel area that pass every limit and the re-verification', () => {
+    expect(props.length).toBeGreaterThan(0);
+    for (let i = 1; i < props.length; i++) expect(props[i]!.area).toBeGreaterThanOrEqual(props[i - 1]!.area);
+    for (const p of props) {
+      expect(p.utilisation).toBeLessThanOrEqual(1);
+      expect(p.clearSpacing).toBeGreaterThanOrEqual(p.clearSpacingRequired);
+      expect(p.count).toBeGreaterThanOrEqual(4);
+      expect(p.rho).toBeGreaterThanOrEqual(0.01);
+      expect(p.rho).toBeLessThanOrEqual(0.08);
+      // γ from 1.5 in cover + 0.5 in tie + db/2 on each side
+      expect(p.gamma).toBeCloseTo((24 - 2 * (2 + p.barDiameter / 2)) / 24, 12);
+    }
+  });
+
+  it('fails re-verification for a layout one bar pair lighter than the lightest proposal', () => {
+    const best = props[0]!;
+    const lighter = proposeBars({
+      basis, shape, kind: 'two-faces', detailing: { kind: 'cover', cover: 1.5, tieDiameter: 0.5 },
+      sizes: sizes.filter((s) => s.name === best.size), requiredArea: best.area - 2 * best.barArea, areaLimits: { min: 5.76, max: 46.08 },
+      loads, aggregate: 1, extraCounts: 0,
+    });
+    expect(lighter).toEqual([]);
+  });
+});
