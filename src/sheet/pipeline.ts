@@ -146,6 +146,11 @@ async function renderInChildren(tasks: ChunkTask[], jobs: number, tick: () => vo
           }),
       ),
     );
+  } catch (e) {
+    // stop the others before the caller removes the staging folder they write into
+    for (const c of children) c.kill();
+    await Promise.all(children.map((c) => (c.exitCode !== null || c.signalCode !== null ? undefined : new Promise((r) => c.once('exit', r)))));
+    throw e;
   } finally {
     for (const c of children) if (c.connected) c.disconnect();
   }

@@ -116,6 +116,12 @@ describe('makeChartSet', () => {
     expect(Buffer.compare(readFileSync(one.book!), readFileSync(two.book!))).toBe(0);
   }, 120_000);
 
+  it('reports a failing sheet from a child process as one PmError and leaves no folder behind', async () => {
+    const bad = { ...set, outputs: { ...set.outputs, svg: false, png: false }, sheets: set.sheets.map((s, i) => (i === 2 ? { ...s, fc: 100 } : s)) };
+    await expect(makeChartSet(bad, { outDir: join(tmp, 'e'), generator, jobs: 2, chunkSize: 1 })).rejects.toThrow(/^sheets\[1\]\.fc: 100 ksi is outside 2\.5–20 ksi$/);
+    expect(readdirSync(join(tmp, 'e'))).toEqual([]);
+  }, 60_000);
+
   it('replaces an earlier folder of the same set', async () => {
     writeFileSync(join(dirB, 'stale.txt'), 'old');
     await makeChartSet({ ...set, outputs: { ...set.outputs, png: false, svg: false } }, { outDir: join(tmp, 'b'), generator, jobs: 1 });
