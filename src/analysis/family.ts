@@ -96,6 +96,35 @@ export function depthForTensionStrain(section: PreparedSection, epsT: number): n
   return Number.isNaN(x) ? NaN : Math.exp(x);
 }
 
+/**
+ * c/h at which a bar row crosses a jump of a concrete law (the edge of the rectangular block): there
+ * the displaced-concrete deduction of that row switches on and the curve steps by 0.85·f′c·As,row.
+ * Sweeping just below and at these depths draws the step as a clean jump instead of a slanted segment.
+ */
+function lawJumpDepths(section: PreparedSection): number[] {
+  const { basis, bars } = section;
+  const jumps = new Set<number>();
+  for (const law of [basis.nominal.concrete, basis.design.concrete]) {
+    for (const e of law.breakpoints) {
+      const step = Math.abs(law.stress(e * (1 + 1e-9)) - law.stress(e * (1 - 1e-9)));
+      if (e > 0 && step > 1e-9 * law.peakStress) jumps.add(e);
+    }
+  }
+  const rows = [...new Set(bars.map((b) => 0.5 - b.y))];
+  const out: number[] = [];
+  for (const e of jumps) {
+    for (const d of rows) {
+      const f = (logC: number) => {
+        const p = basis.profile(Math.exp(logC), 1, section.dt);
+        return p.top - p.curvature * d - e;
+      };
+      const x = findRoot(f, Math.log(C_OVER_H_MIN), Math.log(C_OVER_H_MAX), 1e-14);
+      if (Number.isFinite(x)) out.push(Math.exp(x) * (1 - 1e-7), Math.exp(x));
+    }
+  }
+  return out;
+}
+
 /** Builds a family from a request. */
 export function computeFamily(req: FamilyRequest): CurveFamily {
   const bars = layoutBars(req.shape, req.arrangement, 1, { gamma: req.gamma, ...(req.gammaX !== undefined ? { gammaX: req.gammaX } : {}) });
@@ -114,6 +143,7 @@ export function familyOf(section: PreparedSection, arrangement: Arrangement, gam
     if (!Number.isFinite(c)) continue;
     for (const k of [1, 0.98, 0.995, 1.005, 1.02]) cs.add(c * k);
   }
+  for (const c of lawJumpDepths(section)) cs.add(c);
   const sweep = evaluate(section, [...cs].filter((c) => c >= C_OVER_H_MIN && c <= C_OVER_H_MAX).sort((a, b) => a - b));
 
   // 2. ρg-dependent roots (P = 0 and P = cap, nominal and factored): bracket on the sweep, refine on the section.

@@ -146,7 +146,7 @@ function resolveAci(edition: Edition, input: BasisInput): Basis {
       `Equivalent rectangular stress block 0.85·f′c over a = β1·c, β1 = ${beta1.toFixed(3)} (${edition.title} 22.2.2.4, Table 22.2.2.4.3); concrete tensile strength neglected (22.2.2.2).`,
       `Extreme-fibre concrete strain εcu = 0.003 (22.2.2.1); plane sections (22.2.1.2).`,
       `Reinforcement elastic–perfectly plastic, Es = ${Es} ${su} (20.2.2.1, 20.2.2.2); εty = fy/Es = ${epsTy.toFixed(5)}.`,
-      `Displaced concrete is deducted for bars inside the stress block; moments are taken about the gross-section centroid.`,
+      `Displaced concrete is deducted for bars inside the stress block, so a curve steps slightly where a bar row enters the block; moments are taken about the gross-section centroid.`,
       `φ per ${edition.clause}: ${phiC} (${transverse}) for εt ≤ εty, 0.90 for εt ≥ ${edition.tensionLimitText}, linear between.`,
       `Axial cap Pn,max = ${capRatio}·Po (22.4.2.1) with Po = 0.85·f′c·(Ag − Ast) + fy·Ast (22.4.2.2), fy in Po ≤ ${aciPoYieldCap(units)} ${su}.`,
       `Column steel 0.01·Ag ≤ Ast ≤ 0.08·Ag (10.6.1.1). f′c = ${fc} ${su} (${fcMPa.toFixed(1)} MPa).`,

@@ -134,7 +134,7 @@ function resolveCsa(input: BasisInput): Basis {
       `Extreme-fibre concrete strain εcu = 0.0035 (10.1.3); plane sections (10.1.2).`,
       `Material resistance factors inside the analysis: φc = ${CSA_PHI_C} on concrete (8.4.2), φs = ${CSA_PHI_S} on reinforcement (8.4.3); the nominal family uses φc = φs = 1.`,
       `Reinforcement elastic–perfectly plastic, Es = ${Es} MPa (8.5.4.1); εy = fy/Es = ${fmt(epsY)}.`,
-      `Displaced concrete is deducted for bars inside the stress block; moments about the gross-section centroid.`,
+      `Displaced concrete is deducted for bars inside the stress block, so a curve steps slightly where a bar row enters the block; moments about the gross-section centroid.`,
       `Pro = α1·φc·f′c·(Ag − Ast) + φs·fy·Ast; ${capText}.`,
       `Column steel 0.01·Ag ≤ Ast ≤ 0.08·Ag (10.9.1, 10.9.2). Slenderness (10.15, 10.16) is not included. Clause numbers from memory of CSA A23.3-19.`,
     ],
