@@ -13,7 +13,8 @@
 import { ERROR_CODES, PmError } from '../errors.js';
 import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
 import { rectangularBlock } from '../materials/rectangular-block.js';
-import type { Basis, BasisInput, CapContext, DesignCode, ResistanceModel, StrainClass, StrainProfile } from './types.js';
+import { yieldClass } from './strain-class.js';
+import type { Basis, BasisInput, CapContext, DesignCode, ResistanceModel, StrainProfile } from './types.js';
 
 /** CSA A23.3-19 10.1.3: maximum usable strain at the extreme concrete compression fibre (from memory). */
 export const CSA_EPS_CU = 0.0035;
@@ -102,8 +103,7 @@ function resolveCsa(input: BasisInput): Basis {
       { id: 'decompression', label: 'εt = 0', epsT: 0 },
       { id: 'balanced', label: 'εt = εy (balanced)', epsT: epsY },
     ],
-    // CSA A23.3 has no strain-dependent φ; the classes only say whether the tension steel has yielded.
-    classify: (epsT: number): StrainClass => (epsT < epsY ? 'compression-controlled' : 'tension-controlled'),
+    classify: yieldClass(epsY),
     normalisingStress: fc,
     symbols: {
       nominalAxial: 'Pn',

@@ -13,9 +13,10 @@ import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
 import { inclinedBranchSteel } from '../materials/inclined-branch-steel.js';
 import { parabolaRectangle } from '../materials/parabola-rectangle.js';
 import { rectangularBlock } from '../materials/rectangular-block.js';
+import { yieldClass } from './strain-class.js';
 import type { ConcreteLaw, SteelLaw } from '../materials/types.js';
 import { en1992BiaxialExponent } from './biaxial-exponent.js';
-import type { Basis, BasisInput, DesignCode, ResistanceModel, StrainClass, StrainProfile } from './types.js';
+import type { Basis, BasisInput, DesignCode, ResistanceModel, StrainProfile } from './types.js';
 
 /** EN 1992-1-1 3.2.7(4): design value of the modulus of elasticity of reinforcing steel, MPa. */
 export const EC2_STEEL_MODULUS = 200_000;
@@ -186,8 +187,7 @@ function resolveEc2(input: BasisInput): Basis {
       { id: 'decompression', label: 'εs = 0', epsT: 0 },
       { id: 'balanced', label: 'εs = εyd (balanced)', epsT: epsYd },
     ],
-    // EN 1992-1-1 has no strain-dependent φ; the classes only say whether the tension steel has yielded.
-    classify: (epsT: number): StrainClass => (epsT < epsYd ? 'compression-controlled' : 'tension-controlled'),
+    classify: yieldClass(epsYd),
     normalisingStress: fcd,
     symbols: {
       nominalAxial: 'NRk',

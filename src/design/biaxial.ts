@@ -129,35 +129,22 @@ export function checkBiaxial(sec: BiaxialSection, load: BiaxialLoad): BiaxialRes
   const Pny = uniaxialAxialAt(sec, 'y', Pu, Muy).P;
   const Pn = reciprocalLoadCapacity(Pnx, Pny, Po);
   const validityLimit = 0.1 * basis.fc * sec.grossArea;
+  const common = { Pnx, Pny, Po, Pn, validityLimit, Mnox: mxo, Mnoy: myo, cap };
   let rl: ReciprocalLoadResult;
   if (Pu > 0 && Pn >= validityLimit && Pnx > 0 && Pny > 0) {
     const PnCapped = Math.min(Pn, cap);
     rl = {
+      ...common,
       utilisation: Pu / PnCapped,
       method: 'reciprocal-load',
-      Pnx,
-      Pny,
-      Po,
-      Pn,
-      validityLimit,
-      Mnox: mxo,
-      Mnoy: myo,
-      cap,
       note: Pn > cap ? 'Pn from 1/Pn = 1/Pnx + 1/Pny − 1/Po exceeds the axial cap; the cap governs' : 'Pn ≥ 0.1·f′c·Ag: reciprocal load method',
     };
   } else {
     const u = reach ? linearMomentValue(Mux, Muy, mxo, myo) : Pu / cap;
     rl = {
+      ...common,
       utilisation: Number.isFinite(u) ? u : Infinity,
       method: 'linear-moment',
-      Pnx,
-      Pny,
-      Po,
-      Pn,
-      validityLimit,
-      Mnox: mxo,
-      Mnoy: myo,
-      cap,
       note: 'Pn < 0.1·f′c·Ag (or tension): linear moment interaction Mux/Mxo + Muy/Myo ≤ 1 with the design capacities at Pu',
     };
   }
