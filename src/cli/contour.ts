@@ -12,7 +12,7 @@ import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { DISPLAY_UNITS, parseQuantity, toDisplay } from '../units/index.js';
 import { generatorLabel } from '../version.js';
 import { actualBars, biaxialSectionOf } from './actual-bars.js';
-import { csvLine, num } from './format.js';
+import { csvLine, num, reportDate } from './format.js';
 import { addSectionOptions, resolveSectionFlags, type SectionFlags } from './section-flags.js';
 import { CAUTION } from './table.js';
 import { wrap, type TextRow } from '../chart/sheet-data.js';
@@ -170,15 +170,6 @@ export async function runContourPlot(o: ContourOptions): Promise<string> {
 }
 
 const fmtNum = (x: number, d = 4): string => String(Number(x.toPrecision(d)));
-
-/** --date, else SOURCE_DATE_EPOCH, else today (as `pmchart sheet`): the PDF dates are this day at 00:00 UTC. */
-export function reportDate(text: string | undefined): string {
-  const date = text ?? (process.env.SOURCE_DATE_EPOCH ? new Date(Number(process.env.SOURCE_DATE_EPOCH) * 1000) : new Date()).toISOString().slice(0, 10);
-  if (!/^\d{4}-\d{2}-\d{2}$/.test(date) || Number.isNaN(Date.parse(`${date}T00:00:00Z`))) {
-    throw new PmError(ERROR_CODES.invalidValue, '--date', 'is not a date in the form YYYY-MM-DD', { value: text });
-  }
-  return date;
-}
 
 function contourPageTexts(
   o: ContourOptions,
