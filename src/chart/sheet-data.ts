@@ -34,6 +34,12 @@ export interface TextRow { style: TextStyle; x: number; y: number; text: string;
 export interface RectRow { x: number; y: number; x2: number; y2: number; fill: string; stroke: string; strokeWidth: number; z: number }
 export interface RuleRow { x: number; y: number; x2: number; y2: number; stroke: string; strokeWidth: number; z: number }
 export interface DotRow { x: number; y: number; size: number; fill: string; z: number }
+/** A load drawn on a report plot (chart units); `governing` is 1 for the governing load. */
+export interface LoadMarkRow { id: string; M: number; P: number; governing: 0 | 1; z: number }
+/** A label of a load mark, placed in points from the plot origin (src/sheet/check-report.ts places them apart). */
+export interface LoadLabelRow { x: number; y: number; text: string; governing: 0 | 1; z: number }
+/** Further curves on a report plot (chart units), e.g. the curve at the governing load's ρg required. */
+export interface ExtraCurveRow { curve: string; i: number; M: number; P: number }
 
 /**
  * Rows of decoration datasets carry `z`, their drawing order (the vega-lite `order` channel), so the
@@ -50,6 +56,10 @@ export interface SheetData {
   rules: RuleRow[];
   dots: DotRow[];
   rings: DotRow[];
+  /** report plots only (TemplateParams.overlay) */
+  loadMarks?: LoadMarkRow[];
+  loadLabels?: LoadLabelRow[];
+  extraCurves?: ExtraCurveRow[];
 }
 
 /** Set-wide choices the template depends on (a change compiles a new view). */
@@ -58,6 +68,11 @@ export interface TemplateParams {
   xTitle: string;
   yTitle: string;
   families: FamilyKind[];
+  /**
+   * Report plots: fixed axis domains (chart units, so marks and page-point labels line up exactly) and the
+   * load-mark layers. Absent on chart sheets.
+   */
+  overlay?: { domainM: [number, number]; domainP: [number, number] };
 }
 
 export interface BuiltSheet {
@@ -118,7 +133,7 @@ export function buildSheet(ctx: SheetContext): BuiltSheet {
 
 // ── plot ────────────────────────────────────────────────────────────────────────────────────────
 
-function plotLayers(ctx: SheetContext, templateLayout: SheetLayout, families: FamilyKind[], primary: FamilyKind, d: number, out: SheetData): void {
+export function plotLayers(ctx: { family: CurveFamily; set: Pick<ResolvedChartSet, 'referenceLines'> }, templateLayout: SheetLayout, families: FamilyKind[], primary: FamilyKind, d: number, out: SheetData): void {
   const { family, set } = ctx;
   const n = family.curves.length;
   // Points per page point: from the extent of the outermost curve and the plot box.
@@ -226,7 +241,7 @@ function plotLayers(ctx: SheetContext, templateLayout: SheetLayout, families: Fa
 
 // ── decoration in page points ──────────────────────────────────────────────────────────────────
 
-class Deco {
+export class Deco {
   constructor(
     readonly L: SheetLayout,
     readonly out: SheetData,
@@ -259,9 +274,9 @@ class Deco {
   }
 }
 
-const estWidth = (s: string, fontSize: number) => s.length * AVG_CHAR_EM * fontSize;
+export const estWidth = (s: string, fontSize: number) => s.length * AVG_CHAR_EM * fontSize;
 
-function truncate(s: string, w: number, fs: number): string {
+export function truncate(s: string, w: number, fs: number): string {
   if (estWidth(s, fs) <= w) return s;
   const n = Math.max(1, Math.floor(w / (AVG_CHAR_EM * fs)) - 1);
   return `${s.slice(0, n).trimEnd()}…`;

@@ -9,6 +9,13 @@ import { COLOURS, FONT_FAMILY, TEXT_STYLES, type TextStyle } from './style.js';
 
 export type VlSpec = Record<string, unknown>;
 export const DATASET_NAMES = ['curves', 'curveLabels', 'refs', 'refLabels', 'frame', 'texts', 'rects', 'rules', 'dots', 'rings'] as const satisfies readonly (keyof SheetData)[];
+/** Datasets of report plots (TemplateParams.overlay). */
+export const OVERLAY_DATASET_NAMES = ['extraCurves', 'loadMarks', 'loadLabels'] as const satisfies readonly (keyof SheetData)[];
+
+/** The datasets a template reads. */
+export function datasetNames(t: TemplateParams): readonly (keyof SheetData)[] {
+  return t.overlay ? [...DATASET_NAMES, ...OVERLAY_DATASET_NAMES] : DATASET_NAMES;
+}
 
 const q = (field: string, title?: string) => ({ field, type: 'quantitative' as const, ...(title !== undefined ? { title } : {}) });
 const raw = (field: string) => ({ field, type: 'quantitative' as const, scale: null });
@@ -19,8 +26,9 @@ const z = { field: 'z', type: 'quantitative' as const };
 export function sheetTemplate(t: TemplateParams): VlSpec {
   const { layout: L } = t;
   const u = L.u;
-  const x = { field: 'M', type: 'quantitative', scale: { zero: true, nice: true } };
-  const y = { field: 'P', type: 'quantitative', scale: { zero: true, nice: true } };
+  const o = t.overlay;
+  const x = { field: 'M', type: 'quantitative', scale: o ? { domain: o.domainM, nice: false, zero: false } : { zero: true, nice: true } };
+  const y = { field: 'P', type: 'quantitative', scale: o ? { domain: o.domainP, nice: false, zero: false } : { zero: true, nice: true } };
   const plotLine = (name: string, kind: string, mark: Record<string, unknown>) => ({
     name,
     data: { name: 'refs' },
@@ -86,6 +94,7 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
     { name: 'dots', data: { name: 'dots' }, mark: { type: 'point', shape: 'circle', filled: true, opacity: 1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), fill: lit('fill'), order: z } },
     ...(Object.keys(TEXT_STYLES) as TextStyle[]).map(textLayer),
   );
+  if (o) layers.splice(layers.findIndex((l) => l.name === 'rules'), 0, ...overlayLayers(x, y, u));
 
   return {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
@@ -123,6 +132,47 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
     },
     layer: layers,
   };
+}
+
+/**
+ * Load marks over the curves: the curve at the governing ρg required (ink, dashed), each load a small
+ * ink dot, the governing load a larger caution-red diamond; labels with a paper halo.
+ */
+function overlayLayers(x: object, y: object, u: number): Record<string, unknown>[] {
+  const gov = (v: 0 | 1) => [{ filter: `datum.governing === ${v}` }];
+  const label = (name: string, v: 0 | 1, extra: Record<string, unknown>) => ({
+    name,
+    data: { name: 'loadLabels' },
+    transform: gov(v),
+    mark: { type: 'text', align: 'left', baseline: 'middle', fontSize: round2((v ? 0.86 : 0.76) * u), fontWeight: v ? 'bold' : 'normal', ...extra },
+    encoding: { x: raw('x'), y: raw('y'), text: { field: 'text' }, order: z },
+  });
+  return [
+    {
+      name: 'extra_curves',
+      data: { name: 'extraCurves' },
+      mark: { type: 'line', color: COLOURS.ink, strokeWidth: 1.3, strokeDash: [6, 3], strokeJoin: 'round' },
+      encoding: { x, y, detail: { field: 'curve' }, order: { field: 'i' } },
+    },
+    {
+      name: 'load_marks',
+      data: { name: 'loadMarks' },
+      transform: gov(0),
+      mark: { type: 'point', shape: 'circle', filled: true, opacity: 1, size: round2(0.42 * u * u), color: COLOURS.ink, stroke: COLOURS.paper, strokeWidth: 0.5 },
+      encoding: { x, y, order: z },
+    },
+    {
+      name: 'load_governing',
+      data: { name: 'loadMarks' },
+      transform: gov(1),
+      mark: { type: 'point', shape: 'diamond', filled: true, opacity: 1, size: round2(1.5 * u * u), color: COLOURS.caution, stroke: COLOURS.paper, strokeWidth: 0.8 },
+      encoding: { x, y, order: z },
+    },
+    label('load_label_halo', 0, { stroke: COLOURS.paper, strokeWidth: 2.6, strokeJoin: 'round' }),
+    label('load_labels', 0, { color: COLOURS.ink }),
+    label('load_governing_label_halo', 1, { stroke: COLOURS.paper, strokeWidth: 3, strokeJoin: 'round' }),
+    label('load_governing_label', 1, { color: COLOURS.caution }),
+  ];
 }
 
 /** The full spec of one sheet: the template plus its datasets. */

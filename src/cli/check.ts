@@ -13,7 +13,7 @@ import { barSet } from '../section/bar-tables.js';
 import { barCount } from '../section/arrangements.js';
 import { DISPLAY_UNITS, parseQuantity, systemFactor, toDisplay, type UnitSystem } from '../units/index.js';
 import { generatorLabel } from '../version.js';
-import { fmt, num } from './format.js';
+import { fmt, num, reportDate } from './format.js';
 import { addSectionOptions, resolveSectionFlags, type ResolvedSection, type SectionFlags } from './section-flags.js';
 import { CAUTION } from './table.js';
 import { addEffectsOptions, applySlenderness, effectsAssumptions, effectsJson, effectsReport, effectsText, finishEffects, resolveEffects, type CheckEffects, type EffectsFlags } from './check-effects.js';
@@ -28,9 +28,16 @@ export interface CheckOptions extends SectionFlags, EffectsFlags {
   proposals?: string;
   json?: boolean;
   report?: string;
+  /** title block of a PDF/SVG report */
+  project?: string;
+  office?: string;
+  date?: string;
 }
 
-export const REPORT_FORMATS = ['.txt', '.json'] as const;
+export const REPORT_FORMATS = ['.txt', '.json', '.pdf', '.svg'] as const;
+/** Report formats drawn by the sheet renderer (imported only when asked for). */
+export const DRAWN_REPORT_FORMATS = ['.pdf', '.svg'] as const;
+const isDrawn = (file: string): boolean => (DRAWN_REPORT_FORMATS as readonly string[]).includes(extname(file).toLowerCase());
 
 /** Smallest practical longitudinal bar: #5 (US) or 12 mm (SI), common practice. */
 const MIN_PRACTICAL_BAR = { us: 0.625, si: 12 } as const;
@@ -102,16 +109,11 @@ function splitCsv(line: string): string[] {
 export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
   if (o.report !== undefined) {
     const ext = extname(o.report).toLowerCase();
-    if (ext === '.pdf' || ext === '.svg') {
-      throw new PmError(ERROR_CODES.invalidValue, '--report', 'needs the sheet renderer for PDF and SVG, which this build does not have yet', {
-        value: o.report,
-        allowed: REPORT_FORMATS.join(', '),
-      });
-    }
     if (!(REPORT_FORMATS as readonly string[]).includes(ext)) {
       throw new PmError(ERROR_CODES.invalidValue, '--report', 'has an unknown extension', { value: o.report, allowed: REPORT_FORMATS.join(', ') });
     }
   }
+  if (o.date !== undefined) reportDate(o.date);
   const section = resolveSectionFlags(o, true);
   const u = section.units;
   const { basis } = section;
@@ -181,16 +183,47 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
   return rc;
 }
 
-/** Runs the command and returns what it prints; writes the report file when asked. */
-export function runCheck(o: CheckOptions): string {
+/** Resolves the flags and checks every load (no output). */
+export function computeCheck(o: CheckOptions): { rc: ResolvedCheck; outcome: CheckOutcome } {
   const rc = resolveCheckOptions(o);
   if (rc.effects) applySlenderness(rc, rc.effects);
   const outcome = checkLoads(rc.request);
   if (rc.effects) finishEffects(rc, rc.effects, outcome);
+  return { rc, outcome };
+}
+
+/**
+ * Runs the command and returns what it prints; writes a .txt or .json report when asked. PDF and SVG
+ * reports are drawn, which is asynchronous: `runCheckAsync` (what the CLI calls) writes every format.
+ */
+export function runCheck(o: CheckOptions): string {
+  if (o.report !== undefined && isDrawn(o.report)) {
+    throw new PmError(ERROR_CODES.invalidValue, '--report', 'is a drawn report; write PDF and SVG reports with runCheckAsync', { value: o.report });
+  }
+  const { rc, outcome } = computeCheck(o);
   if (rc.report !== undefined) {
     const body = extname(rc.report).toLowerCase() === '.json' ? checkJson(rc, outcome) : checkReportText(rc, outcome);
     writeAtomic(rc.report, body);
   }
+  return rc.json ? checkJson(rc, outcome) : checkText(rc, outcome);
+}
+
+/** The command as the CLI runs it: every report format, the drawn ones through the lazily imported renderer. */
+export async function runCheckAsync(o: CheckOptions): Promise<string> {
+  if (o.report === undefined || !isDrawn(o.report)) return runCheck(o);
+  const { rc, outcome } = computeCheck(o);
+  const date = reportDate(o.date);
+  const { writeCheckReport } = await import('../sheet/check-report-file.js');
+  await writeCheckReport(rc.report!, {
+    rc,
+    outcome,
+    assumptions: [...checkAssumptions(rc, outcome), ...outcome.notes],
+    caution: CAUTION,
+    date,
+    ...(o.project !== undefined ? { project: o.project } : {}),
+    ...(o.office !== undefined ? { office: o.office } : {}),
+    generator: generatorLabel(),
+  });
   return rc.json ? checkJson(rc, outcome) : checkText(rc, outcome);
 }
 
@@ -446,6 +479,9 @@ export function registerCheck(program: Command, run: (fn: () => Promise<void> | 
     .option('--chart-gamma-step <step>', 'γ step of the emulated chart sheets', '0.05')
     .option('--proposals <n>', 'how many bar layouts to propose (0 for none)', '5')
     .option('--json', 'print JSON instead of the table')
-    .option('--report <file>', 'also write a report: .txt or .json')
-    .action((opts: CheckOptions) => run(() => void process.stdout.write(runCheck(opts))));
+    .option('--report <file>', 'also write a report: .txt, .json, or a one-page calculation sheet as .pdf or .svg')
+    .option('--project <text>', 'project name for the title block of a PDF/SVG report')
+    .option('--office <text>', 'office name for the title block of a PDF/SVG report')
+    .option('--date <yyyy-mm-dd>', 'date of a PDF/SVG report and its PDF metadata (default SOURCE_DATE_EPOCH, else today)')
+    .action((opts: CheckOptions) => run(async () => void process.stdout.write(await runCheckAsync(opts))));
 }

@@ -4,7 +4,7 @@
  * through `externalContext`, with text kept as glyphs so the PDF stays searchable.
  */
 import type { View } from 'vega';
-import { DATASET_NAMES, sheetTemplate } from '../chart/spec.js';
+import { datasetNames, sheetTemplate, type VlSpec } from '../chart/spec.js';
 import type { SheetData, TemplateParams } from '../chart/sheet-data.js';
 import { renderEnvironment, type RenderEnvironment } from './environment.js';
 
@@ -26,6 +26,13 @@ export interface SheetPage {
   data: SheetData;
 }
 
+/** A standalone spec (data inline, `autosize: none`) drawn with its top-left corner at (x, y) of a page. */
+export interface Inset {
+  spec: VlSpec;
+  x: number;
+  y: number;
+}
+
 export class SheetRenderer {
   private readonly views = new Map<string, ViewEntry>();
   private current: { entry: ViewEntry; data: SheetData } | undefined;
@@ -43,12 +50,12 @@ export class SheetRenderer {
     let entry = this.views.get(key);
     if (!entry) {
       const { vega, vegaLite } = this.env;
-      const compiled = vegaLite.compile({ ...spec, datasets: Object.fromEntries(DATASET_NAMES.map((n) => [n, []])) } as never).spec;
+      const compiled = vegaLite.compile({ ...spec, datasets: Object.fromEntries(datasetNames(page.template).map((n) => [n, []])) } as never).spec;
       entry = { view: new vega.View(vega.parse(compiled), { renderer: 'none' }), rows: new Map() };
       this.views.set(key, entry);
     }
     if (this.current?.entry !== entry || this.current.data !== page.data) {
-      for (const name of DATASET_NAMES) this.update(entry, name, page.data[name] as unknown as Row[]);
+      for (const name of datasetNames(page.template)) this.update(entry, name, (page.data[name] ?? []) as unknown as Row[]);
       await entry.view.runAsync();
       this.current = { entry, data: page.data };
     }
@@ -82,9 +89,35 @@ export class SheetRenderer {
     if (remove.length > 0 || insert.length > 0) entry.view.change(name, this.env.vega.changeset().remove(remove).insert(insert));
   }
 
-  async svg(page: SheetPage): Promise<string> {
+  async svg(page: SheetPage, insets: readonly Inset[] = []): Promise<string> {
     const view = await this.show(page);
-    return view.toSVG();
+    let svg = await view.toSVG();
+    for (const inset of insets) {
+      const inner = await this.specView(inset.spec);
+      const body = await inner.toSVG();
+      inner.finalize();
+      // a nested <svg> is its own viewport; the translate puts it in place
+      const end = svg.lastIndexOf('</svg>');
+      svg = `${svg.slice(0, end)}<g transform="translate(${inset.x},${inset.y})">${body}</g>${svg.slice(end)}`;
+    }
+    return svg;
+  }
+
+  /** A view of a standalone spec, run once (contour plots: one per file, nothing to reuse). */
+  async specView(spec: VlSpec): Promise<View> {
+    const { vega, vegaLite } = this.env;
+    const view = new vega.View(vega.parse(vegaLite.compile(spec as never).spec), { renderer: 'none' });
+    await view.runAsync();
+    return view;
+  }
+
+  async specSvg(spec: VlSpec): Promise<string> {
+    const view = await this.specView(spec);
+    try {
+      return await view.toSVG();
+    } finally {
+      view.finalize();
+    }
   }
 
   async png(page: SheetPage, scale: number): Promise<Buffer> {
@@ -117,8 +150,7 @@ export class PdfPages {
 
   constructor(private readonly renderer: SheetRenderer) {}
 
-  async add(page: SheetPage): Promise<void> {
-    const { w, h } = page.template.layout.page;
+  private newPage(w: number, h: number): import('canvas').CanvasRenderingContext2D {
     if (!this.canvas || !this.ctx) {
       this.canvas = this.renderer.env.canvas.createCanvas(w, h, 'pdf');
       this.ctx = this.canvas.getContext('2d');
@@ -126,13 +158,36 @@ export class PdfPages {
     } else {
       (this.ctx as unknown as { addPage(w: number, h: number): void }).addPage(w, h);
     }
-    const ctx = this.ctx;
-    ctx.textDrawingMode = 'glyph';
-    const view = await this.renderer.show(page);
+    this.ctx.textDrawingMode = 'glyph';
+    this.count++;
+    return this.ctx;
+  }
+
+  /** Draws a view at (x, y): vega scales and translates an external context from its current transform. */
+  private async draw(ctx: import('canvas').CanvasRenderingContext2D, view: View, x = 0, y = 0): Promise<void> {
     ctx.save();
+    if (x !== 0 || y !== 0) ctx.translate(x, y);
     await view.toCanvas(1, { externalContext: ctx } as never);
     ctx.restore();
-    this.count++;
+  }
+
+  async add(page: SheetPage, insets: readonly Inset[] = []): Promise<void> {
+    const { w, h } = page.template.layout.page;
+    const ctx = this.newPage(w, h);
+    await this.draw(ctx, await this.renderer.show(page));
+    for (const inset of insets) {
+      const view = await this.renderer.specView(inset.spec);
+      await this.draw(ctx, view, inset.x, inset.y);
+      view.finalize();
+    }
+  }
+
+  /** A page holding one standalone spec of the given size. */
+  async addSpec(spec: VlSpec, w: number, h: number): Promise<void> {
+    const ctx = this.newPage(w, h);
+    const view = await this.renderer.specView(spec);
+    await this.draw(ctx, view);
+    view.finalize();
   }
 
   toBuffer(): Buffer {
