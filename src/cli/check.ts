@@ -259,7 +259,7 @@ function sectionLine(rc: ResolvedCheck): string {
   const s = rc.section;
   const un = unitsOf(s.units);
   const dims = s.shape.kind === 'rectangle' ? `${fmt(s.shape.b)} × ${fmt(s.shape.h)} ${un.length}` : `D = ${fmt(s.shape.diameter)} ${un.length}`;
-  return `${s.basis.title}, ${dims} ${s.basis.transverse}, ${s.arrangement.kind}, f′c = ${fmt(s.basis.fc)} ${un.stress}, fy = ${fmt(s.basis.fy)} ${un.stress}, γ = ${fmt(s.gamma, 4)} (${s.gammaSource})`;
+  return `${s.basis.title}, ${dims} ${s.basis.transverse}, ${s.arrangement.kind}, ${s.basis.symbols.concreteStrength} = ${fmt(s.basis.fc)} ${un.stress}, ${s.basis.symbols.steelStrength} = ${fmt(s.basis.fy)} ${un.stress}, γ = ${fmt(s.gamma, 4)} (${s.gammaSource})`;
 }
 
 function resultsTable(rc: ResolvedCheck, outcome: CheckOutcome): string {
