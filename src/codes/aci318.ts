@@ -135,6 +135,9 @@ function resolveAci(edition: Edition, input: BasisInput): Basis {
     rhoLimits: { min: 0.01, max: 0.08 }, // 10.6.1.1
     steelAreaLimits: (_p: number, ag: number) => ({ min: 0.01 * ag, max: 0.08 * ag }), // 10.6.1.1
     minimumMoment: () => 0, // no minimum eccentricity for short columns; the cap 22.4.2.1 stands in for it
+    // 25.2.3: clear spacing ≥ max(1.5 in, 1.5·db, 4/3·dagg) for columns; 38 mm in SI.
+    minimumClearSpacing: (db: number, dg: number) => Math.max(units === 'us' ? 1.5 : 38, 1.5 * db, (4 / 3) * dg),
+    clearSpacingRule: `clear spacing ≥ max(${units === 'us' ? '1.5 in' : '38 mm'}, 1.5·db, 4/3·aggregate) (${edition.title} 25.2.3)`,
     barSet: units === 'us' ? 'astm-a615' : 'metric',
     factorSummary: `φ ${phiC}–0.90 by εt (${edition.clause}) · Pn,max ${capRatio}·Po (22.4.2.1)`,
     parameters: {

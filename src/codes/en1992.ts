@@ -211,6 +211,9 @@ function resolveEc2(input: BasisInput): Basis {
     steelAreaLimits: (NEd: number, Ac: number) => ({ min: Math.max((0.1 * Math.max(0, NEd)) / fyd, 0.002 * Ac), max: 0.04 * Ac }),
     // 6.1(4): e0 = max(h/30, 20 mm) for compression; N in N, h in mm, moment in N·mm.
     minimumMoment: (NEd: number, h: number) => Math.max(0, NEd) * Math.max(h / 30, 20),
+    // 8.2(2): clear distance ≥ max(k1·φ, dg + k2, 20 mm), recommended k1 = 1, k2 = 5 mm.
+    minimumClearSpacing: (db: number, dg: number) => Math.max(db, dg > 0 ? dg + 5 : 0, 20),
+    clearSpacingRule: 'clear spacing ≥ max(k1·φ, dg + k2, 20 mm) with the recommended k1 = 1, k2 = 5 mm (8.2(2))',
     barSet: 'en-common',
     factorSummary: `αcc ${alphaCc} · γc ${gammaC} · γs ${gammaS} (${nonDefault.length > 0 ? 'not all recommended: check the NA' : 'recommended'})`,
     biaxialExponent: en1992BiaxialExponent, // 5.8.9(4) Eq. 5.39

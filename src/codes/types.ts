@@ -119,6 +119,13 @@ export interface Basis {
    * (EN 1992-1-1 6.1(4) minimum eccentricity); 0 where the basis sets none for short columns.
    */
   minimumMoment(axialDemand: number, depth: number): number;
+  /**
+   * Smallest clear distance between adjacent longitudinal bars of diameter db with maximum aggregate
+   * size dg (0 when not given: the aggregate term is not checked), in the system's length unit.
+   */
+  minimumClearSpacing(barDiameter: number, aggregate: number): number;
+  /** the rule above as text with its clause, for reports */
+  readonly clearSpacingRule: string;
   /** which bar-size table proposals draw from (src/section/bar-tables.ts) */
   readonly barSet: BarSetId;
   /**
