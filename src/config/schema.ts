@@ -108,7 +108,7 @@ export const ChartSetFileSchema = z
     rhoG: z.union([z.array(z.number()), NumberRange]).describe('ρg family (geometric ratio As/Ag); default 0.01 to 0.08 in 0.01 steps; give this or omega').optional(),
     omega: z
       .union([z.array(z.number()), NumberRange])
-      .describe('instead of rhoG: family of mechanical ratios ω = As·fyd/(Ac·fcd) (fy/f′c for ACI 318 and CSA A23.3), customary on European charts; each sheet converts ω to ρg with its own design strengths')
+      .describe('instead of rhoG: family of mechanical ratios ω = As·fyd/(Ac·fcd) (fy/f′c for ACI 318, φs·fy/f′c for CSA A23.3), customary on European charts; each sheet converts ω to ρg with its own design strengths')
       .optional(),
     referenceLines: z
       .object({
