@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
-# The main job on the bundled demo: set up what is missing, then build the demo chart-set book.
+# The main job on the bundled demos: set up what is missing, then build the two demo chart-set books (ACI 318-19, EN 1992-1-1).
 set -euo pipefail
 cd "$(dirname "$0")/.."
 bash scripts/setup.sh
 node bin/pmchart.js set charts-config/demo.json "$@"
+node bin/pmchart.js set charts-config/demo-eu.json "$@"

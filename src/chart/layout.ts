@@ -25,7 +25,7 @@ export function sheetLayout(pageW: number, pageH: number, tableRows: number): Sh
   const u = Math.min(pageW, pageH) / 100 * 1.0 + 0.8;
   const m = 3.2 * u;
   const header: Box = { x: m, y: m, w: pageW - 2 * m, h: 4.2 * u };
-  const tbH = 7.6 * u;
+  const tbH = 10.2 * u; // three rows: sheet, materials and people, factors and normalisation
   const titleBlock: Box = { x: m, y: pageH - m - tbH, w: pageW - 2 * m, h: tbH };
   const gap = 2.2 * u;
   const bodyTop = header.y + header.h + gap;

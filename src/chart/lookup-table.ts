@@ -14,6 +14,8 @@ export interface LookupPoint {
 }
 
 export interface LookupRow {
+  /** the mechanical ratio the curve was asked for, on ω sets */
+  omega?: number;
   rhoG: number;
   points: LookupPoint[];
 }
@@ -26,11 +28,12 @@ export interface LookupTable {
 
 const scaled = (p: PointValues | null, d: number): PointValues | null => (p === null ? null : { ...p, P: p.P / d, M: p.M / d });
 
-/** Key points of every curve, P and M divided by `divisor`; c/h, εt and φ as computed. */
-export function lookupTable(family: CurveFamily, divisor: number): LookupTable {
+/** Key points of every curve, P and M divided by `divisor`; c/h, εt and φ as computed. `omegas` key the rows of ω sets (same order as the curves). */
+export function lookupTable(family: CurveFamily, divisor: number, omegas?: readonly number[]): LookupTable {
   return {
     divisor,
-    rows: family.curves.map((c) => ({
+    rows: family.curves.map((c, k) => ({
+      ...(omegas ? { omega: omegas[k]! } : {}),
       rhoG: c.rho,
       points: c.keyPoints.map((k: KeyPoint) => ({ id: String(k.id), label: k.label, nominal: scaled(k.nominal, divisor), design: scaled(k.design, divisor) })),
     })),
@@ -47,13 +50,11 @@ export function columnsFor(id: string): ('P' | 'M')[] {
 const SHORT: Record<string, string> = {
   'pure-compression': 'pure axial',
   'axial-cap': 'axial cap',
-  decompression: 'εt = 0',
-  balanced: 'εt = εty',
   'pure-bending': 'P = 0',
   'pure-tension': 'pure tension',
 };
 
-/** Short column-group heading for a key point. */
+/** Short column-group heading for a key point; strain states keep the basis's own symbols (εt = εty, εs = εyd). */
 export function shortLabel(p: Pick<LookupPoint, 'id' | 'label'>): string {
   if (SHORT[p.id]) return SHORT[p.id]!;
   if (p.id === 'tension-controlled') return 'tension-ctl. limit';
@@ -64,15 +65,17 @@ export function shortLabel(p: Pick<LookupPoint, 'id' | 'label'>): string {
 /** Rounds for files: six significant digits keeps CSV/JSON readable and deterministic. */
 export const sig = (x: number): number => (Number.isFinite(x) ? Number(x.toPrecision(6)) : x);
 
+/** CSV rows per key point and family; ω sets lead with an `omega` column. */
 export function tableCsv(t: LookupTable): string {
-  const lines = ['rhoG,point,label,family,cOverH,epsT,phi,P,M'];
+  const withOmega = t.rows.some((r) => r.omega !== undefined);
+  const lines = [`${withOmega ? 'omega,' : ''}rhoG,point,label,family,cOverH,epsT,phi,P,M`];
   for (const r of t.rows) {
     for (const p of r.points) {
       for (const fam of ['nominal', 'design'] as const) {
         const v = p[fam];
         if (!v) continue;
         const label = `"${p.label.replace(/"/g, '""')}"`;
-        lines.push([r.rhoG, p.id, label, fam, sig(v.cOverH), sig(v.epsT), sig(v.phi), sig(v.P), sig(v.M)].join(','));
+        lines.push([...(withOmega ? [r.omega] : []), sig(r.rhoG), p.id, label, fam, sig(v.cOverH), sig(v.epsT), sig(v.phi), sig(v.P), sig(v.M)].join(','));
       }
     }
   }

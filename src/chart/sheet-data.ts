@@ -7,7 +7,8 @@
 import type { CurveFamily, PointValues } from '../analysis/family.js';
 import type { Basis } from '../codes/types.js';
 import { describeArrangement, describeShape, describeTransverse, fmt, stressText } from '../config/describe.js';
-import type { ResolvedChartSet, ResolvedSheet } from '../config/types.js';
+import type { BasisSymbols } from '../codes/types.js';
+import { RATIO_SYMBOL, type ResolvedChartSet, type ResolvedSheet } from '../config/types.js';
 import { DISPLAY_UNITS } from '../units/index.js';
 import { sheetLayout, type Box, type SheetLayout } from './layout.js';
 import { columnsFor, lookupTable, shortLabel, type FamilyKind, type LookupTable } from './lookup-table.js';
@@ -94,8 +95,19 @@ const r5 = (x: number): number => Math.round(x * 1e5) / 1e5 + 0;
 /** The primary family: the one labelled, tabulated and used for reference lines. */
 export const primaryFamily = (set: ResolvedChartSet): FamilyKind => (set.families === 'nominal' ? 'nominal' : 'design');
 
+/** "ν = " where the basis names its dimensionless value, "" otherwise. */
+const named = (symbol: string | undefined): string => (symbol ? `${symbol} = ` : '');
+
+/** How the sheet's values are normalised, in one line: "ν = NRd/(fcd·Ag), μ = MRd/(fcd·Ag·h), fcd = 40 MPa". */
+export function normalisationText(set: ResolvedChartSet, sy: BasisSymbols, P: string, M: string, normalisingStress: number): string {
+  const su = DISPLAY_UNITS[set.units].stress;
+  if (set.normalisation !== 'dimensionless') return `${P}/Ag and ${M}/(Ag·h) in ${su}`;
+  const ns = sy.normalisingStress;
+  return `${named(sy.dimensionlessAxial)}${P}/(${ns}·Ag), ${named(sy.dimensionlessMoment)}${M}/(${ns}·Ag·h), ${ns} = ${stressText(normalisingStress, set.units)}`;
+}
+
 export function templateParams(set: ResolvedChartSet, basis: Basis): TemplateParams {
-  const layout = sheetLayout(set.paper.widthPt, set.paper.heightPt, set.rhos.length);
+  const layout = sheetLayout(set.paper.widthPt, set.paper.heightPt, set.ratios.values.length);
   const sy = basis.symbols;
   const fam = primaryFamily(set);
   const families: FamilyKind[] = set.families === 'both' ? ['nominal', 'design'] : [fam];
@@ -106,8 +118,8 @@ export function templateParams(set: ResolvedChartSet, basis: Basis): TemplatePar
   const ns = sy.normalisingStress;
   return {
     layout,
-    xTitle: dimless ? `${moment} / (${ns} · Ag · h)   (dimensionless)` : `${moment} / (Ag · h)   (${su})`,
-    yTitle: dimless ? `${axial} / (${ns} · Ag)   (dimensionless)` : `${axial} / Ag   (${su})`,
+    xTitle: dimless ? `${named(sy.dimensionlessMoment)}${moment} / (${ns} · Ag · h)   (dimensionless)` : `${moment} / (Ag · h)   (${su})`,
+    yTitle: dimless ? `${named(sy.dimensionlessAxial)}${axial} / (${ns} · Ag)   (dimensionless)` : `${axial} / Ag   (${su})`,
     families,
   };
 }
@@ -118,7 +130,7 @@ export function buildSheet(ctx: SheetContext): BuiltSheet {
   const template = templateParams(set, basis);
   const L = template.layout;
   const divisor = set.normalisation === 'dimensionless' ? basis.normalisingStress : 1;
-  const table = lookupTable(family, divisor);
+  const table = lookupTable(family, divisor, set.ratios.kind === 'omega' ? set.ratios.values : undefined);
   const primary = primaryFamily(set);
   const data: SheetData = { curves: [], curveLabels: [], refs: [], refLabels: [], frame: [], texts: [], rects: [], rules: [], dots: [], rings: [] };
 
@@ -129,6 +141,12 @@ export function buildSheet(ctx: SheetContext): BuiltSheet {
   sidePanel(ctx, deco);
   titleBlock(ctx, deco);
   return { template, data, table };
+}
+
+/** A curve's label: "ρg 0.02", or "ω 0.2" on ω sets (the value the set asked for, not a rounded conversion). */
+export function curveKeyText(set: ResolvedChartSet, rho: number, k: number): string {
+  const { kind, values } = set.ratios;
+  return `${RATIO_SYMBOL[kind]} ${fmt(kind === 'omega' ? values[k]! : rho, 4)}`;
 }
 
 // ── plot ────────────────────────────────────────────────────────────────────────────────────────
@@ -175,7 +193,7 @@ export function plotLayers(ctx: { family: CurveFamily; set: Pick<ResolvedChartSe
       if (p0 <= level && p1 >= level) {
         const t = p1 === p0 ? 0 : (level - p0) / (p1 - p0);
         const m = (M[i - 1]! + t * (M[i]! - M[i - 1]!)) / d;
-        out.curveLabels.push({ M: r5(m), P: r5(level), text: `ρg ${fmt(c.rho, 4)}`, colour: curveColour(k, n), z: out.curveLabels.length });
+        out.curveLabels.push({ M: r5(m), P: r5(level), text: curveKeyText(set, c.rho, k), colour: curveColour(k, n), z: out.curveLabels.length });
         break;
       }
     }
@@ -322,14 +340,17 @@ function lookupPanel(ctx: SheetContext, table: LookupTable, primary: FamilyKind,
   const P = primary === 'design' ? sy.designAxial : sy.nominalAxial;
   const M = primary === 'design' ? sy.designMoment : sy.nominalMoment;
   const dimless = ctx.set.normalisation === 'dimensionless';
-  const unitText = dimless ? `P = ${P}/(${sy.normalisingStress}·Ag), M = ${M}/(${sy.normalisingStress}·Ag·h), dimensionless` : `P = ${P}/Ag, M = ${M}/(Ag·h), ${su}`;
+  const pCol = dimless && sy.dimensionlessAxial ? sy.dimensionlessAxial : 'P';
+  const mCol = dimless && sy.dimensionlessMoment ? sy.dimensionlessMoment : 'M';
+  const unitText = dimless ? `${pCol} = ${P}/(${sy.normalisingStress}·Ag), ${mCol} = ${M}/(${sy.normalisingStress}·Ag·h), dimensionless` : `P = ${P}/Ag, M = ${M}/(Ag·h), ${su}`;
+  const key = RATIO_SYMBOL[ctx.set.ratios.kind];
   g.text('heading', b.x, b.y + 1.0 * u, `Key points of the ${primary === 'design' ? sy.designFamily : sy.nominalFamily} curves`);
   g.text('body', b.x + 0.52 * b.w, b.y + 1.0 * u, unitText, 0.48 * b.w);
 
   const top = b.y + 2.0 * u;
   g.rect({ x: b.x, y: top, w: b.w, h: 3 * line + 0.2 * u }, COLOURS.panel);
   let x = b.x + rhoW;
-  g.text('cellHead', b.x + rhoW / 2, top + 0.9 * line, 'ρg');
+  g.text('cellHead', b.x + rhoW / 2, top + 0.9 * line, key);
   for (const { p, cols } of groups) {
     const w = colW * cols.length;
     const mid = x + w / 2;
@@ -345,7 +366,7 @@ function lookupPanel(ctx: SheetContext, table: LookupTable, primary: FamilyKind,
     if (v && primary === 'design' && p.id !== 'axial-cap' && resultantFactor) facts.push(`φ ${v.phi.toFixed(2)}`);
     if (primary === 'design' && p.id === 'axial-cap') facts.push('per ρg');
     g.text('cellSub', mid, top + 1.9 * line, facts.join(' · '), w - 0.2 * u);
-    cols.forEach((c, k) => g.text('cellSub', x + colW * (k + 0.5), top + 2.85 * line, c));
+    cols.forEach((c, k) => g.text('cellSub', x + colW * (k + 0.5), top + 2.85 * line, c === 'P' ? pCol : mCol));
     g.rule(x, top, x, top + (3 + table.rows.length) * line + 0.4 * u, COLOURS.rule, 0.5);
     x += w;
   }
@@ -353,7 +374,7 @@ function lookupPanel(ctx: SheetContext, table: LookupTable, primary: FamilyKind,
   table.rows.forEach((r, k) => {
     if (k % 2 === 1) g.rect({ x: b.x, y, w: b.w, h: line }, '#f8fafb');
     const base = y + 0.78 * line;
-    g.text('cellRho', b.x + 0.6 * u, base, fmt(r.rhoG, 4));
+    g.text('cellRho', b.x + 0.6 * u, base, fmt(r.omega ?? r.rhoG, 4));
     let cx = b.x + rhoW;
     for (const { p, cols } of groups) {
       const v = r.points.find((z) => z.id === p.id)?.[primary];
@@ -375,7 +396,7 @@ function sidePanel(ctx: SheetContext, g: Deco): void {
 
   // pictogram, to scale from the unit-depth bars of the family
   g.text('heading', b.x, b.y + 1.0 * u, 'Section (to scale)');
-  const picH = Math.min(0.3 * b.h, 0.62 * b.w);
+  const picH = Math.min(0.27 * b.h, 0.62 * b.w);
   const box: Box = { x: b.x, y: b.y + 2.0 * u, w: b.w, h: picH };
   g.rect(box, COLOURS.panel);
   const aspect = sheet.shape.kind === 'rectangle' ? sheet.shape.aspect : 1;
@@ -386,7 +407,8 @@ function sidePanel(ctx: SheetContext, g: Deco): void {
   const hh = scale / 2;
   if (sheet.shape.kind === 'circle') g.dot(cx, cy, scale, COLOURS.ink, true);
   else g.rect({ x: cx - hw, y: cy - hh, w: 2 * hw, h: 2 * hh }, COLOURS.paper, COLOURS.ink, 1.1);
-  const rhoShown = set.rhos[Math.floor((set.rhos.length - 1) / 2)] ?? 0.02;
+  const mid = Math.floor((family.curves.length - 1) / 2);
+  const rhoShown = family.curves[mid]?.rho ?? 0.02;
   for (const bar of family.bars) {
     const area = bar.area * rhoShown; // the family's unit-depth bars add up to Ag at ρg = 1
     const dia = Math.sqrt((4 * area) / Math.PI) * scale;
@@ -409,7 +431,7 @@ function sidePanel(ctx: SheetContext, g: Deco): void {
   g.text('dimLeft', xr + 1.0 * u, cy + 0.3 * u, `γh = ${sheet.gamma.toFixed(2)} h`);
   g.text('dim', cx, cy - hh - 1.0 * u, 'compression face');
   g.rule(cx - hw - 0.8 * u, cy, cx + hw + 0.8 * u, cy, COLOURS.faint, 0.4);
-  g.text('caption', box.x + 0.8 * u, box.y + box.h - 0.8 * u, `${family.bars.length} bars, drawn at ρg = ${fmt(rhoShown, 4)}; thin line: bending axis`, box.w - 1.6 * u);
+  g.text('caption', box.x + 0.8 * u, box.y + box.h - 0.8 * u, `${family.bars.length} bars, drawn at ρg = ${fmt(rhoShown, 4)}${set.ratios.kind === 'omega' ? ` (ω ${fmt(set.ratios.values[mid]!, 4)})` : ''}; thin line: bending axis`, box.w - 1.6 * u);
 
   // basis parameters
   let y = box.y + box.h + 2.4 * u;
@@ -427,6 +449,12 @@ function sidePanel(ctx: SheetContext, g: Deco): void {
       : `Values are divided by Ag (and h for moments), in ${su}; h is the depth in the bending plane (D for circular columns).`,
     'Short column: slenderness, creep and second-order effects are not included.',
   ];
+  if (set.ratios.kind === 'omega') {
+    const fyd = basis.design.steel.yieldStress;
+    extra.unshift(
+      `Curves per mechanical ratio ω = ρg·σy/${basis.symbols.normalisingStress}, σy = ${stressText(fyd, set.units)} the design yield stress: ρg = ω·${fmt(basis.normalisingStress / fyd, 4)} here.`,
+    );
+  }
   for (const note of [...basis.notes, ...extra]) {
     g.text('body', b.x, y, '•');
     y = g.paragraph('body', b.x + 1.0 * u, y, b.w - 1.0 * u, note) + 0.35 * u;
@@ -446,7 +474,13 @@ function titleBlock(ctx: SheetContext, g: Deco): void {
   const { set, sheet, family } = ctx;
   const tb = set.titleBlock;
   const basis = family.basis;
-  const fam = set.families === 'both' ? `${basis.symbols.nominalFamily} and ${basis.symbols.designFamily}` : set.families === 'design' ? basis.symbols.designFamily : basis.symbols.nominalFamily;
+  const sy = basis.symbols;
+  const fam = set.families === 'both' ? `${sy.nominalFamily} and ${sy.designFamily}` : set.families === 'design' ? sy.designFamily : sy.nominalFamily;
+  const primary = primaryFamily(set);
+  const P = set.families === 'both' ? `${sy.nominalAxial}, ${sy.designAxial}` : primary === 'design' ? sy.designAxial : sy.nominalAxial;
+  const M = set.families === 'both' ? `${sy.nominalMoment}, ${sy.designMoment}` : primary === 'design' ? sy.designMoment : sy.nominalMoment;
+  const ratios = set.ratios.values;
+  const curves = `${fam} · ${RATIO_SYMBOL[set.ratios.kind]} ${fmt(ratios[0]!, 4)}–${fmt(ratios[ratios.length - 1]!, 4)}`;
   const rows: [string, string, number][][] = [
     [
       ['office', tb.office, 3],
@@ -456,15 +490,19 @@ function titleBlock(ctx: SheetContext, g: Deco): void {
     ],
     [
       ['design basis', basis.title, 1.3],
-      ['materials', `f′c ${stressText(sheet.fc, set.units)} · fy ${stressText(sheet.fy, set.units)}`, 1.9],
+      ['materials', `${sy.concreteStrength} ${stressText(sheet.fc, set.units)} · ${sy.steelStrength} ${stressText(sheet.fy, set.units)}`, 1.9],
       ['γ', sheet.gamma.toFixed(2), 0.6],
       ['shape · bars', `${describeShape(sheet.shape)} · ${describeArrangement(sheet.arrangement)}`, 3.7],
       ['transverse', describeTransverse(sheet.transverse), 0.9],
-      ['curves', fam, 1.5],
       ['prepared · checked', [tb.preparedBy, tb.checkedBy].filter(Boolean).join(' · ') || '—', 1.5],
       ['rev.', tb.revision, 0.5],
       ['date', tb.date, 1.1],
       ['generated by', ctx.generator, 1.4],
+    ],
+    [
+      ['factors', basis.factorSummary, 4.6],
+      ['normalisation', normalisationText(set, sy, P, M, basis.normalisingStress), 4.6],
+      ['curves', curves, 2.4],
     ],
   ];
   g.rect(b, COLOURS.paper, COLOURS.ink, 0.9);

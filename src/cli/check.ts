@@ -156,7 +156,7 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
       arrangement: section.arrangement,
       area: count * section.bar.area,
       gamma: section.gamma,
-      description: `${count} ${section.bar.name}`,
+      description: /^\d+(\.\d+)?$/.test(section.bar.name) ? `${count} × ${section.bar.name} mm` : `${count} ${section.bar.name}`,
     };
   }
 
@@ -262,14 +262,14 @@ export function checkAssumptions(rc: ResolvedCheck, outcome: CheckOutcome): stri
     `Uniaxial bending about the axis across b; the moment sign is ignored (bars symmetric about the bending axis).`,
     `ρg required is solved exactly at the actual γ = ${fmt(rc.section.gamma, 4)} with the bars smeared in the chosen arrangement; the ${b.symbols.designFamily} curve includes the axial cap.`,
     `Chart readings emulate sheets at γ steps of ${outcome.chart.gammaStep} with curves at ρg ${outcome.chart.rhos.map((r) => fmt(r, 3)).join(', ')}: linear between curves along the load ray, linear in γ between sheets; the traditional reading takes the next lower sheet and the next curve out.`,
-    `ρg limits ${fmt(lim.min, 3)}–${fmt(lim.max, 3)} of Ag.`,
+    `ρg limits ${fmt(lim.min, 3)}–${fmt(lim.max, 3)} of Ag at zero axial load; each load uses the basis's limits for its own axial force (the minimum grows with NEd in EN 1992-1-1 9.5.2(2)), chart readings included.`,
   ];
   if (rc.request.barSelection) {
     const d = rc.request.barSelection.detailing;
     out.push(
       d.kind === 'cover'
-        ? `Bar proposals: one bar size each, centres at cover + tie + db/2 from the faces (γ recomputed per size); clear spacing ≥ max(${b.units === 'us' ? '1.5 in' : '38 mm'}, 1.5·db, 4/3·aggregate) (ACI 318-19 25.2.3); at least ${b.transverse === 'spiral' ? 6 : 4} bars (ACI 318-19 10.7.3.1, from memory); sizes from ${barSet(b.barSet).source}, ${b.units === 'us' ? '#5' : '12 mm'} and up (common practice).`
-        : `Bar proposals: γ was given, so bar centres stay at (1 − γ)·h/2 from the faces for every size and the cover is not checked; clear spacing ≥ max(${b.units === 'us' ? '1.5 in' : '38 mm'}, 1.5·db, 4/3·aggregate) (ACI 318-19 25.2.3); at least ${b.transverse === 'spiral' ? 6 : 4} bars (ACI 318-19 10.7.3.1, from memory).`,
+        ? `Bar proposals: one bar size each, centres at cover + tie + db/2 from the faces (γ recomputed per size); ${b.clearSpacingRule}; at least ${b.transverse === 'spiral' ? 6 : 4} bars (ACI 318-19 10.7.3.1, from memory; kept for every basis as common practice); sizes from ${barSet(b.barSet).source}, ${b.units === 'us' ? '#5' : '12 mm'} and up (common practice).`
+        : `Bar proposals: γ was given, so bar centres stay at (1 − γ)·h/2 from the faces for every size and the cover is not checked; ${b.clearSpacingRule}; at least ${b.transverse === 'spiral' ? 6 : 4} bars (ACI 318-19 10.7.3.1, from memory; kept for every basis as common practice).`,
     );
     if (rc.aggregate === undefined) out.push('No maximum aggregate size given: the aggregate term of the spacing rule is not checked.');
   }
@@ -278,7 +278,12 @@ export function checkAssumptions(rc: ResolvedCheck, outcome: CheckOutcome): stri
 }
 
 const statusText = (r: LoadResult): string =>
-  r.rhoStatus === 'not-possible' ? `not possible (ρg > ${fmt(r.strain.atRho, 3)})` : r.rhoStatus === 'minimum-governs' ? 'minimum' : r.governedBy === 'cap' ? 'cap' : '';
+  [
+    r.rhoStatus === 'not-possible' ? `not possible (ρg > ${fmt(r.strain.atRho, 3)})` : r.rhoStatus === 'minimum-governs' ? 'minimum' : r.governedBy === 'cap' ? 'cap' : '',
+    r.Mdesign > Math.abs(r.Mu) ? 'M raised to minimum' : '',
+  ]
+    .filter(Boolean)
+    .join('; ');
 
 function table(headers: string[], rows: string[][]): string {
   const w = headers.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? '').length)));
@@ -292,7 +297,7 @@ function sectionLine(rc: ResolvedCheck): string {
   const s = rc.section;
   const un = unitsOf(s.units);
   const dims = s.shape.kind === 'rectangle' ? `${fmt(s.shape.b)} × ${fmt(s.shape.h)} ${un.length}` : `D = ${fmt(s.shape.diameter)} ${un.length}`;
-  return `${s.basis.title}, ${dims} ${s.basis.transverse}, ${s.arrangement.kind}, f′c = ${fmt(s.basis.fc)} ${un.stress}, fy = ${fmt(s.basis.fy)} ${un.stress}, γ = ${fmt(s.gamma, 4)} (${s.gammaSource})`;
+  return `${s.basis.title}, ${dims} ${s.basis.transverse}, ${s.arrangement.kind}, ${s.basis.symbols.concreteStrength} = ${fmt(s.basis.fc)} ${un.stress}, ${s.basis.symbols.steelStrength} = ${fmt(s.basis.fy)} ${un.stress}, γ = ${fmt(s.gamma, 4)} (${s.gammaSource})`;
 }
 
 function resultsTable(rc: ResolvedCheck, outcome: CheckOutcome): string {

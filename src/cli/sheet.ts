@@ -57,6 +57,8 @@ export async function sheetSetFromFlags(o: SheetOptions): Promise<{ set: Resolve
     gamma: section.gamma,
     arrangement: section.arrangement,
     transverse: section.basis.transverse,
+    basisOptions: {},
+    variantOptions: {},
   };
   const fam = families === 'both' ? 'nominal and factored' : families;
   const set: ResolvedChartSet = {
@@ -68,10 +70,10 @@ export async function sheetSetFromFlags(o: SheetOptions): Promise<{ set: Resolve
     basisOptions: {},
     normalisation: o.dimensionless ? 'dimensionless' : 'stress',
     families: families as ResolvedChartSet['families'],
-    rhos,
+    ratios: { kind: 'rhoG', values: rhos },
     referenceLines: { strainStates: true, eccentricities: ecc, axialCap: true },
     outputs: { pdf: true, svg: false, png: false, pngScale: 2, tables: false },
-    sheets: [{ ...partial, title: (() => { const t = fillPattern(DEFAULT_TITLE_PATTERN, titleFields(partial, section.units, fam)); return t.charAt(0).toUpperCase() + t.slice(1); })(), fileStem: fileStemFor(partial, section.units, 1) }],
+    sheets: [{ ...partial, title: (() => { const t = fillPattern(DEFAULT_TITLE_PATTERN, titleFields(partial, section.units, fam, section.basis.symbols)); return t.charAt(0).toUpperCase() + t.slice(1); })(), fileStem: fileStemFor(partial, section.units, 1) }],
   };
   return { set, basis: section.basis, capContext: section.capContext };
 }
@@ -88,7 +90,7 @@ export async function runSheet(o: SheetOptions): Promise<string> {
   const { buildSheet } = await import('../chart/sheet-data.js');
   const { SheetRenderer } = await import('../render/renderer.js');
   const { writeFileAtomic } = await import('../sheet/files.js');
-  const family = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: set.rhos, capContext, basePoints: SHEET_BASE_POINTS });
+  const family = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: set.ratios.values, capContext, basePoints: SHEET_BASE_POINTS });
   const built = buildSheet({ set, sheet, family, sheetNumber: 1, sheetCount: 1, generator: generatorLabel() });
   const page = { template: built.template, data: built.data };
   const renderer = await SheetRenderer.create();

@@ -56,11 +56,25 @@ const EDITIONS: Record<'aci318-19' | 'aci318-14', Edition> = {
   },
 };
 
+/** Symbols of ACI 318 (Chapter 2 notation): f′c, fy; φ on the nominal strengths. */
+export const ACI_SYMBOLS = {
+  nominalAxial: 'Pn',
+  nominalMoment: 'Mn',
+  designAxial: 'φPn',
+  designMoment: 'φMn',
+  designFamily: 'φ-factored',
+  nominalFamily: 'nominal',
+  normalisingStress: 'f′c',
+  concreteStrength: 'f′c',
+  steelStrength: 'fy',
+} as const;
+
 function makeAci(edition: Edition): DesignCode {
   return {
     id: edition.id,
     title: edition.title,
     unitSystems: ['us', 'si'],
+    symbols: ACI_SYMBOLS,
     limits: (units) =>
       units === 'us'
         ? { fc: [2.5, 20], fy: [40, 100] }
@@ -117,19 +131,15 @@ function resolveAci(edition: Edition, input: BasisInput): Basis {
     classify: (epsT: number): StrainClass =>
       epsT <= epsTy ? 'compression-controlled' : epsT >= epsTc ? 'tension-controlled' : 'transition',
     normalisingStress: fc,
-    symbols: {
-      nominalAxial: 'Pn',
-      nominalMoment: 'Mn',
-      designAxial: 'φPn',
-      designMoment: 'φMn',
-      designFamily: 'φ-factored',
-      nominalFamily: 'nominal',
-      normalisingStress: 'f′c',
-    },
+    symbols: ACI_SYMBOLS,
     rhoLimits: { min: 0.01, max: 0.08 }, // 10.6.1.1
     steelAreaLimits: (_p: number, ag: number) => ({ min: 0.01 * ag, max: 0.08 * ag }), // 10.6.1.1
     minimumMoment: () => 0, // no minimum eccentricity for short columns; the cap 22.4.2.1 stands in for it
+    // 25.2.3: clear spacing ≥ max(1.5 in, 1.5·db, 4/3·dagg) for columns; 38 mm in SI.
+    minimumClearSpacing: (db: number, dg: number) => Math.max(units === 'us' ? 1.5 : 38, 1.5 * db, (4 / 3) * dg),
+    clearSpacingRule: `clear spacing ≥ max(${units === 'us' ? '1.5 in' : '38 mm'}, 1.5·db, 4/3·aggregate) (${edition.title} 25.2.3)`,
     barSet: units === 'us' ? 'astm-a615' : 'metric',
+    factorSummary: `φ ${phiC}–0.90 by εt (${edition.clause}) · Pn,max ${capRatio}·Po (22.4.2.1)`,
     parameters: {
       'β1': Number(beta1.toFixed(4)),
       'εcu': ACI_EPS_CU,

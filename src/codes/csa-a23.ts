@@ -51,10 +51,24 @@ export function csaProfile(c: number, _h: number): StrainProfile {
   return { top: CSA_EPS_CU, curvature: CSA_EPS_CU / c };
 }
 
+/** Symbols of CSA A23.3-19 (2.3, from memory): f′c, fy; factored resistances Pr, Mr. */
+export const CSA_SYMBOLS = {
+  nominalAxial: 'Pn',
+  nominalMoment: 'Mn',
+  designAxial: 'Pr',
+  designMoment: 'Mr',
+  designFamily: 'factored',
+  nominalFamily: 'nominal',
+  normalisingStress: 'f′c',
+  concreteStrength: 'f′c',
+  steelStrength: 'fy',
+} as const;
+
 export const CSA_A23_3_19: DesignCode = {
   id: 'csa-a23.3-19',
   title: 'CSA A23.3-19',
   unitSystems: ['si'],
+  symbols: CSA_SYMBOLS,
   // 8.6.1.1: 20 ≤ f′c ≤ 80 MPa; 8.5.1: fy ≤ 500 MPa (from memory); 300 MPa is pmchart's lower bound.
   limits: () => ({ fc: [20, 80], fy: [300, 500] }),
   resolve: (input: BasisInput): Basis => resolveCsa(input),
@@ -105,20 +119,16 @@ function resolveCsa(input: BasisInput): Basis {
     ],
     classify: yieldClass(epsY),
     normalisingStress: fc,
-    symbols: {
-      nominalAxial: 'Pn',
-      nominalMoment: 'Mn',
-      designAxial: 'Pr',
-      designMoment: 'Mr',
-      designFamily: 'factored',
-      nominalFamily: 'nominal',
-      normalisingStress: 'f′c',
-    },
+    symbols: CSA_SYMBOLS,
     rhoLimits: { min: 0.01, max: 0.08 }, // 10.9.1, 10.9.2
     steelAreaLimits: (_p: number, ag: number) => ({ min: 0.01 * ag, max: 0.08 * ag }), // 10.9.1, 10.9.2
     // Short columns: no minimum eccentricity; the cap Pr,max stands in (the 15 + 0.03h minimum of 10.15.3 is for slender columns).
     minimumMoment: () => 0,
+    // CSA A23.1-19 6.6.5.2 (referenced by A23.3; from memory): clear distance ≥ max(1.4·db, 1.4·aggregate, 30 mm).
+    minimumClearSpacing: (db: number, dg: number) => Math.max(1.4 * db, 1.4 * dg, 30),
+    clearSpacingRule: 'clear spacing ≥ max(1.4·db, 1.4·aggregate, 30 mm) (CSA A23.1-19 6.6.5.2, from memory)',
     barSet: 'csa-g30.18',
+    factorSummary: `φc ${CSA_PHI_C} · φs ${CSA_PHI_S} · α1 ${fmt(alpha1)} · β1 ${fmt(beta1)} (8.4.2, 8.4.3, 10.1.7)`,
     parameters: {
       'α1': r4(alpha1),
       'β1': r4(beta1),

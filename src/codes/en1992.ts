@@ -109,10 +109,26 @@ function rejectUnits(units: string): never {
   throw new PmError(ERROR_CODES.invalidValue, '--units', 'is not available for EN 1992-1-1, an SI code', { value: units, allowed: 'si' });
 }
 
+/** Symbols of EN 1992-1-1 (1.6): characteristic strengths fck, fyk; ν and μ as customary on European design charts (common practice). */
+export const EC2_SYMBOLS = {
+  nominalAxial: 'NRk',
+  nominalMoment: 'MRk',
+  designAxial: 'NRd',
+  designMoment: 'MRd',
+  designFamily: 'design',
+  nominalFamily: 'characteristic',
+  normalisingStress: 'fcd',
+  concreteStrength: 'fck',
+  steelStrength: 'fyk',
+  dimensionlessAxial: 'ν',
+  dimensionlessMoment: 'μ',
+} as const;
+
 export const EN_1992_1_1: DesignCode = {
   id: 'en1992-1-1',
   title: 'EN 1992-1-1:2004',
   unitSystems: ['si'],
+  symbols: EC2_SYMBOLS,
   // Table 3.1 covers C12/15 to C90/105; 3.2.2(3) covers fyk = 400 to 600 MPa.
   limits: () => ({ fc: [12, 90], fy: [400, 600] }),
   resolve: (input: BasisInput): Basis => resolveEc2(input),
@@ -189,21 +205,17 @@ function resolveEc2(input: BasisInput): Basis {
     ],
     classify: yieldClass(epsYd),
     normalisingStress: fcd,
-    symbols: {
-      nominalAxial: 'NRk',
-      nominalMoment: 'MRk',
-      designAxial: 'NRd',
-      designMoment: 'MRd',
-      designFamily: 'design',
-      nominalFamily: 'characteristic',
-      normalisingStress: 'fcd',
-    },
+    symbols: EC2_SYMBOLS,
     rhoLimits: { min: 0.002, max: 0.04 }, // 9.5.2(2), (3) recommended values
     // 9.5.2(2): As,min = max(0.10·NEd/fyd, 0.002·Ac); 9.5.2(3): As,max = 0.04·Ac outside laps.
     steelAreaLimits: (NEd: number, Ac: number) => ({ min: Math.max((0.1 * Math.max(0, NEd)) / fyd, 0.002 * Ac), max: 0.04 * Ac }),
     // 6.1(4): e0 = max(h/30, 20 mm) for compression; N in N, h in mm, moment in N·mm.
     minimumMoment: (NEd: number, h: number) => Math.max(0, NEd) * Math.max(h / 30, 20),
+    // 8.2(2): clear distance ≥ max(k1·φ, dg + k2, 20 mm), recommended k1 = 1, k2 = 5 mm.
+    minimumClearSpacing: (db: number, dg: number) => Math.max(db, dg > 0 ? dg + 5 : 0, 20),
+    clearSpacingRule: 'clear spacing ≥ max(k1·φ, dg + k2, 20 mm) with the recommended k1 = 1, k2 = 5 mm (8.2(2))',
     barSet: 'en-common',
+    factorSummary: `αcc ${alphaCc} · γc ${gammaC} · γs ${gammaS} (${nonDefault.length > 0 ? 'not all recommended: check the NA' : 'recommended'})`,
     biaxialExponent: en1992BiaxialExponent, // 5.8.9(4) Eq. 5.39
     slendernessMethod: 'nominal-curvature-en1992', // 5.8.8
     parameters: {

@@ -119,8 +119,20 @@ export interface Basis {
    * (EN 1992-1-1 6.1(4) minimum eccentricity); 0 where the basis sets none for short columns.
    */
   minimumMoment(axialDemand: number, depth: number): number;
+  /**
+   * Smallest clear distance between adjacent longitudinal bars of diameter db with maximum aggregate
+   * size dg (0 when not given: the aggregate term is not checked), in the system's length unit.
+   */
+  minimumClearSpacing(barDiameter: number, aggregate: number): number;
+  /** the rule above as text with its clause, for reports */
+  readonly clearSpacingRule: string;
   /** which bar-size table proposals draw from (src/section/bar-tables.ts) */
   readonly barSet: BarSetId;
+  /**
+   * The factors on resistance in one line for title blocks and covers, with where they come from,
+   * e.g. "αcc 1.0 · γc 1.5 · γs 1.15 (recommended)", "φc 0.65 · φs 0.85 · α1 0.76 · β1 0.82".
+   */
+  readonly factorSummary: string;
   /** derived parameters worth printing (β1, εcu, αcc …), name → value */
   readonly parameters: Readonly<Record<string, number | string>>;
   /** assumptions with their clauses, for sheets, reports and the README */
@@ -156,6 +168,14 @@ export interface BasisSymbols {
   nominalFamily: string;
   /** symbol of the normalising stress, e.g. "f′c", "fcd" */
   normalisingStress: string;
+  /** symbol of the specified concrete strength on sheets, titles and reports: "f′c" (ACI, CSA), "fck" (EN) */
+  concreteStrength: string;
+  /** symbol of the specified yield strength of the bars: "fy" (ACI, CSA), "fyk" (EN) */
+  steelStrength: string;
+  /** symbol of the dimensionless axial value P/(normalising stress·Ag) where the code's practice has one ("ν" for EN); absent: the ratio is spelled out */
+  dimensionlessAxial?: string;
+  /** symbol of the dimensionless moment M/(normalising stress·Ag·h) ("μ" for EN); absent: spelled out */
+  dimensionlessMoment?: string;
 }
 
 /** A design code: input limits and a resolver from materials to a Basis. */
@@ -164,6 +184,8 @@ export interface DesignCode {
   readonly title: string;
   /** unit systems the basis accepts (EN 1992-1-1 and CSA A23.3 are SI-only; ACI 318 has both) */
   readonly unitSystems: readonly UnitSystem[];
+  /** the symbols of every basis this code resolves (known before materials are given, e.g. for sheet titles) */
+  readonly symbols: BasisSymbols;
   /** allowed specified strengths in the given system's stress unit */
   limits(units: UnitSystem): { fc: [number, number]; fy: [number, number] };
   resolve(input: BasisInput): Basis;

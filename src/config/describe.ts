@@ -1,5 +1,5 @@
 /** Spelled-out text for sheet parameters (titles, index page, file names). */
-import type { Transverse } from '../codes/types.js';
+import type { BasisOptions, BasisSymbols, Transverse } from '../codes/types.js';
 import { DISPLAY_UNITS, type UnitSystem } from '../units/index.js';
 import type { ResolvedShape, ResolvedSheet } from './types.js';
 
@@ -33,11 +33,43 @@ export const describeTransverse = (t: Transverse): string => (t === 'spiral' ? '
 
 export const stressText = (v: number, units: UnitSystem): string => `${fmt(v)} ${DISPLAY_UNITS[units].stress}`;
 
+const OPTION_TEXT: { [K in keyof Required<BasisOptions>]: [symbol: string, slug: string] } = {
+  alphaCc: ['αcc', 'alphacc'],
+  gammaC: ['γc', 'gammac'],
+  gammaS: ['γs', 'gammas'],
+  concreteLaw: ['concrete', 'concrete'],
+  steelBranch: ['steel branch', 'steel'],
+  steelK: ['k', 'k'],
+  steelEpsUk: ['εuk', 'epsuk'],
+};
+
+/** Basis options as title text: { alphaCc: 0.85 } → "αcc 0.85"; "" for none. */
+export function describeBasisOptions(o: BasisOptions): string {
+  return (Object.keys(OPTION_TEXT) as (keyof BasisOptions)[])
+    .filter((k) => o[k] !== undefined)
+    .map((k) => `${OPTION_TEXT[k][0]} ${typeof o[k] === 'number' ? fmt(o[k]) : o[k]}`)
+    .join(', ');
+}
+
+/** Basis options for file names: { alphaCc: 0.85 } → "alphacc-0.85"; "" for none. */
+export function basisOptionsSlug(o: BasisOptions): string {
+  return (Object.keys(OPTION_TEXT) as (keyof BasisOptions)[])
+    .filter((k) => o[k] !== undefined)
+    .map((k) => `${OPTION_TEXT[k][1]}-${typeof o[k] === 'number' ? fmt(o[k]) : o[k]}`)
+    .join('-');
+}
+
+/** The symbols a title needs: the specified strengths (f′c/fy, or fck/fyk). */
+export type TitleSymbols = Pick<BasisSymbols, 'concreteStrength' | 'steelStrength'>;
+
 /** Values a sheet-title pattern can use. */
-export function titleFields(s: Omit<ResolvedSheet, 'title' | 'fileStem'>, units: UnitSystem, family: string): Record<string, string> {
+export function titleFields(s: Omit<ResolvedSheet, 'title' | 'fileStem'>, units: UnitSystem, family: string, symbols: TitleSymbols): Record<string, string> {
   return {
     index: String(s.index),
     shape: describeShape(s.shape),
+    fcSymbol: symbols.concreteStrength,
+    fySymbol: symbols.steelStrength,
+    options: describeBasisOptions(s.variantOptions),
     fc: stressText(s.fc, units),
     fy: stressText(s.fy, units),
     gamma: s.gamma.toFixed(2),
@@ -47,10 +79,12 @@ export function titleFields(s: Omit<ResolvedSheet, 'title' | 'fileStem'>, units:
   };
 }
 
-export const DEFAULT_TITLE_PATTERN = '{shape} column, f′c {fc}, fy {fy}, γ {gamma}, {arrangement}, {transverse}';
+export const DEFAULT_TITLE_PATTERN = '{shape} column, {fcSymbol} {fc}, {fySymbol} {fy}, γ {gamma}, {arrangement}, {transverse}';
 
+/** Fills {field} placeholders; a non-empty {options} the pattern leaves out is appended, so variant sheets always say so. */
 export function fillPattern(pattern: string, fields: Record<string, string>): string {
-  return pattern.replace(/\{(\w+)\}/g, (m, k: string) => fields[k] ?? m);
+  const text = pattern.replace(/\{(\w+)\}/g, (m, k: string) => fields[k] ?? m);
+  return fields.options && !pattern.includes('{options}') ? `${text}, ${fields.options}` : text;
 }
 
 /** A spelled-out, file-system-safe stem: "03-square-fc-7ksi-fy-80ksi-gamma-0.75-two-faces-4-per-face-tied". */
@@ -58,5 +92,6 @@ export function fileStemFor(s: Omit<ResolvedSheet, 'title' | 'fileStem'>, units:
   const su = DISPLAY_UNITS[units].stress.toLowerCase();
   const shape = s.shape.kind === 'circle' ? 'circular' : s.shape.aspect === 1 ? 'square' : `rectangular-aspect-${fmt(s.shape.aspect)}`;
   const idx = String(s.index).padStart(String(total).length, '0');
-  return [idx, shape, `fc-${fmt(s.fc)}${su}`, `fy-${fmt(s.fy)}${su}`, `gamma-${s.gamma.toFixed(2)}`, arrangementSlug(s.arrangement), s.transverse].join('-');
+  const variant = basisOptionsSlug(s.variantOptions);
+  return [idx, shape, `fc-${fmt(s.fc)}${su}`, `fy-${fmt(s.fy)}${su}`, `gamma-${s.gamma.toFixed(2)}`, arrangementSlug(s.arrangement), s.transverse, ...(variant ? [variant] : [])].join('-');
 }

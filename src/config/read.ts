@@ -7,6 +7,7 @@
  * Pure: the caller reads the file; `now` stands in for the clock.
  */
 import type { z } from 'zod';
+import { DESIGN_CODES } from '../codes/registry.js';
 import { CODE_IDS, type CodeId } from '../codes/types.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { parseQuantity, type UnitSystem } from '../units/index.js';
@@ -108,6 +109,11 @@ export function resolveChartSet(file: ChartSetFile, opts: ReadOptions = {}): Res
   const families = file.families ?? 'design';
   const familyText = families === 'both' ? 'nominal and factored' : families === 'nominal' ? 'nominal' : 'factored';
   const pattern = file.sheetTitle ?? DEFAULT_TITLE_PATTERN;
+  const symbols = DESIGN_CODES[code]?.symbols ?? { concreteStrength: 'f′c', steelStrength: 'fy' };
+  if (file.rhoG !== undefined && file.omega !== undefined) {
+    throw new PmError(ERROR_CODES.conflict, 'omega', 'and rhoG both set the curves; give one of them');
+  }
+  const setOptions = { ...(file.basis.options ?? {}) };
 
   const partial: Omit<ResolvedSheet, 'title' | 'fileStem'>[] = [];
   file.sheets.forEach((g, gi) => {
@@ -118,16 +124,18 @@ export function resolveChartSet(file: ChartSetFile, opts: ReadOptions = {}): Res
     const gammas = expandNumbers(g.gamma, `${at}.gamma`);
     const arrangements = listOf(g.arrangement);
     const transverses = listOf(g.transverse ?? 'tied');
+    const variantOptions = { ...(g.basisOptions ?? {}) };
+    const basisOptions = { ...setOptions, ...variantOptions };
     for (const shape of shapes)
       for (const fc of fcs)
         for (const fy of fys)
           for (const gamma of gammas)
             for (const arrangement of arrangements)
-              for (const transverse of transverses) partial.push({ index: partial.length + 1, origin: at, shape, fc, fy, gamma, arrangement, transverse });
+              for (const transverse of transverses) partial.push({ index: partial.length + 1, origin: at, shape, fc, fy, gamma, arrangement, transverse, basisOptions, variantOptions });
   });
   const sheets: ResolvedSheet[] = partial.map((s) => ({
     ...s,
-    title: capitalise(fillPattern(pattern, titleFields(s, units, familyText))),
+    title: capitalise(fillPattern(pattern, titleFields(s, units, familyText, symbols))),
     fileStem: fileStemFor(s, units, partial.length),
   }));
 
@@ -144,10 +152,13 @@ export function resolveChartSet(file: ChartSetFile, opts: ReadOptions = {}): Res
     paper: { size, orientation, widthPt: orientation === 'landscape' ? ph : pw, heightPt: orientation === 'landscape' ? pw : ph },
     units,
     code,
-    basisOptions: { ...(file.basis.options ?? {}) },
+    basisOptions: setOptions,
     normalisation: file.normalisation ?? 'stress',
     families,
-    rhos: file.rhoG === undefined ? expandNumbers({ from: 0.01, to: 0.08, step: 0.01 }, 'rhoG') : expandNumbers(file.rhoG, 'rhoG'),
+    ratios:
+      file.omega !== undefined
+        ? { kind: 'omega', values: expandNumbers(file.omega, 'omega') }
+        : { kind: 'rhoG', values: file.rhoG === undefined ? expandNumbers({ from: 0.01, to: 0.08, step: 0.01 }, 'rhoG') : expandNumbers(file.rhoG, 'rhoG') },
     referenceLines: {
       strainStates: file.referenceLines?.strainStates ?? true,
       eccentricities: file.referenceLines?.eccentricities ?? [0.1, 0.25, 0.5, 1],

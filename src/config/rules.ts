@@ -2,8 +2,10 @@
  * Stage 4 of reading a chart set: named rule checks on the resolved set. Problems are data
  * (PmError with code, path and facts); the reader throws the first error.
  */
+import { rhoFromOmega } from '../codes/mechanical-ratio.js';
 import { DESIGN_CODES } from '../codes/registry.js';
-import { ERROR_CODES, PmError } from '../errors.js';
+import type { Basis, BasisOptions, DesignCode } from '../codes/types.js';
+import { ERROR_CODES, PmError, isPmError } from '../errors.js';
 import { DISPLAY_UNITS, parseQuantity } from '../units/index.js';
 import { expandNumbers } from './expand.js';
 import type { ChartSetFile } from './schema.js';
@@ -13,6 +15,8 @@ import type { ResolvedChartSet } from './types.js';
 export const GAMMA_RANGE = [0.3, 0.95] as const;
 /** ρg values a family may hold; the basis's own column limits are printed on the sheet. */
 export const RHO_RANGE = [0.001, 0.1] as const;
+/** ω values a family may hold before each sheet's conversion to ρg is checked against RHO_RANGE. */
+export const OMEGA_RANGE = [0.01, 5] as const;
 export const ECCENTRICITY_RANGE = [0.01, 10] as const;
 export const ASPECT_RANGE = [0.2, 5] as const;
 export const PNG_SCALE_RANGE = [0.5, 8] as const;
@@ -39,13 +43,16 @@ export function checkRules(set: ResolvedChartSet, file: ChartSetFile): RuleRepor
   if (!/^\d{4}-\d{2}-\d{2}$/.test(set.titleBlock.date) || Number.isNaN(Date.parse(`${set.titleBlock.date}T00:00:00Z`))) {
     errors.push(new PmError(ERROR_CODES.invalidValue, 'titleBlock.date', 'is not a date in the form YYYY-MM-DD', { value: set.titleBlock.date }));
   }
-  set.rhos.forEach((r, k) => {
-    const path = Array.isArray(file.rhoG) ? `rhoG[${k}]` : 'rhoG';
-    if (!inRange(r, RHO_RANGE)) errors.push(outside(path, r, RHO_RANGE));
-    else if (k > 0 && !(r > set.rhos[k - 1]!)) errors.push(new PmError(ERROR_CODES.invalidValue, path, 'must be larger than the value before it', { value: r }));
+  const { kind, values } = set.ratios;
+  const range = kind === 'omega' ? OMEGA_RANGE : RHO_RANGE;
+  const list = kind === 'omega' ? file.omega : file.rhoG;
+  values.forEach((r, k) => {
+    const path = Array.isArray(list) ? `${kind}[${k}]` : kind;
+    if (!inRange(r, range)) errors.push(outside(path, r, range));
+    else if (k > 0 && !(r > values[k - 1]!)) errors.push(new PmError(ERROR_CODES.invalidValue, path, 'must be larger than the value before it', { value: r }));
   });
-  if (set.rhos.length === 0) errors.push(new PmError(ERROR_CODES.missing, 'rhoG', 'must hold at least one value'));
-  if (set.rhos.length > 20) errors.push(outside('rhoG', set.rhos.length, [1, 20], 'curves'));
+  if (values.length === 0) errors.push(new PmError(ERROR_CODES.missing, kind, 'must hold at least one value'));
+  if (values.length > 20) errors.push(outside(kind, values.length, [1, 20], 'curves'));
   set.referenceLines.eccentricities.forEach((e, k) => {
     if (!inRange(e, ECCENTRICITY_RANGE)) errors.push(outside(`referenceLines.eccentricities[${k}]`, e, ECCENTRICITY_RANGE));
   });
@@ -93,6 +100,7 @@ export function checkRules(set: ResolvedChartSet, file: ChartSetFile): RuleRepor
       }
     });
   });
+  if (code && errors.length === 0) errors.push(...basisChecks(set, file, code));
   if (set.sheets.length === 0) errors.push(new PmError(ERROR_CODES.missing, 'sheets', 'must describe at least one sheet'));
   if (set.sheets.length > MAX_SHEETS) errors.push(outside('sheets', set.sheets.length, [1, MAX_SHEETS], 'sheets'));
   const stems = new Set<string>();
@@ -101,4 +109,44 @@ export function checkRules(set: ResolvedChartSet, file: ChartSetFile): RuleRepor
     stems.add(s.fileStem.replace(/^\d+-/, ''));
   }
   return { errors, warnings };
+}
+
+/** "--alpha-cc" → "alphaCc": the basis reports option problems by flag; a set names the config field. */
+const optionField = (flag: string): string => flag.replace(/^--/, '').replace(/-([a-z])/g, (_, c: string) => c.toUpperCase());
+
+/**
+ * Rules that need each sheet's basis: the basis options (ranges live in the basis, reported here with
+ * the config path that set them) and, for ω families, the ρg each sheet's conversion gives.
+ */
+function basisChecks(set: ResolvedChartSet, file: ChartSetFile, code: DesignCode): PmError[] {
+  const errors: PmError[] = [];
+  const seen = new Map<string, Basis | null>();
+  for (const s of set.sheets) {
+    const key = JSON.stringify([s.fc, s.fy, s.transverse, s.basisOptions]);
+    if (!seen.has(key)) {
+      try {
+        seen.set(key, code.resolve({ units: set.units, fc: s.fc, fy: s.fy, transverse: s.transverse, options: s.basisOptions }));
+      } catch (e) {
+        if (!isPmError(e)) throw e;
+        seen.set(key, null);
+        const field = optionField(e.path) as keyof BasisOptions;
+        const at = field in s.variantOptions ? `${s.origin}.basisOptions.${field}` : field in (file.basis.options ?? {}) ? `basis.options.${field}` : e.path === '--units' ? 'units' : e.path;
+        errors.push(new PmError(e.code, at, e.message.slice(e.message.indexOf(': ') + 2), {}, e.exitCode));
+        break;
+      }
+    }
+    const basis = seen.get(key);
+    if (!basis || set.ratios.kind !== 'omega') continue;
+    for (const [k, w] of set.ratios.values.entries()) {
+      const rho = rhoFromOmega(basis, w);
+      if (!inRange(rho, RHO_RANGE)) {
+        const path = Array.isArray(file.omega) ? `omega[${k}]` : 'omega';
+        errors.push(
+          new PmError(ERROR_CODES.outOfRange, path, `gives ρg ${Number(rho.toPrecision(3))} on sheet ${s.index} (${s.origin}), outside ${RHO_RANGE[0]}–${RHO_RANGE[1]}`, { value: w }),
+        );
+        return errors;
+      }
+    }
+  }
+  return errors;
 }

@@ -20,6 +20,19 @@ const NumberRange = z
 
 const oneOrMany = <T extends z.ZodType>(t: T) => z.union([t, z.array(t)]);
 
+/** Options some bases read (src/codes/types.ts BasisOptions); the others ignore them. */
+const BasisOptions = z
+  .object({
+    alphaCc: z.number().describe('EN 1992-1-1 αcc (3.1.6(1)); recommended 1.0').optional(),
+    gammaC: z.number().describe('EN 1992-1-1 γc (2.4.2.4); recommended 1.5').optional(),
+    gammaS: z.number().describe('EN 1992-1-1 γs (2.4.2.4); recommended 1.15').optional(),
+    concreteLaw: z.enum(['parabola-rectangle', 'rectangular-block']).describe('where the basis offers both; default "parabola-rectangle"').optional(),
+    steelBranch: z.enum(['horizontal', 'inclined']).describe('EN 1992-1-1 3.2.7(2) top branch; default "horizontal"').optional(),
+    steelK: z.number().describe('EN 1992-1-1 inclined branch k = (ft/fy)k; default 1.08 (class B)').optional(),
+    steelEpsUk: z.number().describe('EN 1992-1-1 inclined branch εuk; default 0.05 (class B)').optional(),
+  })
+  .strict();
+
 export const PAPER_SIZES = ['a4', 'a3', 'letter', 'tabloid'] as const;
 export type PaperSize = (typeof PAPER_SIZES)[number];
 export const ORIENTATIONS = ['landscape', 'portrait'] as const;
@@ -51,11 +64,12 @@ const Arrangement = z.discriminatedUnion('kind', [
 const SheetGroup = z
   .object({
     shape: oneOrMany(Shape).describe('section shape(s); default "rectangle"').optional(),
-    fc: oneOrMany(Quantity).describe('specified concrete strength(s) f′c, e.g. "7ksi" or 48 (set units)'),
-    fy: oneOrMany(Quantity).describe('specified yield strength(s) fy of the bars, e.g. "80ksi"'),
+    fc: oneOrMany(Quantity).describe('specified concrete strength(s): f′c, or fck for EN 1992-1-1; e.g. "7ksi" or 48 (set units)'),
+    fy: oneOrMany(Quantity).describe('specified yield strength(s) of the bars: fy, or fyk for EN 1992-1-1; e.g. "80ksi"'),
     gamma: z.union([z.number(), z.array(z.number()), NumberRange]).describe('γ: centre-to-centre distance of the outer bar rows over h'),
     arrangement: oneOrMany(Arrangement).describe('bar arrangement(s)'),
     transverse: oneOrMany(z.enum(['tied', 'spiral'])).describe('transverse reinforcement; default "tied"').optional(),
+    basisOptions: BasisOptions.describe('basis options for these sheets only, over the set’s basis.options (e.g. a National Annex variant); the sheet titles name them').optional(),
   })
   .strict();
 
@@ -84,22 +98,18 @@ export const ChartSetFileSchema = z
     basis: z
       .object({
         code: z.string().describe('design basis and edition, e.g. "aci318-19"'),
-        options: z
-          .object({
-            alphaCc: z.number().optional(),
-            gammaC: z.number().optional(),
-            gammaS: z.number().optional(),
-            concreteLaw: z.enum(['parabola-rectangle', 'rectangular-block']).optional(),
-            steelBranch: z.enum(['horizontal', 'inclined']).optional(),
-          })
-          .strict()
+        options: BasisOptions
           .describe('options some bases read (EN 1992-1-1 partial factors and laws); default: each basis’s recommended values')
           .optional(),
       })
       .strict(),
-    normalisation: z.enum(NORMALISATIONS).describe('"stress": P/Ag and M/(Ag·h) in the stress unit; "dimensionless": also divided by the basis’s normalising stress (f′c); default "stress"').optional(),
+    normalisation: z.enum(NORMALISATIONS).describe('"stress": P/Ag and M/(Ag·h) in the stress unit; "dimensionless": also divided by the basis’s normalising stress (f′c, or fcd for EN 1992-1-1: ν and μ); default "stress"').optional(),
     families: z.enum(FAMILY_CHOICES).describe('curves to draw: "design" (φ-factored), "nominal" or "both"; default "design"').optional(),
-    rhoG: z.union([z.array(z.number()), NumberRange]).describe('ρg family; default 0.01 to 0.08 in 0.01 steps').optional(),
+    rhoG: z.union([z.array(z.number()), NumberRange]).describe('ρg family (geometric ratio As/Ag); default 0.01 to 0.08 in 0.01 steps; give this or omega').optional(),
+    omega: z
+      .union([z.array(z.number()), NumberRange])
+      .describe('instead of rhoG: family of mechanical ratios ω = As·fyd/(Ac·fcd) (fy/f′c for ACI 318, φs·fy/f′c for CSA A23.3), customary on European charts; each sheet converts ω to ρg with its own design strengths')
+      .optional(),
     referenceLines: z
       .object({
         strainStates: z.boolean().describe('lines through the basis’s strain states (εt = 0, εt = εty, tension-controlled limit); default true').optional(),
@@ -110,7 +120,7 @@ export const ChartSetFileSchema = z
       .optional(),
     sheetTitle: z
       .string()
-      .describe('office pattern for sheet titles with {shape} {fc} {fy} {gamma} {arrangement} {transverse} {family} {index}; default spells the parameters out')
+      .describe('office pattern for sheet titles with {shape} {fcSymbol} {fc} {fySymbol} {fy} {gamma} {arrangement} {transverse} {family} {options} {index} ({fcSymbol}, {fySymbol}: the basis’s symbols, f′c/fy or fck/fyk; {options}: a sheet group’s own basisOptions, appended when the pattern leaves it out); default spells the parameters out')
       .optional(),
     outputs: z
       .object({
@@ -131,6 +141,7 @@ export type ChartSetFile = z.infer<typeof ChartSetFileSchema>;
 export type SheetGroupFile = z.infer<typeof SheetGroup>;
 export type ShapeFile = z.infer<typeof Shape>;
 export type ArrangementFile = z.infer<typeof Arrangement>;
+export type BasisOptionsFile = z.infer<typeof BasisOptions>;
 
 /** JSON Schema of the file format (draft 2020-12), as committed in charts-config/. */
 export function chartSetJsonSchema(): Record<string, unknown> {
@@ -139,6 +150,6 @@ export function chartSetJsonSchema(): Record<string, unknown> {
     ...schema,
     $id: 'https://pmchart.invalid/charts-config/chart-set.schema.json',
     title: 'pmchart chart set',
-    description: 'A chart set: title-block text, basis, ρg family, reference lines, outputs and the sheets (cross products of f′c × fy × γ × arrangement × transverse × shape).',
+    description: 'A chart set: title-block text, basis, ρg or ω family, reference lines, outputs and the sheets (cross products of f′c × fy × γ × arrangement × transverse × shape).',
   };
 }

@@ -4,6 +4,12 @@ import type { Arrangement } from '../section/types.js';
 import type { UnitSystem } from '../units/index.js';
 import type { FamilyChoice, Normalisation, PaperSize } from './schema.js';
 
+export const RATIO_KINDS = ['rhoG', 'omega'] as const;
+export type RatioKind = (typeof RATIO_KINDS)[number];
+
+/** Curve label symbol of a ratio kind. */
+export const RATIO_SYMBOL: Record<RatioKind, string> = { rhoG: 'ρg', omega: 'ω' };
+
 export interface ResolvedTitleBlock {
   office: string;
   project: string;
@@ -37,6 +43,10 @@ export interface ResolvedSheet {
   gamma: number;
   arrangement: Exclude<Arrangement, { kind: 'custom' }>;
   transverse: Transverse;
+  /** the set's basis.options with the sheet group's own basisOptions over them */
+  basisOptions: BasisOptions;
+  /** the sheet group's own basisOptions ({} when it has none): a variant named in the title and file name */
+  variantOptions: BasisOptions;
   title: string;
   /** file name without extension for sheets/ and tables/ */
   fileStem: string;
@@ -51,7 +61,11 @@ export interface ResolvedChartSet {
   basisOptions: BasisOptions;
   normalisation: Normalisation;
   families: FamilyChoice;
-  rhos: number[];
+  /**
+   * The curves of every sheet: geometric ratios ρg, or mechanical ratios ω = As·fyd/(Ac·fcd) that each
+   * sheet converts to ρg with its own basis (src/sheet/curves.ts sheetRhos).
+   */
+  ratios: { kind: RatioKind; values: number[] };
   referenceLines: { strainStates: boolean; eccentricities: number[]; axialCap: boolean };
   outputs: { pdf: boolean; svg: boolean; png: boolean; pngScale: number; tables: boolean };
   sheets: ResolvedSheet[];

@@ -5,7 +5,7 @@
  * Limits (US and SI):
  * - Ast between the basis limits (ACI 318-19 10.6.1.1: 0.01·Ag ≤ Ast ≤ 0.08·Ag);
  * - at least 4 bars with ties and 6 with a spiral (ACI 318-19 10.7.3.1, from memory);
- * - clear spacing ≥ max(1.5 in, 1.5·db, 4/3·aggregate) (ACI 318-19 25.2.3); 38 mm and 1.5·db in SI;
+ * - clear spacing ≥ the basis's minimum (Basis.minimumClearSpacing: ACI 318-19 25.2.3, EN 1992-1-1 8.2(2), CSA A23.1 6.6.5.2);
  * - bar centres at cover + tie + db/2 from each face (common practice), so bars fit inside cover and tie.
  */
 import { prepareSection } from '../analysis/prepared-section.js';
@@ -95,9 +95,9 @@ export function barsForArea(area: number, bar: { area: number }, kind: Selectabl
   return { count: totalBars(kind, perFace), perFace };
 }
 
-/** Required clear spacing (ACI 318-19 25.2.3): max(1.5 in, 1.5·db, 4/3·aggregate); 38 mm in SI. */
-export function requiredClearSpacing(units: 'us' | 'si', barDiameter: number, aggregate = 0): number {
-  return Math.max(units === 'us' ? 1.5 : 38, 1.5 * barDiameter, (4 / 3) * aggregate);
+/** Required clear spacing: the basis's rule (ACI 318-19 25.2.3, EN 1992-1-1 8.2(2), CSA A23.1 6.6.5.2). */
+export function requiredClearSpacing(basis: Pick<Basis, 'minimumClearSpacing'>, barDiameter: number, aggregate = 0): number {
+  return basis.minimumClearSpacing(barDiameter, aggregate);
 }
 
 /** Smallest centre-to-centre spacing of adjacent bars minus the diameter. */
@@ -126,7 +126,7 @@ export function clearSpacing(shape: Shape, kind: SelectableKind, perFace: number
 }
 
 export function describeLayout(kind: SelectableKind, count: number, perFace: number, name: string): string {
-  const size = /^\d/.test(name) ? `× ${name} mm` : name; // metric sizes are bare diameters
+  const size = /^\d+(\.\d+)?$/.test(name) ? `× ${name} mm` : /^\d/.test(name) ? `× ${name}` : name; // metric sizes are bare diameters; CSA names end in M
   switch (kind) {
     case 'two-faces':
       return `${count} ${size} (${perFace} per face, 2 faces)`;
@@ -169,7 +169,7 @@ export function proposeBars(req: BarSelectionRequest): BarProposal[] {
       const area = count * size.area;
       if (area > req.areaLimits.max * (1 + 1e-9)) break;
       const clear = clearSpacing(shape, kind, perFace, gamma, size.diameter);
-      const clearRequired = requiredClearSpacing(basis.units, size.diameter, req.aggregate ?? 0);
+      const clearRequired = requiredClearSpacing(basis, size.diameter, req.aggregate ?? 0);
       if (clear < clearRequired - 1e-9) break; // more bars only close the spacing further
       const arrangement = arrangementOf(kind, perFace);
       const bars = layoutBars(shape, arrangement, area, { gamma });

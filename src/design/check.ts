@@ -14,7 +14,7 @@ import type { BarSize } from '../section/bar-tables.js';
 import { grossArea, sectionDepth } from '../section/geometry.js';
 import type { Arrangement, Shape } from '../section/types.js';
 import { isSelectableKind, proposeBars, type BarProposal, type Detailing } from './bar-selection.js';
-import { buildChartSet, readCharts, type ChartSet, type SheetReading } from './chart-reading.js';
+import { buildChartSet, readCharts, type ChartReading, type ChartSet, type SheetReading } from './chart-reading.js';
 import { capacityAlongRay, strainReport, tabulate, type NormalisedLoad, type RayTable } from './ray.js';
 import { rhoRequired, type RhoStatus } from './rho-required.js';
 
@@ -160,7 +160,7 @@ export function checkLoad(ctx: CheckContext, load: FactoredLoad, index: number):
   const { load: n, Mdesign } = normaliseLoad(basis, ctx.shape, load);
   const limits = rhoLimitsFor(basis, load.Pu, area);
   const req = rhoRequired(ctx.table, n, limits);
-  const reading = readCharts(ctx.charts, n);
+  const reading = withMinimum(readCharts(ctx.charts, n), limits.min, ctx.charts.rhos);
   const notes: string[] = [];
   if (req.status === 'not-possible') notes.push(`not possible within ρg ≤ ${fmtRho(limits.max)}`);
   if (req.status === 'minimum-governs') notes.push(`minimum ρg = ${fmtRho(limits.min)} governs`);
@@ -195,6 +195,15 @@ export function checkLoad(ctx: CheckContext, load: FactoredLoad, index: number):
     governing: false,
     notes,
   };
+}
+
+/**
+ * A reader applies the basis minimum to what the chart gives: EN 1992-1-1 9.5.2(2) makes it depend on
+ * NEd, so it can exceed the lowest curve. The rounded reading is then the next curve at or above it.
+ */
+export function withMinimum(r: ChartReading, min: number, rhos: readonly number[]): ChartReading {
+  const rounded = r.rhoRoundedDown === null || r.rhoRoundedDown >= min - 1e-12 ? r.rhoRoundedDown : (rhos.find((x) => x >= min - 1e-12) ?? null);
+  return { ...r, rhoFromChart: r.rhoFromChart === null ? null : Math.max(r.rhoFromChart, min), rhoRoundedDown: rounded };
 }
 
 const fmtRho = (r: number): string => String(Number(r.toFixed(4)));

@@ -1,6 +1,8 @@
 /** Stage "resolved set → curves": the core's family for one sheet (pure). */
 import { computeFamily, type CurveFamily } from '../analysis/family.js';
+import { rhoFromOmega } from '../codes/mechanical-ratio.js';
 import { resolveBasis } from '../codes/registry.js';
+import type { Basis } from '../codes/types.js';
 import type { ResolvedChartSet, ResolvedSheet } from '../config/types.js';
 import type { Shape } from '../section/types.js';
 
@@ -15,12 +17,23 @@ export function sheetShape(sheet: ResolvedSheet): Shape {
   return sheet.shape.kind === 'circle' ? { kind: 'circle', diameter: 1 } : { kind: 'rectangle', b: sheet.shape.aspect, h: 1 };
 }
 
-export function familyForSheet(set: ResolvedChartSet, sheet: ResolvedSheet): CurveFamily {
+/** The basis of one sheet: the set's code with the sheet's materials and basis options. */
+export function basisForSheet(set: ResolvedChartSet, sheet: ResolvedSheet): Basis {
   const at = sheet.origin;
-  const basis = resolveBasis(
+  return resolveBasis(
     set.code,
-    { units: set.units, fc: sheet.fc, fy: sheet.fy, transverse: sheet.transverse, options: set.basisOptions },
+    { units: set.units, fc: sheet.fc, fy: sheet.fy, transverse: sheet.transverse, options: sheet.basisOptions },
     { code: 'basis.code', fc: `${at}.fc`, fy: `${at}.fy` },
   );
-  return computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: set.rhos, basePoints: SHEET_BASE_POINTS });
+}
+
+/** ρg of each curve: the set's ρg values, or its ω values through this basis (ρ = ω·fcd/fyd). */
+export function sheetRhos(set: ResolvedChartSet, basis: Basis): number[] {
+  const { kind, values } = set.ratios;
+  return kind === 'omega' ? values.map((w) => Number(rhoFromOmega(basis, w).toPrecision(12))) : values;
+}
+
+export function familyForSheet(set: ResolvedChartSet, sheet: ResolvedSheet): CurveFamily {
+  const basis = basisForSheet(set, sheet);
+  return computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: sheetRhos(set, basis), basePoints: SHEET_BASE_POINTS });
 }

@@ -20,7 +20,8 @@ import type { ResolvedChartSet } from '../config/types.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { SheetRenderer } from '../render/renderer.js';
 import { bindBook } from './book.js';
-import { familyForSheet } from './curves.js';
+import { basisForSheet } from './curves.js';
+import { normalisationText, primaryFamily } from '../chart/sheet-data.js';
 import { swapInFolder, writeFileAtomic } from './files.js';
 import { chunksOf, type ChunkTask } from './render-chunk.js';
 import { renderChunk } from './render-chunk.js';
@@ -67,7 +68,16 @@ export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions):
     let book: string | undefined;
     if (set.outputs.pdf) {
       const { fontPaths } = await import('../render/environment.js');
-      const basis = familyForSheet(set, set.sheets[0]!).basis;
+      const bases = set.sheets.map((s) => basisForSheet(set, s));
+      const basis = bases[0]!;
+      const factorGroups: { summary: string; sheets: number[] }[] = [];
+      bases.forEach((b, i) => {
+        const g = factorGroups.find((x) => x.summary === b.factorSummary);
+        if (g) g.sheets.push(set.sheets[i]!.index);
+        else factorGroups.push({ summary: b.factorSummary, sheets: [set.sheets[i]!.index] });
+      });
+      const sy = basis.symbols;
+      const design = primaryFamily(set) === 'design';
       const bytes = await bindBook({
         set,
         chunks: pdfs.map((p) => readFileSync(p!)),
@@ -75,6 +85,9 @@ export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions):
         generator: opts.generator,
         basisTitle: basis.title,
         basisNotes: basis.notes,
+        symbols: sy,
+        factorGroups,
+        normalisation: normalisationText(set, sy, design ? sy.designAxial : sy.nominalAxial, design ? sy.designMoment : sy.nominalMoment, basis.normalisingStress),
       });
       for (const p of pdfs) if (p) rmSync(p, { force: true });
       writeFileAtomic(join(staging, 'book.pdf'), bytes);

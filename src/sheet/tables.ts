@@ -16,11 +16,12 @@ export function tableJson(set: ResolvedChartSet, sheet: ResolvedSheet, basis: Ba
       shape: describeShape(sheet.shape),
       fc: sheet.fc,
       fy: sheet.fy,
+      basisOptions: sheet.basisOptions,
       gamma: sheet.gamma,
       arrangement: { ...sheet.arrangement, text: describeArrangement(sheet.arrangement) },
       transverse: sheet.transverse,
     },
-    basis: { code: basis.code, title: basis.title },
+    basis: { code: basis.code, title: basis.title, factors: basis.factorSummary, symbols: basis.symbols },
     units: set.units,
     normalisation: set.normalisation,
     valueUnit: dimless ? 'dimensionless' : DISPLAY_UNITS[set.units].stress,
@@ -28,8 +29,10 @@ export function tableJson(set: ResolvedChartSet, sheet: ResolvedSheet, basis: Ba
       ? `P/(${basis.symbols.normalisingStress}·Ag) and M/(${basis.symbols.normalisingStress}·Ag·h)`
       : 'P/Ag and M/(Ag·h)',
     sheetShows: primary,
+    curvesBy: set.ratios.kind,
     rows: table.rows.map((r) => ({
-      rhoG: r.rhoG,
+      ...(r.omega !== undefined ? { omega: r.omega } : {}),
+      rhoG: Number(r.rhoG.toPrecision(6)),
       points: r.points.map((p) => ({ id: p.id, label: p.label, nominal: roundPoint(p.nominal), design: roundPoint(p.design) })),
     })),
   };

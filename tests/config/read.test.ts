@@ -30,7 +30,7 @@ describe('readChartSet', () => {
 
   it('fills defaults: ρg 0.01–0.08, factored curves, tabloid landscape for US units, stress normalisation', () => {
     const set = readChartSet(JSON.stringify(minimal));
-    expect(set.rhos).toEqual([0.01, 0.02, 0.03, 0.04, 0.05, 0.06, 0.07, 0.08]);
+    expect(set.ratios).toEqual({ kind: 'rhoG', values: [0.01, 0.02, 0.03, 0.04, 0.05, 0.06, 0.07, 0.08] });
     expect(set.families).toBe('design');
     expect(set.normalisation).toBe('stress');
     expect(set.paper).toEqual({ size: 'tabloid', orientation: 'landscape', widthPt: 1224, heightPt: 792 });

@@ -7,13 +7,31 @@ import { resolveBasis } from '../../src/codes/registry.js';
 import { barsForArea, clearSpacing, perFaceFor, proposeBars, requiredClearSpacing } from '../../src/design/bar-selection.js';
 import { barSet } from '../../src/section/bar-tables.js';
 
+const aciUs = resolveBasis('aci318-19', { units: 'us', fc: 4, fy: 60, transverse: 'tied' });
+const aciSi = resolveBasis('aci318-19', { units: 'si', fc: 28, fy: 420, transverse: 'tied' });
+const ec2 = resolveBasis('en1992-1-1', { units: 'si', fc: 30, fy: 500, transverse: 'tied' });
+const csa = resolveBasis('csa-a23.3-19', { units: 'si', fc: 35, fy: 400, transverse: 'tied' });
+
 describe('requiredClearSpacing (ACI 318-19 25.2.3)', () => {
   it('is 1.5 in for small bars, 1.5·db for large, 4/3 of the aggregate when that is larger', () => {
-    expect(requiredClearSpacing('us', 0.75)).toBe(1.5);
-    expect(requiredClearSpacing('us', 1.41)).toBeCloseTo(2.115, 12);
-    expect(requiredClearSpacing('us', 0.75, 1.5)).toBeCloseTo(2, 12);
-    expect(requiredClearSpacing('si', 20)).toBe(38);
-    expect(requiredClearSpacing('si', 32)).toBe(48);
+    expect(requiredClearSpacing(aciUs, 0.75)).toBe(1.5);
+    expect(requiredClearSpacing(aciUs, 1.41)).toBeCloseTo(2.115, 12);
+    expect(requiredClearSpacing(aciUs, 0.75, 1.5)).toBeCloseTo(2, 12);
+    expect(requiredClearSpacing(aciSi, 20)).toBe(38);
+    expect(requiredClearSpacing(aciSi, 32)).toBe(48);
+  });
+});
+
+describe('requiredClearSpacing of the other bases', () => {
+  it('EN 1992-1-1 8.2(2): max(k1·φ, dg + k2, 20 mm), recommended k1 = 1, k2 = 5 mm', () => {
+    expect(requiredClearSpacing(ec2, 16)).toBe(20); // 20 mm floor
+    expect(requiredClearSpacing(ec2, 32)).toBe(32); // k1·φ = 32
+    expect(requiredClearSpacing(ec2, 16, 32)).toBe(37); // dg + k2 = 32 + 5
+  });
+  it('CSA A23.1-19 6.6.5.2 (from memory): max(1.4·db, 1.4·aggregate, 30 mm)', () => {
+    expect(requiredClearSpacing(csa, 19.5)).toBe(30); // 1.4·19.5 = 27.3 < 30
+    expect(requiredClearSpacing(csa, 35.7)).toBeCloseTo(49.98, 10); // 35M: 1.4·35.7
+    expect(requiredClearSpacing(csa, 20, 28)).toBeCloseTo(39.2, 10); // 1.4·28
   });
 });
 
