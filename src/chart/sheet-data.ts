@@ -144,14 +144,14 @@ export function buildSheet(ctx: SheetContext): BuiltSheet {
 }
 
 /** A curve's label: "ρg 0.02", or "ω 0.2" on ω sets (the value the set asked for, not a rounded conversion). */
-export function curveKeyText(set: ResolvedChartSet, rho: number, k: number): string {
+export function curveKeyText(set: Pick<ResolvedChartSet, 'ratios'>, rho: number, k: number): string {
   const { kind, values } = set.ratios;
   return `${RATIO_SYMBOL[kind]} ${fmt(kind === 'omega' ? values[k]! : rho, 4)}`;
 }
 
 // ── plot ────────────────────────────────────────────────────────────────────────────────────────
 
-export function plotLayers(ctx: { family: CurveFamily; set: Pick<ResolvedChartSet, 'referenceLines'> }, templateLayout: SheetLayout, families: FamilyKind[], primary: FamilyKind, d: number, out: SheetData): void {
+export function plotLayers(ctx: { family: CurveFamily; set: Pick<ResolvedChartSet, 'referenceLines' | 'ratios'> }, templateLayout: SheetLayout, families: FamilyKind[], primary: FamilyKind, d: number, out: SheetData): void {
   const { family, set } = ctx;
   const n = family.curves.length;
   // Points per page point: from the extent of the outermost curve and the plot box.

@@ -110,7 +110,14 @@ export function buildCheckReport(input: CheckReportInput): CheckReportPage {
 
   // 1. the family at the actual γ, the governing curve, the loads
   const family = computeFamily({ basis: b, shape: rc.request.shape, arrangement: rc.request.arrangement, gamma: s.gamma, rhos: outcome.chart.rhos, capContext: s.capContext, basePoints: SHEET_BASE_POINTS });
-  plotLayers({ family, set: { referenceLines: { strainStates: true, eccentricities: [0.1, 0.25, 0.5, 1], axialCap: true } } }, L, ['design'], 'design', 1, data);
+  plotLayers(
+    { family, set: { referenceLines: { strainStates: true, eccentricities: [0.1, 0.25, 0.5, 1], axialCap: true }, ratios: { kind: 'rhoG', values: [...outcome.chart.rhos] } } },
+    L,
+    ['design'],
+    'design',
+    1,
+    data,
+  );
   const gov = outcome.results[0];
   const req = gov?.rhoRequired ?? null;
   const onStep = (rho: number) => outcome.chart.rhos.some((r) => Math.abs(r - rho) < 5e-4);
