@@ -10,9 +10,11 @@ import { sectionDepth, sectionWidth } from '../section/geometry.js';
 import { generatorLabel } from '../version.js';
 import { parseNumberList } from './format.js';
 import { addSectionOptions, resolveSectionFlags, type SectionFlags } from './section-flags.js';
+import { parseOmegaList, parseRhoList } from './table.js';
 
 export interface SheetOptions extends SectionFlags {
   rho?: string;
+  omega?: string;
   out?: string;
   families?: string;
   dimensionless?: boolean;
@@ -33,10 +35,10 @@ export async function sheetSetFromFlags(o: SheetOptions): Promise<{ set: Resolve
   const { PAPER_POINTS } = await import('../config/types.js');
   const { PAPER_SIZES, FAMILY_CHOICES } = await import('../config/schema.js');
   const { DEFAULT_TITLE_PATTERN, fileStemFor, fillPattern, titleFields } = await import('../config/describe.js');
-  const rhos = parseNumberList(o.rho ?? '0.01:0.08:0.01');
-  if (!rhos || rhos.length === 0) throw new PmError(ERROR_CODES.invalidValue, '--rho', 'is not a list (0.01,0.02) or a range start:stop:step', { value: o.rho });
-  for (const r of rhos) requireInRange('--rho', r, 0.001, 0.1);
-  if (rhos.length > 20) throw new PmError(ERROR_CODES.outOfRange, '--rho', 'gives more than 20 curves', { value: rhos.length, allowed: '1–20' });
+  if (o.omega !== undefined && o.rho !== undefined) throw new PmError(ERROR_CODES.conflict, '--omega', 'and --rho both set the curves; give one of them');
+  const ratioFlag = o.omega !== undefined ? '--omega' : '--rho';
+  const ratios = o.omega !== undefined ? { kind: 'omega' as const, values: parseOmegaList(o.omega, section.basis).omegas } : { kind: 'rhoG' as const, values: parseRhoList(o.rho) };
+  if (ratios.values.length > 20) throw new PmError(ERROR_CODES.outOfRange, ratioFlag, 'gives more than 20 curves', { value: ratios.values.length, allowed: '1–20' });
   const families = o.families ?? 'design';
   if (!(FAMILY_CHOICES as readonly string[]).includes(families)) throw new PmError(ERROR_CODES.invalidValue, '--families', 'is not one of the allowed values', { value: families, allowed: FAMILY_CHOICES.join(', ') });
   const size = o.paper ?? (section.units === 'us' ? 'tabloid' : 'a3');
@@ -70,7 +72,7 @@ export async function sheetSetFromFlags(o: SheetOptions): Promise<{ set: Resolve
     basisOptions: {},
     normalisation: o.dimensionless ? 'dimensionless' : 'stress',
     families: families as ResolvedChartSet['families'],
-    ratios: { kind: 'rhoG', values: rhos },
+    ratios,
     referenceLines: { strainStates: true, eccentricities: ecc, axialCap: true },
     outputs: { pdf: true, svg: false, png: false, pngScale: 2, tables: false },
     sheets: [{ ...partial, title: (() => { const t = fillPattern(DEFAULT_TITLE_PATTERN, titleFields(partial, section.units, fam, section.basis.symbols)); return t.charAt(0).toUpperCase() + t.slice(1); })(), fileStem: fileStemFor(partial, section.units, 1) }],
@@ -86,11 +88,11 @@ export async function runSheet(o: SheetOptions): Promise<string> {
   const { set, basis, capContext } = await sheetSetFromFlags(o);
   const sheet = set.sheets[0]!;
   const { computeFamily } = await import('../analysis/family.js');
-  const { SHEET_BASE_POINTS, sheetShape } = await import('../sheet/curves.js');
+  const { SHEET_BASE_POINTS, sheetRhos, sheetShape } = await import('../sheet/curves.js');
   const { buildSheet } = await import('../chart/sheet-data.js');
   const { SheetRenderer } = await import('../render/renderer.js');
   const { writeFileAtomic } = await import('../sheet/files.js');
-  const family = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: set.ratios.values, capContext, basePoints: SHEET_BASE_POINTS });
+  const family = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: sheetRhos(set, basis), capContext, basePoints: SHEET_BASE_POINTS });
   const built = buildSheet({ set, sheet, family, sheetNumber: 1, sheetCount: 1, generator: generatorLabel() });
   const page = { template: built.template, data: built.data };
   const renderer = await SheetRenderer.create();
@@ -113,6 +115,7 @@ export function registerSheet(program: Command, run: (fn: () => Promise<void> | 
   const cmd = program.command('sheet').description('one chart sheet from section flags, for a quick look (SVG, PNG or PDF by the --out extension)');
   addSectionOptions(cmd)
     .option('--rho <list>', 'ρg values: start:stop:step or a comma list (default 0.01:0.08:0.01)')
+    .option('--omega <list>', 'instead of --rho: mechanical ratios ω = As·fyd/(Ac·fcd), start:stop:step or a comma list')
     .option('--families <which>', 'design, nominal or both', 'design')
     .option('--dimensionless', 'divide by the normalising stress (f′c, or fcd for EN 1992-1-1)')
     .option('--eccentricities <list>', 'e/h of the radial lines (default 0.1,0.25,0.5,1)')

@@ -94,3 +94,20 @@ describe('import graph', () => {
     expect(pkgs).toContain('commander');
   });
 });
+
+describe('pmchart sheet --omega', () => {
+  it('keys the curves by ω and turns them into ρg = ω·fcd/fyd (EN 1992-1-1 3.1.6, 3.2.7: C60 fcd = 40 MPa, B500 fyd = 434.78 MPa)', async () => {
+    const { sheetSetFromFlags } = await import('../../src/cli/sheet.js');
+    const { sheetRhos } = await import('../../src/sheet/curves.js');
+    const { set, basis } = await sheetSetFromFlags({ code: 'en1992-1-1', fc: '60', fy: '500', gamma: '0.8', omega: '0.2,0.4' });
+    expect(set.ratios).toEqual({ kind: 'omega', values: [0.2, 0.4] });
+    const rhos = sheetRhos(set, basis);
+    expect(rhos[1]!).toBeCloseTo((0.4 * 40) / (500 / 1.15), 10);
+  });
+  it('refuses --omega with --rho, one line, exit 2', () => {
+    const r = cli(['sheet', '--fc', '4', '--fy', '60', '--gamma', '0.8', '--omega', '0.1', '--rho', '0.01', '--out', join(tmp, 'x.pdf')]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toBe('pmchart: --omega: and --rho both set the curves; give one of them\n');
+    expect(existsSync(join(tmp, 'x.pdf'))).toBe(false);
+  });
+});
