@@ -6,7 +6,7 @@
 import type { Box } from './layout.js';
 import type { TextRow } from './sheet-data.js';
 import type { VlSpec } from './spec.js';
-import { COLOURS, FONT_FAMILY, TEXT_STYLES, type TextStyle } from './style.js';
+import { chartConfig, COLOURS, round2, TEXT_STYLES, type TextStyle } from './style.js';
 
 export interface ContourPoint { i: number; Mx: number; My: number }
 export interface ContourLoad { id: string; Mx: number; My: number; governing: 0 | 1 }
@@ -27,7 +27,7 @@ export interface ContourPlot {
   texts: TextRow[];
 }
 
-const r2 = (v: number) => Math.round(v * 100) / 100;
+const r2 = round2;
 const r5 = (v: number) => Math.round(v * 1e5) / 1e5 + 0;
 
 /** A round half-width above `max`: 1, 2, 2.5 or 5 × 10^k, so the ticks land on round moments. */
@@ -71,24 +71,7 @@ export function contourSpec(c: ContourPlot): VlSpec {
     autosize: { type: 'none' },
     padding: { left: r2(c.plot.x), top: r2(c.plot.y), right: r2(c.page.w - c.plot.x - c.plot.w), bottom: r2(c.page.h - c.plot.y - c.plot.h) },
     background: COLOURS.paper,
-    config: {
-      font: FONT_FAMILY,
-      view: { stroke: COLOURS.faint, strokeWidth: 0.7 },
-      axis: {
-        labelFont: FONT_FAMILY,
-        titleFont: FONT_FAMILY,
-        labelFontSize: r2(0.82 * u),
-        titleFontSize: r2(0.95 * u),
-        titleFontWeight: 'normal',
-        titleColor: COLOURS.ink,
-        labelColor: COLOURS.muted,
-        gridColor: '#e4e9ed',
-        gridWidth: 0.5,
-        domainColor: COLOURS.faint,
-        tickColor: COLOURS.faint,
-        titlePadding: r2(0.8 * u),
-      },
-    },
+    config: chartConfig(u),
     encoding: {
       x: { ...x, axis: { title: c.xTitle, tickCount: 8 } },
       y: { ...y, axis: { title: c.yTitle, tickCount: 8 } },

@@ -5,7 +5,7 @@
  * and `padding` make the view exactly one page.
  */
 import type { SheetData, TemplateParams } from './sheet-data.js';
-import { COLOURS, FONT_FAMILY, TEXT_STYLES, type TextStyle } from './style.js';
+import { chartConfig, COLOURS, round2, TEXT_STYLES, type TextStyle } from './style.js';
 
 export type VlSpec = Record<string, unknown>;
 export const DATASET_NAMES = ['curves', 'curveLabels', 'refs', 'refLabels', 'frame', 'texts', 'rects', 'rules', 'dots', 'rings'] as const satisfies readonly (keyof SheetData)[];
@@ -108,24 +108,7 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
       bottom: round2(L.page.h - L.plot.y - L.plot.h),
     },
     background: COLOURS.paper,
-    config: {
-      font: FONT_FAMILY,
-      view: { stroke: COLOURS.faint, strokeWidth: 0.7 },
-      axis: {
-        labelFont: FONT_FAMILY,
-        titleFont: FONT_FAMILY,
-        labelFontSize: round2(0.82 * u),
-        titleFontSize: round2(0.95 * u),
-        titleFontWeight: 'normal',
-        titleColor: COLOURS.ink,
-        labelColor: COLOURS.muted,
-        gridColor: '#e4e9ed',
-        gridWidth: 0.5,
-        domainColor: COLOURS.faint,
-        tickColor: COLOURS.faint,
-        titlePadding: round2(0.8 * u),
-      },
-    },
+    config: chartConfig(u),
     encoding: {
       x: { ...x, axis: { title: t.xTitle, tickCount: 12, orient: 'bottom' } },
       y: { ...y, axis: { title: t.yTitle, tickCount: 14 } },
@@ -180,4 +163,3 @@ export function sheetSpec(t: TemplateParams, data: SheetData): VlSpec {
   return { ...sheetTemplate(t), datasets: data };
 }
 
-const round2 = (v: number) => Math.round(v * 100) / 100;

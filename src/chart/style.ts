@@ -59,3 +59,28 @@ export type TextStyle = keyof typeof TEXT_STYLES;
 
 /** Average advance of DejaVu Sans over mixed text, in em (for wrapping and truncation estimates). */
 export const AVG_CHAR_EM = 0.56;
+
+/** Rounds page coordinates to 0.01 pt so specs stay small and byte-stable. */
+export const round2 = (v: number): number => Math.round(v * 100) / 100;
+
+/** The page-level vega-lite config every chart of ours shares (font, plot frame, axes); `u` is the text unit in pt. */
+export function chartConfig(u: number) {
+  return {
+    font: FONT_FAMILY,
+    view: { stroke: COLOURS.faint, strokeWidth: 0.7 },
+    axis: {
+      labelFont: FONT_FAMILY,
+      titleFont: FONT_FAMILY,
+      labelFontSize: round2(0.82 * u),
+      titleFontSize: round2(0.95 * u),
+      titleFontWeight: 'normal',
+      titleColor: COLOURS.ink,
+      labelColor: COLOURS.muted,
+      gridColor: '#e4e9ed',
+      gridWidth: 0.5,
+      domainColor: COLOURS.faint,
+      tickColor: COLOURS.faint,
+      titlePadding: round2(0.8 * u),
+    },
+  };
+}
