@@ -268,8 +268,8 @@ export function checkAssumptions(rc: ResolvedCheck, outcome: CheckOutcome): stri
     const d = rc.request.barSelection.detailing;
     out.push(
       d.kind === 'cover'
-        ? `Bar proposals: one bar size each, centres at cover + tie + db/2 from the faces (γ recomputed per size); ${b.clearSpacingRule}; at least ${b.transverse === 'spiral' ? 6 : 4} bars (ACI 318-19 10.7.3.1, from memory; kept for every basis as common practice); sizes from ${barSet(b.barSet).source}, ${b.units === 'us' ? '#5' : '12 mm'} and up (common practice).`
-        : `Bar proposals: γ was given, so bar centres stay at (1 − γ)·h/2 from the faces for every size and the cover is not checked; ${b.clearSpacingRule}; at least ${b.transverse === 'spiral' ? 6 : 4} bars (ACI 318-19 10.7.3.1, from memory; kept for every basis as common practice).`,
+        ? `Bar proposals: one bar size each, centres at cover + tie + db/2 from the faces (γ recomputed per size); ${b.clearSpacingRule}; ${b.minimumBarRule}; sizes from ${barSet(b.barSet).source}, ${b.units === 'us' ? '#5' : '12 mm'} and up (common practice).`
+        : `Bar proposals: γ was given, so bar centres stay at (1 − γ)·h/2 from the faces for every size and the cover is not checked; ${b.clearSpacingRule}; ${b.minimumBarRule}.`,
     );
     if (rc.aggregate === undefined) out.push('No maximum aggregate size given: the aggregate term of the spacing rule is not checked.');
   }

@@ -137,6 +137,9 @@ function resolveAci(edition: Edition, input: BasisInput): Basis {
     minimumMoment: () => 0, // no minimum eccentricity for short columns; the cap 22.4.2.1 stands in for it
     // 25.2.3: clear spacing ≥ max(1.5 in, 1.5·db, 4/3·dagg) for columns; 38 mm in SI.
     minimumClearSpacing: (db: number, dg: number) => Math.max(units === 'us' ? 1.5 : 38, 1.5 * db, (4 / 3) * dg),
+    // 10.7.3.1 (from memory): four within rectangular or circular ties, six enclosed by spirals
+    minimumBarCount: () => (transverse === 'spiral' ? 6 : 4),
+    minimumBarRule: `at least ${transverse === 'spiral' ? 6 : 4} bars (${edition.title} 10.7.3.1, from memory)`,
     clearSpacingRule: `clear spacing ≥ max(${units === 'us' ? '1.5 in' : '38 mm'}, 1.5·db, 4/3·aggregate) (${edition.title} 25.2.3)`,
     barSet: units === 'us' ? 'astm-a615' : 'metric',
     factorSummary: `φ ${phiC}–0.90 by εt (${edition.clause}) · Pn,max ${capRatio}·Po (22.4.2.1)`,

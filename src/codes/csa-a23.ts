@@ -126,6 +126,9 @@ function resolveCsa(input: BasisInput): Basis {
     minimumMoment: () => 0,
     // CSA A23.1-19 6.6.5.2 (referenced by A23.3; from memory): clear distance ≥ max(1.4·db, 1.4·aggregate, 30 mm).
     minimumClearSpacing: (db: number, dg: number) => Math.max(1.4 * db, 1.4 * dg, 30),
+    // 10.9.3 (from memory): four bars in rectangular or circular ties, six in spirals
+    minimumBarCount: () => (transverse === 'spiral' ? 6 : 4),
+    minimumBarRule: `at least ${transverse === 'spiral' ? 6 : 4} bars (CSA A23.3-19 10.9.3, from memory)`,
     clearSpacingRule: 'clear spacing ≥ max(1.4·db, 1.4·aggregate, 30 mm) (CSA A23.1-19 6.6.5.2, from memory)',
     barSet: 'csa-g30.18',
     factorSummary: `φc ${CSA_PHI_C} · φs ${CSA_PHI_S} · α1 ${fmt(alpha1)} · β1 ${fmt(beta1)} (8.4.2, 8.4.3, 10.1.7)`,

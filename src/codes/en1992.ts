@@ -213,6 +213,9 @@ function resolveEc2(input: BasisInput): Basis {
     minimumMoment: (NEd: number, h: number) => Math.max(0, NEd) * Math.max(h / 30, 20),
     // 8.2(2): clear distance ≥ max(k1·φ, dg + k2, 20 mm), recommended k1 = 1, k2 = 5 mm.
     minimumClearSpacing: (db: number, dg: number) => Math.max(db, dg > 0 ? dg + 5 : 0, 20),
+    // 9.5.2(4): a bar in each corner of a polygonal section (4 in a rectangle); at least four in a circular column
+    minimumBarCount: () => 4,
+    minimumBarRule: 'a bar in each corner of a rectangle, at least 4 bars in a circular column (9.5.2(4))',
     clearSpacingRule: 'clear spacing ≥ max(k1·φ, dg + k2, 20 mm) with the recommended k1 = 1, k2 = 5 mm (8.2(2))',
     barSet: 'en-common',
     factorSummary: `αcc ${alphaCc} · γc ${gammaC} · γs ${gammaS} (${nonDefault.length > 0 ? 'not all recommended: check the NA' : 'recommended'})`,

@@ -128,6 +128,10 @@ export interface Basis {
   readonly clearSpacingRule: string;
   /** which bar-size table proposals draw from (src/section/bar-tables.ts) */
   readonly barSet: BarSetId;
+  /** fewest longitudinal bars the code allows for this transverse type and shape */
+  minimumBarCount(shape: 'rectangle' | 'circle'): number;
+  /** the rule above as text with its clause, for reports */
+  readonly minimumBarRule: string;
   /**
    * The factors on resistance in one line for title blocks and covers, with where they come from,
    * e.g. "αcc 1.0 · γc 1.5 · γs 1.15 (recommended)", "φc 0.65 · φs 0.85 · α1 0.76 · β1 0.82".

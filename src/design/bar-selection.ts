@@ -4,7 +4,7 @@
  *
  * Limits (US and SI):
  * - Ast between the basis limits (ACI 318-19 10.6.1.1: 0.01·Ag ≤ Ast ≤ 0.08·Ag);
- * - at least 4 bars with ties and 6 with a spiral (ACI 318-19 10.7.3.1, from memory);
+ * - at least the basis's minimum bar count (basis.minimumBarCount: ACI 318-19 10.7.3.1, EN 1992-1-1 9.5.2(4), CSA A23.3-19 10.9.3);
  * - clear spacing ≥ the basis's minimum (Basis.minimumClearSpacing: ACI 318-19 25.2.3, EN 1992-1-1 8.2(2), CSA A23.1 6.6.5.2);
  * - bar centres at cover + tie + db/2 from each face (common practice), so bars fit inside cover and tie.
  */
@@ -86,8 +86,6 @@ export const totalBars = (kind: SelectableKind, perFace: number): number =>
 export const arrangementOf = (kind: SelectableKind, perFace: number): Arrangement =>
   kind === 'ring' ? { kind, bars: perFace } : { kind, barsPerFace: perFace };
 
-/** Minimum bar count: 4 tied, 6 spiral (ACI 318-19 10.7.3.1, from memory). */
-export const minimumBars = (transverse: 'tied' | 'spiral'): number => (transverse === 'spiral' ? 6 : 4);
 
 /** Count and per-face count for a steel area with one bar size. */
 export function barsForArea(area: number, bar: { area: number }, kind: SelectableKind, minBars = 4): { count: number; perFace: number } {
@@ -156,7 +154,7 @@ export function proposeBars(req: BarSelectionRequest): BarProposal[] {
   const { basis, shape, kind, detailing } = req;
   const ag = grossArea(shape);
   const h = sectionDepth(shape);
-  const minBars = minimumBars(basis.transverse);
+  const minBars = basis.minimumBarCount(shape.kind);
   const out: BarProposal[] = [];
   for (const size of req.sizes) {
     const gamma = detailing.kind === 'cover' ? gammaFromCover(h, detailing.cover, detailing.tieDiameter, size.diameter) : detailing.gamma;

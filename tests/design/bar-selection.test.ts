@@ -88,3 +88,31 @@ describe('proposeBars', () => {
     expect(lighter).toEqual([]);
   });
 });
+
+describe('minimum bar count by basis', () => {
+  it('ACI 318-19 10.7.3.1 (from memory): 4 bars within ties, 6 within a spiral', () => {
+    expect(resolveBasis('aci318-19', { units: 'us', fc: 4, fy: 60, transverse: 'tied' }).minimumBarCount('circle')).toBe(4);
+    expect(resolveBasis('aci318-19', { units: 'us', fc: 4, fy: 60, transverse: 'spiral' }).minimumBarCount('circle')).toBe(6);
+  });
+  it('EN 1992-1-1 9.5.2(4): at least 4 bars in a circular column, whatever the transverse steel', () => {
+    expect(resolveBasis('en1992-1-1', { units: 'si', fc: 30, fy: 500, transverse: 'spiral' }).minimumBarCount('circle')).toBe(4);
+  });
+  it('proposals for a small spiral column with a light demand stop at the basis minimum', () => {
+    const run = (code: string, fc: number, fy: number) => {
+      const basis = resolveBasis(code, { units: 'si', fc, fy, transverse: 'spiral' });
+      return proposeBars({
+        basis,
+        shape: { kind: 'circle', diameter: 300 },
+        kind: 'ring',
+        detailing: { kind: 'cover', cover: 40, tieDiameter: 10 },
+        sizes: barSet('metric').sizes.filter((s) => s.diameter >= 12),
+        requiredArea: 0,
+        areaLimits: { min: 0.01 * Math.PI * 150 * 150, max: 0.04 * Math.PI * 150 * 150 },
+        loads: [{ P: 1, M: 0.1 }],
+        aggregate: 20,
+      });
+    };
+    expect(Math.min(...run('aci318-19', 30, 420).map((p) => p.count))).toBe(6);
+    expect(Math.min(...run('en1992-1-1', 30, 500).map((p) => p.count))).toBe(4);
+  });
+});
