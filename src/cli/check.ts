@@ -277,7 +277,8 @@ export function checkAssumptions(rc: ResolvedCheck, outcome: CheckOutcome): stri
   return out;
 }
 
-const statusText = (r: LoadResult): string =>
+/** The note column of a load's row, shared by the text table and the drawn report. */
+export const statusText = (r: LoadResult): string =>
   [
     r.rhoStatus === 'not-possible' ? `not possible (ρg > ${fmt(r.strain.atRho, 3)})` : r.rhoStatus === 'minimum-governs' ? 'minimum' : r.governedBy === 'cap' ? 'cap' : '',
     r.Mdesign > Math.abs(r.Mu) ? 'M raised to minimum' : '',

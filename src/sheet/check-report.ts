@@ -18,7 +18,7 @@ import { contourSpec } from '../chart/contour-spec.js';
 import type { Box, SheetLayout } from '../chart/layout.js';
 import { Deco, estWidth, plotLayers, wrap, type LoadLabelRow, type SheetData, type TemplateParams } from '../chart/sheet-data.js';
 import { COLOURS, TEXT_STYLES, type TextStyle } from '../chart/style.js';
-import type { ResolvedCheck } from '../cli/check.js';
+import { statusText, type ResolvedCheck } from '../cli/check.js';
 import type { CheckEffects } from '../cli/check-effects.js';
 import { contourPlot } from '../cli/contour-plot.js';
 import { fmt } from '../cli/format.js';
@@ -479,7 +479,7 @@ function resultsTable(fl: Flow, rc: ResolvedCheck, outcome: CheckOutcome): void 
     f(r.strain.phi, 3),
     CLASS_SHORT[r.strain.class] ?? r.strain.class,
     ...(withUtil ? [f(r.utilisation, 3)] : []),
-    r.rhoStatus === 'not-possible' ? `not possible ≤ ${fmt(r.strain.atRho, 3)}` : r.rhoStatus === 'minimum-governs' ? 'minimum ρg' : r.governedBy === 'cap' ? 'axial cap' : '',
+    statusText(r),
   ]);
   fl.table(cols, rows, outcome.results.map((r) => r.governing), (n) => `${n} more loads, in rank order: the .txt and .json reports list every load.`);
   const gov = outcome.results[0];

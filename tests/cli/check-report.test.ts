@@ -189,3 +189,12 @@ describe('contour --out FILE.svg|pdf', () => {
     expect(() => runContour({ ...flags, out: join(dir, 'c3.svg') })).toThrow(/--out/);
   });
 });
+
+describe('check --report notes', () => {
+  it('says on the drawn report, as in the text table, when EN 1992-1-1 6.1(4) raises the moment (e0 = max(h/30, 20 mm))', async () => {
+    // 400 mm column: e0 = max(13.3, 20) = 20 mm, so 2000 kN needs at least 40 kN·m; 10 kN·m is raised
+    const file = join(dir, 'en-min-moment.pdf');
+    await runCheckAsync({ code: 'en1992-1-1', fc: '30', fy: '500', b: '400', h: '400', gamma: '0.75', arrangement: 'four-faces', barsPerFace: '3', pu: '2000kN', mu: '10kN-m', proposals: '0', report: file });
+    expect(pdftotext(file)).toContain('M raised to minimum');
+  });
+});
