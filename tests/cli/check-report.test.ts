@@ -15,6 +15,7 @@ import { runContour, runContourPlot } from '../../src/cli/contour.js';
 import { CAUTION } from '../../src/cli/table.js';
 import { buildCheckReport } from '../../src/sheet/check-report.js';
 import { expectClose } from '../helpers/tolerance.js';
+import { markGroup } from '../helpers/svg.js';
 
 const root = new URL('../../', import.meta.url).pathname;
 const bin = join(root, 'bin/pmchart.js');
@@ -23,20 +24,6 @@ const dir = mkdtempSync(join(tmpdir(), 'pmchart-report-'));
 const hand: CheckOptions = { fc: '4', fy: '60', b: '24', h: '24', gamma: String(20 / 24), pu: '900', mu: '600', date: '2026-03-01', project: 'Quillon Street Depot (invented)' };
 const pdftotext = (file: string) => spawnSync('pdftotext', ['-layout', file, '-'], { encoding: 'utf8' }).stdout;
 
-/** The <g> of a named vega mark: vega writes class="mark-<type> role-<role> <name>". */
-const markGroup = (svg: string, name: string): string => {
-  const start = svg.indexOf(` ${name}" role=`);
-  if (start < 0) return '';
-  const open = svg.lastIndexOf('<g', start);
-  let depth = 0;
-  const re = /<g\b|<\/g>/g;
-  re.lastIndex = open;
-  for (let m = re.exec(svg); m; m = re.exec(svg)) {
-    depth += m[0] === '</g>' ? -1 : 1;
-    if (depth === 0) return svg.slice(open, m.index + 4);
-  }
-  return svg.slice(open);
-};
 const count = (s: string, re: RegExp) => (s.match(re) ?? []).length;
 
 describe('check --report FILE.pdf', () => {

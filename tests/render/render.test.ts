@@ -4,6 +4,7 @@ import { buildSheet } from '../../src/chart/sheet-data.js';
 import { SheetRenderer } from '../../src/render/renderer.js';
 import { familyForSheet } from '../../src/sheet/curves.js';
 import { referenceSet } from '../helpers/chart-set.js';
+import { markGroup } from '../helpers/svg.js';
 
 const page = (over: Record<string, unknown> = {}) => {
   const set = referenceSet(over);
@@ -13,20 +14,6 @@ const page = (over: Record<string, unknown> = {}) => {
   return { template: built.template, data: built.data };
 };
 
-/** The <g> of a named vega mark or scope: vega writes class="mark-<type> role-<role> <name>". */
-const markGroup = (svg: string, name: string): string => {
-  const start = svg.indexOf(` ${name}" role=`);
-  if (start < 0) return '';
-  const open = svg.lastIndexOf('<g', start);
-  let depth = 0;
-  const re = /<g\b|<\/g>/g;
-  re.lastIndex = open;
-  for (let m = re.exec(svg); m; m = re.exec(svg)) {
-    depth += m[0] === '</g>' ? -1 : 1;
-    if (depth === 0) return svg.slice(open, m.index + 4);
-  }
-  return svg.slice(open);
-};
 
 const LINE_PATH = /aria-roledescription="line mark" d="M/g;
 
