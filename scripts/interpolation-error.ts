@@ -4,7 +4,7 @@
  * The README quotes the figure this prints; tests/design/properties.test.ts holds the bound.
  */
 import { resolveBasis } from '../src/codes/registry.js';
-import { checkLoad, prepareCheck } from '../src/design/check.js';
+import { checkOneLoad as checkLoad, prepareColumnCheck as prepareCheck } from '../src/design/column-check.js';
 import type { Arrangement } from '../src/section/types.js';
 
 const samples = Number(process.argv[2] ?? 4000);

@@ -17,7 +17,7 @@ import { addSectionOptions, resolveSectionFlags, type SectionFlags } from './sec
 import { CAUTION } from './table.js';
 import { wrap, type TextRow } from '../chart/sheet-data.js';
 import { TEXT_STYLES, type TextStyle } from '../chart/style.js';
-import { PLOT_CONTOUR_POINTS } from './contour-plot.js';
+import { PLOT_CONTOUR_POINTS } from '../chart/contour-plot.js';
 
 export const CONTOUR_COLUMNS = ['na_angle_deg', 'na_depth', 'eps_t', 'phi', 'P', 'Mx', 'My'] as const;
 
@@ -141,7 +141,7 @@ export async function runContourPlot(o: ContourOptions): Promise<string> {
   const Mux = o.mu === undefined ? undefined : parseQuantity(o.mu, 'moment', u, '--mu');
   const Muy = o.muy === undefined ? undefined : parseQuantity(o.muy, 'moment', u, '--muy');
   const loads = Mux !== undefined || Muy !== undefined ? [{ id: 'load', Mux: Mux ?? 0, Muy: Muy ?? 0, governing: true }] : [];
-  const { contourPlot } = await import('./contour-plot.js');
+  const { contourPlot } = await import('../chart/contour-plot.js');
   const { contourSpec } = await import('../chart/contour-spec.js');
   const [W, H] = u === 'us' ? [792, 612] : [841.89, 595.28];
   const uu = Math.min(W, H) / 100 + 0.8;

@@ -1,19 +1,8 @@
 /** Deterministic number and CSV formatting shared by every command's output. */
 import { ERROR_CODES, PmError } from '../errors.js';
+import { fmt } from '../report/format.js';
 
-/** Seven significant digits, no −0, no exponent noise below 1e-12 in magnitude. */
-export function fmt(x: number, digits = 7): string {
-  if (!Number.isFinite(x)) return x > 0 ? 'inf' : x < 0 ? '-inf' : '';
-  if (Math.abs(x) < 1e-12) return '0';
-  return String(Number(x.toPrecision(digits)));
-}
-
-/** A number rounded as `fmt` shows it, for JSON. */
-export function num(x: number, digits = 7): number | null {
-  if (!Number.isFinite(x)) return null;
-  if (Math.abs(x) < 1e-12) return 0;
-  return Number(x.toPrecision(digits));
-}
+export { fmt, num } from '../report/format.js';
 
 const csvCell = (v: string | number): string => {
   const s = typeof v === 'number' ? fmt(v) : v;

@@ -175,8 +175,8 @@ export function tableJson(family: CurveFamily, req: TableRequest): string {
   return JSON.stringify(out, null, 1) + '\n';
 }
 
-export const CAUTION =
-  'For use by qualified engineers only. Check every result against the governing code edition and local practice; local codes and licensed engineering judgement take precedence.';
+import { CAUTION } from '../report/caution.js';
+export { CAUTION };
 
 export function registerTable(program: Command, run: (fn: () => Promise<void> | void) => Promise<void>): void {
   const cmd = program.command('table').description('normalised interaction-curve family as CSV or JSON (no section size needed)');

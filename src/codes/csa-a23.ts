@@ -62,6 +62,10 @@ export const CSA_SYMBOLS = {
   normalisingStress: 'f′c',
   concreteStrength: 'f′c',
   steelStrength: 'fy',
+  // A23.3-19 factors the materials (φc, φs): the class only says whether the tension steel has yielded
+  strainClassWords: { 'compression-controlled': 'steel below fy', transition: 'steel below fy', 'tension-controlled': 'steel yielded' },
+  actionAxial: 'Pf',
+  actionMoment: 'Mf',
 } as const;
 
 export const CSA_A23_3_19: DesignCode = {

@@ -122,6 +122,12 @@ export const EC2_SYMBOLS = {
   steelStrength: 'fyk',
   dimensionlessAxial: 'ν',
   dimensionlessMoment: 'μ',
+  // EN 1992-1-1 has no strain-controlled φ: the class only says whether the tension steel has yielded (3.2.7)
+  strainClassWords: { 'compression-controlled': 'steel below fyd', transition: 'steel below fyd', 'tension-controlled': 'steel at fyd' },
+  actionAxial: 'NEd',
+  actionMoment: 'MEd',
+  firstOrderMoment: 'M0Ed',
+  secondOrderMoment: 'MEd',
 } as const;
 
 export const EN_1992_1_1: DesignCode = {

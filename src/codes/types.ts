@@ -180,7 +180,25 @@ export interface BasisSymbols {
   dimensionlessAxial?: string;
   /** symbol of the dimensionless moment M/(normalising stress·Ag·h) ("μ" for EN); absent: spelled out */
   dimensionlessMoment?: string;
+  /** the code's words for the strain classes of `Basis.classify`; absent: ACI 318's words (`STRAIN_CLASS_WORDS`) */
+  strainClassWords?: Readonly<Record<StrainClass, string>>;
+  /** symbols of the factored actions: "Pu"/"Mu" (ACI), "NEd"/"MEd" (EN), "Pf"/"Mf" (CSA); absent: Pu, Mu */
+  actionAxial?: string;
+  actionMoment?: string;
+  /** the slenderness table's moments: first-order and second-order ("M2"/"Mc" for ACI, "M0Ed"/"MEd" for EN); absent: M2, Mc */
+  firstOrderMoment?: string;
+  secondOrderMoment?: string;
 }
+
+/** ACI 318-19 21.2.2 words for the strain classes. */
+export const STRAIN_CLASS_WORDS: Readonly<Record<StrainClass, string>> = {
+  'compression-controlled': 'compression-controlled',
+  transition: 'transition',
+  'tension-controlled': 'tension-controlled',
+};
+
+/** The words a basis uses for a strain class. */
+export const strainClassWord = (symbols: BasisSymbols, c: StrainClass): string => (symbols.strainClassWords ?? STRAIN_CLASS_WORDS)[c];
 
 /** A design code: input limits and a resolver from materials to a Basis. */
 export interface DesignCode {

@@ -34,7 +34,12 @@ export interface BarSelectionRequest {
   requiredArea: number;
   /** allowed steel area (internal area units) */
   areaLimits: { min: number; max: number };
-  loads: readonly NormalisedLoad[];
+  /**
+   * Re-verifies a candidate with its discrete bars against every load with every effect applied
+   * (the check engine supplies it: slenderness, minimum moment, sign and orientation, biaxial);
+   * returns the largest utilisation and the load that gives it. A candidate above 1 is never proposed.
+   */
+  verify: (arrangement: Arrangement, area: number, gamma: number) => { utilisation: number; index: number };
   /** maximum aggregate size, internal length units (0 when not given) */
   aggregate?: number;
   capContext?: CapContext;
@@ -137,18 +142,6 @@ export function describeLayout(kind: SelectableKind, count: number, perFace: num
   }
 }
 
-/** Largest utilisation over the loads: table screening, then the exact value for the few worst. */
-function worstUtilisation(table: ReturnType<typeof tabulate>, rho: number, loads: readonly NormalisedLoad[]): { utilisation: number; index: number } {
-  const screen = loads.map((l, i) => ({ i, u: capacityAlongRay(table, rho, l, false).utilisation }));
-  screen.sort((a, b) => b.u - a.u);
-  let best = { utilisation: 0, index: 0 };
-  for (const s of screen.slice(0, 4)) {
-    const u = capacityAlongRay(table, rho, loads[s.i]!, true).utilisation;
-    if (u > best.utilisation) best = { utilisation: u, index: s.i };
-  }
-  return best;
-}
-
 /** Proposals sorted by steel area (then utilisation), the lightest `count`. */
 export function proposeBars(req: BarSelectionRequest): BarProposal[] {
   const { basis, shape, kind, detailing } = req;
@@ -170,10 +163,8 @@ export function proposeBars(req: BarSelectionRequest): BarProposal[] {
       const clearRequired = requiredClearSpacing(basis, size.diameter, req.aggregate ?? 0);
       if (clear < clearRequired - 1e-9) break; // more bars only close the spacing further
       const arrangement = arrangementOf(kind, perFace);
-      const bars = layoutBars(shape, arrangement, area, { gamma });
-      const table = tabulate(prepareSection(basis, shape, bars, req.capContext ?? {}), 96);
       const rho = area / ag;
-      const worst = req.loads.length === 0 ? { utilisation: 0, index: 0 } : worstUtilisation(table, rho, req.loads);
+      const worst = req.verify(arrangement, area, gamma);
       if (worst.utilisation <= 1 + 1e-9) {
         out.push({
           size: size.name,

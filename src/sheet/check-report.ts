@@ -18,20 +18,19 @@ import { contourSpec } from '../chart/contour-spec.js';
 import type { Box, SheetLayout } from '../chart/layout.js';
 import { Deco, estWidth, plotLayers, wrap, type LoadLabelRow, type SheetData, type TemplateParams } from '../chart/sheet-data.js';
 import { COLOURS, TEXT_STYLES, type TextStyle } from '../chart/style.js';
-import { statusText, type ResolvedCheck } from '../cli/check.js';
-import type { CheckEffects } from '../cli/check-effects.js';
-import { contourPlot } from '../cli/contour-plot.js';
-import { fmt } from '../cli/format.js';
-import { biaxialSectionFor } from '../design/column-effects.js';
-import type { CheckOutcome, LoadResult } from '../design/check.js';
+import { contourPlot } from '../chart/contour-plot.js';
+import { strainClassWord } from '../codes/types.js';
+import type { ColumnCheck, ColumnLoadResult } from '../design/column-check.js';
+import { barsView, biaxialView, noteText, resultsFootnotes, resultsView, sectionLine, slendernessView, STATUS_WORDS, symbolsOf, type TableView } from '../report/check-view.js';
+import { cell as f, fmt } from '../report/format.js';
+import { prepareBiaxial } from '../analysis/biaxial.js';
 import type { CapContext } from '../codes/types.js';
 import type { Inset } from '../render/renderer.js';
 import { DISPLAY_UNITS, toDisplay, type UnitSystem } from '../units/index.js';
 import { SHEET_BASE_POINTS } from './curves.js';
 
 export interface CheckReportInput {
-  rc: ResolvedCheck;
-  outcome: CheckOutcome;
+  check: ColumnCheck;
   /** the check's own assumptions and notes (besides basis.notes) */
   assumptions: string[];
   caution: string;
@@ -93,67 +92,72 @@ function niceStep(span: number, n: number): number {
 }
 
 const r5 = (x: number): number => Math.round(x * 1e5) / 1e5 + 0;
-const f = (x: number | null | undefined, d = 4): string => (x === null || x === undefined || Number.isNaN(x) ? '—' : Number.isFinite(x) ? fmt(x, d) : x > 0 ? '∞' : '—');
-const CLASS_SHORT: Record<string, string> = { 'compression-controlled': 'compression', transition: 'transition', 'tension-controlled': 'tension' };
 
 export function buildCheckReport(input: CheckReportInput): CheckReportPage {
-  const { rc, outcome } = input;
-  const s = rc.section;
-  const b = s.basis;
-  const u = s.units;
+  const c = input.check;
+  const b = c.basis;
+  const u = c.units;
   const paper = reportPaper(u);
-  const fx = rc.effects;
-  const biaxial = fx?.bars ? fx : undefined;
-  const L = reportLayout(paper.w, paper.h, plotShare(paper, rc, outcome));
+  const L = reportLayout(paper.w, paper.h, plotShare(paper, c));
   const data: SheetData = { curves: [], curveLabels: [], refs: [], refLabels: [], frame: [], texts: [], rects: [], rules: [], dots: [], rings: [], loadMarks: [], loadLabels: [], extraCurves: [] };
   const g = new Deco(L, data);
 
   // 1. the family at the actual γ, the governing curve, the loads
-  const family = computeFamily({ basis: b, shape: rc.request.shape, arrangement: rc.request.arrangement, gamma: s.gamma, rhos: outcome.chart.rhos, capContext: s.capContext, basePoints: SHEET_BASE_POINTS });
+  const family = computeFamily({ basis: b, shape: c.shape, arrangement: c.arrangement, gamma: c.gamma, rhos: c.chart.rhos, capContext: c.capContext, basePoints: SHEET_BASE_POINTS });
   plotLayers(
-    { family, set: { referenceLines: { strainStates: true, eccentricities: [0.1, 0.25, 0.5, 1], axialCap: true }, ratios: { kind: 'rhoG', values: [...outcome.chart.rhos] } } },
+    { family, set: { referenceLines: { strainStates: true, eccentricities: [0.1, 0.25, 0.5, 1], axialCap: true }, ratios: { kind: 'rhoG', values: [...c.chart.rhos] } } },
     L,
     ['design'],
     'design',
     1,
     data,
   );
-  const gov = outcome.results[0];
+  const gov = c.results[0];
   const req = gov?.rhoRequired ?? null;
-  const onStep = (rho: number) => outcome.chart.rhos.some((r) => Math.abs(r - rho) < 5e-4);
-  if (gov && req !== null && !onStep(req)) extraCurve(family, req, `ρg req ${fmt(req, 4)}`, s.capContext, data);
-  const checked = outcome.checked?.rho;
-  if (checked !== undefined && !onStep(checked) && (req === null || Math.abs(checked - req) >= 5e-4)) extraCurve(family, checked, `checked ρg ${fmt(checked, 4)}`, s.capContext, data);
-  const domain = plotDomain(data, outcome.results);
-  placeLoads(L, domain, outcome.results, data);
+  const onStep = (rho: number) => c.chart.rhos.some((r) => Math.abs(r - rho) < 5e-4);
+  if (gov && req !== null && !onStep(req)) extraCurve(family, req, `ρg req ${fmt(req, 4)}`, c.capContext, data);
+  const checked = c.checked?.rho;
+  if (checked !== undefined && !onStep(checked) && (req === null || Math.abs(checked - req) >= 5e-4)) extraCurve(family, checked, `checked ρg ${fmt(checked, 4)}`, c.capContext, data);
+  const domain = plotDomain(data, c.results);
+  placeLoads(L, domain, c.results, data);
 
   const sy = b.symbols;
   const su = DISPLAY_UNITS[u].stress;
-  const hSym = rc.request.shape.kind === 'circle' ? 'D' : 'h';
+  const vs = symbolsOf(c);
+  const hSym = vs.depth;
   const template: TemplateParams = {
     layout: L,
-    xTitle: `${sy.designMoment} / (Ag · ${hSym}),  Mu / (Ag · ${hSym})   (${su})`,
-    yTitle: `${sy.designAxial} / Ag,  Pu / Ag   (${su})`,
+    xTitle: `${sy.designMoment} / (Ag · ${hSym}),  ${vs.M} / (Ag · ${hSym})   (${su})`,
+    yTitle: `${sy.designAxial} / Ag,  ${vs.P} / Ag   (${su})`,
     families: ['design'],
     overlay: domain,
   };
 
   // 2. panels
-  const title = `Column check: ${sectionText(rc)}`;
+  const title = `Column check: ${sectionText(c)}`;
   header(g, title, input);
-  g.text('heading', L.colA.x, L.colA.y + 1.0 * L.u, `Loads on the ${sy.designFamily} curves at the actual γ = ${fmt(s.gamma, 4)}`);
-  plotCaption(g, L, rc, outcome);
+  g.text('heading', L.colA.x, L.colA.y + 1.0 * L.u, `Loads on the ${sy.designFamily} curves at the actual γ = ${fmt(c.gamma, 4)}`);
+  plotCaption(g, L, c);
   const insets: Inset[] = [];
-  const yB = inputsPanel(g, L, rc, outcome);
-  if (biaxial && gov) contourPanel(g, L, rc, biaxial, gov, yB, insets);
-  else if (gov) summaryPanel(g, L, rc, outcome, yB);
+  const yB = inputsPanel(g, L, c);
+  if (c.biaxial && c.checked && gov) contourPanel(g, L, c, gov, yB, insets);
+  else if (gov) summaryPanel(g, L, c, yB);
   const bottom = new Flow(g, L.bottom);
-  resultsTable(bottom, rc, outcome);
-  if (biaxial) biaxialTable(bottom, rc, biaxial, outcome);
-  if (fx?.slenderness) slendernessTable(bottom, rc, fx, outcome);
-  barsTable(bottom, rc, outcome);
-  sidePanel(g, L, rc, input, fx, outcome);
-  titleBlock(g, L, rc, input);
+  if (bottom.heading('Results (governing load first)', Math.min(2, c.results.length))) {
+    bottom.table(columns(resultsView(c)), resultsView(c).rows, resultsView(c).marked, (n) => `${n} more loads, in rank order: the .txt and .json reports list every load.`);
+    bottom.note([`Summary: ${c.summary.text}.`, ...resultsFootnotes(c)].join(' '));
+  }
+  const bx = biaxialView(c);
+  if (bx && bottom.heading('Biaxial bending: three methods side by side (checked reinforcement; above 1 fails)', Math.min(2, c.results.length))) bottom.table(columns(bx), bx.rows, bx.marked);
+  const sl = slendernessView(c);
+  if (sl && bottom.heading(`Slenderness: ${sl.method}`, 2)) bottom.table(columns(sl.table), sl.table.rows, sl.table.marked);
+  const bars = barsView(c);
+  if (bottom.heading('Bar proposals (lightest first, re-verified with the discrete bars against every load and effect)', typeof bars === 'string' ? 0 : Math.min(2, bars.rows.length))) {
+    if (typeof bars === 'string') bottom.note(bars, 'body');
+    else bottom.table(columns(bars), bars.rows, bars.rows.map((_, i) => i === 0));
+  }
+  sidePanel(g, L, c, input);
+  titleBlock(g, L, c, input);
   return { template, data, insets, title };
 }
 
@@ -161,23 +165,32 @@ export function buildCheckReport(input: CheckReportInput): CheckReportPage {
  * Share of the column height the plot takes: what the tables under it need (in table lines, estimated), within
  * 45–62 %, so a short check gets a large plot and a long one keeps its tables on the page.
  */
-function plotShare(paper: { w: number; h: number }, rc: ResolvedCheck, outcome: CheckOutcome): number {
+function plotShare(paper: { w: number; h: number }, c: ColumnCheck): number {
   const u = Math.min(paper.w, paper.h) / 100 + 0.8;
   const colH = reportLayout(paper.w, paper.h, 0.5).colA.h;
-  const n = Math.min(outcome.results.length, 12);
-  const fx = rc.effects;
-  let lines = 5 + n + 3 + 4 + Math.max(1, outcome.bars.length);
-  if (fx?.bars) lines += 5 + n;
-  if (fx?.slenderness) lines += 5 + 2 * n;
+  const n = Math.min(c.results.length, 12);
+  let lines = 5 + n + 3 + 4 + Math.max(1, c.bars.length);
+  if (c.biaxial && c.checked) lines += 5 + n;
+  if (c.slenderness) lines += 5 + 2 * n;
   const need = lines * 1.22 * u + 9 * u;
   return Math.min(0.62, Math.max(0.45, 1 - need / colH));
 }
 
-function sectionText(rc: ResolvedCheck): string {
-  const s = rc.section;
-  const un = DISPLAY_UNITS[s.units];
-  const dims = s.shape.kind === 'rectangle' ? `${fmt(s.shape.b)} × ${fmt(s.shape.h)} ${un.length}` : `D = ${fmt(s.shape.diameter)} ${un.length}`;
-  return `${dims} ${s.basis.transverse}, ${s.arrangement.kind}, f′c ${fmt(s.basis.fc)} ${un.stress}, fy ${fmt(s.basis.fy)} ${un.stress}, γ ${fmt(s.gamma, 3)}`;
+function sectionText(c: ColumnCheck): string {
+  const un = DISPLAY_UNITS[c.units];
+  const sy = c.basis.symbols;
+  const dims = c.shape.kind === 'rectangle' ? `${fmt(c.shape.b)} × ${fmt(c.shape.h)} ${un.length}` : `D = ${fmt(c.shape.diameter)} ${un.length}`;
+  return `${dims} ${c.basis.transverse}, ${c.arrangement.kind}, ${sy.concreteStrength} ${fmt(c.basis.fc)} ${un.stress}, ${sy.steelStrength} ${fmt(c.basis.fy)} ${un.stress}, γ ${fmt(c.gamma, 3)}`;
+}
+
+/** Columns of a shared table view for the drawn table: text columns left, figures right. */
+function columns(t: TableView): { head: string; unit?: string; align: 'l' | 'r' }[] {
+  const text = new Set(['id', 'strain state', 'status', 'note', 'bars', 'method', 'axis', 'neglected', 'by load']);
+  return t.headers.map((h, i) => {
+    const sp = h.lastIndexOf(' ');
+    const unitLike = sp > 0 && /^[a-zA-Z²·\-]+$/.test(h.slice(sp + 1)) && !text.has(h) && /(kip|kN|in|mm|ft|m|ksi|MPa|psi|²)/.test(h.slice(sp + 1));
+    return { head: i === 0 ? 'load' : unitLike ? h.slice(0, sp) : h, ...(unitLike ? { unit: h.slice(sp + 1) } : {}), align: i === 0 || text.has(h) ? ('l' as const) : ('r' as const) };
+  });
 }
 
 // ── plot ────────────────────────────────────────────────────────────────────────────────────────
@@ -193,7 +206,7 @@ function extraCurve(family: CurveFamily, rho: number, label: string, capContext:
   if (at) data.curveLabels.push({ M: at.M, P: at.P, text: label, colour: COLOURS.ink, z: data.curveLabels.length });
 }
 
-function plotDomain(data: SheetData, results: readonly LoadResult[]): { domainM: [number, number]; domainP: [number, number] } {
+function plotDomain(data: SheetData, results: readonly ColumnLoadResult[]): { domainM: [number, number]; domainP: [number, number] } {
   let mMax = 0;
   let pMax = 0;
   let pMin = 0;
@@ -214,7 +227,7 @@ function plotDomain(data: SheetData, results: readonly LoadResult[]): { domainM:
 }
 
 /** Load marks in chart units; labels in points from the plot origin, set beside their mark where they collide with no other label. */
-function placeLoads(L: SheetLayout, d: { domainM: [number, number]; domainP: [number, number] }, results: readonly LoadResult[], data: SheetData): void {
+function placeLoads(L: SheetLayout, d: { domainM: [number, number]; domainP: [number, number] }, results: readonly ColumnLoadResult[], data: SheetData): void {
   const px = (M: number) => ((M - d.domainM[0]) / (d.domainM[1] - d.domainM[0])) * L.plot.w;
   const py = (P: number) => L.plot.h - ((P - d.domainP[0]) / (d.domainP[1] - d.domainP[0])) * L.plot.h;
   const placed: { x0: number; y0: number; x1: number; y1: number }[] = [];
@@ -252,13 +265,14 @@ function placeLoads(L: SheetLayout, d: { domainM: [number, number]; domainP: [nu
   data.loadLabels!.push(...labels);
 }
 
-function plotCaption(g: Deco, L: ReportLayout, rc: ResolvedCheck, outcome: CheckOutcome): void {
+function plotCaption(g: Deco, L: ReportLayout, c: ColumnCheck): void {
   const u = L.u;
   const y = L.plot.y + L.plot.h + 4.6 * u + 0.4 * u;
-  const n = outcome.results.length;
-  const gov = outcome.results[0];
-  const slender = `${rc.effects?.slenderness ? ' Moments as checked: magnified for slenderness.' : ''}${rc.effects?.bars ? ' The chart shows Mux; Muy enters the biaxial check.' : ''}`;
-  const text = `Curves at ρg ${outcome.chart.rhos.map((r) => fmt(r, 3)).join(', ')}; dashed ink: ρg required of the governing load and the checked ρg, where they fall between the steps. Dots: the ${n} load${n === 1 ? '' : 's'} at (Mu/(Ag·h), Pu/Ag); red diamond: governing${gov ? ` (${gov.id})` : ''}${n > LABELLED_LOADS ? `; the first ${LABELLED_LOADS} by rank are labelled` : ''}.${slender}`;
+  const n = c.results.length;
+  const gov = c.results[0];
+  const vs = symbolsOf(c);
+  const slender = `${c.slenderness ? ' Moments as checked: magnified for slenderness.' : ''}${c.biaxial ? ` The chart shows ${vs.M} about x${c.shape.kind === 'circle' ? ' (the resultant for a circle)' : ''}; ${vs.M}y enters the biaxial check.` : ''}`;
+  const text = `Curves at ρg ${c.chart.rhos.map((r) => fmt(r, 3)).join(', ')}; dashed ink: ρg required of the governing load and the checked ρg, where they fall between the steps. Dots: the ${n} load${n === 1 ? '' : 's'} at (${vs.M}/(Ag·${vs.depth}), ${vs.P}/Ag); red diamond: governing${gov ? ` (${gov.id})` : ''}${n > LABELLED_LOADS ? `; the first ${LABELLED_LOADS} by rank are labelled` : ''}.${slender}`;
   let yy = y;
   for (const line of wrap(text, L.colA.w, g.size('caption')).slice(0, 3)) {
     g.text('caption', L.colA.x, yy, line);
@@ -278,21 +292,22 @@ function header(g: Deco, title: string, input: CheckReportInput): void {
   void input;
 }
 
-function inputsPanel(g: Deco, L: ReportLayout, rc: ResolvedCheck, outcome: CheckOutcome): number {
+function inputsPanel(g: Deco, L: ReportLayout, c: ColumnCheck): number {
   const { colB: b, u } = L;
-  const s = rc.section;
-  const un = DISPLAY_UNITS[s.units];
+  const un = DISPLAY_UNITS[c.units];
+  const sy = c.basis.symbols;
   let y = b.y + 1.0 * u;
   g.text('heading', b.x, y, 'Inputs');
   y += 1.6 * u;
   const rows: [string, string][] = [
-    ['design basis', s.basis.title],
-    ['section', s.shape.kind === 'rectangle' ? `b × h = ${fmt(s.shape.b)} × ${fmt(s.shape.h)} ${un.length}, ${s.basis.transverse}` : `D = ${fmt(s.shape.diameter)} ${un.length}, ${s.basis.transverse}`],
-    ['materials', `f′c = ${fmt(s.basis.fc)} ${un.stress}, fy = ${fmt(s.basis.fy)} ${un.stress}`],
-    ['bars', `${s.arrangement.kind}, γ = ${fmt(s.gamma, 4)} (${s.gammaSource === 'given' ? 'given' : 'from cover, tie and bar'})`],
-    ['checked steel', outcome.checked ? `${outcome.checked.description} (ρg = ${f(outcome.checked.rho)})` : 'none given: ρg required only'],
-    ['loads', `${outcome.results.length} factored combination${outcome.results.length === 1 ? '' : 's'}, governing ${outcome.governingId ?? '—'}`],
-    ['chart sheets read', `γ = ${outcome.chart.lower}${outcome.chart.upper !== null ? ` and ${outcome.chart.upper}` : ''} (step ${outcome.chart.gammaStep})`],
+    ['design basis', c.basis.title],
+    ['section', c.shape.kind === 'rectangle' ? `b × h = ${fmt(c.shape.b)} × ${fmt(c.shape.h)} ${un.length}, ${c.basis.transverse}` : `D = ${fmt(c.shape.diameter)} ${un.length}, ${c.basis.transverse}`],
+    ['materials', `${sy.concreteStrength} = ${fmt(c.basis.fc)} ${un.stress}, ${sy.steelStrength} = ${fmt(c.basis.fy)} ${un.stress}`],
+    ['bars', `${c.arrangement.kind}, γ = ${fmt(c.gamma, 4)} (${c.gammaSource === 'given' ? 'given' : 'from cover, tie and bar'})`],
+    ['checked steel', c.checked ? `${c.checked.description} (ρg = ${f(c.checked.rho)})` : 'none given: ρg required only'],
+    ['loads', `${c.results.length} factored combination${c.results.length === 1 ? '' : 's'}, governing ${c.governingId ?? '—'}`],
+    ['status', c.summary.text],
+    ['chart sheets read', `γ = ${c.chart.lower}${c.chart.upper !== null ? ` and ${c.chart.upper}` : ''} (step ${c.chart.gammaStep})`],
   ];
   const kw = 8.2 * u;
   for (const [k, v] of rows) {
@@ -300,24 +315,24 @@ function inputsPanel(g: Deco, L: ReportLayout, rc: ResolvedCheck, outcome: Check
     y = g.paragraph('body', b.x + kw, y, b.w - kw, v, 1.3);
     y += 0.15 * u;
   }
-  const params = Object.entries(s.basis.parameters).map(([k, v]) => `${k} ${typeof v === 'number' ? fmt(v, 5) : v}`);
+  const params = Object.entries(c.basis.parameters).map(([k, v]) => `${k} ${typeof v === 'number' ? fmt(v, 5) : v}`);
   g.text('caption', b.x, y, 'PARAMETERS', kw - 0.5 * u);
   y = g.paragraph('body', b.x + kw, y, b.w - kw, params.join(' · '), 1.3);
   return y + 0.8 * u;
 }
 
-function contourPanel(g: Deco, L: ReportLayout, rc: ResolvedCheck, fx: CheckEffects, gov: LoadResult, y: number, insets: Inset[]): number {
+function contourPanel(g: Deco, L: ReportLayout, c: ColumnCheck, gov: ColumnLoadResult, y: number, insets: Inset[]): number {
   const { colB: b, u } = L;
-  const s = rc.section;
-  const load = rc.request.loads[gov.index]!;
-  const un = DISPLAY_UNITS[s.units];
-  g.text('heading', b.x, y + 1.0 * u, `Mx–My contour at Pu of ${gov.id}`);
+  const load = { Pu: gov.Pu, Mu: gov.Mu, Muy: gov.Muy ?? 0 };
+  const un = DISPLAY_UNITS[c.units];
+  const vs = symbolsOf(c);
+  g.text('heading', b.x, y + 1.0 * u, `Mx–My contour at ${vs.P} of ${gov.id}`);
   y += 1.8 * u;
-  const sec = biaxialSectionFor(s.basis, rc.request.shape, fx.bars!, s.capContext);
+  const sec = prepareBiaxial(c.basis, c.shape, c.checked!.bars, c.capContext);
   const tension = -sec.basis.design.factor(1) * sec.basis.design.steel.yieldStress * sec.steelArea;
   const bottomLimit = L.bottom.y - 3.6 * u;
   if (load.Pu > Math.min(sec.cap.design, squashPoint(sec)) || load.Pu <= tension) {
-    return g.paragraph('body', b.x, y + 1.0 * u, b.w, `Pu = ${f(toDisplay(load.Pu, 'force', s.units), 5)} ${un.force} is outside the axial range of the section: no contour.`) + u;
+    return g.paragraph('body', b.x, y + 1.0 * u, b.w, `${vs.P} = ${f(toDisplay(load.Pu, 'force', c.units), 5)} ${un.force} is outside the axial range of the section: no contour.`) + u;
   }
   const size = Math.max(10 * u, Math.min(b.w, bottomLimit - y));
   const box: Box = { x: b.x, y, w: b.w, h: size };
@@ -325,30 +340,30 @@ function contourPanel(g: Deco, L: ReportLayout, rc: ResolvedCheck, fx: CheckEffe
   const bottom = 4.4 * u;
   const side = Math.min(box.w - left - 0.8 * u, box.h - bottom - 0.6 * u);
   const plot: Box = { x: left + (box.w - left - 0.8 * u - side) / 2, y: 0.6 * u, w: side, h: side };
-  const cp = contourPlot(sec, load.Pu, [{ id: gov.id, Mux: load.Mu, Muy: load.Muy ?? 0, governing: true }], s.units, { page: { w: box.w, h: box.h }, plot, u });
+  const cp = contourPlot(sec, load.Pu, [{ id: gov.id, Mux: load.Mu, Muy: load.Muy, governing: true }], c.units, { page: { w: box.w, h: box.h }, plot, u });
   const spec = contourSpec({ ...cp, xTitle: `Mx   (${un.moment})`, yTitle: `My   (${un.moment})` });
   insets.push({ spec, x: Math.round(box.x * 100) / 100, y: Math.round(box.y * 100) / 100 });
-  const e = fx.loads[gov.index]!.biaxial!;
-  g.paragraph('caption', b.x, box.y + box.h + 1.0 * u, b.w, `${s.basis.symbols.designFamily} contour of the actual bars at Pu = ${f(toDisplay(load.Pu, 'force', s.units), 5)} ${un.force}, both axes to one scale; Mx bends the depth h, My the width b; the diamond is (Mux, Muy) of ${gov.id}. Moment utilisation at Pu ${f(e.exact.momentUtilisation, 3)} (exact).`, 1.3);
+  g.paragraph('caption', b.x, box.y + box.h + 1.0 * u, b.w, `${c.basis.symbols.designFamily} contour of the actual bars at ${vs.P} = ${f(toDisplay(load.Pu, 'force', c.units), 5)} ${un.force}, both axes to one scale; Mx bends the depth h, My the width b; the diamond is (${vs.M}x, ${vs.M}y) of ${gov.id}. Moment utilisation at ${vs.P} ${f(gov.biaxial?.exact?.momentUtilisation ?? null, 3)} (exact).`, 1.3);
   return box.y + box.h + 3.6 * u;
 }
 
 /** The governing load's answer in a few lines (when there is no contour to show). */
-function summaryPanel(g: Deco, L: ReportLayout, rc: ResolvedCheck, outcome: CheckOutcome, y: number): void {
+function summaryPanel(g: Deco, L: ReportLayout, c: ColumnCheck, y: number): void {
   const { colB: b, u } = L;
-  const gov = outcome.results[0]!;
-  const area = rc.section.units === 'us' ? 'in²' : 'mm²';
-  g.text('heading', b.x, y + 1.0 * u, `Governing load: ${gov.id}`);
+  const gov = c.results[0]!;
+  const area = c.units === 'us' ? 'in²' : 'mm²';
+  g.text('heading', b.x, y + 1.0 * u, `Governing load: ${gov.id} (${STATUS_WORDS[gov.status]})`);
   y += 2.0 * u;
   const lines: [TextStyle, string][] = [];
-  if (gov.rhoRequired === null) lines.push(['valueBold', `Not possible within ρg ≤ ${fmt(outcome.limits.max, 3)}`]);
-  else {
+  if (gov.status !== 'ok') lines.push(['valueBold', noteText(gov, c)]);
+  if (gov.rhoRequired !== null) {
     lines.push(['valueBold', `ρg required = ${f(gov.rhoRequired)}${gov.steelRequired !== null ? `, Ast = ${f(gov.steelRequired, 4)} ${area}` : ''}`]);
-    if (gov.rhoStatus === 'minimum-governs') lines.push(['body', `The minimum ρg = ${fmt(outcome.limits.min, 3)} governs.`]);
+    if (gov.rhoStatus === 'minimum-governs') lines.push(['body', `The minimum ρg = ${fmt(c.limits.min, 3)} governs.`]);
     if (gov.governedBy === 'cap') lines.push(['body', 'Held by the axial cap, not by the curve.']);
   }
+  if (gov.biaxial?.rhoStatus) lines.push(['valueBold', `ρg required, exact biaxial = ${f(gov.biaxial.rhoRequired)}`]);
   lines.push(['body', `Chart reading ${f(gov.rhoFromChart)}; next lower sheet, next curve out: ${f(gov.rhoRoundedDown, 3)}${gov.extraSteelRoundedDown != null && gov.extraSteelRoundedDown > 0 ? `, ${f(gov.extraSteelRoundedDown, 4)} ${area} more steel than exact` : ''}.`]);
-  lines.push(['body', `At capacity along the load ray: εt = ${f(gov.strain.epsT, 3)}, φ = ${f(gov.strain.phi, 3)}, ${gov.strain.class}.`]);
+  lines.push(['body', `At capacity along the load ray: εt = ${f(gov.strain.epsT, 3)}, φ = ${f(gov.strain.phi, 3)}, ${strainClassWord(c.basis.symbols, gov.strain.class)}.`]);
   if (gov.utilisation !== null) lines.push(['valueBold', `Utilisation of the checked steel: ${f(gov.utilisation, 3)}`]);
   for (const [style, text] of lines) y = g.paragraph(style, b.x, y, b.w, text, 1.35) + 0.3 * u;
 }
@@ -437,173 +452,7 @@ class Flow {
   }
 }
 
-function resultsTable(fl: Flow, rc: ResolvedCheck, outcome: CheckOutcome): void {
-  const u = rc.section.units;
-  const un = DISPLAY_UNITS[u];
-  const area = u === 'us' ? 'in²' : 'mm²';
-  const withUtil = outcome.checked !== null;
-  const biax = outcome.results.some((r) => rc.request.loads[r.index]?.Muy !== undefined);
-  const hSym = rc.request.shape.kind === 'circle' ? 'D' : 'h';
-  if (!fl.heading('Results (governing load first)', Math.min(2, outcome.results.length))) return;
-  const cols = [
-    { head: 'load', align: 'l' as const },
-    { head: 'Pu', unit: un.force, align: 'r' as const },
-    { head: biax ? 'Mux' : 'Mu', unit: un.moment, align: 'r' as const },
-    ...(biax ? [{ head: 'Muy', unit: un.moment, align: 'r' as const }] : []),
-    { head: 'Pu/Ag', unit: un.stress, align: 'r' as const },
-    { head: `Mu/(Ag·${hSym})`, unit: un.stress, align: 'r' as const },
-    { head: 'e/h', align: 'r' as const },
-    { head: 'ρg required', unit: 'exact', align: 'r' as const },
-    { head: 'ρg chart', unit: 'read', align: 'r' as const },
-    { head: 'ρg rounded', unit: 'next sheet down', align: 'r' as const },
-    { head: 'extra As', unit: area, align: 'r' as const },
-    { head: 'εt', align: 'r' as const },
-    { head: 'φ', align: 'r' as const },
-    { head: 'class', align: 'l' as const },
-    ...(withUtil ? [{ head: 'utilisation', align: 'r' as const }] : []),
-    { head: 'note', align: 'l' as const },
-  ];
-  const rows = outcome.results.map((r) => [
-    r.id,
-    f(toDisplay(r.Pu, 'force', u), 5),
-    f(toDisplay(r.Mu, 'moment', u), 5),
-    ...(biax ? [f(toDisplay(rc.request.loads[r.index]?.Muy ?? 0, 'moment', u), 5)] : []),
-    f(r.normalised.P),
-    f(r.normalised.M),
-    f(r.normalised.eOverH, 3),
-    f(r.rhoRequired),
-    f(r.rhoFromChart),
-    f(r.rhoRoundedDown, 3),
-    f(r.extraSteelRoundedDown, 4),
-    f(r.strain.epsT, 3),
-    f(r.strain.phi, 3),
-    CLASS_SHORT[r.strain.class] ?? r.strain.class,
-    ...(withUtil ? [f(r.utilisation, 3)] : []),
-    statusText(r),
-  ]);
-  fl.table(cols, rows, outcome.results.map((r) => r.governing), (n) => `${n} more loads, in rank order: the .txt and .json reports list every load.`);
-  const gov = outcome.results[0];
-  const extra = gov?.extraSteelRoundedDown;
-  fl.note(
-    `εt and φ at capacity along the load ray (${outcome.checked ? 'checked reinforcement' : 'at ρg required'}). ρg chart: read between curves along the load ray and between the sheets at γ ${outcome.chart.lower}${outcome.chart.upper !== null ? ` and ${outcome.chart.upper}` : ''}. ρg rounded: the next lower sheet, the next curve out.` +
-      (gov && extra != null && extra > 0 ? ` For ${gov.id} the rounded reading costs ${f(extra, 4)} ${area} more steel than the exact ρg.` : ''),
-  );
-}
-
-function biaxialTable(fl: Flow, rc: ResolvedCheck, fx: CheckEffects, outcome: CheckOutcome): void {
-  const u = rc.section.units;
-  const un = DISPLAY_UNITS[u];
-  if (!fl.heading('Biaxial bending: three methods side by side (checked reinforcement; above 1 fails)', Math.min(2, outcome.results.length))) return;
-  const rows = outcome.results.map((r) => {
-    const b = fx.loads[r.index]!.biaxial!;
-    return [
-      r.id,
-      f(b.exact.utilisation, 3),
-      f(b.exact.neutralAxisAngleDeg, 3),
-      f(b.reciprocalLoad.utilisation, 3),
-      b.reciprocalLoad.method === 'reciprocal-load' ? 'reciprocal load' : 'linear moments',
-      f(b.loadContour.utilisation, 3),
-      f(b.loadContour.alpha, 3),
-      f(b.exact.momentUtilisation, 3),
-      f(b.loadContour.momentScale, 3),
-      f(toDisplay(b.reciprocalLoad.Pn, 'force', u), 4),
-    ];
-  });
-  fl.table(
-    [
-      { head: 'load', align: 'l' },
-      { head: 'exact', unit: 'along the ray', align: 'r' },
-      { head: 'NA angle', unit: '°', align: 'r' },
-      { head: 'Bresler', unit: 'Pu/Pn or sum', align: 'r' },
-      { head: 'method', align: 'l' },
-      { head: 'load contour', unit: 'left side', align: 'r' },
-      { head: 'α', align: 'r' },
-      { head: 'exact', unit: 'moments at Pu', align: 'r' },
-      { head: 'contour', unit: 'moments at Pu', align: 'r' },
-      { head: 'Pn', unit: `${un.force}, reciprocal`, align: 'r' },
-    ],
-    rows,
-    outcome.results.map((r) => r.governing),
-  );
-}
-
-function slendernessTable(fl: Flow, rc: ResolvedCheck, fx: CheckEffects, outcome: CheckOutcome): void {
-  const u = rc.section.units;
-  const un = DISPLAY_UNITS[u];
-  const method = fx.loads[outcome.results[0]?.index ?? 0]?.magnified?.x.method ?? '';
-  if (!fl.heading(`Slenderness: ${method}`, 2)) return;
-  const rows: string[][] = [];
-  const bold: boolean[] = [];
-  for (const r of outcome.results) {
-    const e = fx.loads[r.index]!.magnified!;
-    for (const [axis, s] of [['x', e.x], ['y', e.y]] as const) {
-      if (!s) continue;
-      const st = (p: string) => s.steps.find((x) => x.label.startsWith(p))?.value;
-      const num = (v: unknown) => (typeof v === 'number' ? f(v, 3) : '—');
-      rows.push([
-        r.id,
-        axis,
-        num(st('kℓu/r') ?? st('λ = l0/i')),
-        num(st('limit') ?? st('λlim')),
-        s.neglected ? 'yes' : 'no',
-        f(s.delta, 4),
-        f(toDisplay(s.firstOrderMoment, 'moment', u), 5),
-        f(toDisplay(s.magnifiedMoment, 'moment', u), 5),
-        s.ok ? '' : s.delta === Infinity ? 'unstable: Pu ≥ 0.75·Pc' : 'over 1.4 × first order',
-      ]);
-      bold.push(r.governing);
-    }
-  }
-  fl.table(
-    [
-      { head: 'load', align: 'l' },
-      { head: 'axis', align: 'l' },
-      { head: 'slenderness', align: 'r' },
-      { head: 'limit', align: 'r' },
-      { head: 'neglected', align: 'l' },
-      { head: 'δ', align: 'r' },
-      { head: 'M2', unit: un.moment, align: 'r' },
-      { head: 'Mc', unit: un.moment, align: 'r' },
-      { head: 'note', align: 'l' },
-    ],
-    rows,
-    bold,
-  );
-}
-
-function barsTable(fl: Flow, rc: ResolvedCheck, outcome: CheckOutcome): void {
-  const u = rc.section.units;
-  const un = DISPLAY_UNITS[u];
-  if (!fl.heading('Bar proposals (lightest first, re-verified with the discrete bars)', outcome.bars.length === 0 ? 0 : Math.min(2, outcome.bars.length))) return;
-  if (outcome.bars.length === 0) {
-    fl.note(`None: ${outcome.barsSkipped ?? 'no layout passes every load within the limits'}.`, 'body');
-    return;
-  }
-  const rows = outcome.bars.map((p) => [
-    p.layout,
-    f(p.area, 4),
-    f(p.rho, 4),
-    f(p.gamma, 3),
-    `${f(p.clearSpacing, 3)} ≥ ${f(p.clearSpacingRequired, 3)}`,
-    f(p.utilisation, 3),
-    outcome.results.find((r) => r.index === p.governingLoad)?.id ?? '',
-  ]);
-  fl.table(
-    [
-      { head: 'bars', align: 'l' },
-      { head: 'As', unit: u === 'us' ? 'in²' : 'mm²', align: 'r' },
-      { head: 'ρg', align: 'r' },
-      { head: 'γ', align: 'r' },
-      { head: 'clear', unit: un.length, align: 'r' },
-      { head: 'util.', align: 'r' },
-      { head: 'by load', align: 'l' },
-    ],
-    rows,
-    rows.map((_, i) => i === 0),
-  );
-}
-
-function sidePanel(g: Deco, L: ReportLayout, rc: ResolvedCheck, input: CheckReportInput, fx: CheckEffects | undefined, outcome: CheckOutcome): void {
+function sidePanel(g: Deco, L: ReportLayout, c: ColumnCheck, input: CheckReportInput): void {
   const { colC: b, u } = L;
   // caution, pinned to the foot of the column
   const cLines = wrap(input.caution + ' This sheet states the code edition and its assumptions; it does not replace the judgement of the engineer of record.', b.w - 2 * u, g.size('caution'));
@@ -614,12 +463,12 @@ function sidePanel(g: Deco, L: ReportLayout, rc: ResolvedCheck, input: CheckRepo
   const limit = cTop - 1.0 * u;
 
   let y = b.y;
-  const gov = outcome.results[0];
-  if (fx?.slenderness && gov) {
-    const e = fx.loads[gov.index]!.magnified!;
+  const gov = c.results[0];
+  if (c.slenderness && gov?.slenderness) {
+    const e = gov.slenderness;
     g.text('heading', b.x, y + 1.0 * u, `Slenderness steps, ${gov.id}`);
     y += 2.0 * u;
-    const axes = [['x', e.x], ['y', e.y]].filter((a): a is ['x' | 'y', NonNullable<typeof e.x>] => a[1] !== undefined);
+    const axes = [['x', e.x], ['y', e.y]].filter((a): a is ['x' | 'y', NonNullable<typeof e.x>] => a[1] != null);
     const colW = b.w / axes.length;
     let yEnd = y;
     axes.forEach(([axis, s], k) => {
@@ -637,9 +486,9 @@ function sidePanel(g: Deco, L: ReportLayout, rc: ResolvedCheck, input: CheckRepo
     y = yEnd + 0.6 * u;
   }
 
-  g.text('heading', b.x, y + 1.0 * u, `Assumptions and clauses: ${rc.section.basis.title}`);
+  g.text('heading', b.x, y + 1.0 * u, `Assumptions and clauses: ${c.basis.title}`);
   y += 2.0 * u;
-  const notes = [...rc.section.basis.notes, ...input.assumptions];
+  const notes = [...c.basis.notes, ...input.assumptions];
   const lh = g.size('body') * 1.3;
   let cut = 0;
   for (let i = 0; i < notes.length; i++) {
@@ -658,13 +507,13 @@ function sidePanel(g: Deco, L: ReportLayout, rc: ResolvedCheck, input: CheckRepo
   if (cut > 0) g.text('caption', b.x, y + 0.2 * u, `${cut} more assumption${cut === 1 ? '' : 's'}: the .txt and .json reports list them all.`, b.w);
 }
 
-function titleBlock(g: Deco, L: ReportLayout, rc: ResolvedCheck, input: CheckReportInput): void {
+function titleBlock(g: Deco, L: ReportLayout, c: ColumnCheck, input: CheckReportInput): void {
   const { titleBlock: b, u } = L;
   const cells: [string, string, number][] = [
     ['office', input.office ?? '', 3.2],
     ['project', input.project ?? '', 4.2],
-    ['design basis', rc.section.basis.title, 1.4],
-    ['section', sectionText(rc), 5.2],
+    ['design basis', c.basis.title, 1.4],
+    ['section', sectionText(c), 5.2],
     ['date', input.date, 1.1],
     ['generated by', input.generator, 1.3],
     ['sheet', '1 of 1', 0.8],

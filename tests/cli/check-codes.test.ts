@@ -64,7 +64,7 @@ describe('check --code en1992-1-1', () => {
     const text = runCheck({ ...en, json: false, b: '400', h: '400', pu: '2000kN', mu: '10kN-m' });
     expect(text).toContain('fck = 30 MPa, fyk = 500 MPa');
     expect(text).not.toContain('f′c');
-    expect(text).toContain('M raised to minimum');
+    expect(text).toContain('MEd raised to minimum');
   });
 });
 

@@ -10,7 +10,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { PDFDocument } from 'pdf-lib';
 import { describe, expect, it } from 'vitest';
-import { computeCheck, runCheck, runCheckAsync, checkAssumptions, type CheckOptions } from '../../src/cli/check.js';
+import { computeCheck, runCheck, runCheckAsync, type CheckOptions } from '../../src/cli/check.js';
+import { checkAssumptions } from '../../src/report/check-view.js';
 import { runContour, runContourPlot } from '../../src/cli/contour.js';
 import { CAUTION } from '../../src/cli/table.js';
 import { buildCheckReport } from '../../src/sheet/check-report.js';
@@ -64,8 +65,8 @@ describe('check --report FILE.pdf', () => {
 
 describe('check --report FILE.svg', () => {
   it('marks each load at its normalised point (hand-check values), the governing one apart, with labels', async () => {
-    const { rc, outcome } = computeCheck(hand);
-    const page = buildCheckReport({ rc, outcome, assumptions: checkAssumptions(rc, outcome), caution: CAUTION, date: '2026-03-01', generator: 'pmchart test' });
+    const { check } = computeCheck(hand);
+    const page = buildCheckReport({ check, assumptions: checkAssumptions(check), caution: CAUTION, date: '2026-03-01', generator: 'pmchart test' });
     const mark = page.data.loadMarks![0]!;
     expectClose(mark.P, 900 / 576, 1e-5); // Pu/(b·h) = 1.5625 ksi
     expectClose(mark.M, (600 * 12) / (576 * 24), 1e-4); // Mu/(b·h²) = 0.5208 ksi
@@ -146,7 +147,7 @@ describe('contour --out FILE.svg|pdf', () => {
     const rows = runContour({ ...flags, points: '8' }).trim().split('\n').slice(1).map((l) => l.split(',').map(Number));
     const { resolveSectionFlags } = await import('../../src/cli/section-flags.js');
     const { actualBars, biaxialSectionOf } = await import('../../src/cli/actual-bars.js');
-    const { contourPlot } = await import('../../src/cli/contour-plot.js');
+    const { contourPlot } = await import('../../src/chart/contour-plot.js');
     const section = resolveSectionFlags(flags, true);
     const sec = biaxialSectionOf(section, actualBars(section, flags.rho).bars);
     const plot = contourPlot(sec, 300, [], 'us', { page: { w: 400, h: 400 }, plot: { x: 40, y: 10, w: 340, h: 340 }, u: 5 }, 8);
@@ -182,6 +183,6 @@ describe('check --report notes', () => {
     // 400 mm column: e0 = max(13.3, 20) = 20 mm, so 2000 kN needs at least 40 kN·m; 10 kN·m is raised
     const file = join(dir, 'en-min-moment.pdf');
     await runCheckAsync({ code: 'en1992-1-1', fc: '30', fy: '500', b: '400', h: '400', gamma: '0.75', arrangement: 'four-faces', barsPerFace: '3', pu: '2000kN', mu: '10kN-m', proposals: '0', report: file });
-    expect(pdftotext(file)).toContain('M raised to minimum');
+    expect(pdftotext(file)).toContain('MEd raised to minimum');
   });
 });

@@ -6,6 +6,10 @@ import { describe, expect, it } from 'vitest';
 import { resolveBasis } from '../../src/codes/registry.js';
 import { barsForArea, clearSpacing, perFaceFor, proposeBars, requiredClearSpacing } from '../../src/design/bar-selection.js';
 import { barSet } from '../../src/section/bar-tables.js';
+import type { Basis } from '../../src/codes/types.js';
+import { layoutVerifier } from '../../src/design/column-check.js';
+import { grossArea, sectionDepth } from '../../src/section/geometry.js';
+import type { Shape } from '../../src/section/types.js';
 
 const aciUs = resolveBasis('aci318-19', { units: 'us', fc: 4, fy: 60, transverse: 'tied' });
 const aciSi = resolveBasis('aci318-19', { units: 'si', fc: 28, fy: 420, transverse: 'tied' });
@@ -47,6 +51,14 @@ describe('counts per face', () => {
   });
 });
 
+/** The engine's re-verification for normalised uniaxial loads (P/Ag, M/(Ag·h)). */
+function verifierFor(basis: Basis, shape: Shape, kind: 'two-faces' | 'ring', loads: { P: number; M: number }[]) {
+  const ag = grossArea(shape);
+  const h = sectionDepth(shape);
+  const arrangement = kind === 'ring' ? { kind, bars: 8 } : { kind, barsPerFace: 2 };
+  return layoutVerifier({ basis, shape, arrangement, gamma: 0.8, loads: loads.map((l, i) => ({ id: `L${i}`, Pu: l.P * ag, Mu: l.M * ag * h })) });
+}
+
 describe('proposeBars', () => {
   const basis = resolveBasis('aci318-19', { units: 'us', fc: 4, fy: 60, transverse: 'tied' });
   const shape = { kind: 'rectangle', b: 24, h: 24 } as const;
@@ -60,7 +72,7 @@ describe('proposeBars', () => {
     sizes,
     requiredArea: 0.024 * 576,
     areaLimits: { min: 5.76, max: 46.08 },
-    loads,
+    verify: verifierFor(basis, shape, 'two-faces', loads),
     aggregate: 1,
   });
 
@@ -83,7 +95,7 @@ describe('proposeBars', () => {
     const lighter = proposeBars({
       basis, shape, kind: 'two-faces', detailing: { kind: 'cover', cover: 1.5, tieDiameter: 0.5 },
       sizes: sizes.filter((s) => s.name === best.size), requiredArea: best.area - 2 * best.barArea, areaLimits: { min: 5.76, max: 46.08 },
-      loads, aggregate: 1, extraCounts: 0,
+      verify: verifierFor(basis, shape, 'two-faces', loads), aggregate: 1, extraCounts: 0,
     });
     expect(lighter).toEqual([]);
   });
@@ -108,7 +120,7 @@ describe('minimum bar count by basis', () => {
         sizes: barSet('metric').sizes.filter((s) => s.diameter >= 12),
         requiredArea: 0,
         areaLimits: { min: 0.01 * Math.PI * 150 * 150, max: 0.04 * Math.PI * 150 * 150 },
-        loads: [{ P: 1, M: 0.1 }],
+        verify: verifierFor(basis, { kind: 'circle', diameter: 300 }, 'ring', [{ P: 1, M: 0.1 }]),
         aggregate: 20,
       });
     };

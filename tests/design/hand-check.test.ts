@@ -7,7 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { resolveBasis } from '../../src/codes/registry.js';
 import { barsForArea } from '../../src/design/bar-selection.js';
 import { capacityAlongRay } from '../../src/design/ray.js';
-import { checkLoad, prepareCheck } from '../../src/design/check.js';
+import { checkOneLoad as checkLoad, prepareColumnCheck as prepareCheck } from '../../src/design/column-check.js';
 import { barSet, findBar } from '../../src/section/bar-tables.js';
 
 const basis = resolveBasis('aci318-19', { units: 'us', fc: 4, fy: 60, transverse: 'tied' });
@@ -30,13 +30,13 @@ describe('hand-check at γ = 0.75 (common practice, worked by hand)', () => {
   });
 
   it('φPn along the load ray is about 825 kip at ρg = 0.02 and 954 kip at ρg = 0.03', () => {
-    close(capacityAlongRay(ctx.table, 0.02, n).P * ag, 825, 0.002);
-    close(capacityAlongRay(ctx.table, 0.03, n).P * ag, 954, 0.002);
+    close(capacityAlongRay(ctx.variants[0]!.table, 0.02, n).P * ag, 825, 0.002);
+    close(capacityAlongRay(ctx.variants[0]!.table, 0.03, n).P * ag, 954, 0.002);
   });
 
   it('ρg = 0.03 is the smallest 0.01-step curve enclosing the point; 0.02 is not enough', () => {
-    expect(capacityAlongRay(ctx.table, 0.02, n).utilisation).toBeGreaterThan(1);
-    expect(capacityAlongRay(ctx.table, 0.03, n).utilisation).toBeLessThan(1);
+    expect(capacityAlongRay(ctx.variants[0]!.table, 0.02, n).utilisation).toBeGreaterThan(1);
+    expect(capacityAlongRay(ctx.variants[0]!.table, 0.03, n).utilisation).toBeLessThan(1);
     const r = checkLoad(ctx, load, 0);
     expect(r.rhoRoundedDown).toBe(0.03);
     expect(r.rhoRequired!).toBeGreaterThan(0.02);
@@ -72,7 +72,7 @@ describe('exact answer at γ = 20/24 = 0.833 (common practice, worked by hand)',
   });
 
   it('the capacity at the exact ρg equals the demand', () => {
-    const cap = capacityAlongRay(ctx.table, r.rhoRequired!, { P: 900 / ag, M: 7200 / (ag * 24) });
+    const cap = capacityAlongRay(ctx.variants[0]!.table, r.rhoRequired!, { P: 900 / ag, M: 7200 / (ag * 24) });
     close(cap.utilisation, 1, 1e-6);
     expect(r.strain.class).toBe('compression-controlled');
     expect(r.strain.phi).toBe(0.65);

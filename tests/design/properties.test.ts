@@ -6,7 +6,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { resolveBasis } from '../../src/codes/registry.js';
-import { checkLoad, prepareCheck } from '../../src/design/check.js';
+import { checkOneLoad as checkLoad, prepareColumnCheck as prepareCheck } from '../../src/design/column-check.js';
 import { capacityAlongRay } from '../../src/design/ray.js';
 import { rhoRequired } from '../../src/design/rho-required.js';
 
@@ -27,7 +27,7 @@ describe('rhoRequired', () => {
   it('is monotone in Pu at fixed e/h (compression side)', () => {
     fc.assert(
       fc.property(gammaIndex, fc.double({ min: 0.02, max: 2, noNaN: true }), fc.double({ min: 0.05, max: 4, noNaN: true }), fc.double({ min: 1.001, max: 1.5, noNaN: true }), (gi, e, p, k) => {
-        const t = contexts[gi]!.ctx.table;
+        const t = contexts[gi]!.ctx.variants[0]!.table;
         const a = asRank(rhoRequired(t, { P: p, M: p * e }, limits));
         const b = asRank(rhoRequired(t, { P: p * k, M: p * k * e }, limits));
         expect(b).toBeGreaterThanOrEqual(a - 1e-9);
@@ -39,7 +39,7 @@ describe('rhoRequired', () => {
   it('gives a capacity along the ray equal to the demand within 0.1 %', () => {
     fc.assert(
       fc.property(gammaIndex, fc.double({ min: -1, max: 5, noNaN: true }), fc.double({ min: 0, max: 2, noNaN: true }), (gi, p, m) => {
-        const t = contexts[gi]!.ctx.table;
+        const t = contexts[gi]!.ctx.variants[0]!.table;
         const r = rhoRequired(t, { P: p, M: m }, limits);
         if (r.status !== 'ok') return;
         expect(Math.abs(capacityAlongRay(t, r.rho!, { P: p, M: m }).utilisation - 1)).toBeLessThanOrEqual(1e-3);
@@ -49,7 +49,7 @@ describe('rhoRequired', () => {
   });
 
   it('reports the minimum for a small load and not possible for a huge one', () => {
-    const t = contexts[2]!.ctx.table;
+    const t = contexts[2]!.ctx.variants[0]!.table;
     expect(rhoRequired(t, { P: 0.2, M: 0.05 }, limits)).toMatchObject({ rho: 0.01, status: 'minimum-governs' });
     expect(rhoRequired(t, { P: 0, M: 0 }, limits)).toMatchObject({ rho: 0.01, status: 'minimum-governs' });
     expect(rhoRequired(t, { P: -5e-324, M: 5e-324 }, limits)).toMatchObject({ rho: 0.01, status: 'minimum-governs' }); // found by fast-check
@@ -59,13 +59,13 @@ describe('rhoRequired', () => {
   });
 
   it('solves pure tension in closed form: φ·fy·ρg = −p (ACI 318-19 Table 21.2.2, φ = 0.90; first principles)', () => {
-    const r = rhoRequired(contexts[2]!.ctx.table, { P: -1.5, M: 0 }, limits);
+    const r = rhoRequired(contexts[2]!.ctx.variants[0]!.table, { P: -1.5, M: 0 }, limits);
     expect(r.rho!).toBeCloseTo(1.5 / (0.9 * 60), 6);
   });
 
   it('solves the axial cap in closed form: 0.80·0.65·(0.85·f′c·(1 − ρ) + fy·ρ) = p (ACI 318-19 22.4.2.1)', () => {
     const p = 3.2;
-    const r = rhoRequired(contexts[2]!.ctx.table, { P: p, M: 0.01 }, limits);
+    const r = rhoRequired(contexts[2]!.ctx.variants[0]!.table, { P: p, M: 0.01 }, limits);
     expect(r.governedBy).toBe('cap');
     expect(r.rho!).toBeCloseTo((p / 0.52 - 3.4) / (60 - 3.4), 9);
   });

@@ -3,9 +3,9 @@
  * standalone (`pmchart contour --out FILE.svg|pdf`) or as the check report's inset.
  */
 import { contourAtAxial, type BiaxialSection } from '../analysis/biaxial.js';
-import { contourExtent, type ContourLoad, type ContourPlot } from '../chart/contour-spec.js';
-import type { Box } from '../chart/layout.js';
-import type { TextRow } from '../chart/sheet-data.js';
+import { contourExtent, type ContourLoad, type ContourPlot } from './contour-spec.js';
+import type { Box } from './layout.js';
+import type { TextRow } from './sheet-data.js';
 import { DISPLAY_UNITS, toDisplay, type UnitSystem } from '../units/index.js';
 
 /** Neutral-axis angles over a full turn for a drawn contour: about 2.5° apart, smooth at print size. */

@@ -1,0 +1,612 @@
+/**
+ * The column-check engine: one pure entry, one immutable result that every view reads.
+ *
+ *   loads ─▶ 1. slenderness (basis method, per axis) ─▶ checked Mux, Muy (signs kept)
+ *        ─▶ 2. uniaxial: normalise, minimum moment, every section variant the sign or orientation
+ *              can load (mirrored layout for a negative moment, ring orientations) ─▶ the weakest
+ *        ─▶ 3. biaxial (Muy given): exact capacity of the bars, or the exact ρg required
+ *        ─▶ 4. status (ok, fails, not possible, unstable, outside the method's scope) and measure
+ *   all loads ─▶ 5. governing first ─▶ 6. bar proposals re-verified against every load with every effect
+ *             ─▶ 7. summary and exit status
+ *
+ * `checkColumnLoads` yields the per-load results in input order (for streaming views);
+ * `checkColumn` collects them and adds the ranking, proposals and summary. No I/O, no CLI names.
+ */
+import { capacityAlongRay as biaxialRay, prepareBiaxial, type BiaxialSection } from '../analysis/biaxial.js';
+import { prepareSection } from '../analysis/prepared-section.js';
+import type { Basis, CapContext, StrainClass } from '../codes/types.js';
+import { layoutBars } from '../section/arrangements.js';
+import type { BarSize } from '../section/bar-tables.js';
+import { grossArea, sectionDepth } from '../section/geometry.js';
+import type { Arrangement, Bar, Shape } from '../section/types.js';
+import type { UnitSystem } from '../units/index.js';
+import { isSelectableKind, proposeBars, type BarProposal, type Detailing } from './bar-selection.js';
+import { checkBiaxial, type BiaxialResult } from './biaxial.js';
+import { rhoLimitsFor, withMinimum, type FactoredLoad, type GivenLayout } from './check.js';
+import { buildChartSet, readCharts, type ChartSet, type SheetReading } from './chart-reading.js';
+import { magnifyLoad, type MagnifiedLoad, type SlendernessRequest } from './column-effects.js';
+import { capacityAlongRay, strainReport, tabulate, type NormalisedLoad, type RayTable } from './ray.js';
+import { rhoRequired, type RhoStatus } from './rho-required.js';
+
+// ───────────────────────────── input ─────────────────────────────
+
+export interface ColumnCheckInput {
+  basis: Basis;
+  /** actual section, internal units */
+  shape: Shape;
+  arrangement: Arrangement;
+  /** bar-spacing ratio of the arrangement */
+  gamma: number;
+  /** where γ came from, for the views (default 'given') */
+  gammaSource?: 'given' | 'detailing';
+  capContext?: CapContext;
+  loads: readonly FactoredLoad[];
+  /** a given ρg to check (bars smeared at γ in the arrangement) */
+  rho?: number;
+  /** a given bar layout to check */
+  layout?: GivenLayout;
+  /** second-order effects (non-sway); absent: short column */
+  slenderness?: SlendernessRequest | null;
+  /** chart sheet γ step (default 0.05) */
+  chartGammaStep?: number;
+  /** bar selection; omitted → none */
+  barSelection?: { detailing: Detailing; sizes: readonly BarSize[]; aggregate?: number; count?: number };
+}
+
+// ───────────────────────────── result ─────────────────────────────
+
+export const LOAD_STATUSES = ['ok', 'fails', 'not-possible', 'unstable', 'outside-scope'] as const;
+export type LoadStatus = (typeof LOAD_STATUSES)[number];
+export const isLoadStatus = (s: unknown): s is LoadStatus => LOAD_STATUSES.includes(s as LoadStatus);
+
+/** Worst first: the order in which statuses govern. */
+const STATUS_RANK: Record<LoadStatus, number> = { unstable: 0, 'outside-scope': 1, 'not-possible': 2, fails: 3, ok: 4 };
+
+/** Which measure ranks the loads: utilisation of the given reinforcement, else the ρg required. */
+export type GoverningMeasure = 'utilisation' | 'rhoRequired';
+
+/** A section variant: the layout as the load's sign or orientation sees it. */
+export interface VariantInfo {
+  /** e.g. "as drawn", "mirrored (negative moment)", "ring turned 15°" */
+  label: string;
+  /** moment sign the variant serves; 0 for both */
+  sign: -1 | 0 | 1;
+  /** turn of the bar pattern, degrees (rings) */
+  turnDeg: number;
+}
+
+export interface ColumnLoadResult {
+  readonly id: string;
+  /** input order */
+  readonly index: number;
+  readonly Pu: number;
+  /** first-order moments as given (internal units) */
+  readonly firstOrder: { readonly Mux: number; readonly Muy: number | null };
+  /** moment about x after slenderness, signed, before the minimum */
+  readonly Mu: number;
+  /** moment about x actually checked: |Mu| raised to the basis minimum where one applies (magnitude) */
+  readonly Mdesign: number;
+  /** true when the basis minimum raised the moment */
+  readonly momentRaised: boolean;
+  /** moment about y after slenderness, signed; null for a uniaxial load */
+  readonly Muy: number | null;
+  /** normalised uniaxial demand (P/Ag, M/(Ag·h)), M ≥ 0 */
+  readonly normalised: { readonly P: number; readonly M: number; readonly eOverH: number };
+  /** the same over the basis's normalising stress (ν and μ for EN 1992-1-1) */
+  readonly dimensionless: { readonly P: number; readonly M: number };
+  /** uniaxial (Mux) ρg required at the actual γ over every variant; null when not possible */
+  readonly rhoRequired: number | null;
+  readonly rhoStatus: RhoStatus;
+  readonly governedBy: 'curve' | 'cap' | 'minimum';
+  readonly steelRequired: number | null;
+  readonly rhoFromChart: number | null;
+  readonly rhoRoundedDown: number | null;
+  readonly chartSheets: readonly SheetReading[];
+  readonly extraSteelRoundedDown: number | null;
+  readonly strain: { readonly cOverH: number; readonly epsT: number; readonly phi: number; readonly class: StrainClass; readonly atRho: number; readonly capGoverns: boolean };
+  /** demand ÷ capacity along the ray at strain.atRho */
+  readonly demandRatio: number;
+  /** uniaxial utilisation of the given reinforcement (null when none is given) */
+  readonly utilisation: number | null;
+  readonly capacity: { readonly P: number; readonly M: number } | null;
+  /** the variant that governs this load, and how many were checked */
+  readonly variant: VariantInfo;
+  readonly variantsChecked: number;
+  readonly slenderness: MagnifiedLoad | null;
+  /** biaxial results for a load with Muy: exact and approximate utilisations (given reinforcement), and the exact ρg required (none given) */
+  readonly biaxial: (Partial<BiaxialResult> & { readonly rhoRequired: number | null; readonly rhoStatus: RhoStatus | null }) | null;
+  readonly status: LoadStatus;
+  /** why, in words, with the clause where there is one */
+  readonly statusReason: string;
+  readonly statusClause: string | null;
+  /** the ranking value: max of the uniaxial and exact biaxial figures of `ColumnCheck.measure` (Infinity when not possible) */
+  readonly measureValue: number;
+  readonly governing: boolean;
+  readonly notes: readonly string[];
+}
+
+export interface ColumnCheck {
+  readonly basis: Basis;
+  readonly units: UnitSystem;
+  readonly shape: Shape;
+  readonly arrangement: Arrangement;
+  readonly gamma: number;
+  readonly gammaSource: 'given' | 'detailing';
+  readonly capContext: CapContext;
+  readonly area: number;
+  readonly depth: number;
+  /** every load, governing first */
+  readonly results: readonly ColumnLoadResult[];
+  readonly governingId: string | null;
+  readonly measure: GoverningMeasure;
+  /** why the governing load governs, in words */
+  readonly governingWhy: string;
+  readonly summary: { readonly total: number; readonly counts: Readonly<Record<LoadStatus, number>>; readonly text: string };
+  /** 0 when every load passes, 1 when any fails, is not possible, unstable or outside the scope */
+  readonly exitCode: 0 | 1;
+  readonly bars: readonly BarProposal[];
+  readonly barsSkipped: string | null;
+  readonly limits: { readonly min: number; readonly max: number };
+  readonly chart: { readonly gammaStep: number; readonly lower: number; readonly upper: number | null; readonly rhos: readonly number[] };
+  readonly checked: { readonly kind: 'rho' | 'layout'; readonly rho: number; readonly description: string; readonly bars: readonly Bar[] } | null;
+  readonly slenderness: SlendernessRequest | null;
+  /** how proposals placed their bars, and the aggregate size for the spacing rule (null: no proposals asked) */
+  readonly barSelection: { readonly detailing: Detailing['kind']; readonly aggregate: number | null } | null;
+  /** a load has Muy */
+  readonly biaxial: boolean;
+  readonly variants: readonly VariantInfo[];
+  readonly notes: readonly string[];
+}
+
+// ───────────────────────────── section variants ─────────────────────────────
+
+interface Variant extends VariantInfo {
+  map: (bars: readonly Bar[]) => Bar[];
+}
+
+const turn = (deg: number) => {
+  const t = (deg * Math.PI) / 180;
+  const c = Math.cos(t);
+  const s = Math.sin(t);
+  return (bars: readonly Bar[]): Bar[] => bars.map((b) => ({ x: b.x * c - b.y * s, y: b.x * s + b.y * c, area: b.area }));
+};
+const mirror = (bars: readonly Bar[]): Bar[] => bars.map((b) => ({ x: b.x, y: -b.y, area: b.area }));
+
+/** True when mirroring the bars about the bending axis (y → −y) gives the same layout. */
+export function symmetricAboutBendingAxis(bars: readonly Bar[], depth: number): boolean {
+  const tol = 1e-9 * depth;
+  const total = bars.reduce((s, b) => s + b.area, 0);
+  return bars.every((b) => bars.some((o) => Math.abs(o.x - b.x) <= tol && Math.abs(o.y + b.y) <= tol && Math.abs(o.area - b.area) <= 1e-9 * total));
+}
+
+/** Ring orientations sampled over half a bar pitch (the capacity repeats every pitch and is even about 0 and π/n). */
+const RING_TURNS = 4;
+
+/**
+ * The layouts a load can meet. A ring in a circle can be loaded in any direction relative to its bars:
+ * orientations over half a pitch, the weakest governs. Any other layout not symmetric about the bending
+ * axis meets a negative moment as its mirror image. Symmetric layouts have one variant.
+ */
+export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: number): Variant[] {
+  if (shape.kind === 'circle' && arrangement.kind === 'ring') {
+    const pitch = 360 / arrangement.bars;
+    return Array.from({ length: RING_TURNS + 1 }, (_, k) => {
+      const deg = (k * pitch) / (2 * RING_TURNS);
+      return { label: k === 0 ? 'ring with a bar at the compression extreme' : `ring turned ${fmtDeg(deg)}° from a bar at the compression extreme`, sign: 0 as const, turnDeg: deg, map: turn(deg) };
+    });
+  }
+  const bars = layoutBars(shape, arrangement, 1, { gamma });
+  if (symmetricAboutBendingAxis(bars, sectionDepth(shape))) return [{ label: 'as drawn', sign: 0, turnDeg: 0, map: (b) => [...b] }];
+  return [
+    { label: 'as drawn (positive moment: compression on the +y face)', sign: 1, turnDeg: 0, map: (b) => [...b] },
+    { label: 'mirrored (negative moment: compression on the −y face)', sign: -1, turnDeg: 0, map: mirror },
+  ];
+}
+
+const fmtDeg = (d: number): string => String(Number(d.toFixed(2)));
+
+// ───────────────────────────── prepared context ─────────────────────────────
+
+interface PreparedVariant {
+  info: Variant;
+  /** smeared bars at γ, ρg = 1 */
+  table: RayTable;
+  /** the checked reinforcement (given ρg or layout), or null */
+  checked: RayTable | null;
+  /** chart sheets as a reader would have them for this variant (mirror of a custom layout); null: the main set */
+  charts: ChartSet | null;
+}
+
+export interface ColumnCheckContext {
+  readonly input: ColumnCheckInput;
+  readonly basis: Basis;
+  readonly area: number;
+  readonly depth: number;
+  readonly capContext: CapContext;
+  readonly variants: readonly PreparedVariant[];
+  /** chart sheets for the readings; null when readings are not wanted (proposal verification) */
+  readonly charts: ChartSet | null;
+  readonly checkedRho: number | null;
+  /** the checked bars, actual areas and positions (as drawn) */
+  readonly checkedBars: Bar[] | null;
+  /** biaxial surface of the checked bars */
+  readonly checkedBiaxial: BiaxialSection | null;
+  readonly biaxial: boolean;
+}
+
+/** Prepares everything shared by every load: variants, ray tables, chart sheets, the biaxial surface. */
+export function prepareColumnCheck(input: ColumnCheckInput, opts: { readings?: boolean } = {}): ColumnCheckContext {
+  const readings = opts.readings ?? true;
+  const { basis, shape } = input;
+  const area = grossArea(shape);
+  const depth = sectionDepth(shape);
+  const capContext = input.capContext ?? {};
+  const unit = layoutBars(shape, input.arrangement, 1, { gamma: input.gamma });
+  const checkedBars = input.layout
+    ? layoutBars(shape, input.layout.arrangement, input.layout.area, { gamma: input.layout.gamma })
+    : input.rho !== undefined
+      ? layoutBars(shape, input.arrangement, input.rho * area, { gamma: input.gamma })
+      : null;
+  const checkedRho = input.layout ? input.layout.area / area : (input.rho ?? null);
+  const chartReq = (arrangement: Arrangement) =>
+    buildChartSet({ basis, shape, arrangement, gamma: input.gamma, capContext, rhoLimits: basis.rhoLimits, ...(input.chartGammaStep !== undefined ? { gammaStep: input.chartGammaStep } : {}) });
+  const charts = readings ? chartReq(input.arrangement) : null;
+  const variants = sectionVariants(shape, input.arrangement, input.gamma).map((info): PreparedVariant => {
+    const table = tabulate(prepareSection(basis, shape, info.map(unit), capContext), 128);
+    const checked = checkedBars ? tabulate(prepareSection(basis, shape, info.map(checkedBars), capContext), 128) : null;
+    const a = input.arrangement;
+    const mirroredCharts = readings && info.sign === -1 && a.kind === 'custom' ? chartReq({ kind: 'custom', bars: a.bars.map((b) => ({ ...b, y: -b.y })) }) : null;
+    return { info, table, checked, charts: mirroredCharts };
+  });
+  const biaxial = input.loads.some((l) => l.Muy !== undefined);
+  const checkedBiaxial = checkedBars && biaxial ? prepareBiaxial(basis, shape, checkedBars, capContext) : null;
+  return { input, basis, area, depth, capContext, variants, charts, checkedRho, checkedBars, checkedBiaxial, biaxial };
+}
+
+// ───────────────────────────── one load ─────────────────────────────
+
+/** Normalised demand of a moment magnitude: P/Ag and M/(Ag·h) (Ag·D for circles). */
+const normalise = (Pu: number, M: number, area: number, depth: number): NormalisedLoad => ({ P: Pu / area, M: M / (area * depth) });
+
+interface VariantOutcome {
+  v: PreparedVariant;
+  req: ReturnType<typeof rhoRequired>;
+  strainRho: number;
+  cap: ReturnType<typeof capacityAlongRay>;
+  strainTable: RayTable;
+}
+
+/** Worse of two outcomes: the higher utilisation when reinforcement is given, else the higher ρg required. */
+function worse(a: VariantOutcome, b: VariantOutcome, checked: boolean): VariantOutcome {
+  if (checked) return b.cap.utilisation > a.cap.utilisation ? b : a;
+  const ra = a.req.rho === null ? Infinity : a.req.rho;
+  const rb = b.req.rho === null ? Infinity : b.req.rho;
+  if (rb !== ra) return rb > ra ? b : a;
+  return b.cap.utilisation > a.cap.utilisation ? b : a;
+}
+
+/** Exact biaxial ρg required for the bars smeared at γ (bisection on the monotone exact utilisation). */
+export function biaxialRhoRequired(
+  basis: Basis,
+  shape: Shape,
+  arrangement: Arrangement,
+  gamma: number,
+  capContext: CapContext,
+  load: { Pu: number; Mux: number; Muy: number },
+  limits: { min: number; max: number },
+): { rho: number | null; status: RhoStatus } {
+  const area = grossArea(shape);
+  const util = (rho: number) => biaxialRay(prepareBiaxial(basis, shape, layoutBars(shape, arrangement, rho * area, { gamma }), capContext), load.Pu, load.Mux, load.Muy).utilisation;
+  if (util(limits.min) <= 1) return { rho: limits.min, status: 'minimum-governs' };
+  if (!(util(limits.max) <= 1)) return { rho: null, status: 'not-possible' };
+  let lo = limits.min;
+  let hi = limits.max;
+  while (hi - lo > 1e-9 * Math.max(1, hi)) {
+    const mid = (lo + hi) / 2;
+    if (util(mid) <= 1) hi = mid;
+    else lo = mid;
+  }
+  return { rho: hi, status: 'ok' };
+}
+
+const fmtRho = (r: number): string => String(Number(r.toFixed(4)));
+
+/** The whole result for one load. */
+export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index: number): ColumnLoadResult {
+  const { basis, area, depth, input } = ctx;
+  const notes: string[] = [];
+
+  // 1. slenderness: magnified moments keep their signs
+  let magnified: MagnifiedLoad | null = null;
+  let Mux = load.Mu;
+  let Muy = load.Muy;
+  if (input.slenderness) {
+    magnified = magnifyLoad(basis, input.shape, ctx.checkedBars ?? [], { Pu: load.Pu, Mux: load.Mu, Muy: load.Muy ?? 0, ...endMoments(load) }, input.slenderness);
+    Mux = magnified.Mux;
+    if (load.Muy !== undefined || magnified.y) Muy = magnified.Muy;
+  }
+  const finiteMoments = Number.isFinite(Mux) && (Muy === undefined || Number.isFinite(Muy));
+
+  // 2. uniaxial, every variant the sign or orientation can load
+  const minimum = basis.minimumMoment(load.Pu, depth);
+  // a circle has no preferred axis: its resultant moment acts on the weakest orientation
+  const resultant = input.shape.kind === 'circle' && Muy !== undefined ? Math.hypot(Mux, Muy) : Math.abs(Mux);
+  const Mmag = finiteMoments ? resultant : 0;
+  const Mdesign = Math.max(Mmag, minimum);
+  const raised = Mdesign > Mmag;
+  const n = normalise(load.Pu, Mdesign, area, depth);
+  const limits = rhoLimitsFor(basis, load.Pu, area);
+  const signs = new Set<number>(raised || Mux === 0 ? [1, -1] : [Math.sign(Mux)]);
+  const candidates = ctx.variants.filter((v) => v.info.sign === 0 || signs.has(v.info.sign));
+  const checked = ctx.checkedRho !== null;
+  let gov: VariantOutcome | null = null;
+  for (const v of candidates) {
+    const req = rhoRequired(v.table, n, limits);
+    const strainRho = checked ? ctx.checkedRho! : (req.rho ?? limits.max);
+    const strainTable = v.checked ?? v.table;
+    const cap = capacityAlongRay(strainTable, strainRho, n);
+    const o = { v, req, strainRho, cap, strainTable };
+    gov = gov ? worse(gov, o, checked) : o;
+  }
+  const g = gov!;
+  const chartSet = g.v.charts ?? ctx.charts;
+  const reading = chartSet ? withMinimum(readCharts(chartSet, n), limits.min, chartSet.rhos) : { rhoFromChart: null, rhoRoundedDown: null, sheets: [] };
+  if (g.req.status === 'not-possible') notes.push(`not possible within ρg ≤ ${fmtRho(limits.max)}`);
+  if (g.req.status === 'minimum-governs') notes.push(`minimum ρg = ${fmtRho(limits.min)} governs`);
+  if (g.req.governedBy === 'cap') notes.push('axial cap governs ρg');
+  if (raised) notes.push(candidates.length > 1 && ctx.variants.some((v) => v.info.sign !== 0) ? 'moment raised to the basis minimum; both signs checked, the worse governs' : 'moment raised to the basis minimum');
+  if (candidates.length > 1 && g.v.info.turnDeg !== 0) notes.push(`weakest orientation: ${g.v.info.label}`);
+  if (g.v.info.sign === -1) notes.push('negative moment: the mirrored layout governs');
+  if (chartSet && reading.rhoFromChart === null) notes.push('off the charted range');
+  if (input.shape.kind === 'circle' && Muy !== undefined) notes.push('circle: the resultant of Mux and Muy is checked on the weakest orientation');
+  const s = strainReport(g.strainTable, g.cap);
+  const zero = n.P === 0 && n.M === 0;
+
+  // 3. biaxial
+  let biaxial: ColumnLoadResult['biaxial'] = null;
+  if (Muy !== undefined && finiteMoments) {
+    const bl = { Pu: load.Pu, Mux, Muy };
+    if (ctx.checkedBiaxial) {
+      biaxial = { ...checkBiaxial(ctx.checkedBiaxial, bl), rhoRequired: null, rhoStatus: null };
+    } else if (input.shape.kind === 'circle') {
+      biaxial = { rhoRequired: g.req.rho, rhoStatus: g.req.status };
+    } else {
+      const r = biaxialRhoRequired(basis, input.shape, input.arrangement, input.gamma, ctx.capContext, bl, limits);
+      biaxial = { rhoRequired: r.rho, rhoStatus: r.status };
+    }
+  }
+
+  // 4. status and measure
+  const utilisation = checked ? g.cap.utilisation : null;
+  const biaxialUtil = biaxial?.exact?.utilisation ?? null;
+  const biaxialRho = biaxial && biaxial.rhoStatus !== null ? (biaxial.rhoRequired ?? Infinity) : null;
+  const uniRho = g.req.rho ?? Infinity;
+  const measureValue = checked ? Math.max(utilisation!, biaxialUtil ?? 0) : Math.max(uniRho, biaxialRho ?? 0);
+  const st = statusOf({ magnified, checked, measureValue, notPossible: !checked && !Number.isFinite(measureValue), finite: finiteMoments, limitsMax: limits.max });
+
+  return {
+    id: load.id,
+    index,
+    Pu: load.Pu,
+    firstOrder: { Mux: load.Mu, Muy: load.Muy ?? null },
+    Mu: Mux,
+    Mdesign,
+    momentRaised: raised,
+    Muy: Muy ?? null,
+    normalised: { P: n.P, M: n.M, eOverH: n.P === 0 ? (n.M === 0 ? 0 : Infinity) : n.M / n.P },
+    dimensionless: { P: n.P / basis.normalisingStress, M: n.M / basis.normalisingStress },
+    rhoRequired: g.req.rho,
+    rhoStatus: g.req.status,
+    governedBy: g.req.governedBy,
+    steelRequired: g.req.rho === null ? null : g.req.rho * area,
+    rhoFromChart: reading.rhoFromChart,
+    rhoRoundedDown: reading.rhoRoundedDown,
+    chartSheets: reading.sheets,
+    extraSteelRoundedDown: g.req.rho === null || reading.rhoRoundedDown === null ? null : (reading.rhoRoundedDown - g.req.rho) * area,
+    strain: { ...s, atRho: g.strainRho, capGoverns: g.cap.capGoverns },
+    demandRatio: g.cap.utilisation,
+    utilisation,
+    capacity: checked && !zero ? { P: g.cap.P * area, M: g.cap.M * area * depth } : null,
+    variant: { label: g.v.info.label, sign: g.v.info.sign, turnDeg: g.v.info.turnDeg },
+    variantsChecked: candidates.length,
+    slenderness: magnified,
+    biaxial,
+    ...st,
+    measureValue,
+    governing: false,
+    notes,
+  };
+}
+
+const endMoments = (l: FactoredLoad) => ({
+  ...(l.M1 !== undefined ? { M1: l.M1 } : {}),
+  ...(l.M2 !== undefined ? { M2: l.M2 } : {}),
+  ...(l.M1y !== undefined ? { M1y: l.M1y } : {}),
+  ...(l.M2y !== undefined ? { M2y: l.M2y } : {}),
+});
+
+/** Status from the checks, worst first: unstable, outside the method's scope, not possible, fails. */
+function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measureValue: number; notPossible: boolean; finite: boolean; limitsMax: number }): {
+  status: LoadStatus;
+  statusReason: string;
+  statusClause: string | null;
+} {
+  const axes = x.magnified ? ([['x', x.magnified.x], ['y', x.magnified.y]] as const) : [];
+  for (const [axis, s] of axes) {
+    if (s && !s.ok && !(s.delta < Infinity)) {
+      return { status: 'unstable', statusReason: `unstable about ${axis}: the axial load reaches the critical load of the moment magnifier (${s.method})`, statusClause: stabilityClause(s.method) };
+    }
+  }
+  for (const [axis, s] of axes) {
+    if (s && !s.ok) return { status: 'outside-scope', statusReason: `about ${axis}: second-order moment beyond the method's limit (${s.warnings[0] ?? s.method})`, statusClause: scopeClause(s.method) };
+  }
+  if (!x.finite || x.notPossible) return { status: 'not-possible', statusReason: `needs more than the maximum ρg = ${fmtRho(x.limitsMax)}: enlarge the section`, statusClause: null };
+  if (x.checked && !(x.measureValue <= 1 + 1e-9)) return { status: 'fails', statusReason: `utilisation ${x.measureValue.toFixed(3)} > 1`, statusClause: null };
+  return { status: 'ok', statusReason: '', statusClause: null };
+}
+
+/** The clause a slenderness method names for instability: read from the method's own words. */
+const stabilityClause = (method: string): string | null => (/6\.6\.4/.test(method) ? 'ACI 318-19 6.6.4.5.2 (Pu ≥ 0.75·Pc)' : null);
+const scopeClause = (method: string): string | null => (/6\.6\.4/.test(method) ? 'ACI 318-19 6.2.5.3 (second-order moment ≤ 1.4 × first-order)' : null);
+
+// ───────────────────────────── all loads ─────────────────────────────
+
+/** Per-load results in input order, one at a time (for streaming views). */
+export function* checkColumnLoads(ctxOrInput: ColumnCheckContext | ColumnCheckInput): Generator<ColumnLoadResult, void, undefined> {
+  const ctx = 'variants' in ctxOrInput ? ctxOrInput : prepareColumnCheck(ctxOrInput);
+  let i = 0;
+  for (const l of ctx.input.loads) yield checkOneLoad(ctx, l, i++);
+}
+
+/** Governing first: status (worst first), then the measure, then input order. */
+export function governingOrder(a: ColumnLoadResult, b: ColumnLoadResult): number {
+  const s = STATUS_RANK[a.status] - STATUS_RANK[b.status];
+  if (s !== 0) return s;
+  if (a.measureValue !== b.measureValue) return b.measureValue - a.measureValue;
+  return b.demandRatio - a.demandRatio || a.index - b.index;
+}
+
+/**
+ * Checks every load of a column and proposes bars: the one entry of the check engine.
+ * The result is frozen; views format it and add no figure of their own.
+ */
+export function checkColumn(input: ColumnCheckInput): ColumnCheck {
+  const ctx = prepareColumnCheck(input);
+  const results = [...checkColumnLoads(ctx)].sort(governingOrder).map((r, k) => (k === 0 ? { ...r, governing: true } : r));
+  return summarise(ctx, results);
+}
+
+/** Ranking, bar proposals, summary and exit status for the results of every load. */
+export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadResult[]): ColumnCheck {
+  const { input, basis } = ctx;
+  const measure: GoverningMeasure = ctx.checkedRho !== null ? 'utilisation' : 'rhoRequired';
+  const counts = Object.fromEntries(LOAD_STATUSES.map((s) => [s, 0])) as Record<LoadStatus, number>;
+  for (const r of sorted) counts[r.status]++;
+  const gov = sorted[0];
+  const bad = sorted.length - counts.ok;
+  const governingWhy = !gov
+    ? 'no loads'
+    : gov.status !== 'ok' && gov.status !== 'fails'
+      ? `${gov.status}: ${gov.statusReason}`
+      : measure === 'utilisation'
+        ? `highest utilisation ${gov.measureValue.toFixed(3)} (the larger of the uniaxial and exact biaxial figures)`
+        : `largest ρg required ${Number.isFinite(gov.measureValue) ? gov.measureValue.toFixed(4) : '—'}${ctx.biaxial ? ' (the larger of the uniaxial and exact biaxial figures)' : ''}`;
+  const summaryText =
+    sorted.length === 0
+      ? 'no loads'
+      : bad === 0
+        ? `all ${sorted.length} load${sorted.length === 1 ? '' : 's'} pass; governing ${gov!.id}`
+        : `${bad} of ${sorted.length} load${sorted.length === 1 ? '' : 's'} ${bad === 1 ? 'does' : 'do'} not pass (${LOAD_STATUSES.filter((s) => s !== 'ok' && counts[s] > 0)
+            .map((s) => `${counts[s]} ${s}`)
+            .join(', ')}); governing ${gov!.id}`;
+
+  // 6. bar proposals, each re-verified against every load with every effect
+  let bars: BarProposal[] = [];
+  let barsSkipped: string | null = null;
+  const kind = input.arrangement.kind;
+  if (!input.barSelection) barsSkipped = 'bar selection not requested';
+  else if (!isSelectableKind(kind)) barsSkipped = 'bar selection needs a regular arrangement (two-faces, four-faces, side-faces or ring)';
+  else if (sorted.length === 0) barsSkipped = 'no loads';
+  else if (sorted.some((r) => r.status === 'unstable' || r.status === 'outside-scope')) barsSkipped = 'a load is unstable or outside the slenderness method: change the section or the bracing';
+  else if (sorted.some((r) => (r.rhoRequired === null || (r.biaxial?.rhoStatus === 'not-possible')) && ctx.checkedRho === null)) barsSkipped = 'a load needs more than the maximum ρg: enlarge the section';
+  else {
+    const limits = input.loads.reduce(
+      (acc, l) => {
+        const x = basis.steelAreaLimits(l.Pu, ctx.area);
+        return { min: Math.max(acc.min, x.min), max: Math.min(acc.max, x.max) };
+      },
+      { min: 0, max: Infinity },
+    );
+    const requiredArea = Math.max(0, ...sorted.map((r) => Math.max(r.steelRequired ?? 0, (r.biaxial?.rhoRequired ?? 0) * ctx.area)));
+    const sel = input.barSelection;
+    bars = proposeBars({
+      basis,
+      shape: input.shape,
+      kind,
+      detailing: sel.detailing,
+      sizes: sel.sizes,
+      requiredArea,
+      areaLimits: limits,
+      verify: layoutVerifier(input, sorted.map((r) => r.index)),
+      ...(sel.aggregate !== undefined ? { aggregate: sel.aggregate } : {}),
+      ...(input.capContext ? { capContext: input.capContext } : {}),
+      ...(sel.count !== undefined ? { count: sel.count } : {}),
+    });
+    if (bars.length === 0) barsSkipped = 'no single-size layout satisfies the spacing, steel and capacity limits';
+  }
+
+  const checked =
+    ctx.checkedBars === null
+      ? null
+      : input.layout
+        ? { kind: 'layout' as const, rho: ctx.checkedRho!, description: input.layout.description, bars: ctx.checkedBars }
+        : { kind: 'rho' as const, rho: ctx.checkedRho!, description: 'given ρg', bars: ctx.checkedBars };
+  const notes: string[] = [];
+  if (ctx.variants.length > 1 && ctx.variants.some((v) => v.info.sign !== 0)) notes.push('The bar layout is not symmetric about the bending axis: a negative moment is checked on the mirrored layout (compression on the −y face); moments keep their signs.');
+  if (ctx.variants.some((v) => v.info.turnDeg !== 0)) {
+    notes.push(`Ring of bars in a circle: every uniaxial check takes the weakest of ${ctx.variants.length} orientations over half a bar pitch (0° = a bar at the compression extreme).`);
+  }
+  const result: ColumnCheck = {
+    basis,
+    units: basis.units,
+    shape: input.shape,
+    arrangement: input.arrangement,
+    gamma: input.gamma,
+    gammaSource: input.gammaSource ?? 'given',
+    capContext: ctx.capContext,
+    area: ctx.area,
+    depth: ctx.depth,
+    results: sorted,
+    governingId: gov?.id ?? null,
+    measure,
+    governingWhy,
+    summary: { total: sorted.length, counts, text: summaryText },
+    exitCode: bad === 0 ? 0 : 1,
+    bars,
+    barsSkipped,
+    limits: rhoLimitsFor(basis, 0, ctx.area),
+    chart: ctx.charts
+      ? { gammaStep: ctx.charts.gammaStep, lower: ctx.charts.lower.gamma, upper: ctx.charts.upper?.gamma ?? null, rhos: ctx.charts.rhos }
+      : { gammaStep: 0, lower: 0, upper: null, rhos: [] },
+    checked,
+    slenderness: input.slenderness ?? null,
+    barSelection: input.barSelection ? { detailing: input.barSelection.detailing.kind, aggregate: input.barSelection.aggregate ?? null } : null,
+    biaxial: ctx.biaxial,
+    variants: ctx.variants.map((v) => ({ label: v.info.label, sign: v.info.sign, turnDeg: v.info.turnDeg })),
+    notes,
+  };
+  return deepFreeze(result);
+}
+
+/**
+ * Re-verifies candidate layouts: the largest utilisation of the discrete bars over every load, with every
+ * effect (slenderness re-run with the candidate's bars, the minimum moment, every sign and orientation
+ * variant, the exact biaxial capacity where Muy is given). Loads are tried in `order` (worst first) and the
+ * search stops at the first failure. Unstable or out-of-scope loads count as failing.
+ */
+export function layoutVerifier(input: ColumnCheckInput, order?: readonly number[]): (arrangement: Arrangement, area: number, gamma: number) => { utilisation: number; index: number } {
+  const { barSelection: _sel, rho: _rho, layout: _layout, ...rest } = input;
+  const indices = order ?? input.loads.map((_, i) => i);
+  return (arrangement, area, gamma) => {
+    const check = prepareColumnCheck({ ...rest, arrangement, gamma, layout: { arrangement, area, gamma, description: '' } }, { readings: false });
+    let worst = { utilisation: 0, index: indices[0] ?? 0 };
+    for (const i of indices) {
+      const res = checkOneLoad(check, input.loads[i]!, i);
+      const u = res.status === 'ok' || res.status === 'fails' ? res.measureValue : Infinity;
+      if (u > worst.utilisation) worst = { utilisation: u, index: i };
+      if (u > 1 + 1e-9) break;
+    }
+    return worst;
+  };
+}
+
+/** Freezes the result's own data; the basis (shared, holds the material laws) and typed arrays are left as they are. */
+function deepFreeze<T>(o: T): T {
+  if (o && typeof o === 'object' && !Object.isFrozen(o) && !ArrayBuffer.isView(o) && !isBasis(o)) {
+    Object.freeze(o);
+    for (const v of Object.values(o as object)) deepFreeze(v);
+  }
+  return o;
+}
+
+const isBasis = (o: object): boolean => 'profile' in o && 'design' in o && 'nominal' in o;

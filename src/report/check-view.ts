@@ -1,0 +1,526 @@
+/**
+ * Views of one `ColumnCheck` (src/design/column-check.ts): the tables every output shares, the text
+ * table, the text report and the JSON. Every figure, rounding and label is made here once; the drawn
+ * report (src/sheet/check-report.ts) lays out these same tables. Pure: no I/O.
+ */
+import { strainClassWord } from '../codes/types.js';
+import type { ColumnCheck, ColumnLoadResult, LoadStatus } from '../design/column-check.js';
+import type { SlendernessResult } from '../design/slenderness.js';
+import { barSet } from '../section/bar-tables.js';
+import { DISPLAY_UNITS, toDisplay, type UnitSystem } from '../units/index.js';
+import { CAUTION } from './caution.js';
+import { cell as f, fmt, num } from './format.js';
+
+/** A table as every view shows it: headers, rows of formatted cells, which rows to mark. */
+export interface TableView {
+  headers: string[];
+  rows: string[][];
+  /** per row: the governing load */
+  marked: boolean[];
+}
+
+export interface ViewUnits {
+  force: string;
+  moment: string;
+  stress: string;
+  length: string;
+  area: string;
+}
+
+export const unitsOf = (u: UnitSystem): ViewUnits => ({ ...DISPLAY_UNITS[u], area: u === 'us' ? 'in²' : 'mm²' });
+
+/** Words of a status, as every view prints it. */
+export const STATUS_WORDS: Record<LoadStatus, string> = {
+  ok: 'ok',
+  fails: 'FAILS',
+  'not-possible': 'NOT POSSIBLE',
+  unstable: 'UNSTABLE',
+  'outside-scope': 'OUTSIDE SCOPE',
+};
+
+/** Symbols of the actions and the normalised axes for this check's basis and shape. */
+export function symbolsOf(c: ColumnCheck) {
+  const sy = c.basis.symbols;
+  const circle = c.shape.kind === 'circle';
+  return {
+    P: sy.actionAxial ?? 'Pu',
+    M: sy.actionMoment ?? 'Mu',
+    depth: circle ? 'D' : 'h',
+    perArea: circle ? 'Ag' : 'b·h',
+    perAreaDepth: circle ? 'Ag·D' : 'b·h²',
+    nu: sy.dimensionlessAxial ?? null,
+    mu: sy.dimensionlessMoment ?? null,
+    firstOrder: sy.firstOrderMoment ?? 'M2',
+    secondOrder: sy.secondOrderMoment ?? 'Mc',
+  };
+}
+
+/** The note column of a load's row. */
+export function noteText(r: ColumnLoadResult, c: ColumnCheck): string {
+  return [
+    r.status !== 'ok' ? `${STATUS_WORDS[r.status]}${r.statusReason ? `: ${r.statusReason}` : ''}${r.statusClause ? ` [${r.statusClause}]` : ''}` : '',
+    r.rhoStatus === 'minimum-governs' && r.status === 'ok' ? 'minimum ρg' : '',
+    r.governedBy === 'cap' ? 'cap' : '',
+    r.momentRaised ? `${symbolsOf(c).M} raised to minimum` : '',
+    r.variant.sign === -1 ? 'mirrored layout governs' : '',
+    r.variant.turnDeg !== 0 ? `weakest orientation ${fmt(r.variant.turnDeg, 4)}°` : '',
+  ]
+    .filter(Boolean)
+    .join('; ');
+}
+
+/** The results table: one row per load, governing first. */
+export function resultsView(c: ColumnCheck): TableView {
+  const u = c.units;
+  const un = unitsOf(u);
+  const s = symbolsOf(c);
+  const withUtil = c.checked !== null;
+  const biax = c.biaxial;
+  const headers = [
+    'id',
+    `${s.P} ${un.force}`,
+    `${s.M} ${un.moment}`,
+    ...(biax ? [`${s.M}y ${un.moment}`] : []),
+    `${s.P}/${s.perArea}`,
+    `${s.M}/${s.perAreaDepth}`,
+    ...(s.nu && s.mu ? [s.nu, s.mu] : []),
+    `e/${s.depth}`,
+    'ρg req',
+    ...(biax && !withUtil ? ['ρg req biax'] : []),
+    'ρg chart',
+    'ρg rounded',
+    `extra ${un.area}`,
+    'εt',
+    'φ',
+    'strain state',
+    ...(withUtil ? ['util'] : []),
+    ...(withUtil && biax ? ['util biax'] : []),
+    'status',
+    'note',
+  ];
+  const rows = c.results.map((r) => [
+    r.id,
+    f(toDisplay(r.Pu, 'force', u), 5),
+    (r.momentRaised ? '↑' : '') + f(toDisplay(Math.sign(r.Mu || 1) * r.Mdesign, 'moment', u), 5),
+    ...(biax ? [f(r.Muy === null ? null : toDisplay(r.Muy, 'moment', u), 5)] : []),
+    f(r.normalised.P),
+    f(r.normalised.M),
+    ...(s.nu && s.mu ? [f(r.dimensionless.P), f(r.dimensionless.M)] : []),
+    f(r.normalised.eOverH, 3),
+    f(r.rhoRequired),
+    ...(biax && !withUtil ? [f(r.biaxial?.rhoRequired ?? null)] : []),
+    f(r.rhoFromChart),
+    f(r.rhoRoundedDown, 3),
+    f(r.extraSteelRoundedDown, 3),
+    f(r.strain.epsT, 3),
+    f(r.strain.phi, 3),
+    strainClassWord(c.basis.symbols, r.strain.class),
+    ...(withUtil ? [f(r.utilisation, 3)] : []),
+    ...(withUtil && biax ? [f(r.biaxial?.exact?.utilisation ?? null, 3)] : []),
+    STATUS_WORDS[r.status],
+    noteText(r, c),
+  ]);
+  return { headers, rows, marked: c.results.map((r) => r.governing) };
+}
+
+/** Lines under the results table: the governing mark, the measure, the moments, the rounding cost. */
+export function resultsFootnotes(c: ColumnCheck): string[] {
+  const un = unitsOf(c.units);
+  const s = symbolsOf(c);
+  const out = [
+    `* governing load: ${c.governingWhy}. Loads are ranked by status (unstable, outside scope, not possible, fails, ok), then by ${c.measure === 'utilisation' ? 'utilisation' : 'ρg required'}.`,
+    `${s.M} is the moment checked: after slenderness where asked, ↑ where raised to the basis minimum; signed. Normalised values in ${un.stress}; εt and φ at capacity along the load ray (${c.checked ? 'checked reinforcement' : 'at ρg required'}).`,
+  ];
+  const gov = c.results[0];
+  if (gov && gov.extraSteelRoundedDown !== null && gov.extraSteelRoundedDown > 0) {
+    out.push(`Reading the next lower sheet and rounding up would cost ${f(gov.extraSteelRoundedDown, 3)} ${un.area} more steel than the exact ρg for ${gov.id}.`);
+  }
+  return out;
+}
+
+/** Slenderness per load and axis; null without slenderness input. */
+export function slendernessView(c: ColumnCheck): { method: string; table: TableView } | null {
+  if (!c.slenderness) return null;
+  const u = c.units;
+  const un = unitsOf(u);
+  const s = symbolsOf(c);
+  const M = (x: number) => f(toDisplay(x, 'moment', u), 5);
+  const rows: string[][] = [];
+  const marked: boolean[] = [];
+  let method = '';
+  for (const r of c.results) {
+    const e = r.slenderness;
+    if (!e) continue;
+    for (const [axis, sl] of [['x', e.x], ['y', e.y]] as const) {
+      if (!sl) continue;
+      method ||= sl.method;
+      const st = (p: string) => sl.steps.find((x) => x.label.startsWith(p))?.value;
+      rows.push([
+        r.id,
+        axis,
+        f(((st('kℓu/r') ?? st('λ = l0/i')) as number | undefined) ?? null, 3),
+        f(((st('limit') ?? st('λlim')) as number | undefined) ?? null, 3),
+        sl.neglected ? 'yes' : 'no',
+        f(sl.delta, 4),
+        M(sl.firstOrderMoment),
+        M(sl.magnifiedMoment),
+        sl.ok ? '' : shortWarning(sl),
+      ]);
+      marked.push(r.governing);
+    }
+  }
+  return {
+    method,
+    table: { headers: ['id', 'axis', 'slenderness', 'limit', 'neglected', 'δ', `${s.firstOrder} ${un.moment}`, `${s.secondOrder} ${un.moment}`, 'note'], rows, marked },
+  };
+}
+
+const shortWarning = (s: SlendernessResult): string => (s.ok ? '' : s.delta === Infinity ? 'unstable' : (s.warnings[0] ?? 'outside the method'));
+
+/** Biaxial methods side by side, with the checked reinforcement; null when no load has Muy or no reinforcement is given. */
+export function biaxialView(c: ColumnCheck): TableView | null {
+  if (!c.biaxial || !c.checked) return null;
+  const u = c.units;
+  const un = unitsOf(u);
+  const s = symbolsOf(c);
+  const M = (x: number | null) => f(x === null ? null : toDisplay(x, 'moment', u), 5);
+  const rows = c.results.map((r) => {
+    const b = r.biaxial;
+    return [
+      r.id,
+      f(toDisplay(r.Pu, 'force', u), 5),
+      M(r.Mu),
+      M(r.Muy),
+      f(b?.exact?.utilisation ?? null, 3),
+      f(b?.exact?.neutralAxisAngleDeg ?? null, 3),
+      f(b?.reciprocalLoad?.utilisation ?? null, 3),
+      b?.reciprocalLoad?.method ?? '—',
+      f(b?.loadContour?.utilisation ?? null, 3),
+      f(b?.loadContour?.alpha ?? null, 3),
+      f(b?.exact?.momentUtilisation ?? null, 3),
+      f(b?.loadContour?.momentScale ?? null, 3),
+    ];
+  });
+  return {
+    headers: ['id', `${s.P} ${un.force}`, `${s.M}x ${un.moment}`, `${s.M}y ${un.moment}`, 'exact', 'NA angle°', 'reciprocal', 'method', 'contour', 'α', 'exact M@P', 'contour M@P'],
+    rows,
+    marked: c.results.map((r) => r.governing),
+  };
+}
+
+/** Bar proposals; a sentence when there are none. */
+export function barsView(c: ColumnCheck): TableView | string {
+  const un = unitsOf(c.units);
+  if (c.bars.length === 0) return `Bar proposals: none (${c.barsSkipped ?? 'none found'}).`;
+  const rows = c.bars.map((p) => [
+    p.layout,
+    f(p.area, 4),
+    f(p.rho, 4),
+    f(p.gamma, 4),
+    `${f(p.clearSpacing, 3)} ≥ ${f(p.clearSpacingRequired, 3)}`,
+    f(p.utilisation, 3),
+    c.results.find((r) => r.index === p.governingLoad)?.id ?? '',
+  ]);
+  return { headers: ['bars', `As ${un.area}`, 'ρg', 'γ', `clear ${un.length}`, 'util (all effects)', 'by load'], rows, marked: rows.map(() => false) };
+}
+
+/** The section in one line. */
+export function sectionLine(c: ColumnCheck): string {
+  const un = unitsOf(c.units);
+  const b = c.basis;
+  const dims = c.shape.kind === 'rectangle' ? `${fmt(c.shape.b)} × ${fmt(c.shape.h)} ${un.length}` : `D = ${fmt(c.shape.diameter)} ${un.length}`;
+  return `${b.title}, ${dims} ${b.transverse}, ${c.arrangement.kind}, ${b.symbols.concreteStrength} = ${fmt(b.fc)} ${un.stress}, ${b.symbols.steelStrength} = ${fmt(b.fy)} ${un.stress}, γ = ${fmt(c.gamma, 4)} (${c.gammaSource})`;
+}
+
+/** Assumptions of the check itself, beside the basis notes. */
+export function checkAssumptions(c: ColumnCheck): string[] {
+  const b = c.basis;
+  const lim = c.limits;
+  const s = symbolsOf(c);
+  const out = [
+    c.slenderness
+      ? `Slender column (non-sway): ${s.M} is the second-order moment of the basis's method; every step is listed per load.`
+      : `Short column: factored ${s.P} and ${s.M} are taken as given (slenderness effects are not added here).`,
+    `Moments keep their signs. ${c.variants.length === 1 ? 'The layout is symmetric about the bending axis, so both signs give the same capacity.' : c.variants.map((v) => v.label).join('; ') + ': the weakest governs.'}`,
+    `ρg required is solved exactly at the actual γ = ${fmt(c.gamma, 4)} with the bars smeared in the chosen arrangement; the ${b.symbols.designFamily} curve includes the axial cap.`,
+    `Chart readings emulate sheets at γ steps of ${c.chart.gammaStep} with curves at ρg ${c.chart.rhos.map((r) => fmt(r, 3)).join(', ')}: linear between curves along the load ray, linear in γ between sheets; the traditional reading takes the next lower sheet and the next curve out.`,
+    `ρg limits ${fmt(lim.min, 3)}–${fmt(lim.max, 3)} of Ag at zero axial load; each load uses the basis's limits for its own axial force, chart readings included.`,
+    'Status: ok; FAILS (utilisation above 1); NOT POSSIBLE (more than the maximum ρg); UNSTABLE (the axial load reaches the magnifier’s critical load); OUTSIDE SCOPE (beyond the second-order method’s limit). Exit status 1 when any load is not ok.',
+  ];
+  if (c.barSelection) {
+    out.push(
+      c.barSelection.detailing === 'cover'
+        ? `Bar proposals: one bar size each, centres at cover + tie + db/2 from the faces (γ recomputed per size); ${b.clearSpacingRule}; ${b.minimumBarRule}; sizes from ${barSet(b.barSet).source}, ${b.units === 'us' ? '#5' : '12 mm'} and up (common practice). Each proposal is re-verified with its discrete bars against every load with every effect (slenderness, minimum moment, both signs, ring orientations, exact biaxial).`
+        : `Bar proposals: γ was given, so bar centres stay at (1 − γ)·h/2 from the faces for every size and the cover is not checked; ${b.clearSpacingRule}; ${b.minimumBarRule}. Each proposal is re-verified against every load with every effect.`,
+    );
+    if (c.barSelection.aggregate === null) out.push('No maximum aggregate size given: the aggregate term of the spacing rule is not checked.');
+  }
+  if (c.slenderness) {
+    out.push(`Slenderness: each axis magnified separately for its own member data (non-sway); the magnified moments feed the uniaxial and biaxial checks.`);
+  }
+  if (c.biaxial) {
+    out.push(
+      c.checked
+        ? 'Biaxial: exact capacity of the actual bars under an inclined neutral axis along the load ray in (P, Mx, My); reciprocal load 1/Pn = 1/Pnx + 1/Pny − 1/Po where Pn ≥ 0.1·f′c·Ag (factored values), else the linear moment sum at Pu; load contour (Mx/Mxo)^α + (My/Myo)^α with the basis’s exponent.'
+        : 'Biaxial: ρg req biax is the exact ρg at which the smeared bars at γ carry the load along its ray in (P, Mx, My) under an inclined neutral axis.',
+    );
+  }
+  return [...out, ...c.notes];
+}
+
+/** Renders a table as aligned text, the governing row marked with "* ". */
+export function textTable(t: TableView): string {
+  const rows = t.rows.map((r, i) => [(t.marked[i] ? '* ' : '') + r[0], ...r.slice(1)]);
+  const w = t.headers.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? '').length)));
+  const line = (cells: string[]) => cells.map((x, i) => (i === 0 ? x.padEnd(w[i]!) : x.padStart(w[i]!))).join('  ').trimEnd();
+  return [line(t.headers), line(w.map((n) => '-'.repeat(n))), ...rows.map(line)].join('\n');
+}
+
+/** The readable table the CLI prints. */
+export function checkText(c: ColumnCheck): string {
+  return [...checkTextBody(c), '', CAUTION, ''].join('\n');
+}
+
+function checkTextBody(c: ColumnCheck): string[] {
+  const lines = [sectionLine(c)];
+  if (c.checked) lines.push(`Checked reinforcement: ${c.checked.description} (ρg = ${f(c.checked.rho)})`);
+  lines.push(`Chart sheets read: γ = ${c.chart.lower}${c.chart.upper !== null ? ` and ${c.chart.upper}` : ''}`, '');
+  lines.push(textTable(resultsView(c)), ...resultsFootnotes(c));
+  lines.push('', `Summary: ${c.summary.text}.`);
+  const sl = slendernessView(c);
+  if (sl) lines.push('', `Slenderness (${sl.method}):`, textTable(sl.table));
+  const bx = biaxialView(c);
+  if (bx) {
+    lines.push(
+      '',
+      'Biaxial (checked reinforcement, actual bars; > 1 fails). exact: along the load ray in (P, Mx, My); reciprocal: Pu/Pn (or the linear moment sum);',
+      'contour: left-hand side (Mux/Mxo)^α + (Muy/Myo)^α. The M@P columns compare moments at fixed P: exact, and the contour value^(1/α).',
+      textTable(bx),
+    );
+  } else if (c.biaxial) {
+    lines.push('', 'Biaxial: no reinforcement given, so ρg req biax is the exact biaxial ρg required; give --rho or a bar layout for the three methods side by side.');
+  }
+  const bars = barsView(c);
+  lines.push('', typeof bars === 'string' ? bars : textTable(bars));
+  return lines;
+}
+
+/** Text report: inputs, assumptions and clauses, results, slenderness steps, biaxial details, caution. */
+export function checkReportText(c: ColumnCheck, generator: string): string {
+  const b = c.basis;
+  const body = checkTextBody(c).slice(1);
+  const lines = [
+    `pmchart column check — ${generator}`,
+    '',
+    'INPUTS',
+    `  ${sectionLine(c)}`,
+    `  loads: ${c.results.length} factored combination(s)`,
+    ...Object.entries(b.parameters).map(([k, v]) => `  ${k} = ${v}`),
+    '',
+    'ASSUMPTIONS AND CODE CLAUSES',
+    ...b.notes.map((n) => `  - ${n}`),
+    ...checkAssumptions(c).map((n) => `  - ${n}`),
+    '',
+    'RESULTS (governing first)',
+    ...body.map((l) => (l ? `  ${l}` : l)),
+    '',
+    ...detailLines(c),
+    'CAUTION',
+    `  ${CAUTION}`,
+    '',
+  ];
+  return lines.join('\n');
+}
+
+/** Every slenderness step and the biaxial method details, for the text report. */
+function detailLines(c: ColumnCheck): string[] {
+  const u = c.units;
+  const lines: string[] = [];
+  if (c.slenderness) {
+    lines.push('SLENDERNESS STEPS (internal units as labelled)');
+    for (const r of c.results) {
+      for (const [axis, s] of [['x', r.slenderness?.x], ['y', r.slenderness?.y]] as const) {
+        if (!s) continue;
+        lines.push(`  ${r.id}, bending about ${axis}: ${s.method}`);
+        for (const st of s.steps) lines.push(`    ${st.label} = ${typeof st.value === 'number' ? f(st.value, 5) : String(st.value)}${st.unit ? ` ${st.unit}` : ''}`);
+        for (const w of s.warnings) lines.push(`    WARNING: ${w}`);
+      }
+    }
+    lines.push('');
+  }
+  if (c.biaxial && c.checked) {
+    lines.push('BIAXIAL METHODS');
+    const F = (x: number) => f(toDisplay(x, 'force', u), 5);
+    const M = (x: number) => f(toDisplay(x, 'moment', u), 5);
+    for (const r of c.results) {
+      const b = r.biaxial;
+      if (!b?.exact || !b.reciprocalLoad || !b.loadContour) continue;
+      lines.push(
+        `  ${r.id}: exact ${f(b.exact.utilisation, 4)} (neutral axis ${f(b.exact.neutralAxisAngleDeg, 4)}°, depth ${f(b.exact.neutralAxisDepth, 4)}, εt = ${f(b.exact.epsT, 3)}, φ = ${f(b.exact.phi, 3)}${b.exact.capGoverns ? ', axial cap governs' : ''})`,
+        `    reciprocal load: Pnx = ${F(b.reciprocalLoad.Pnx)}, Pny = ${F(b.reciprocalLoad.Pny)}, Po = ${F(b.reciprocalLoad.Po)}, Pn = ${F(b.reciprocalLoad.Pn)} (0.1·f′c·Ag = ${F(b.reciprocalLoad.validityLimit)}) → ${b.reciprocalLoad.method} ${f(b.reciprocalLoad.utilisation, 4)}; ${b.reciprocalLoad.note}`,
+        `    load contour: Mnox = ${M(b.loadContour.Mnox)}, Mnoy = ${M(b.loadContour.Mnoy)} at Pu, α = ${f(b.loadContour.alpha, 3)} (${b.loadContour.alphaSource}) → ${f(b.loadContour.utilisation, 4)}; moments may scale by 1/${f(b.loadContour.momentScale, 4)} at fixed Pu (exact: 1/${f(b.exact.momentUtilisation, 4)})`,
+      );
+    }
+    lines.push('');
+  }
+  return lines;
+}
+
+// ───────────────────────────── JSON ─────────────────────────────
+
+const disp = (x: number, kind: 'force' | 'moment', u: UnitSystem) => num(toDisplay(x, kind, u));
+const orNull = (x: number | null | undefined) => (x === null || x === undefined ? null : num(x));
+
+function slenderJson(s: SlendernessResult, u: UnitSystem) {
+  return {
+    neglected: s.neglected,
+    delta: num(s.delta),
+    magnifiedMoment: disp(s.magnifiedMoment, 'moment', u),
+    firstOrderMoment: disp(s.firstOrderMoment, 'moment', u),
+    ok: s.ok,
+    method: s.method,
+    warnings: s.warnings,
+    steps: s.steps.map((st) => ({ label: st.label, value: typeof st.value === 'number' ? num(st.value) : st.value, ...(st.unit ? { unit: st.unit } : {}) })),
+  };
+}
+
+/** One result as JSON: the stable fields (id, rhoRequired, rhoFromChart, rhoRoundedDown …) and the engine's additions. */
+export function resultJson(r: ColumnLoadResult, c: ColumnCheck) {
+  const u = c.units;
+  const b = r.biaxial;
+  return {
+    id: r.id,
+    Pu: disp(r.Pu, 'force', u),
+    Mu: disp(r.Mu, 'moment', u),
+    ...(c.biaxial ? { Muy: disp(r.Muy ?? 0, 'moment', u) } : {}),
+    firstOrder: { Mux: disp(r.firstOrder.Mux, 'moment', u), Muy: r.firstOrder.Muy === null ? null : disp(r.firstOrder.Muy, 'moment', u) },
+    Mdesign: disp(r.Mdesign, 'moment', u),
+    momentRaised: r.momentRaised,
+    normalised: { P: num(r.normalised.P), M: num(r.normalised.M), eOverH: num(r.normalised.eOverH) },
+    dimensionless: { P: num(r.dimensionless.P), M: num(r.dimensionless.M), ...(c.basis.symbols.dimensionlessAxial ? { symbols: [c.basis.symbols.dimensionlessAxial, c.basis.symbols.dimensionlessMoment] } : {}) },
+    rhoRequired: orNull(r.rhoRequired),
+    rhoStatus: r.rhoStatus,
+    governedBy: r.governedBy,
+    steelRequired: orNull(r.steelRequired),
+    rhoFromChart: orNull(r.rhoFromChart),
+    rhoRoundedDown: r.rhoRoundedDown,
+    extraSteelRoundedDown: orNull(r.extraSteelRoundedDown),
+    chartSheets: r.chartSheets.map((sh) => ({ gamma: sh.gamma, rho: orNull(sh.rho), roundedUp: sh.roundedUp, position: sh.position })),
+    strain: {
+      epsT: num(r.strain.epsT),
+      phi: num(r.strain.phi),
+      class: r.strain.class,
+      words: strainClassWord(c.basis.symbols, r.strain.class),
+      cOverH: num(r.strain.cOverH),
+      atRho: num(r.strain.atRho),
+      capGoverns: r.strain.capGoverns,
+    },
+    utilisation: orNull(r.utilisation),
+    capacity: r.capacity === null ? null : { Pu: disp(r.capacity.P, 'force', u), Mu: disp(r.capacity.M, 'moment', u) },
+    variant: { label: r.variant.label, sign: r.variant.sign, turnDeg: num(r.variant.turnDeg), checked: r.variantsChecked },
+    status: r.status,
+    statusReason: r.statusReason,
+    statusClause: r.statusClause,
+    measure: num(r.measureValue),
+    governing: r.governing,
+    notes: r.notes,
+    ...(r.slenderness ? { slenderness: { ...slenderJson(r.slenderness.x, u), ...(r.slenderness.y ? { y: slenderJson(r.slenderness.y, u) } : {}) } } : {}),
+    ...(c.biaxial
+      ? {
+          biaxial: b
+            ? {
+                exact: orNull(b.exact?.utilisation),
+                reciprocalLoad: orNull(b.reciprocalLoad?.utilisation),
+                loadContour: orNull(b.loadContour?.utilisation),
+                rhoRequired: orNull(b.rhoRequired),
+                rhoStatus: b.rhoStatus,
+                details:
+                  b.exact && b.reciprocalLoad && b.loadContour
+                    ? {
+                        exact: {
+                          capacity: { P: disp(b.exact.capacity.P, 'force', u), Mx: disp(b.exact.capacity.Mx, 'moment', u), My: disp(b.exact.capacity.My, 'moment', u) },
+                          neutralAxisAngleDeg: num(b.exact.neutralAxisAngleDeg),
+                          neutralAxisDepth: num(b.exact.neutralAxisDepth),
+                          epsT: num(b.exact.epsT),
+                          phi: num(b.exact.phi),
+                          class: b.exact.strainClass,
+                          capGoverns: b.exact.capGoverns,
+                          momentUtilisationAtPu: num(b.exact.momentUtilisation),
+                        },
+                        reciprocalLoad: {
+                          method: b.reciprocalLoad.method,
+                          Pnx: disp(b.reciprocalLoad.Pnx, 'force', u),
+                          Pny: disp(b.reciprocalLoad.Pny, 'force', u),
+                          Po: disp(b.reciprocalLoad.Po, 'force', u),
+                          Pn: disp(b.reciprocalLoad.Pn, 'force', u),
+                          validityLimit: disp(b.reciprocalLoad.validityLimit, 'force', u),
+                          Mnox: disp(b.reciprocalLoad.Mnox, 'moment', u),
+                          Mnoy: disp(b.reciprocalLoad.Mnoy, 'moment', u),
+                          note: b.reciprocalLoad.note,
+                        },
+                        loadContour: {
+                          alpha: num(b.loadContour.alpha),
+                          alphaSource: b.loadContour.alphaSource,
+                          axialRatio: num(b.loadContour.axialRatio),
+                          momentScale: num(b.loadContour.momentScale),
+                          Mnox: disp(b.loadContour.Mnox, 'moment', u),
+                          Mnoy: disp(b.loadContour.Mnoy, 'moment', u),
+                          note: b.loadContour.note,
+                        },
+                      }
+                    : null,
+              }
+            : null,
+        }
+      : {}),
+  };
+}
+
+/** The whole check as JSON (stable fields documented in the README). */
+export function checkJson(c: ColumnCheck, generator: string): string {
+  const u = c.units;
+  const un = unitsOf(u);
+  const out = {
+    generator,
+    code: c.basis.code,
+    codeTitle: c.basis.title,
+    units: { system: u, force: un.force, moment: un.moment, stress: un.stress, length: un.length, area: un.area },
+    section: {
+      shape: c.shape,
+      area: num(c.area),
+      gamma: num(c.gamma),
+      gammaSource: c.gammaSource,
+      arrangement: c.arrangement,
+      transverse: c.basis.transverse,
+      fc: num(c.basis.fc),
+      fy: num(c.basis.fy),
+    },
+    chart: { gammaStep: c.chart.gammaStep, sheets: [c.chart.lower, ...(c.chart.upper !== null ? [c.chart.upper] : [])], rhos: c.chart.rhos },
+    rhoLimits: { min: num(c.limits.min), max: num(c.limits.max) },
+    checked: c.checked ? { kind: c.checked.kind, rho: num(c.checked.rho), description: c.checked.description } : null,
+    governing: c.governingId,
+    measure: c.measure,
+    governingWhy: c.governingWhy,
+    summary: { total: c.summary.total, ...c.summary.counts, text: c.summary.text },
+    exitCode: c.exitCode,
+    results: c.results.map((r) => resultJson(r, c)),
+    bars: c.bars.map((p) => ({
+      layout: p.layout,
+      size: p.size,
+      count: p.count,
+      perFace: p.perFace,
+      area: num(p.area),
+      rho: num(p.rho),
+      gamma: num(p.gamma),
+      clearSpacing: num(p.clearSpacing),
+      clearSpacingRequired: num(p.clearSpacingRequired),
+      utilisation: num(p.utilisation),
+      governingLoad: c.results.find((r) => r.index === p.governingLoad)?.id ?? null,
+    })),
+    barsNote: c.barsSkipped,
+    basis: { parameters: c.basis.parameters, notes: c.basis.notes },
+    assumptions: checkAssumptions(c),
+    caution: CAUTION,
+  };
+  return JSON.stringify(out, null, 1) + '\n';
+}
