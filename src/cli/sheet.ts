@@ -85,29 +85,10 @@ export async function runSheet(o: SheetOptions): Promise<string> {
   const out = resolve(o.out ?? 'sheet.pdf');
   const kind = extname(out).toLowerCase();
   if (!['.svg', '.png', '.pdf'].includes(kind)) throw new PmError(ERROR_CODES.invalidValue, '--out', 'must end in .svg, .png or .pdf', { value: o.out });
-  const { set, basis, capContext } = await sheetSetFromFlags(o);
-  const sheet = set.sheets[0]!;
-  const { computeFamily } = await import('../analysis/family.js');
-  const { SHEET_BASE_POINTS, sheetRhos, sheetShape } = await import('../sheet/curves.js');
-  const { buildSheet } = await import('../chart/sheet-data.js');
-  const { SheetRenderer } = await import('../render/renderer.js');
+  const { set, capContext } = await sheetSetFromFlags(o);
+  const { renderSheet } = await import('../sheet/render-sheet.js');
   const { writeFileAtomic } = await import('../sheet/files.js');
-  const family = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: sheetRhos(set, basis), capContext, basePoints: SHEET_BASE_POINTS });
-  const built = buildSheet({ set, sheet, family, sheetNumber: 1, sheetCount: 1, generator: generatorLabel() });
-  const page = { template: built.template, data: built.data };
-  const renderer = await SheetRenderer.create();
-  try {
-    if (kind === '.svg') writeFileAtomic(out, await renderer.svg(page));
-    else if (kind === '.png') writeFileAtomic(out, await renderer.png(page, 2));
-    else {
-      const pdf = renderer.pdfPages();
-      await pdf.add(page);
-      const { fixPdfMetadata } = await import('../sheet/book.js');
-      writeFileAtomic(out, await fixPdfMetadata(pdf.toBuffer(), { title: sheet.title, date: set.titleBlock.date, generator: generatorLabel(), subject: basis.title }));
-    }
-  } finally {
-    renderer.finalize();
-  }
+  writeFileAtomic(out, await renderSheet(set, 0, kind.slice(1) as 'svg' | 'png' | 'pdf', { capContext }));
   return out;
 }
 

@@ -1,0 +1,52 @@
+/**
+ * The library as another program uses it: `import … from 'pmchart'` through the package.json `exports`
+ * map (Node resolves a package's own name from inside it), with no CLI in between.
+ * Loads: the issue-4 hand-check (common practice, worked by hand): 24 × 24 in, f′c = 4 ksi, fy = 60 ksi,
+ * ACI 318-19, bars on two faces at γ = 0.75, Pu = 900 kip, Mu = 600 kip-ft → Pu/(b·h) = 1.5625 ksi.
+ */
+import { spawnSync } from 'node:child_process';
+import { existsSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+
+const root = new URL('../../', import.meta.url).pathname;
+
+const run = (code: string) => spawnSync(process.execPath, ['--input-type=module', '-e', code], { cwd: root, encoding: 'utf8' });
+
+describe("import { checkColumn } from 'pmchart'", () => {
+  it('has typings in dist/index.d.ts', () => {
+    expect(existsSync(`${root}dist/index.d.ts`)).toBe(true);
+  });
+
+  it('checks a column without the CLI', () => {
+    const r = run(`
+      import { checkColumn, resolveBasis, LOAD_STATUSES } from 'pmchart';
+      const basis = resolveBasis('aci318-19', { units: 'us', fc: 4, fy: 60, transverse: 'tied' });
+      const c = checkColumn({ basis, shape: { kind: 'rectangle', b: 24, h: 24 }, arrangement: { kind: 'two-faces', barsPerFace: 2 },
+        gamma: 0.75, loads: [{ id: 'C-1', Pu: 900, Mu: 600 * 12 }] });
+      console.log(JSON.stringify({ P: c.results[0].normalised.P, rho: c.results[0].rhoRequired, status: c.results[0].status, frozen: Object.isFrozen(c), statuses: LOAD_STATUSES }));
+    `);
+    expect(r.stderr).toBe('');
+    const out = JSON.parse(r.stdout);
+    expect(out.P).toBeCloseTo(1.5625, 9);
+    expect(out.rho).toBeGreaterThan(0.01);
+    expect(out.rho).toBeLessThan(0.04);
+    expect(out.status).toBe('ok');
+    expect(out.frozen).toBe(true);
+    expect(out.statuses).toEqual(['ok', 'fails', 'not-possible', 'unstable', 'outside-scope']);
+  });
+
+  it('renders one sheet of a chart set read from text', () => {
+    const r = run(`
+      import { readFileSync } from 'node:fs';
+      import { readChartSet, renderSheet } from 'pmchart';
+      const set = readChartSet(readFileSync('charts-config/demo.json', 'utf8'));
+      const svg = await renderSheet(set, 0, 'svg');
+      console.log(JSON.stringify({ sheets: set.sheets.length, svg: typeof svg === 'string' && svg.startsWith('<svg'), caution: String(svg).includes('qualified engineers') }));
+    `);
+    expect(r.stderr).toBe('');
+    const out = JSON.parse(r.stdout);
+    expect(out.sheets).toBeGreaterThan(1);
+    expect(out.svg).toBe(true);
+    expect(out.caution).toBe(true);
+  });
+});
