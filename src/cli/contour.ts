@@ -119,7 +119,7 @@ export function runContour(o: ContourOptions): string {
       writeFileSync(tmp, text);
       renameSync(tmp, o.out);
     } catch (e) {
-      throw new PmError(ERROR_CODES.io, '--out', `cannot be written (${(e as Error).message.split('\n')[0]})`, { value: o.out });
+      throw new PmError(ERROR_CODES.io, '--out', `cannot be written (${(e as Error).message.split('\n')[0]})`, { value: o.out }, 3);
     }
     return '';
   }

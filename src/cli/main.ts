@@ -13,7 +13,7 @@ import { registerSet } from './set.js';
 import { registerSheet } from './sheet.js';
 import { registerTable } from './table.js';
 
-/** The single error handler: one line on stderr, exit code from the error, no stack trace. */
+/** The single error handler: one line on stderr, exit code from the error (2 bad input, 3 I/O), 3 for an internal error, no stack trace. */
 export async function runAction(fn: () => Promise<void> | void): Promise<void> {
   try {
     await fn();
@@ -26,7 +26,7 @@ export async function runAction(fn: () => Promise<void> | void): Promise<void> {
     const msg = e instanceof Error ? e.message.split('\n')[0] : String(e);
     process.stderr.write(`pmchart: internal error: ${msg}\n`);
     if (process.env.PMCHART_DEBUG && e instanceof Error) process.stderr.write(`${e.stack}\n`);
-    process.exitCode = 1;
+    process.exitCode = 3;
   }
 }
 

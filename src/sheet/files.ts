@@ -10,7 +10,7 @@ export function writeFileAtomic(path: string, data: string | Uint8Array): void {
     writeFileSync(tmp, data);
     renameSync(tmp, path);
   } catch (e) {
-    throw new PmError(ERROR_CODES.io, path, `cannot be written (${(e as Error).message.split('\n')[0]})`);
+    throw new PmError(ERROR_CODES.io, path, `cannot be written (${(e as Error).message.split('\n')[0]})`, {}, 3);
   }
 }
 
@@ -26,6 +26,6 @@ export function swapInFolder(staging: string, target: string): void {
     renameSync(staging, target);
     if (old) rmSync(old, { recursive: true, force: true });
   } catch (e) {
-    throw new PmError(ERROR_CODES.io, target, `cannot be written (${(e as Error).message.split('\n')[0]})`);
+    throw new PmError(ERROR_CODES.io, target, `cannot be written (${(e as Error).message.split('\n')[0]})`, {}, 3);
   }
 }

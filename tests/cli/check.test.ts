@@ -116,3 +116,38 @@ describe('bad input', () => {
     expect(JSON.parse(ok).results[0]).toHaveProperty('rhoFromChart');
   });
 });
+
+describe('check exit status (0 pass, 1 a load does not pass, 2 bad input, 3 I/O error)', () => {
+  const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
+  const run = (args: string[]) => spawnSync(process.execPath, [bin, 'check', ...args], { encoding: 'utf8' });
+  // issue-4 hand-check section (common practice, worked by hand): 24 × 24 in, f′c 4 ksi, fy 60 ksi, γ 0.75
+  const section = ['--fc', '4', '--fy', '60', '--b', '24', '--h', '24', '--gamma', '0.75', '--bars-per-face', '2', '--proposals', '0'];
+  it('0 when every load passes, with the summary line', () => {
+    const r = run([...section, '--pu', '900', '--mu', '600', '--rho', '0.04']);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toContain('Summary: all 1 load pass');
+  });
+  it('1 when a load fails, and the row says FAILS', () => {
+    const r = run([...section, '--pu', '900', '--mu', '600', '--rho', '0.01']);
+    expect(r.status).toBe(1);
+    expect(r.stdout).toMatch(/FAILS/);
+    expect(r.stdout).toContain('1 of 1 load does not pass (1 fails)');
+  });
+  it('1 when a load is unstable (ACI 318-19 6.6.4.5.2: Pu ≥ 0.75·Pc, Pc = 373 kip by hand)', () => {
+    const r = run(['--fc', '6', '--fy', '60', '--b', '20', '--h', '20', '--cover', '1.5', '--tie', '#4', '--bar', '#10', '--arrangement', 'four-faces', '--bars-per-face', '3', '--pu', '700', '--mu', '180', '--m1', '-90', '--klu', '52ft', '--beta-dns', '0.6']);
+    expect(r.status).toBe(1);
+    expect(r.stdout).toContain('UNSTABLE');
+    expect(r.stdout).not.toContain('not possible (ρg');
+  });
+  it('2 for bad input, one line naming the flag', () => {
+    const r = run([...section, '--pu', '900', '--mu', 'abc']);
+    expect(r.status).toBe(2);
+    expect(r.stderr.trim().split('\n')).toHaveLength(1);
+    expect(r.stderr).toContain('--mu');
+  });
+  it('3 when the report cannot be written, and no temporary file is left', () => {
+    const r = run([...section, '--pu', '900', '--mu', '600', '--report', '/nonexistent-dir/x.txt']);
+    expect(r.status).toBe(3);
+    expect(r.stderr).toContain('--report');
+  });
+});
