@@ -325,6 +325,7 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
     Mux = magnified.Mux;
     if (load.Muy !== undefined || magnified.y) Muy = magnified.Muy;
   }
+  // an unstable magnifier gives unbounded moments: no section check applies (the status says why)
   const finiteMoments = Number.isFinite(Mux) && (Muy === undefined || Number.isFinite(Muy));
 
   // 2. uniaxial, every variant the sign or orientation can load
@@ -384,6 +385,7 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
   const measureValue = checked ? Math.max(utilisation!, biaxialUtil ?? 0) : Math.max(uniRho, biaxialRho ?? 0);
   const st = statusOf({ magnified, checked, measureValue, notPossible: !checked && !Number.isFinite(measureValue), finite: finiteMoments, limitsMax: limits.max });
 
+  const unbounded = !finiteMoments;
   return {
     id: load.id,
     index,
@@ -395,18 +397,18 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
     Muy: Muy ?? null,
     normalised: { P: n.P, M: n.M, eOverH: n.P === 0 ? (n.M === 0 ? 0 : Infinity) : n.M / n.P },
     dimensionless: { P: n.P / basis.normalisingStress, M: n.M / basis.normalisingStress },
-    rhoRequired: g.req.rho,
+    rhoRequired: unbounded ? null : g.req.rho,
     rhoStatus: g.req.status,
     governedBy: g.req.governedBy,
-    steelRequired: g.req.rho === null ? null : g.req.rho * area,
-    rhoFromChart: reading.rhoFromChart,
-    rhoRoundedDown: reading.rhoRoundedDown,
+    steelRequired: unbounded || g.req.rho === null ? null : g.req.rho * area,
+    rhoFromChart: unbounded ? null : reading.rhoFromChart,
+    rhoRoundedDown: unbounded ? null : reading.rhoRoundedDown,
     chartSheets: reading.sheets,
-    extraSteelRoundedDown: g.req.rho === null || reading.rhoRoundedDown === null ? null : (reading.rhoRoundedDown - g.req.rho) * area,
+    extraSteelRoundedDown: unbounded || g.req.rho === null || reading.rhoRoundedDown === null ? null : (reading.rhoRoundedDown - g.req.rho) * area,
     strain: { ...s, atRho: g.strainRho, capGoverns: g.cap.capGoverns },
     demandRatio: g.cap.utilisation,
-    utilisation,
-    capacity: checked && !zero ? { P: g.cap.P * area, M: g.cap.M * area * depth } : null,
+    utilisation: unbounded ? null : utilisation,
+    capacity: checked && !zero && !unbounded ? { P: g.cap.P * area, M: g.cap.M * area * depth } : null,
     variant: { label: g.v.info.label, sign: g.v.info.sign, turnDeg: g.v.info.turnDeg },
     variantsChecked: candidates.length,
     slenderness: magnified,
@@ -434,11 +436,11 @@ function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measur
   const axes = x.magnified ? ([['x', x.magnified.x], ['y', x.magnified.y]] as const) : [];
   for (const [axis, s] of axes) {
     if (s && !s.ok && !(s.delta < Infinity)) {
-      return { status: 'unstable', statusReason: `unstable about ${axis}: the axial load reaches the critical load of the moment magnifier (${s.method})`, statusClause: stabilityClause(s.method) };
+      return { status: 'unstable', statusReason: `about ${axis}: ${s.warnings[0] ?? 'the axial load reaches the critical load of the magnifier'}`, statusClause: stabilityClause(s.method) };
     }
   }
   for (const [axis, s] of axes) {
-    if (s && !s.ok) return { status: 'outside-scope', statusReason: `about ${axis}: second-order moment beyond the method's limit (${s.warnings[0] ?? s.method})`, statusClause: scopeClause(s.method) };
+    if (s && !s.ok) return { status: 'outside-scope', statusReason: `about ${axis}: ${s.warnings[0] ?? "second-order moment beyond the method's limit"}`, statusClause: scopeClause(s.method) };
   }
   if (!x.finite || x.notPossible) return { status: 'not-possible', statusReason: `needs more than the maximum ρg = ${fmtRho(x.limitsMax)}: enlarge the section`, statusClause: null };
   if (x.checked && !(x.measureValue <= 1 + 1e-9)) return { status: 'fails', statusReason: `utilisation ${x.measureValue.toFixed(3)} > 1`, statusClause: null };
@@ -487,7 +489,7 @@ export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadRe
   const governingWhy = !gov
     ? 'no loads'
     : gov.status !== 'ok' && gov.status !== 'fails'
-      ? `${gov.status}: ${gov.statusReason}`
+      ? `${gov.status} ${gov.statusReason}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`
       : measure === 'utilisation'
         ? `highest utilisation ${gov.measureValue.toFixed(3)} (the larger of the uniaxial and exact biaxial figures)`
         : `largest ρg required ${Number.isFinite(gov.measureValue) ? gov.measureValue.toFixed(4) : '—'}${ctx.biaxial ? ' (the larger of the uniaxial and exact biaxial figures)' : ''}`;

@@ -58,7 +58,7 @@ export function symbolsOf(c: ColumnCheck) {
 /** The note column of a load's row. */
 export function noteText(r: ColumnLoadResult, c: ColumnCheck): string {
   return [
-    r.status !== 'ok' ? `${STATUS_WORDS[r.status]}${r.statusReason ? `: ${r.statusReason}` : ''}${r.statusClause ? ` [${r.statusClause}]` : ''}` : '',
+    r.status !== 'ok' && r.status !== 'fails' ? `${r.statusReason}${r.statusClause ? ` [${r.statusClause}]` : ''}` : '',
     r.rhoStatus === 'minimum-governs' && r.status === 'ok' ? 'minimum ρg' : '',
     r.governedBy === 'cap' ? 'cap' : '',
     r.momentRaised ? `${symbolsOf(c).M} raised to minimum` : '',
@@ -101,7 +101,7 @@ export function resultsView(c: ColumnCheck): TableView {
   const rows = c.results.map((r) => [
     r.id,
     f(toDisplay(r.Pu, 'force', u), 5),
-    (r.momentRaised ? '↑' : '') + f(toDisplay(Math.sign(r.Mu || 1) * r.Mdesign, 'moment', u), 5),
+    Number.isFinite(r.Mu) ? (r.momentRaised ? '↑' : '') + f(toDisplay(Math.sign(r.Mu || 1) * r.Mdesign, 'moment', u), 5) : '∞',
     ...(biax ? [f(r.Muy === null ? null : toDisplay(r.Muy, 'moment', u), 5)] : []),
     f(r.normalised.P),
     f(r.normalised.M),
