@@ -189,7 +189,7 @@ function columns(t: TableView): { head: string; unit?: string; align: 'l' | 'r' 
   return t.headers.map((h, i) => {
     const sp = h.lastIndexOf(' ');
     const unitLike = sp > 0 && /^[a-zA-Z²·\-]+$/.test(h.slice(sp + 1)) && !text.has(h) && /(kip|kN|in|mm|ft|m|ksi|MPa|psi|²)/.test(h.slice(sp + 1));
-    return { head: i === 0 ? 'load' : unitLike ? h.slice(0, sp) : h, ...(unitLike ? { unit: h.slice(sp + 1) } : {}), align: i === 0 || text.has(h) ? ('l' as const) : ('r' as const) };
+    return { head: h === 'id' ? 'load' : unitLike ? h.slice(0, sp) : h, ...(unitLike ? { unit: h.slice(sp + 1) } : {}), align: i === 0 || text.has(h) ? ('l' as const) : ('r' as const) };
   });
 }
 
