@@ -7,7 +7,6 @@ import type { Command } from 'commander';
 import type { ResolvedChartSet } from '../config/types.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { sectionDepth, sectionWidth } from '../section/geometry.js';
-import { generatorLabel } from '../version.js';
 import { parseNumberList } from './format.js';
 import { addSectionOptions, resolveSectionFlags, type SectionFlags } from './section-flags.js';
 import { parseOmegaList, parseRhoList } from './table.js';

@@ -8,13 +8,10 @@
  * - clear spacing ≥ the basis's minimum (Basis.minimumClearSpacing: ACI 318-19 25.2.3, EN 1992-1-1 8.2(2), CSA A23.1 6.6.5.2);
  * - bar centres at cover + tie + db/2 from each face (common practice), so bars fit inside cover and tie.
  */
-import { prepareSection } from '../analysis/prepared-section.js';
 import type { Basis, CapContext } from '../codes/types.js';
-import { layoutBars } from '../section/arrangements.js';
 import type { BarSize } from '../section/bar-tables.js';
 import { gammaFromCover, grossArea, sectionDepth, sectionWidth } from '../section/geometry.js';
 import type { Arrangement, Shape } from '../section/types.js';
-import { capacityAlongRay, tabulate, type NormalisedLoad } from './ray.js';
 
 export type SelectableKind = 'two-faces' | 'four-faces' | 'side-faces' | 'ring';
 export const isSelectableKind = (k: string): k is SelectableKind => ['two-faces', 'four-faces', 'side-faces', 'ring'].includes(k);

@@ -21,7 +21,7 @@ import { COLOURS, TEXT_STYLES, type TextStyle } from '../chart/style.js';
 import { contourPlot } from '../chart/contour-plot.js';
 import { strainClassWord } from '../codes/types.js';
 import type { ColumnCheck, ColumnLoadResult } from '../design/column-check.js';
-import { barsView, biaxialView, noteText, resultsFootnotes, resultsView, sectionLine, slendernessView, STATUS_WORDS, symbolsOf, type TableView } from '../report/check-view.js';
+import { barsView, biaxialView, noteText, resultsFootnotes, resultsView, slendernessView, STATUS_WORDS, symbolsOf, type TableView } from '../report/check-view.js';
 import { cell as f, fmt } from '../report/format.js';
 import { prepareBiaxial } from '../analysis/biaxial.js';
 import type { CapContext } from '../codes/types.js';
