@@ -311,11 +311,22 @@ export function biaxialRhoRequired(
 
 const fmtRho = (r: number): string => String(Number(r.toFixed(4)));
 
-/** The whole result for one load. */
-export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index: number): ColumnLoadResult {
-  const { basis, area, depth, input } = ctx;
-  const notes: string[] = [];
+/** What a load demands of the section: slenderness applied, the moment raised to the minimum, the variants it meets. */
+interface Demand {
+  magnified: MagnifiedLoad | null;
+  Mux: number;
+  Muy: number | undefined;
+  /** false when an unstable magnifier makes the moments unbounded */
+  finiteMoments: boolean;
+  Mdesign: number;
+  raised: boolean;
+  n: NormalisedLoad;
+  limits: { min: number; max: number };
+  candidates: PreparedVariant[];
+}
 
+function demandOf(ctx: ColumnCheckContext, load: FactoredLoad): Demand {
+  const { basis, area, depth, input } = ctx;
   // 1. slenderness: magnified moments keep their signs
   let magnified: MagnifiedLoad | null = null;
   let Mux = load.Mu;
@@ -335,10 +346,31 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
   const Mmag = finiteMoments ? resultant : 0;
   const Mdesign = Math.max(Mmag, minimum);
   const raised = Mdesign > Mmag;
-  const n = normalise(load.Pu, Mdesign, area, depth);
-  const limits = rhoLimitsFor(basis, load.Pu, area);
   const signs = new Set<number>(raised || Mux === 0 ? [1, -1] : [Math.sign(Mux)]);
   const candidates = ctx.variants.filter((v) => v.info.sign === 0 || signs.has(v.info.sign));
+  return { magnified, Mux, Muy, finiteMoments, Mdesign, raised, n: normalise(load.Pu, Mdesign, area, depth), limits: rhoLimitsFor(basis, load.Pu, area), candidates };
+}
+
+/**
+ * Utilisation of the checked reinforcement for one load with every effect: the worst variant (screened on the
+ * ray table when `exact` is false) and the exact biaxial capacity where Muy is given. Infinity when the load is
+ * unstable or outside the slenderness method.
+ */
+function checkedUtilisation(ctx: ColumnCheckContext, load: FactoredLoad, exact: boolean): number {
+  const d = demandOf(ctx, load);
+  const bad = d.magnified && (!d.magnified.x.ok || (d.magnified.y && !d.magnified.y.ok));
+  if (bad || !d.finiteMoments) return Infinity;
+  let u = 0;
+  for (const v of d.candidates) u = Math.max(u, capacityAlongRay(v.checked!, ctx.checkedRho!, d.n, exact).utilisation);
+  if (exact && d.Muy !== undefined && ctx.checkedBiaxial) u = Math.max(u, biaxialRay(ctx.checkedBiaxial, load.Pu, d.Mux, d.Muy).utilisation);
+  return u;
+}
+
+/** The whole result for one load. */
+export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index: number): ColumnLoadResult {
+  const { basis, area, depth, input } = ctx;
+  const notes: string[] = [];
+  const { magnified, Mux, Muy, finiteMoments, Mdesign, raised, n, limits, candidates } = demandOf(ctx, load);
   const checked = ctx.checkedRho !== null;
   let gov: VariantOutcome | null = null;
   for (const v of candidates) {
@@ -591,16 +623,24 @@ export function layoutVerifier(input: ColumnCheckInput, order?: readonly number[
   const indices = order ?? input.loads.map((_, i) => i);
   return (arrangement, area, gamma) => {
     const check = prepareColumnCheck({ ...rest, arrangement, gamma, layout: { arrangement, area, gamma, description: '' } }, { readings: false });
+    // screen every load on the ray tables (interpolated, biaxial left out), then settle exactly every load
+    // within the screening margin of failing, worst first; stop at the first exact failure
+    const screened = indices.map((i) => ({ i, u: checkedUtilisation(check, input.loads[i]!, false) }));
+    screened.sort((a, b) => b.u - a.u);
+    const biaxial = (i: number) => input.loads[i]!.Muy !== undefined;
     let worst = { utilisation: 0, index: indices[0] ?? 0 };
-    for (const i of indices) {
-      const res = checkOneLoad(check, input.loads[i]!, i);
-      const u = res.status === 'ok' || res.status === 'fails' ? res.measureValue : Infinity;
+    for (const { i, u: su } of screened) {
+      if (su < SCREEN_MARGIN * worst.utilisation && su < SCREEN_MARGIN && !biaxial(i)) continue;
+      const u = checkedUtilisation(check, input.loads[i]!, true);
       if (u > worst.utilisation) worst = { utilisation: u, index: i };
       if (u > 1 + 1e-9) break;
     }
     return worst;
   };
 }
+
+/** Loads screened below this share of the worst exact utilisation (and of 1) need no exact settling. */
+const SCREEN_MARGIN = 0.97;
 
 /** Freezes the result's own data; the basis (shared, holds the material laws) and typed arrays are left as they are. */
 function deepFreeze<T>(o: T): T {
