@@ -4,7 +4,8 @@
  * Points run from pure tension (c/h → 0) to pure compression (c/h → ∞).
  */
 import type { Basis, CapContext } from '../codes/types.js';
-import { layoutBars } from '../section/arrangements.js';
+import { layoutBars, mirroredBars, symmetricAboutBendingAxis } from '../section/arrangements.js';
+import { sectionDepth } from '../section/geometry.js';
 import type { Arrangement, Bar, Shape } from '../section/types.js';
 import { designAt, nominalAt, prepareSection, R, RESPONSE_SIZE, type PreparedSection } from './prepared-section.js';
 import { findRoot } from './solve.js';
@@ -75,6 +76,11 @@ export interface CurveFamily {
   bars: readonly Bar[];
   sweep: { cOverH: Float64Array; epsT: Float64Array; phi: Float64Array };
   curves: Curve[];
+  /**
+   * For a layout not symmetric about the bending axis: the index where the negative branch starts (c/h there
+   * is measured from the −y face and M < 0). Absent: one branch (symmetric layouts, rings).
+   */
+  negativeBranchStart?: number;
   /** the prepared section, for further queries on the same family */
   section: PreparedSection;
 }
@@ -125,11 +131,50 @@ function lawJumpDepths(section: PreparedSection): number[] {
   return out;
 }
 
-/** Builds a family from a request. */
+/**
+ * Builds a family from a request. A layout that is not symmetric about the bending axis (a custom layout
+ * with more steel on one face) gets both branches: after the positive branch (compression on the +y face,
+ * pure tension → pure compression) comes the negative one (compression on the −y face, M < 0), swept back
+ * from pure compression to pure tension, so each curve is one closed loop. Rings keep one branch: their
+ * other bending directions are orientations (src/design/column-check.ts checks the weakest).
+ */
 export function computeFamily(req: FamilyRequest): CurveFamily {
   const bars = layoutBars(req.shape, req.arrangement, 1, { gamma: req.gamma, ...(req.gammaX !== undefined ? { gammaX: req.gammaX } : {}) });
   const section = prepareSection(req.basis, req.shape, bars, req.capContext ?? {});
-  return familyOf(section, req.arrangement, req.gamma, req.rhos, req.basePoints ?? 400);
+  const family = familyOf(section, req.arrangement, req.gamma, req.rhos, req.basePoints ?? 400);
+  if (req.arrangement.kind === 'ring' || symmetricAboutBendingAxis(bars, sectionDepth(req.shape))) return family;
+  const mirror = familyOf(prepareSection(req.basis, req.shape, mirroredBars(bars), req.capContext ?? {}), req.arrangement, req.gamma, req.rhos, req.basePoints ?? 400);
+  return withNegativeBranch(family, mirror);
+}
+
+/** Appends the mirrored family's curves, reversed and with M negated, as the negative branch. */
+function withNegativeBranch(pos: CurveFamily, mirror: CurveFamily): CurveFamily {
+  const joined = (a: Float64Array, b: Float64Array, sign: 1 | -1): Float64Array => {
+    const out = new Float64Array(a.length + b.length);
+    out.set(a);
+    for (let i = 0; i < b.length; i++) out[a.length + i] = sign * b[b.length - 1 - i]!;
+    return out;
+  };
+  const negate = (v: PointValues | null): PointValues | null => (v ? { ...v, M: -v.M } : null);
+  return {
+    ...pos,
+    negativeBranchStart: pos.sweep.cOverH.length,
+    sweep: { cOverH: joined(pos.sweep.cOverH, mirror.sweep.cOverH, 1), epsT: joined(pos.sweep.epsT, mirror.sweep.epsT, 1), phi: joined(pos.sweep.phi, mirror.sweep.phi, 1) },
+    curves: pos.curves.map((c, j) => {
+      const m = mirror.curves[j]!;
+      return {
+        rho: c.rho,
+        Pn: joined(c.Pn, m.Pn, 1),
+        Mn: joined(c.Mn, m.Mn, -1),
+        phiPn: joined(c.phiPn, m.phiPn, 1),
+        phiMn: joined(c.phiMn, m.phiMn, -1),
+        keyPoints: [
+          ...c.keyPoints,
+          ...m.keyPoints.map((k) => ({ id: `${k.id}-negative`, label: `${k.label}, negative moment`, nominal: negate(k.nominal), design: negate(k.design) })),
+        ],
+      };
+    }),
+  };
 }
 
 /** Builds a family on a prepared section (custom bars, checks). */

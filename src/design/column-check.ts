@@ -15,7 +15,7 @@
 import { capacityAlongRay as biaxialRay, prepareBiaxial, type BiaxialSection } from '../analysis/biaxial.js';
 import { prepareSection } from '../analysis/prepared-section.js';
 import type { Basis, CapContext, StrainClass } from '../codes/types.js';
-import { layoutBars } from '../section/arrangements.js';
+import { layoutBars, mirroredBars, symmetricAboutBendingAxis } from '../section/arrangements.js';
 import type { BarSize } from '../section/bar-tables.js';
 import { grossArea, sectionDepth } from '../section/geometry.js';
 import type { Arrangement, Bar, Shape } from '../section/types.js';
@@ -67,9 +67,9 @@ export type GoverningMeasure = 'utilisation' | 'rhoRequired';
 
 /** A section variant: the layout as the load's sign or orientation sees it. */
 export interface VariantInfo {
-  /** e.g. "as drawn", "mirrored (negative moment)", "ring turned 15°" */
+  /** e.g. "as drawn", "branch with compression on the −y face", "ring turned 15°" */
   label: string;
-  /** moment sign the variant serves; 0 for both */
+  /** the face a branch of an unsymmetric layout compresses: +1 the +y face, −1 the −y face (the mirrored bars); 0 symmetric or ring */
   sign: -1 | 0 | 1;
   /** turn of the bar pattern, degrees (rings) */
   turnDeg: number;
@@ -92,6 +92,8 @@ export interface ColumnLoadResult {
   readonly Muy: number | null;
   /** normalised uniaxial demand (P/Ag, M/(Ag·h)), M ≥ 0 */
   readonly normalised: { readonly P: number; readonly M: number; readonly eOverH: number };
+  /** where the load sits on a chart of this layout: M signed where the chart has both branches (unsymmetric layouts), else M */
+  readonly chartM: number;
   /** the same over the basis's normalising stress (ν and μ for EN 1992-1-1) */
   readonly dimensionless: { readonly P: number; readonly M: number };
   /** uniaxial (Mux) ρg required at the actual γ over every variant; null when not possible */
@@ -170,14 +172,6 @@ const turn = (deg: number) => {
   const s = Math.sin(t);
   return (bars: readonly Bar[]): Bar[] => bars.map((b) => ({ x: b.x * c - b.y * s, y: b.x * s + b.y * c, area: b.area }));
 };
-const mirror = (bars: readonly Bar[]): Bar[] => bars.map((b) => ({ x: b.x, y: -b.y, area: b.area }));
-
-/** True when mirroring the bars about the bending axis (y → −y) gives the same layout. */
-export function symmetricAboutBendingAxis(bars: readonly Bar[], depth: number): boolean {
-  const tol = 1e-9 * depth;
-  const total = bars.reduce((s, b) => s + b.area, 0);
-  return bars.every((b) => bars.some((o) => Math.abs(o.x - b.x) <= tol && Math.abs(o.y + b.y) <= tol && Math.abs(o.area - b.area) <= 1e-9 * total));
-}
 
 /** Ring orientations sampled over half a bar pitch (the capacity repeats every pitch and is even about 0 and π/n). */
 const RING_TURNS = 4;
@@ -198,8 +192,8 @@ export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: n
   const bars = layoutBars(shape, arrangement, 1, { gamma });
   if (symmetricAboutBendingAxis(bars, sectionDepth(shape))) return [{ label: 'as drawn', sign: 0, turnDeg: 0, map: (b) => [...b] }];
   return [
-    { label: 'as drawn (positive moment: compression on the +y face)', sign: 1, turnDeg: 0, map: (b) => [...b] },
-    { label: 'mirrored (negative moment: compression on the −y face)', sign: -1, turnDeg: 0, map: mirror },
+    { label: 'branch with compression on the +y face', sign: 1, turnDeg: 0, map: (b) => [...b] },
+    { label: 'branch with compression on the −y face', sign: -1, turnDeg: 0, map: mirroredBars },
   ];
 }
 
@@ -213,8 +207,6 @@ interface PreparedVariant {
   table: RayTable;
   /** the checked reinforcement (given ρg or layout), or null */
   checked: RayTable | null;
-  /** chart sheets as a reader would have them for this variant (mirror of a custom layout); null: the main set */
-  charts: ChartSet | null;
 }
 
 export interface ColumnCheckContext {
@@ -254,9 +246,7 @@ export function prepareColumnCheck(input: ColumnCheckInput, opts: { readings?: b
   const variants = sectionVariants(shape, input.arrangement, input.gamma).map((info): PreparedVariant => {
     const table = tabulate(prepareSection(basis, shape, info.map(unit), capContext), 128);
     const checked = checkedBars ? tabulate(prepareSection(basis, shape, info.map(checkedBars), capContext), 128) : null;
-    const a = input.arrangement;
-    const mirroredCharts = readings && info.sign === -1 && a.kind === 'custom' ? chartReq({ kind: 'custom', bars: a.bars.map((b) => ({ ...b, y: -b.y })) }) : null;
-    return { info, table, checked, charts: mirroredCharts };
+    return { info, table, checked };
   });
   const biaxial = input.loads.some((l) => l.Muy !== undefined);
   const checkedBiaxial = checkedBars && biaxial ? prepareBiaxial(basis, shape, checkedBars, capContext) : null;
@@ -322,7 +312,9 @@ interface Demand {
   raised: boolean;
   n: NormalisedLoad;
   limits: { min: number; max: number };
-  candidates: PreparedVariant[];
+  /** each variant with the load as it sees it (M signed for the two branches of an unsymmetric layout) */
+  candidates: { v: PreparedVariant; load: NormalisedLoad }[];
+  unsymmetric: boolean;
 }
 
 function demandOf(ctx: ColumnCheckContext, load: FactoredLoad): Demand {
@@ -346,9 +338,13 @@ function demandOf(ctx: ColumnCheckContext, load: FactoredLoad): Demand {
   const Mmag = finiteMoments ? resultant : 0;
   const Mdesign = Math.max(Mmag, minimum);
   const raised = Mdesign > Mmag;
-  const signs = new Set<number>(raised || Mux === 0 ? [1, -1] : [Math.sign(Mux)]);
-  const candidates = ctx.variants.filter((v) => v.info.sign === 0 || signs.has(v.info.sign));
-  return { magnified, Mux, Muy, finiteMoments, Mdesign, raised, n: normalise(load.Pu, Mdesign, area, depth), limits: rhoLimitsFor(basis, load.Pu, area), candidates };
+  const n = normalise(load.Pu, Mdesign, area, depth);
+  // an unsymmetric layout is one closed curve of two branches: the load, with its sign, meets one of them
+  // (a moment raised to a minimum is taken with both signs); symmetric layouts and rings see |M|
+  const unsymmetric = ctx.variants.some((v) => v.info.sign !== 0);
+  const signs = !unsymmetric ? [1] : raised || Mux === 0 ? [1, -1] : [Math.sign(Mux)];
+  const candidates = signs.flatMap((sg) => ctx.variants.map((v) => ({ v, load: { P: n.P, M: v.info.sign === -1 ? -sg * n.M : sg * n.M } })));
+  return { magnified, Mux, Muy, finiteMoments, Mdesign, raised, n, limits: rhoLimitsFor(basis, load.Pu, area), candidates, unsymmetric };
 }
 
 /**
@@ -361,7 +357,7 @@ function checkedUtilisation(ctx: ColumnCheckContext, load: FactoredLoad, exact: 
   const bad = d.magnified && (!d.magnified.x.ok || (d.magnified.y && !d.magnified.y.ok));
   if (bad || !d.finiteMoments) return Infinity;
   let u = 0;
-  for (const v of d.candidates) u = Math.max(u, capacityAlongRay(v.checked!, ctx.checkedRho!, d.n, exact).utilisation);
+  for (const { v, load: l } of d.candidates) u = Math.max(u, capacityAlongRay(v.checked!, ctx.checkedRho!, l, exact).utilisation);
   if (exact && d.Muy !== undefined && ctx.checkedBiaxial) u = Math.max(u, biaxialRay(ctx.checkedBiaxial, load.Pu, d.Mux, d.Muy).utilisation);
   return u;
 }
@@ -370,26 +366,28 @@ function checkedUtilisation(ctx: ColumnCheckContext, load: FactoredLoad, exact: 
 export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index: number): ColumnLoadResult {
   const { basis, area, depth, input } = ctx;
   const notes: string[] = [];
-  const { magnified, Mux, Muy, finiteMoments, Mdesign, raised, n, limits, candidates } = demandOf(ctx, load);
+  const { magnified, Mux, Muy, finiteMoments, Mdesign, raised, n, limits, candidates, unsymmetric } = demandOf(ctx, load);
   const checked = ctx.checkedRho !== null;
   let gov: VariantOutcome | null = null;
-  for (const v of candidates) {
-    const req = rhoRequired(v.table, n, limits);
+  for (const { v, load: l } of candidates) {
+    const req = rhoRequired(v.table, l, limits);
     const strainRho = checked ? ctx.checkedRho! : (req.rho ?? limits.max);
     const strainTable = v.checked ?? v.table;
-    const cap = capacityAlongRay(strainTable, strainRho, n);
+    const cap = capacityAlongRay(strainTable, strainRho, l);
     const o = { v, req, strainRho, cap, strainTable };
     gov = gov ? worse(gov, o, checked) : o;
   }
   const g = gov!;
-  const chartSet = g.v.charts ?? ctx.charts;
-  const reading = chartSet ? withMinimum(readCharts(chartSet, n), limits.min, chartSet.rhos) : { rhoFromChart: null, rhoRoundedDown: null, sheets: [] };
+  // the sheets of an unsymmetric layout draw both branches: read them with the signed moment
+  const chartM = unsymmetric && Mux < 0 ? -n.M : n.M;
+  const chartSet = ctx.charts;
+  const reading = chartSet ? withMinimum(readCharts(chartSet, { P: n.P, M: chartM }), limits.min, chartSet.rhos) : { rhoFromChart: null, rhoRoundedDown: null, sheets: [] };
   if (g.req.status === 'not-possible') notes.push(`not possible within ρg ≤ ${fmtRho(limits.max)}`);
   if (g.req.status === 'minimum-governs') notes.push(`minimum ρg = ${fmtRho(limits.min)} governs`);
   if (g.req.governedBy === 'cap') notes.push('axial cap governs ρg');
-  if (raised) notes.push(candidates.length > 1 && ctx.variants.some((v) => v.info.sign !== 0) ? 'moment raised to the basis minimum; both signs checked, the worse governs' : 'moment raised to the basis minimum');
-  if (candidates.length > 1 && g.v.info.turnDeg !== 0) notes.push(`weakest orientation: ${g.v.info.label}`);
-  if (g.v.info.sign === -1) notes.push('negative moment: the mirrored layout governs');
+  if (raised) notes.push(unsymmetric ? 'moment raised to the basis minimum; both signs checked, the worse governs' : 'moment raised to the basis minimum');
+  if (g.v.info.turnDeg !== 0) notes.push(`weakest orientation: ${g.v.info.label}`);
+  if (g.v.info.sign === -1) notes.push('the branch with compression on the −y face governs');
   if (chartSet && reading.rhoFromChart === null) notes.push('off the charted range');
   if (input.shape.kind === 'circle' && Muy !== undefined) notes.push('circle: the resultant of Mux and Muy is checked on the weakest orientation');
   const s = strainReport(g.strainTable, g.cap);
@@ -429,6 +427,7 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
     Muy: Muy ?? null,
     normalised: { P: n.P, M: n.M, eOverH: n.P === 0 ? (n.M === 0 ? 0 : Infinity) : n.M / n.P },
     dimensionless: { P: n.P / basis.normalisingStress, M: n.M / basis.normalisingStress },
+    chartM,
     rhoRequired: unbounded ? null : g.req.rho,
     rhoStatus: g.req.status,
     governedBy: g.req.governedBy,
@@ -576,7 +575,9 @@ export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadRe
         ? { kind: 'layout' as const, rho: ctx.checkedRho!, description: input.layout.description, bars: ctx.checkedBars }
         : { kind: 'rho' as const, rho: ctx.checkedRho!, description: 'given ρg', bars: ctx.checkedBars };
   const notes: string[] = [];
-  if (ctx.variants.length > 1 && ctx.variants.some((v) => v.info.sign !== 0)) notes.push('The bar layout is not symmetric about the bending axis: a negative moment is checked on the mirrored layout (compression on the −y face); moments keep their signs.');
+  if (ctx.variants.some((v) => v.info.sign !== 0)) {
+    notes.push('The bar layout is not symmetric about the bending axis: its curves have two branches (compression on the +y face, and on the −y face, drawn at M < 0); each load is checked with its sign on the branch its ray meets, and moments keep their signs.');
+  }
   if (ctx.variants.some((v) => v.info.turnDeg !== 0)) {
     notes.push(`Ring of bars in a circle: every uniaxial check takes the weakest of ${ctx.variants.length} orientations over half a bar pitch (0° = a bar at the compression extreme).`);
   }

@@ -12,7 +12,7 @@ import { R, RESPONSE_SIZE, type PreparedSection } from '../analysis/prepared-sec
 import { findRoot } from '../analysis/solve.js';
 import type { StrainClass } from '../codes/types.js';
 
-/** A normalised demand: axial Pu/Ag and moment Mu/(Ag·h) (Ag·D for circles), stress units, moment ≥ 0. */
+/** A normalised demand: axial Pu/Ag and moment Mu/(Ag·h) (Ag·D for circles), stress units; M < 0 only for a layout not symmetric about the bending axis. */
 export interface NormalisedLoad {
   P: number;
   M: number;
@@ -83,22 +83,33 @@ export interface RayCapacity {
 
 /**
  * Where the ray through the load meets the uncapped φ-curve of ρg: the root in c of
- * h(c) = P(c)·m − M(c)·p (φ cancels), which rises with c as the curve turns from tension to compression.
+ * h(c) = P(c)·m − M(c)·p (φ cancels), where h rises through zero as the curve, swept from pure tension to
+ * pure compression, passes the ray (a falling zero is the ray's opposite direction; a layout not symmetric
+ * about the bending axis can show one). The first rising zero on the table is refined. NaN when the ray
+ * misses this branch (it meets the mirrored one).
  */
 function rayDepth(t: RayTable, rho: number, load: NormalisedLoad, exact: boolean): number {
   const { P: p, M: m } = load;
   const n = t.c.length;
   if (m === 0) return p >= 0 ? C_OVER_H_MAX : C_OVER_H_MIN;
   const hAt = (i: number) => (t.Pc[i]! + rho * t.Ps[i]!) * m - (t.Mc[i]! + rho * t.Ms[i]!) * p;
-  if (hAt(0) >= 0) return t.c[0]!;
-  if (hAt(n - 1) <= 0) return t.c[n - 1]!;
-  let lo = 0;
-  let hi = n - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (hAt(mid) <= 0) lo = mid;
-    else hi = mid;
+  const h0 = hAt(0);
+  let prev = h0;
+  let hi = -1;
+  for (let i = 1; i < n; i++) {
+    const h = hAt(i);
+    if (prev <= 0 && h > 0) {
+      hi = i;
+      break;
+    }
+    prev = h;
   }
+  if (hi < 0) {
+    if (h0 >= 0 && prev >= 0) return t.c[0]!;
+    if (h0 <= 0 && prev <= 0) return t.c[n - 1]!;
+    return NaN;
+  }
+  const lo = hi - 1;
   if (!exact) {
     const hl = hAt(lo);
     const hh = hAt(hi);
@@ -141,6 +152,7 @@ function responseAt(t: RayTable, c: number, exact: boolean): [epsT: number, phi:
 export function capacityAlongRay(t: RayTable, rho: number, load: NormalisedLoad, exact = true): RayCapacity {
   const { P: p, M: m } = load;
   const c = rayDepth(t, rho, load, exact);
+  if (Number.isNaN(c)) return missedRay(t, rho, load);
   const [epsT, phi, Pc, Mc, Ps, Ms] = responseAt(t, c, exact);
   const P = phi * (Pc + rho * Ps);
   const M = phi * (Mc + rho * Ms);
@@ -164,6 +176,23 @@ export function capacityAlongRay(t: RayTable, rho: number, load: NormalisedLoad,
     epsT,
     phi,
     capGoverns,
+  };
+}
+
+/** A ray this branch does not meet sets no limit of its own; the axial cap still does. */
+function missedRay(t: RayTable, rho: number, load: NormalisedLoad): RayCapacity {
+  const cap = capAt(t, rho);
+  const capScale = load.P > 0 ? cap / load.P : Infinity;
+  return {
+    scale: capScale,
+    curveScale: Infinity,
+    utilisation: 1 / capScale,
+    P: Number.isFinite(capScale) ? cap : NaN,
+    M: Number.isFinite(capScale) ? load.M * capScale : NaN,
+    cOverH: NaN,
+    epsT: NaN,
+    phi: NaN,
+    capGoverns: Number.isFinite(capScale),
   };
 }
 

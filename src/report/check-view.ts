@@ -62,7 +62,7 @@ export function noteText(r: ColumnLoadResult, c: ColumnCheck): string {
     r.rhoStatus === 'minimum-governs' && r.status === 'ok' ? 'minimum ρg' : '',
     r.governedBy === 'cap' ? 'cap' : '',
     r.momentRaised ? `${symbolsOf(c).M} raised to minimum` : '',
-    r.variant.sign === -1 ? 'mirrored layout governs' : '',
+    r.variant.sign === -1 ? '−y-face branch governs' : '',
     r.variant.turnDeg !== 0 ? `weakest orientation ${fmt(r.variant.turnDeg, 4)}°` : '',
   ]
     .filter(Boolean)

@@ -80,3 +80,13 @@ export function realisedGamma(shape: Shape, bars: readonly Bar[]): number {
   const ys = bars.map((b) => b.y);
   return (Math.max(...ys) - Math.min(...ys)) / sectionDepth(shape);
 }
+
+/** True when mirroring the bars about the bending axis (y → −y) gives the same layout (tolerance 1e-9 of the depth and of Ast). */
+export function symmetricAboutBendingAxis(bars: readonly Bar[], depth: number): boolean {
+  const tol = 1e-9 * depth;
+  const total = bars.reduce((s, b) => s + b.area, 0);
+  return bars.every((b) => bars.some((o) => Math.abs(o.x - b.x) <= tol && Math.abs(o.y + b.y) <= tol && Math.abs(o.area - b.area) <= 1e-9 * total));
+}
+
+/** The bars mirrored about the bending axis: what a negative moment sees. */
+export const mirroredBars = (bars: readonly Bar[]): Bar[] => bars.map((b) => ({ x: b.x, y: -b.y, area: b.area }));

@@ -208,22 +208,26 @@ function extraCurve(family: CurveFamily, rho: number, label: string, capContext:
 
 function plotDomain(data: SheetData, results: readonly ColumnLoadResult[]): { domainM: [number, number]; domainP: [number, number] } {
   let mMax = 0;
+  let mMin = 0;
   let pMax = 0;
   let pMin = 0;
   for (const c of [...data.curves, ...(data.extraCurves ?? [])]) {
     mMax = Math.max(mMax, c.M);
+    mMin = Math.min(mMin, c.M);
     pMax = Math.max(pMax, c.P);
     pMin = Math.min(pMin, c.P);
   }
   for (const r of results) {
-    if (!Number.isFinite(r.normalised.M) || !Number.isFinite(r.normalised.P)) continue;
-    mMax = Math.max(mMax, r.normalised.M);
+    if (!Number.isFinite(r.chartM) || !Number.isFinite(r.normalised.P)) continue;
+    mMax = Math.max(mMax, r.chartM);
+    mMin = Math.min(mMin, r.chartM);
     pMax = Math.max(pMax, r.normalised.P);
     pMin = Math.min(pMin, r.normalised.P);
   }
-  const sm = niceStep(mMax * 1.18, 10);
+  // a layout not symmetric about the bending axis has a negative branch too (M < 0)
+  const sm = niceStep((mMax - mMin) * 1.18, 10);
   const sp = niceStep((pMax - pMin) * 1.06, 12);
-  return { domainM: [0, Math.ceil((mMax * 1.18) / sm) * sm], domainP: [Math.floor((pMin * 1.04) / sp) * sp, Math.ceil((pMax * 1.04) / sp) * sp] };
+  return { domainM: [mMin < 0 ? Math.floor((mMin * 1.18) / sm) * sm : 0, Math.ceil((mMax * 1.18) / sm) * sm], domainP: [Math.floor((pMin * 1.04) / sp) * sp, Math.ceil((pMax * 1.04) / sp) * sp] };
 }
 
 /** Load marks in chart units; labels in points from the plot origin, set beside their mark where they collide with no other label. */
@@ -236,13 +240,13 @@ function placeLoads(L: SheetLayout, d: { domainM: [number, number]; domainP: [nu
     const w = estWidth(c.text, 0.82 * L.u);
     placed.push({ x0: px(c.M) - w / 2, y0: py(c.P) - 0.6 * L.u, x1: px(c.M) + w / 2, y1: py(c.P) + 0.6 * L.u });
   }
-  const marks = results.filter((r) => Number.isFinite(r.normalised.M) && Number.isFinite(r.normalised.P));
+  const marks = results.filter((r) => Number.isFinite(r.chartM) && Number.isFinite(r.normalised.P));
   // marks drawn in reverse rank, so the governing one sits on top
-  [...marks].reverse().forEach((r, z) => data.loadMarks!.push({ id: r.id, M: r5(r.normalised.M), P: r5(r.normalised.P), governing: r.governing ? 1 : 0, z }));
-  for (const p of marks) placed.push({ x0: px(p.normalised.M) - 3, y0: py(p.normalised.P) - 3, x1: px(p.normalised.M) + 3, y1: py(p.normalised.P) + 3 });
+  [...marks].reverse().forEach((r, z) => data.loadMarks!.push({ id: r.id, M: r5(r.chartM), P: r5(r.normalised.P), governing: r.governing ? 1 : 0, z }));
+  for (const p of marks) placed.push({ x0: px(p.chartM) - 3, y0: py(p.normalised.P) - 3, x1: px(p.chartM) + 3, y1: py(p.normalised.P) + 3 });
   const labels: LoadLabelRow[] = [];
   marks.slice(0, LABELLED_LOADS).forEach((r) => {
-    const x = px(r.normalised.M);
+    const x = px(r.chartM);
     const y = py(r.normalised.P);
     const fs = (r.governing ? 0.86 : 0.76) * L.u;
     const w = estWidth(r.id, fs) + 2;

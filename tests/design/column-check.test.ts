@@ -54,6 +54,41 @@ describe('signed moments on an unsymmetric custom layout (hand calculation, ACI 
     expectClose(r.utilisation!, biaxialRay(sec, Pu, -Mu, 0).utilisation, 1e-4);
   });
 
+  it('a load near the axis on a layout with more steel on one face: the ray is met where h(c) rises (hand calculation)', () => {
+    // 3 in² at y = +7.5 in, 1 in² at y = −7.5 in; Pu = 400 kip, Mu = +40 kip-ft, e = 1.2 in. Uniform strain puts
+    // the resultant 0.81 in above the centroid, so the line through the load meets the +y-face branch twice
+    // (once on the tension side, opposite the load); the capacity is the crossing in the load's direction.
+    // By hand on that branch: d = 2.5 in (3 in²) and 17.5 in (1 in²) below the +y face; a = min(0.85·c, 20).
+    const branch = (c: number) => {
+      const a = Math.min(0.85 * c, 20);
+      let P = 0.85 * 4 * a * 12;
+      let M = P * (10 - a / 2);
+      for (const [d, As, y] of [[2.5, 3, 7.5], [17.5, 1, -7.5]] as const) {
+        const eps = (0.003 * (c - d)) / c;
+        const f = Math.max(-60, Math.min(60, 29000 * eps)) - (d < a ? 0.85 * 4 : 0);
+        P += f * As;
+        M += f * As * y;
+      }
+      return { P, M, epsT: (0.003 * (17.5 - c)) / c };
+    };
+    let lo = 18;
+    let hi = 500; // e = M/P falls towards 0.81 in as c grows
+    for (let k = 0; k < 200; k++) {
+      const mid = (lo + hi) / 2;
+      const { P, M } = branch(mid);
+      if (M / P > 1.2) lo = mid;
+      else hi = mid;
+    }
+    const hand = branch(lo);
+    expectClose(hand.M / hand.P, 1.2, 1e-9);
+    expect(hand.epsT).toBeLessThan(0); // φ = 0.65 (Table 21.2.2, compression-controlled)
+    const heavyTop = { kind: 'custom' as const, bars: [{ x: 0, y: 0.375, share: 3 }, { x: 0, y: -0.375, share: 1 }] };
+    const r = checkColumn({ ...input(0), arrangement: heavyTop, loads: [{ id: 'A', Pu: 400, Mu: 40 * 12 }] }).results[0]!;
+    // φPn at the crossing, or the axial cap 0.80·0.65·Po with Po = 0.85·4·236 + 60·4 = 1042.4 kip (22.4.2.1)
+    expectClose(r.utilisation!, 400 / Math.min(0.65 * hand.P, 0.8 * 0.65 * 1042.4), 1e-4);
+    expect(r.utilisation!).toBeGreaterThan(0);
+  });
+
   it('a moment raised to a minimum is checked with both signs (EN 1992-1-1 6.1(4), e0 = max(h/30, 20 mm))', () => {
     const en = resolveBasis('en1992-1-1', { units: 'si', fc: 30, fy: 500, transverse: 'tied' });
     const c = checkColumn({
@@ -66,7 +101,7 @@ describe('signed moments on an unsymmetric custom layout (hand calculation, ACI 
     });
     const r = c.results[0]!;
     expect(r.momentRaised).toBe(true);
-    expect(r.variantsChecked).toBe(2);
+    expect(r.variantsChecked).toBe(4); // two branches × both signs
     expectClose(r.Mdesign, 1.2e6 * 20, 1e-9); // e0 = max(300/30, 20) = 20 mm
   });
 });
