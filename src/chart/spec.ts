@@ -5,6 +5,7 @@
  * and `padding` make the view exactly one page.
  */
 import type { SheetData, TemplateParams } from './sheet-data.js';
+import { tickValues } from './axes.js';
 import { chartConfig, COLOURS, round2, TEXT_STYLES, type TextStyle } from './style.js';
 
 export type VlSpec = Record<string, unknown>;
@@ -27,8 +28,9 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
   const { layout: L } = t;
   const u = L.u;
   const o = t.overlay;
-  const x = { field: 'M', type: 'quantitative', scale: o ? { domain: o.domainM, nice: false, zero: false } : { zero: true, nice: true } };
-  const y = { field: 'P', type: 'quantitative', scale: o ? { domain: o.domainP, nice: false, zero: false } : { zero: true, nice: true } };
+  const a = t.axes;
+  const x = { field: 'M', type: 'quantitative', scale: o ? { domain: o.domainM, nice: false, zero: false } : a ? { domain: a.M.domain, nice: false, zero: false } : { zero: true, nice: true } };
+  const y = { field: 'P', type: 'quantitative', scale: o ? { domain: o.domainP, nice: false, zero: false } : a ? { domain: a.P.domain, nice: false, zero: false } : { zero: true, nice: true } };
   const plotLine = (name: string, kind: string, mark: Record<string, unknown>) => ({
     name,
     data: { name: 'refs' },
@@ -75,8 +77,8 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
   });
   layers.push(
     refLabel('ray', COLOURS.muted, 2, -2),
-    refLabel('strain', COLOURS.strain, 5, 0),
-    refLabel('cap', COLOURS.cap, 5, -1),
+    refLabel('strain', COLOURS.strain, 0, 0),
+    refLabel('cap', COLOURS.cap, 0, 0),
     {
       name: 'curve_label_halo',
       data: { name: 'curveLabels' },
@@ -110,8 +112,8 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
     background: COLOURS.paper,
     config: chartConfig(u),
     encoding: {
-      x: { ...x, axis: { title: t.xTitle, tickCount: 12, orient: 'bottom' } },
-      y: { ...y, axis: { title: t.yTitle, tickCount: 14 } },
+      x: { ...x, axis: { title: t.xTitle, orient: 'bottom', ...(a && !o ? { values: tickValues(a.M) } : { tickCount: 12 }) } },
+      y: { ...y, axis: { title: t.yTitle, ...(a && !o ? { values: tickValues(a.P) } : { tickCount: 14 }) } },
     },
     layer: layers,
   };

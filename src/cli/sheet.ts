@@ -93,9 +93,9 @@ export async function runSheet(o: SheetOptions): Promise<string> {
   const { SheetRenderer } = await import('../render/renderer.js');
   const { writeFileAtomic } = await import('../sheet/files.js');
   const family = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: sheetRhos(set, basis), capContext, basePoints: SHEET_BASE_POINTS });
-  const built = buildSheet({ set, sheet, family, sheetNumber: 1, sheetCount: 1, generator: generatorLabel() });
-  const page = { template: built.template, data: built.data };
   const renderer = await SheetRenderer.create();
+  const built = buildSheet({ set, sheet, family, sheetNumber: 1, sheetCount: 1, generator: generatorLabel(), measureText: renderer.measureText });
+  const page = { template: built.template, data: built.data };
   try {
     if (kind === '.svg') writeFileAtomic(out, await renderer.svg(page));
     else if (kind === '.png') writeFileAtomic(out, await renderer.png(page, 2));
