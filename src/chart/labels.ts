@@ -81,12 +81,19 @@ export class LabelPlacer {
     return !this.placed.some((p) => overlaps(p, b));
   }
 
-  /** How many drawn segments a box covers, weighted, leaving out the group `own`. */
-  cost(b: LabelBox, own?: string): number {
+  /**
+   * How many drawn segments a box covers, weighted, leaving out the group `own`; lines within `clear`
+   * points of the box count half, so a label keeps a little air from the next curve (no ambiguity).
+   */
+  cost(b: LabelBox, own?: string, clear = 0): number {
     let c = 0;
+    const wide = { x0: b.x0 - clear, y0: b.y0 - clear, x1: b.x1 + clear, y1: b.y1 + clear };
     for (const o of this.obstacles) {
       if (o.group === own) continue;
-      for (const s of o.segments) if (segmentHitsBox(s, b)) c += o.weight;
+      for (const s of o.segments) {
+        if (segmentHitsBox(s, b)) c += o.weight;
+        else if (clear > 0 && segmentHitsBox(s, wide)) c += o.weight / 2;
+      }
     }
     return c;
   }
@@ -95,12 +102,12 @@ export class LabelPlacer {
    * Places a label at the cheapest free candidate; a candidate's own `penalty` (distance from its
    * preferred spot) adds to the cost of the lines it covers. Returns the index of the chosen one, or -1.
    */
-  place(candidates: readonly { box: LabelBox; penalty: number }[], own?: string): number {
+  place(candidates: readonly { box: LabelBox; penalty: number }[], own?: string, clear = 0): number {
     let best = -1;
     let bestCost = Infinity;
     candidates.forEach((c, i) => {
       if (c.penalty >= bestCost || !this.free(c.box)) return;
-      const cost = c.penalty + this.cost(c.box, own);
+      const cost = c.penalty + this.cost(c.box, own, clear);
       if (cost < bestCost) ((best = i), (bestCost = cost));
     });
     if (best >= 0) this.placed.push(candidates[best]!.box);

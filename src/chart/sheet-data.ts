@@ -388,7 +388,7 @@ export function plotLayers(
     const flat = Array.from(P, (v, i) => ({ v: v / d, m: M[i]! / d })).filter((q) => q.v >= pMax * (1 - 1e-9));
     const capM = Math.max(...flat.map((q) => q.m));
     if (flat.length > 1 && X(capM) > w + 4) for (const t of [0.5, 0.35, 0.65]) at({ M: capM * t, P: pMax }, 1.5 + Math.abs(t - 0.5));
-    let chosen = placer.place(cands, `curve-${k}`);
+    let chosen = placer.place(cands, `curve-${k}`, 0.4 * h);
     if (chosen < 0) {
       // denser positions, then beside the curve rather than on it
       cands.length = 0;
@@ -399,7 +399,7 @@ export function plotLayers(
         at(pt, pen + 2, -1.1 * h);
         at(pt, pen + 2, 1.1 * h);
       }
-      chosen = placer.place(cands, `curve-${k}`);
+      chosen = placer.place(cands, `curve-${k}`, 0.4 * h);
     }
     const best = cands[chosen];
     if (best) out.curveLabels.push({ M: r5(best.M), P: r5(best.P), text, colour: curveColour(k, n), z: out.curveLabels.length });
@@ -518,7 +518,18 @@ function header(ctx: SheetContext, g: Deco): void {
   g.rect({ x: b.x, y: b.y, w: 0.7 * u, h: b.h }, COLOURS.accent);
   const right = `sheet ${ctx.sheetNumber} of ${ctx.sheetCount}`;
   g.text('headerRight', b.x + b.w, b.y + b.h * 0.62, right);
-  g.text('sheetTitle', b.x + 1.8 * u, b.y + b.h * 0.66, ctx.sheet.title, b.w - 1.8 * u - g.width('headerRight', right) - 3 * u);
+  const room = b.w - 1.8 * u - g.width('headerRight', right) - 3 * u;
+  const title = ctx.sheet.title;
+  // the title whole: full size, smaller, or in two smaller lines; cut only past that
+  if (g.width('sheetTitle', title) <= room) g.text('sheetTitle', b.x + 1.8 * u, b.y + b.h * 0.66, title);
+  else if (g.width('sheetTitleMid', title) <= room) g.text('sheetTitleMid', b.x + 1.8 * u, b.y + b.h * 0.62, title);
+  else {
+    const lines = wrap(title, room, g.size('sheetTitleSmall'), (t, f) => g.measure(t, f, true));
+    const fs = g.size('sheetTitleSmall');
+    const top = b.y + b.h / 2 - (fs * 1.15 * (Math.min(2, lines.length) - 1)) / 2 + 0.35 * fs;
+    const shown = lines.length > 2 ? [lines[0]!, lines.slice(1).join(' ')] : lines;
+    shown.forEach((l, i) => g.text('sheetTitleSmall', b.x + 1.8 * u, top + i * fs * 1.15, l, room));
+  }
   g.rule(b.x, b.y + b.h + 0.6 * u, b.x + b.w, b.y + b.h + 0.6 * u, COLOURS.rule, 0.8);
 }
 
@@ -587,14 +598,32 @@ function lookupPanel(ctx: SheetContext, table: LookupTable, primary: FamilyKind,
   g.rule(b.x, top, b.x + b.w, top, COLOURS.faint, 0.6);
 }
 
+/** Side-column variants, largest first: the first whose notes and caution fit the column is drawn. */
+const SIDE_FITS: { picture: number; notes: TextStyle }[] = [
+  { picture: 1, notes: 'body' },
+  { picture: 0.8, notes: 'bodySmall' },
+  { picture: 0.6, notes: 'bodyTiny' },
+];
+
 function sidePanel(ctx: SheetContext, g: Deco): void {
+  for (const fit of SIDE_FITS) {
+    const trial = new Deco(g.L, { curves: [], curveLabels: [], refs: [], refLabels: [], frame: [], texts: [], rects: [], rules: [], dots: [], rings: [] }, g.measure);
+    if (sideColumn(ctx, trial, fit) <= g.L.side.y + g.L.side.h + 0.01 || fit === SIDE_FITS[SIDE_FITS.length - 1]) {
+      sideColumn(ctx, g, fit);
+      return;
+    }
+  }
+}
+
+/** Draws the side column; returns the bottom of its caution box. */
+function sideColumn(ctx: SheetContext, g: Deco, fit: { picture: number; notes: TextStyle }): number {
   const { side: b, u } = g.L;
   const { family, sheet, set } = ctx;
   const basis = family.basis;
 
   // pictogram, to scale from the unit-depth bars of the family
   g.text('heading', b.x, b.y + 1.0 * u, 'Section (to scale)');
-  const picH = Math.min(0.27 * b.h, 0.62 * b.w);
+  const picH = fit.picture * Math.min(0.27 * b.h, 0.62 * b.w);
   const box: Box = { x: b.x, y: b.y + 2.0 * u, w: b.w, h: picH };
   g.rect(box, COLOURS.panel);
   const aspect = sheet.shape.kind === 'rectangle' ? sheet.shape.aspect : 1;
@@ -636,7 +665,7 @@ function sidePanel(ctx: SheetContext, g: Deco): void {
   g.text('heading', b.x, y, `Basis: ${basis.title}`);
   y += 1.5 * u;
   const params = Object.entries(basis.parameters).map(([k, v]) => `${k} ${typeof v === 'number' ? fmt(v, 6) : v}`);
-  y = g.paragraph('body', b.x, y, b.w, params.join('  ·  '));
+  y = g.paragraph(fit.notes, b.x, y, b.w, params.join('  ·  '));
   y += 1.0 * u;
   g.text('heading', b.x, y, 'Assumptions');
   y += 1.5 * u;
@@ -654,17 +683,18 @@ function sidePanel(ctx: SheetContext, g: Deco): void {
     );
   }
   for (const note of [...basis.notes, ...extra]) {
-    g.text('body', b.x, y, '•');
-    y = g.paragraph('body', b.x + 1.0 * u, y, b.w - 1.0 * u, note) + 0.35 * u;
+    g.text(fit.notes, b.x, y, '•');
+    y = g.paragraph(fit.notes, b.x + 1.0 * u, y, b.w - 1.0 * u, note) + 0.3 * u;
   }
   // caution, pinned to the bottom of the column
   const caution =
     'For use by qualified engineers only. Check every value against the governing code edition, the project specification and local practice; this sheet does not replace the judgement of the engineer of record.';
-  const lines = wrap(caution, b.w - 2 * u, g.size('caution'));
+  const lines = wrap(caution, b.w - 2 * u, g.size('caution'), (t, f) => g.measure(t, f, true));
   const ch = lines.length * g.size('caution') * 1.35 + 1.4 * u;
   const cTop = Math.max(y + 0.5 * u, b.y + b.h - ch);
   g.rect({ x: b.x, y: cTop, w: b.w, h: ch }, '#fbf1ef', COLOURS.caution, 0.7);
   g.paragraph('caution', b.x + u, cTop + 1.0 * u + 0.5 * g.size('caution'), b.w - 2 * u, caution, 1.35);
+  return cTop + ch;
 }
 
 function titleBlock(ctx: SheetContext, g: Deco): void {
@@ -679,30 +709,33 @@ function titleBlock(ctx: SheetContext, g: Deco): void {
   const M = set.families === 'both' ? `${sy.nominalMoment}, ${sy.designMoment}` : primary === 'design' ? sy.designMoment : sy.nominalMoment;
   const ratios = set.ratios.values;
   const curves = `${fam} · ${RATIO_SYMBOL[set.ratios.kind]} ${fmt(ratios[0]!, 4)}–${fmt(ratios[ratios.length - 1]!, 4)}`;
-  const rows: [string, string, number][][] = [
-    [
-      ['office', tb.office, 3],
-      ['project', tb.project, 3],
-      ['sheet title', sheet.title, 4.6],
-      ['sheet', `${ctx.sheetNumber} of ${ctx.sheetCount}`, 1.1],
-    ],
-    [
-      ['design basis', basis.title, 1.3],
-      ['materials', `${sy.concreteStrength} ${stressText(sheet.fc, set.units)} · ${sy.steelStrength} ${stressText(sheet.fy, set.units)}`, 1.9],
-      ['γ', sheet.gamma.toFixed(2), 0.6],
-      ['shape · bars', `${describeShape(sheet.shape)} · ${describeArrangement(sheet.arrangement)}`, 3.7],
-      ['transverse', describeTransverse(sheet.transverse), 0.9],
-      ['prepared · checked', [tb.preparedBy, tb.checkedBy].filter(Boolean).join(' · ') || '—', 1.5],
-      ['rev.', tb.revision, 0.5],
-      ['date', tb.date, 1.1],
-      ['generated by', ctx.generator, 1.4],
-    ],
-    [
-      ['factors', basis.factorSummary, 4.6],
-      ['normalisation', normalisationText(set, sy, P, M, basis.normalisingStress), 4.6],
-      ['curves', curves, 2.4],
-    ],
+  const sheetRow: [string, string, number][] = [
+    ['office', tb.office, 3],
+    ['project', tb.project, 3],
+    ['sheet title', sheet.title, 4.6],
+    ['sheet', `${ctx.sheetNumber} of ${ctx.sheetCount}`, 1.1],
   ];
+  const section: [string, string, number][] = [
+    ['design basis', basis.title, 1.3],
+    ['materials', `${sy.concreteStrength} ${stressText(sheet.fc, set.units)} · ${sy.steelStrength} ${stressText(sheet.fy, set.units)}`, 1.9],
+    ['γ', sheet.gamma.toFixed(2), 0.6],
+    ['shape · bars', `${describeShape(sheet.shape)} · ${describeArrangement(sheet.arrangement)}`, 3.7],
+  ];
+  const people: [string, string, number][] = [
+    ['transverse', describeTransverse(sheet.transverse), 0.9],
+    ['prepared · checked', [tb.preparedBy, tb.checkedBy].filter(Boolean).join(' · ') || '—', 1.5],
+    ['rev.', tb.revision, 0.5],
+    ['date', tb.date, 1.1],
+    ['generated by', ctx.generator, 1.4],
+  ];
+  const factors: [string, string, number][] = [['factors', basis.factorSummary, 4.6]];
+  const norm: [string, string, number][] = [
+    ['normalisation', normalisationText(set, sy, P, M, basis.normalisingStress), 4.6],
+    ['curves', curves, 2.4],
+  ];
+  // narrow pages: the crowded rows split in two, so no value is cut
+  const rows: [string, string, number][][] =
+    (g.L.titleRows ?? 3) >= 5 ? [[sheetRow[0]!, sheetRow[1]!, sheetRow[3]!], [sheetRow[2]!, ...people.slice(2)], section, [people[0]!, people[1]!, norm[1]!], [...factors, norm[0]!]] : [sheetRow, [...section, ...people], [...factors, ...norm]];
   g.rect(b, COLOURS.paper, COLOURS.ink, 0.9);
   const rowH = b.h / rows.length;
   rows.forEach((cells, r) => {
@@ -714,7 +747,7 @@ function titleBlock(ctx: SheetContext, g: Deco): void {
       const w = (b.w * wgt) / total;
       if (k > 0) g.rule(x, y, x, y + rowH, COLOURS.ink, 0.5);
       g.text('caption', x + 0.7 * u, y + 1.05 * u, cap.toUpperCase(), w - 1.4 * u);
-      g.text(r === 0 && k !== 2 ? 'valueBold' : 'value', x + 0.7 * u, y + rowH - 0.9 * u, val, w - 1.4 * u);
+      g.text(cap === 'office' || cap === 'project' || cap === 'sheet' ? 'valueBold' : 'value', x + 0.7 * u, y + rowH - 0.9 * u, val, w - 1.4 * u);
       x += w;
     });
   });
