@@ -98,3 +98,10 @@ export function axesFor(extent: AxisExtent, plot: { w: number; h: number }, fixe
     P: fixed?.P ? fixedScale(fixed.P, ny) : roundScale(extent.P[0], extent.P[1], ny),
   };
 }
+
+/** A d3 number format showing every tick exactly: as many decimals as the step has (0.25 → ".2f"). */
+export function tickFormat(s: AxisScale): string {
+  const text = String(Number(s.step.toPrecision(6)));
+  const dot = text.indexOf('.');
+  return `.${dot < 0 ? 0 : text.length - dot - 1}f`;
+}

@@ -261,6 +261,20 @@ export function barEntryIndices(cOverH: ArrayLike<number>): Set<number> {
   return out;
 }
 
+/**
+ * Points to leave out so each bar-entry step becomes a chord on the inner side: the point before the
+ * step and the points before it that lie above the point after the step (the curve then rises
+ * monotonically through the step, inside the computed curve).
+ */
+export function innerChord(P: ArrayLike<number>, before: ReadonlySet<number>): Set<number> {
+  const out = new Set<number>();
+  for (const a of before) {
+    const pAfter = P[a + 1]!;
+    for (let j = a; j >= 0 && (j === a || P[j]! >= pAfter); j--) out.add(j);
+  }
+  return out;
+}
+
 /** Point on a polyline where P first reaches `level` (from the pure-tension end), with its segment index. */
 function crossing(M: ArrayLike<number>, P: ArrayLike<number>, level: number, d: number): { M: number; P: number } | null {
   for (let i = 1; i < P.length; i++) {
@@ -316,7 +330,8 @@ export function plotLayers(
       const P = fam === 'design' ? c.phiPn : c.Pn;
       const M = fam === 'design' ? c.phiMn : c.Mn;
       const id = `${fam}-${c.rho}`;
-      const idx = Array.from(P, (_, i) => i).filter((i) => !skip.has(i));
+      const cut = smooth ? innerChord(P, skip) : skip;
+      const idx = Array.from(P, (_, i) => i).filter((i) => !cut.has(i));
       // drawn within SIMPLIFY_TOLERANCE_PT of every computed point
       const keep = simplifyIndices(idx.map((i) => X(M[i]! / d)), idx.map((i) => Y(P[i]! / d)), SIMPLIFY_TOLERANCE_PT).map((j) => idx[j]!);
       const tone = both && fam === 'nominal' ? lighter(colour) : colour;
@@ -676,6 +691,13 @@ function sideColumn(ctx: SheetContext, g: Deco, fit: { picture: number; notes: T
       : `Values are divided by Ag (and h for moments), in ${su}; h is the depth in the bending plane (D for circular columns).`,
     'Short column: slenderness, creep and second-order effects are not included.',
   ];
+  if (barEntryIndices(family.sweep.cOverH).size > 0) {
+    extra.push(
+      set.referenceLines.barEntry === false
+        ? 'Drawn smoothed: where a bar row enters the rectangular stress block the computed curve steps inward; here each step is drawn as a chord on its inner side. The key points and tables keep the computed model (block with displaced concrete deducted).'
+        : 'Short straight steps on the curves: a bar row enters the rectangular stress block and its displaced concrete is deducted, ΔP = block stress × bar area of the row, ΔM = ΔP × the row’s lever arm (both at one neutral-axis depth).',
+    );
+  }
   if (set.ratios.kind === 'omega') {
     const fyd = basis.design.steel.yieldStress;
     extra.unshift(
@@ -735,7 +757,7 @@ function titleBlock(ctx: SheetContext, g: Deco): void {
   ];
   // narrow pages: the crowded rows split in two, so no value is cut
   const rows: [string, string, number][][] =
-    (g.L.titleRows ?? 3) >= 5 ? [[sheetRow[0]!, sheetRow[1]!, sheetRow[3]!], [sheetRow[2]!, ...people.slice(2)], section, [people[0]!, people[1]!, norm[1]!], [...factors, norm[0]!]] : [sheetRow, [...section, ...people], [...factors, ...norm]];
+    (g.L.titleRows ?? 3) >= 5 ? [[sheetRow[0]!, sheetRow[1]!, people[2]!, people[3]!, sheetRow[3]!], [sheetRow[2]!], section, [people[0]!, people[1]!, people[4]!, norm[1]!], [...factors, norm[0]!]] : [sheetRow, [...section, ...people], [...factors, ...norm]];
   g.rect(b, COLOURS.paper, COLOURS.ink, 0.9);
   const rowH = b.h / rows.length;
   rows.forEach((cells, r) => {

@@ -5,7 +5,7 @@
  * and `padding` make the view exactly one page.
  */
 import type { SheetData, TemplateParams } from './sheet-data.js';
-import { tickValues } from './axes.js';
+import { tickFormat, tickValues } from './axes.js';
 import { chartConfig, COLOURS, round2, TEXT_STYLES, type TextStyle } from './style.js';
 
 export type VlSpec = Record<string, unknown>;
@@ -112,8 +112,8 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
     background: COLOURS.paper,
     config: chartConfig(u),
     encoding: {
-      x: { ...x, axis: { title: t.xTitle, orient: 'bottom', ...(a && !o ? { values: tickValues(a.M) } : { tickCount: 12 }) } },
-      y: { ...y, axis: { title: t.yTitle, ...(a && !o ? { values: tickValues(a.P) } : { tickCount: 14 }) } },
+      x: { ...x, axis: { title: t.xTitle, orient: 'bottom', ...(a && !o ? { values: tickValues(a.M), format: tickFormat(a.M) } : { tickCount: 12 }) } },
+      y: { ...y, axis: { title: t.yTitle, ...(a && !o ? { values: tickValues(a.P), format: tickFormat(a.P) } : { tickCount: 14 }) } },
     },
     layer: layers,
   };
