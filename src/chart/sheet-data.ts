@@ -4,7 +4,7 @@
  * on set-wide choices, so a renderer compiles it once and swaps these datasets per sheet.
  * Plot rows are in chart units (normalised M, P); decoration rows are in points from the plot origin.
  */
-import type { CurveFamily, PointValues } from '../analysis/family.js';
+import type { Curve, CurveFamily, PointValues } from '../analysis/family.js';
 import type { Basis } from '../codes/types.js';
 import { describeArrangement, describeShape, describeTransverse, fmt, stressText } from '../config/describe.js';
 import type { BasisSymbols } from '../codes/types.js';
@@ -235,8 +235,10 @@ export interface PlotOptions {
   /** text widths; default an estimate */
   measure?: MeasureText;
   /**
-   * Where e/h values go: 'border' leaves them to the border scale the caller draws (ehScale), 'tips'
-   * writes them at the ray ends (report plots). Default 'tips'.
+   * 'border' (chart sheets): rays run to the plot border, whose e/h scale the caller draws (ehScale), and
+   * every curve gets a compression-zone label. 'tips' (report plots, whose axes the report fits to its
+   * loads afterwards): rays end just past the outermost curve with their value at the tip, and curves are
+   * labelled on the tension branch only, leaving the compression zone to the loads. Default 'tips'.
    */
   rayValues?: 'border' | 'tips';
   /** boxes, in points from the plot origin, that labels must keep clear of (a legend) */
@@ -259,6 +261,21 @@ export function barEntryIndices(cOverH: ArrayLike<number>): Set<number> {
   const out = new Set<number>();
   for (let i = 1; i < cOverH.length; i++) if (cOverH[i]! / cOverH[i - 1]! - 1 < 1e-6) out.add(i - 1);
   return out;
+}
+
+/** Where the ray M = e·P meets a curve on its compression side (chart units), or null. */
+function rayHit(c: Curve, fam: FamilyKind, e: number, d: number): { M: number; P: number } | null {
+  const P = fam === 'design' ? c.phiPn : c.Pn;
+  const M = fam === 'design' ? c.phiMn : c.Mn;
+  for (let i = P.length - 1; i > 0; i--) {
+    const f0 = M[i]! - e * P[i]!;
+    const f1 = M[i - 1]! - e * P[i - 1]!;
+    if (f0 <= 0 && f1 > 0 && P[i - 1]! > 0) {
+      const t = f0 / (f0 - f1);
+      return { M: (M[i]! + t * (M[i - 1]! - M[i]!)) / d, P: (P[i]! + t * (P[i - 1]! - P[i]!)) / d };
+    }
+  }
+  return null;
 }
 
 /**
@@ -368,16 +385,21 @@ export function plotLayers(
     if (last) refEnds.push({ kind: 'cap', M: last.v.M / d, P: last.v.P / d, text: `${primary === 'design' ? sy.designAxial : sy.nominalAxial},max` });
   }
   // e/h rays: M/(Ag·h) = e/h · P/Ag, from the origin to the plot border (top, or right for large e/h)
+  const report = opts.rayValues !== 'border';
+  const outer = family.curves[n - 1];
   for (const e of set.referenceLines.eccentricities) {
     if (!(e > 0) || !(p1 > 0)) continue;
-    const end = e * p1 <= m1 ? { M: e * p1, P: p1 } : { M: m1, P: m1 / e };
+    const hit = report && outer ? rayHit(outer, families.includes('nominal') ? 'nominal' : primary, e, d) : null;
+    if (report && !hit) continue;
+    const end = hit ? { M: hit.M * 1.07, P: hit.P * 1.07 } : e * p1 <= m1 ? { M: e * p1, P: p1 } : { M: m1, P: m1 / e };
     out.refs.push({ line: `ray-${e}`, kind: 'ray', i: 0, M: 0, P: 0 }, { line: `ray-${e}`, kind: 'ray', i: 1, M: r5(end.M), P: r5(end.P) });
     placer.addObstacle({ group: `ray-${e}`, weight: 0.4, segments: [[X(0), Y(0), X(end.M), Y(end.P)]] });
-    if (opts.rayValues !== 'border') {
+    if (report) {
       const text = `e/h ${fmt(e)}`;
-      const w = measure(text, REF_LABEL_EM * u, false);
-      const x = Math.min(X(end.M) + 2, L.plot.w - w - 1);
-      out.refLabels.push({ kind: 'ray', M: r5(M_(x)), P: r5(P_(Math.max(Y(end.P) - 2, 0.7 * REF_LABEL_EM * u))), text, z: out.refLabels.length });
+      out.refLabels.push({ kind: 'ray', M: r5(end.M), P: r5(end.P), text, z: out.refLabels.length });
+      // drawn at dx 2, dy −2 from the tip (spec.ts): other labels keep clear of it
+      const rfs = REF_LABEL_EM * u;
+      placer.reserve({ x0: X(end.M) + 2, y0: Y(end.P) - 2 - 0.6 * rfs, x1: X(end.M) + 2 + measure(text, rfs, false), y1: Y(end.P) - 2 + 0.6 * rfs });
     }
   }
 
@@ -385,6 +407,7 @@ export function plotLayers(
   const fs = CURVE_LABEL_EM * u;
   const h = 1.05 * fs;
   family.curves.forEach((c, k) => {
+    if (report) return;
     const P = primary === 'design' ? c.phiPn : c.Pn;
     const M = primary === 'design' ? c.phiMn : c.Mn;
     const text = curveKeyText(set, c.rho, k);
@@ -452,7 +475,7 @@ export function plotLayers(
       const pt = crossing(M, P, f * tensionP(k), d);
       if (pt) cands.push({ box: centredBox(X(pt.M), Y(pt.P), w, h, 1), penalty: Math.abs(f - 0.33), M: pt.M, P: pt.P });
     }
-    const free = cands.filter((q) => placer.cost(q.box, `curve-${k}`) === 0);
+    const free = report ? cands : cands.filter((q) => placer.cost(q.box, `curve-${k}`) === 0);
     const b = free[placer.place(free)];
     if (b) out.curveLabels.push({ M: r5(b.M), P: r5(b.P), text, colour: curveColour(k, n), z: out.curveLabels.length });
   });
