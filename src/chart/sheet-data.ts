@@ -714,12 +714,9 @@ function sideColumn(ctx: SheetContext, g: Deco, fit: { picture: number; notes: T
       : `Values are divided by Ag (and h for moments), in ${su}; h is the depth in the bending plane (D for circular columns).`,
     'Short column: slenderness, creep and second-order effects are not included.',
   ];
-  if (barEntryIndices(family.sweep.cOverH).size > 0) {
-    extra.push(
-      set.referenceLines.barEntry === false
-        ? 'Drawn smoothed: where a bar row enters the rectangular stress block the computed curve steps inward; here each step is drawn as a chord on its inner side. The key points and tables keep the computed model (block with displaced concrete deducted).'
-        : 'Short straight steps on the curves: a bar row enters the rectangular stress block and its displaced concrete is deducted, ΔP = block stress × bar area of the row, ΔM = ΔP × the row’s lever arm (both at one neutral-axis depth).',
-    );
+  // the basis notes state why the curves step; a smoothed drawing says which model it then shows
+  if (set.referenceLines.barEntry === false && barEntryIndices(family.sweep.cOverH).size > 0) {
+    extra.push('Drawn smoothed: where a bar row enters the rectangular stress block the computed curve steps inward; each step is drawn here as a chord on its inner side. Key points and tables keep the computed model (block with displaced concrete deducted).');
   }
   if (set.ratios.kind === 'omega') {
     const fyd = basis.design.steel.yieldStress;
