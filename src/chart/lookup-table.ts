@@ -87,8 +87,9 @@ export function tableCsv(t: LookupTable): string {
     for (const p of r.points) {
       const label = `"${p.label.replace(/"/g, '""')}"`;
       const tail = [p.id, label, ...(withOmega ? [String(r.omega)] : [])];
+      // φ as the table command gives it: the factor at that depth (the factored point's, where there is one)
       const row = (at: PointValues, n: PointValues | null, f: PointValues | null) =>
-        lines.push([cell(r.rhoG), cell(at.cOverH), cell(at.epsT), cell(at.phi), cell(n?.P), cell(n?.M), cell(f?.P), cell(f?.M), ...tail].join(','));
+        lines.push([cell(r.rhoG), cell(at.cOverH), cell(at.epsT), cell((f ?? at).phi), cell(n?.P), cell(n?.M), cell(f?.P), cell(f?.M), ...tail].join(','));
       const { nominal: n, design: f } = p;
       if (n && f && Math.abs(n.cOverH - f.cOverH) <= 1e-9 * Math.max(1, n.cOverH)) row(n, n, f);
       else {
