@@ -789,7 +789,10 @@ function titleBlock(ctx: SheetContext, g: Deco): void {
       const w = (b.w * wgt) / total;
       if (k > 0) g.rule(x, y, x, y + rowH, COLOURS.ink, 0.5);
       g.text('caption', x + 0.7 * u, y + 1.05 * u, cap.toUpperCase(), w - 1.4 * u);
-      g.text(cap === 'office' || cap === 'project' || cap === 'sheet' ? 'valueBold' : 'value', x + 0.7 * u, y + rowH - 0.9 * u, val, w - 1.4 * u);
+      const bold = cap === 'office' || cap === 'project' || cap === 'sheet';
+      // a smaller size before any cut
+      const fits = g.width(bold ? 'valueBold' : 'value', val) <= w - 1.4 * u;
+      g.text(fits ? (bold ? 'valueBold' : 'value') : bold ? 'valueBoldSmall' : 'valueSmall', x + 0.7 * u, y + rowH - 0.9 * u, val, w - 1.4 * u);
       x += w;
     });
   });

@@ -49,6 +49,9 @@ export const TEXT_STYLES = {
   caption: { size: 0.68, weight: 'normal', align: 'left', colour: COLOURS.muted },
   value: { size: 0.98, weight: 'normal', align: 'left', colour: COLOURS.ink },
   valueBold: { size: 0.98, weight: 'bold', align: 'left', colour: COLOURS.ink },
+  /** a title-block value too long for its cell at full size */
+  valueSmall: { size: 0.8, weight: 'normal', align: 'left', colour: COLOURS.ink },
+  valueBoldSmall: { size: 0.8, weight: 'bold', align: 'left', colour: COLOURS.ink },
   body: { size: 0.8, weight: 'normal', align: 'left', colour: COLOURS.ink },
   /** notes in a crowded side column */
   bodySmall: { size: 0.72, weight: 'normal', align: 'left', colour: COLOURS.ink },
