@@ -422,6 +422,7 @@ export function plotLayers(
       cands.push({ box: centredBox(x, y, w, h, 1), penalty, M: pt.M, P: P_(y) });
     };
     for (const f of LEVELS) at(crossing(M, P, f * pMax, d), 3 * Math.abs(f - PREFERRED_LEVEL));
+    for (let f = 0.06; f < 0.97; f += 0.04) at(crossing(M, P, f * pMax, d), 0.5 + 3 * Math.abs(f - PREFERRED_LEVEL));
     // on the cap segment: the flat top of a factored curve
     const flat = Array.from(P, (v, i) => ({ v: v / d, m: M[i]! / d })).filter((q) => q.v >= pMax * (1 - 1e-9));
     const capM = Math.max(...flat.map((q) => q.m));
@@ -434,8 +435,9 @@ export function plotLayers(
         const pt = crossing(M, P, f * pMax, d);
         const pen = 3 * Math.abs(f - PREFERRED_LEVEL);
         at(pt, pen);
-        at(pt, pen + 2, -1.1 * h);
-        at(pt, pen + 2, 1.1 * h);
+        // beside the curve only as a last resort: a label off its curve reads less surely
+        at(pt, pen + 8, -1.1 * h);
+        at(pt, pen + 8, 1.1 * h);
       }
       chosen = placer.place(cands, `curve-${k}`, 0.4 * h);
     }

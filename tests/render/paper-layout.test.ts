@@ -81,6 +81,28 @@ describe('labels and axes', () => {
     }
   });
 
+  it('sets each compression-zone label on its own curve on every demo sheet, at the group scale (common practice)', async () => {
+    const { readChartSet } = await import('../../src/config/read.js');
+    const { groupExtents } = await import('../../src/sheet/curves.js');
+    const { readFileSync } = await import('node:fs');
+    const set = readChartSet(readFileSync('charts-config/demo.json', 'utf8'));
+    const ext = groupExtents(set);
+    for (const sheet of set.sheets.slice(0, 4)) {
+      const family = familyForSheet(set, sheet);
+      const built = buildSheet({ set, sheet, family, sheetNumber: sheet.index, sheetCount: set.sheets.length, generator: 'pmchart 0.1.0', measureText: renderer.measureText, extent: ext[sheet.origin]! });
+      family.curves.forEach((c, k) => {
+        const l = built.data.curveLabels[k]!;
+        expect(l.text).toBe(`ρg ${c.rho}`);
+        const rows = built.data.curves.filter((r) => r.curve === `design-${c.rho}`);
+        const i = rows.findIndex((r) => r.P >= l.P - 1e-9);
+        const [a, b] = [rows[Math.max(0, i - 1)]!, rows[i]!];
+        // on the segment that spans the label's P (within 0.02 in M), or on the flat cap
+        const onCap = Math.abs(l.P - Math.max(...rows.map((r) => r.P))) < 1e-4;
+        expect(onCap || (l.M >= Math.min(a.M, b.M) - 0.02 && l.M <= Math.max(a.M, b.M) + 0.02), `sheet ${sheet.index} ${l.text}`).toBe(true);
+      });
+    }
+  }, 60_000);
+
   // Reading test (common practice): a reader finds a curve by the label nearest to it.
   it('on the demo sheet, the label nearest to each curve at half its largest P names that curve', async () => {
     const { readChartSet } = await import('../../src/config/read.js');
