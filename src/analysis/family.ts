@@ -125,7 +125,8 @@ function lawJumpDepths(section: PreparedSection): number[] {
         return p.top - p.curvature * d - e;
       };
       const x = findRoot(f, Math.log(C_OVER_H_MIN), Math.log(C_OVER_H_MAX), 1e-14);
-      if (Number.isFinite(x)) out.push(Math.exp(x) * (1 - 1e-7), Math.exp(x));
+      // one depth just either side: at the root itself rounding may put the row on either side of the block edge
+      if (Number.isFinite(x)) out.push(Math.exp(x) * (1 - 1e-7), Math.exp(x) * (1 + 1e-7));
     }
   }
   return out;

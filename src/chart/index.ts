@@ -3,3 +3,5 @@ export * from './layout.js';
 export * from './lookup-table.js';
 export * from './sheet-data.js';
 export * from './spec.js';
+export * from './axes.js';
+export * from './labels.js';

@@ -65,21 +65,47 @@ export function shortLabel(p: Pick<LookupPoint, 'id' | 'label'>): string {
 /** Rounds for files: six significant digits keeps CSV/JSON readable and deterministic. */
 export const sig = (x: number): number => (Number.isFinite(x) ? Number(x.toPrecision(6)) : x);
 
-/** CSV rows per key point and family; ω sets lead with an `omega` column. */
+/**
+ * Columns of curve points, shared by `pmchart table` and the set tables (stable interface): normalised
+ * nominal (Pn, Mn) and factored (φPn, φMn) values at one neutral-axis depth c/h.
+ */
+export const TABLE_COLUMNS = ['rho_g', 'c_over_h', 'eps_t', 'phi', 'Pn_norm', 'Mn_norm', 'phiPn_norm', 'phiMn_norm'] as const;
+
+/** The set tables' key-point columns, after TABLE_COLUMNS; ω sets add `omega` last. */
+export const KEY_POINT_COLUMNS = ['point', 'point_label'] as const;
+
+/**
+ * CSV of the key points: the `pmchart table` columns, then the key point's id and label. A key point at
+ * the same c/h on both curves (a strain state) fills one row; one reached at different depths (P = 0,
+ * the axial cap) gives one row per curve, with the other curve's two columns empty.
+ */
 export function tableCsv(t: LookupTable): string {
   const withOmega = t.rows.some((r) => r.omega !== undefined);
-  const lines = [`${withOmega ? 'omega,' : ''}rhoG,point,label,family,cOverH,epsT,phi,P,M`];
+  const lines = [[...TABLE_COLUMNS, ...KEY_POINT_COLUMNS, ...(withOmega ? ['omega'] : [])].join(',')];
+  const cell = (x: number | undefined) => (x === undefined ? '' : String(sig(x)));
   for (const r of t.rows) {
     for (const p of r.points) {
-      for (const fam of ['nominal', 'design'] as const) {
-        const v = p[fam];
-        if (!v) continue;
-        const label = `"${p.label.replace(/"/g, '""')}"`;
-        lines.push([...(withOmega ? [r.omega] : []), sig(r.rhoG), p.id, label, fam, sig(v.cOverH), sig(v.epsT), sig(v.phi), sig(v.P), sig(v.M)].join(','));
+      const label = `"${p.label.replace(/"/g, '""')}"`;
+      const tail = [p.id, label, ...(withOmega ? [String(r.omega)] : [])];
+      // φ as the table command gives it: the factor at that depth (the factored point's, where there is one)
+      const row = (at: PointValues, n: PointValues | null, f: PointValues | null) =>
+        lines.push([cell(r.rhoG), cell(at.cOverH), cell(at.epsT), cell((f ?? at).phi), cell(n?.P), cell(n?.M), cell(f?.P), cell(f?.M), ...tail].join(','));
+      const { nominal: n, design: f } = p;
+      if (n && f && Math.abs(n.cOverH - f.cOverH) <= 1e-9 * Math.max(1, n.cOverH)) row(n, n, f);
+      else {
+        if (n) row(n, n, null);
+        if (f) row(f, null, f);
       }
     }
   }
   return `${lines.join('\n')}\n`;
+}
+
+/** A key point for JSON, named as in `pmchart table --format json` (key_points). */
+export function keyPointRecord(p: LookupPoint) {
+  const v = (q: PointValues | null, prefix: '' | 'phi') =>
+    q === null ? null : { c_over_h: sig(q.cOverH), eps_t: sig(q.epsT), phi: sig(q.phi), [prefix ? 'phiPn_norm' : 'Pn_norm']: sig(q.P), [prefix ? 'phiMn_norm' : 'Mn_norm']: sig(q.M) };
+  return { id: p.id, label: p.label, nominal: v(p.nominal, ''), factored: v(p.design, 'phi') };
 }
 
 export function roundPoint(v: PointValues | null): PointValues | null {

@@ -4,7 +4,7 @@
  * on set-wide choices, so a renderer compiles it once and swaps these datasets per sheet.
  * Plot rows are in chart units (normalised M, P); decoration rows are in points from the plot origin.
  */
-import type { CurveFamily, PointValues } from '../analysis/family.js';
+import type { Curve, CurveFamily, PointValues } from '../analysis/family.js';
 import type { Basis } from '../codes/types.js';
 import { describeArrangement, describeShape, describeTransverse, fmt, stressText } from '../config/describe.js';
 import type { BasisSymbols } from '../codes/types.js';
@@ -13,6 +13,8 @@ import { DISPLAY_UNITS } from '../units/index.js';
 import { sheetLayout, type Box, type SheetLayout } from './layout.js';
 import { columnsFor, lookupTable, shortLabel, type FamilyKind, type LookupTable } from './lookup-table.js';
 import { simplifyIndices } from './simplify.js';
+import { axesFor, envelope, familyExtent, type AxisExtent, type SheetAxes } from './axes.js';
+import { centredBox, estimateText, LabelPlacer, type LabelBox, type MeasureText, type Segment } from './labels.js';
 import { AVG_CHAR_EM, COLOURS, curveColour, TEXT_STYLES, type TextStyle } from './style.js';
 
 export interface SheetContext {
@@ -24,6 +26,10 @@ export interface SheetContext {
   sheetCount: number;
   /** e.g. "pmchart 0.1.0" */
   generator: string;
+  /** text widths (node-canvas in Node, a DOM canvas in the browser); default an estimate */
+  measureText?: MeasureText;
+  /** the extent the axes must cover: the envelope of the sheet's group in a book; default this sheet's curves */
+  extent?: AxisExtent;
 }
 
 export interface CurveRow { curve: string; family: FamilyKind; i: number; M: number; P: number; colour: string }
@@ -73,7 +79,9 @@ export interface TemplateParams {
    * Report plots: fixed axis domains (chart units, so marks and page-point labels line up exactly) and the
    * load-mark layers. Absent on chart sheets.
    */
-  overlay?: { domainM: [number, number]; domainP: [number, number] };
+  overlay?: { domainM: [number, number]; domainP: [number, number]; loadRays?: boolean };
+  /** Chart sheets: the axes, each ending at a round value beyond the data (src/chart/axes.ts). */
+  axes?: SheetAxes;
 }
 
 export interface BuiltSheet {
@@ -133,14 +141,84 @@ export function buildSheet(ctx: SheetContext): BuiltSheet {
   const table = lookupTable(family, divisor, set.ratios.kind === 'omega' ? set.ratios.values : undefined);
   const primary = primaryFamily(set);
   const data: SheetData = { curves: [], curveLabels: [], refs: [], refLabels: [], frame: [], texts: [], rects: [], rules: [], dots: [], rings: [] };
+  const measure = ctx.measureText ?? estimateText;
+  const own = familyExtent(family, template.families, divisor);
+  const axes = axesFor(ctx.extent ? envelope([ctx.extent, own]) : own, L.plot, ctx.sheet.axes);
+  template.axes = axes;
 
-  plotLayers(ctx, L, template.families, primary, divisor, data);
-  const deco = new Deco(L, data);
+  const deco = new Deco(L, data, measure);
+  const legend = template.families.length > 1 ? familyLegend(ctx, deco) : undefined;
+  plotLayers(ctx, L, template.families, primary, divisor, data, { axes, measure, rayValues: 'border', ...(legend ? { reserved: [legend] } : {}) });
+  ehScale(set.referenceLines.eccentricities, axes, deco);
   header(ctx, deco);
   lookupPanel(ctx, table, primary, deco);
   sidePanel(ctx, deco);
   titleBlock(ctx, deco);
   return { template, data, table };
+}
+
+/**
+ * The e/h scale on the plot border: each ray's value where it meets the top or right edge, with a short
+ * tick outside the frame, and "e/h" at the corner.
+ */
+export function ehScale(eccentricities: readonly number[], axes: SheetAxes, g: Deco): void {
+  const { plot: b, u } = g.L;
+  const [m0, m1] = axes.M.domain;
+  const [p0, p1] = axes.P.domain;
+  if (!(p1 > 0)) return;
+  const tick = 0.45 * u;
+  let any = false;
+  const placed: { a: number; b: number; side: 'top' | 'right' }[] = [];
+  for (const e of eccentricities) {
+    if (!(e > 0)) continue;
+    const text = fmt(e);
+    const w = g.width('dim', text);
+    if (e * p1 <= m1) {
+      const x = b.x + ((e * p1 - m0) / (m1 - m0)) * b.w;
+      if (placed.some((q) => q.side === 'top' && Math.abs(q.a - x) < (q.b + w) / 2 + 2)) continue;
+      placed.push({ a: x, b: w, side: 'top' });
+      g.rule(x, b.y - tick, x, b.y, COLOURS.ray, 0.7);
+      g.text('dim', x, b.y - tick - 0.25 * u, text);
+    } else {
+      const y = b.y + ((p1 - m1 / e) / (p1 - p0)) * b.h;
+      if (placed.some((q) => q.side === 'right' && Math.abs(q.a - y) < 1.1 * g.size('dimLeft'))) continue;
+      placed.push({ a: y, b: w, side: 'right' });
+      g.rule(b.x + b.w, y, b.x + b.w + tick, y, COLOURS.ray, 0.7);
+      g.text('dimLeft', b.x + b.w + tick + 0.2 * u, y + 0.3 * g.size('dimLeft'), text);
+    }
+    any = true;
+  }
+  // the scale's name above the top-left corner, clear of the values
+  if (any) g.text('dim', b.x - 0.4 * u - g.width('dim', 'e/h') / 2, b.y - tick - 0.25 * u, 'e/h');
+}
+
+/**
+ * With both families drawn: a key in the plot's top-right corner pairing each design curve (solid) with
+ * its nominal curve (dashed, a lighter tone of the same hue). Returns its box in points from the plot origin.
+ */
+function familyLegend(ctx: SheetContext, g: Deco): LabelBox {
+  const { plot: b, u } = g.L;
+  const sy = ctx.family.basis.symbols;
+  const n = ctx.family.curves.length;
+  const line = 1.15 * g.size('body');
+  const sw = 2.6 * u;
+  const keyW = Math.max(...ctx.family.curves.map((c, k) => g.width('body', curveKeyText(ctx.set, c.rho, k))));
+  const head = `solid ${sy.designFamily} · dashed ${sy.nominalFamily}`;
+  const w = Math.max(keyW + 2 * sw + 2.4 * u, g.width('caption', head)) + 1.6 * u;
+  const h = (n + 1.4) * line + 0.8 * u;
+  const x = b.x + b.w - w - 0.4 * u;
+  const y = b.y + 0.4 * u;
+  g.rect({ x, y, w, h }, COLOURS.paper, COLOURS.faint, 0.5);
+  g.text('caption', x + 0.8 * u, y + 0.4 * u + line * 0.9, head);
+  ctx.family.curves.forEach((c, k) => {
+    const yy = y + 0.4 * u + line * (k + 1.9);
+    const col = curveColour(k, n);
+    const x0 = x + 0.8 * u;
+    g.rule(x0, yy - 0.3 * g.size('body'), x0 + sw, yy - 0.3 * g.size('body'), col, 1.5);
+    for (let s = 0; s < 3; s++) g.rule(x0 + sw + 0.6 * u + s * sw / 3, yy - 0.3 * g.size('body'), x0 + sw + 0.6 * u + s * sw / 3 + sw / 5, yy - 0.3 * g.size('body'), lighter(col), 1.0);
+    g.text('body', x0 + 2 * sw + 1.2 * u, yy, curveKeyText(ctx.set, c.rho, k));
+  });
+  return { x0: x - b.x - 2, y0: y - b.y - 2, x1: x + w - b.x + 2, y1: y + h - b.y + 2 };
 }
 
 /** A curve's label: "ρg 0.02", or "ω 0.2" on ω sets (the value the set asked for, not a rounded conversion). */
@@ -151,51 +229,131 @@ export function curveKeyText(set: Pick<ResolvedChartSet, 'ratios'>, rho: number,
 
 // ── plot ────────────────────────────────────────────────────────────────────────────────────────
 
-export function plotLayers(ctx: { family: CurveFamily; set: Pick<ResolvedChartSet, 'referenceLines' | 'ratios'> }, templateLayout: SheetLayout, families: FamilyKind[], primary: FamilyKind, d: number, out: SheetData): void {
+export interface PlotOptions {
+  /** the sheet's axes (chart units); default: fitted to this family */
+  axes?: SheetAxes;
+  /** text widths; default an estimate */
+  measure?: MeasureText;
+  /**
+   * 'border' (chart sheets): rays run to the plot border, whose e/h scale the caller draws (ehScale), and
+   * every curve gets a compression-zone label. 'tips' (report plots, whose axes the report fits to its
+   * loads afterwards): rays end just past the outermost curve with their value at the tip, and curves are
+   * labelled on the tension branch only, leaving the compression zone to the loads. Default 'tips'.
+   */
+  rayValues?: 'border' | 'tips';
+  /** boxes, in points from the plot origin, that labels must keep clear of (a legend) */
+  reserved?: LabelBox[];
+}
+
+/** Font size of the ρg labels and of the reference-line labels, in type units. */
+export const CURVE_LABEL_EM = 0.82;
+export const REF_LABEL_EM = 0.78;
+
+/**
+ * Where a label prefers to sit, as a fraction of its curve's own largest P: half-way up, where a reader
+ * looking for the curve through a typical column load is most likely to look (common practice).
+ */
+const PREFERRED_LEVEL = 0.5;
+const LEVELS = [0.5, 0.45, 0.55, 0.4, 0.6, 0.35, 0.65, 0.7, 0.3, 0.75, 0.25, 0.8, 0.2, 0.85, 0.15, 0.9, 0.1];
+
+/** Indices of the points just before a bar-row step (src/analysis/family.ts sweeps a pair of depths there). */
+export function barEntryIndices(cOverH: ArrayLike<number>): Set<number> {
+  const out = new Set<number>();
+  for (let i = 1; i < cOverH.length; i++) if (cOverH[i]! / cOverH[i - 1]! - 1 < 1e-6) out.add(i - 1);
+  return out;
+}
+
+/** Where the ray M = e·P meets a curve on its compression side (chart units), or null. */
+function rayHit(c: Curve, fam: FamilyKind, e: number, d: number): { M: number; P: number } | null {
+  const P = fam === 'design' ? c.phiPn : c.Pn;
+  const M = fam === 'design' ? c.phiMn : c.Mn;
+  for (let i = P.length - 1; i > 0; i--) {
+    const f0 = M[i]! - e * P[i]!;
+    const f1 = M[i - 1]! - e * P[i - 1]!;
+    if (f0 <= 0 && f1 > 0 && P[i - 1]! > 0) {
+      const t = f0 / (f0 - f1);
+      return { M: (M[i]! + t * (M[i - 1]! - M[i]!)) / d, P: (P[i]! + t * (P[i - 1]! - P[i]!)) / d };
+    }
+  }
+  return null;
+}
+
+/**
+ * Points to leave out so each bar-entry step becomes a chord on the inner side: the point before the
+ * step and the points before it that lie above the point after the step (the curve then rises
+ * monotonically through the step, inside the computed curve).
+ */
+export function innerChord(P: ArrayLike<number>, before: ReadonlySet<number>): Set<number> {
+  const out = new Set<number>();
+  for (const a of before) {
+    const pAfter = P[a + 1]!;
+    for (let j = a; j >= 0 && (j === a || P[j]! >= pAfter); j--) out.add(j);
+  }
+  return out;
+}
+
+/** Point on a polyline where P first reaches `level` (from the pure-tension end), with its segment index. */
+function crossing(M: ArrayLike<number>, P: ArrayLike<number>, level: number, d: number): { M: number; P: number } | null {
+  for (let i = 1; i < P.length; i++) {
+    const p0 = P[i - 1]! / d;
+    const p1 = P[i]! / d;
+    if (p0 <= level && p1 >= level && p1 > p0) {
+      const t = (level - p0) / (p1 - p0);
+      return { M: (M[i - 1]! + t * (M[i]! - M[i - 1]!)) / d, P: level };
+    }
+  }
+  return null;
+}
+
+/** Lighter tone of the same hue (mixed toward paper white), for nominal curves beside their design curves. */
+export function lighter(hex: string, t = 0.5): string {
+  const c = [1, 3, 5].map((i) => parseInt(hex.slice(i, i + 2), 16));
+  return `#${c.map((v) => Math.round(v + (255 - v) * t).toString(16).padStart(2, '0')).join('')}`;
+}
+
+export function plotLayers(
+  ctx: { family: CurveFamily; set: Pick<ResolvedChartSet, 'referenceLines' | 'ratios'> },
+  templateLayout: SheetLayout,
+  families: FamilyKind[],
+  primary: FamilyKind,
+  d: number,
+  out: SheetData,
+  opts: PlotOptions = {},
+): SheetAxes {
   const { family, set } = ctx;
   const n = family.curves.length;
-  // Points per page point: from the extent of the outermost curve and the plot box.
   const L = templateLayout;
-  const last = family.curves[n - 1];
-  let mSpan = 0;
-  let pSpan = 0;
-  if (last) {
-    for (const arr of [last.Mn, last.phiMn]) for (const v of arr) mSpan = Math.max(mSpan, v / d);
-    let lo = 0;
-    let hi = 0;
-    for (const arr of [last.Pn, last.phiPn]) for (const v of arr) ((lo = Math.min(lo, v / d)), (hi = Math.max(hi, v / d)));
-    pSpan = hi - lo;
-  }
-  const sx = L.plot.w / (1.2 * mSpan || 1);
-  const sy = L.plot.h / (1.04 * pSpan || 1);
+  const u = L.u;
+  const axes = opts.axes ?? axesFor(familyExtent(family, families, d), L.plot);
+  const measure = opts.measure ?? estimateText;
+  const [m0, m1] = axes.M.domain;
+  const [p0, p1] = axes.P.domain;
+  // chart units → points from the plot origin
+  const X = (M: number) => ((M - m0) / (m1 - m0)) * L.plot.w;
+  const Y = (P: number) => ((p1 - P) / (p1 - p0)) * L.plot.h;
+  const M_ = (x: number) => m0 + (x / L.plot.w) * (m1 - m0);
+  const P_ = (y: number) => p1 - (y / L.plot.h) * (p1 - p0);
+  const smooth = set.referenceLines.barEntry === false;
+  const skip = smooth ? barEntryIndices(family.sweep.cOverH) : new Set<number>();
+  const both = families.length > 1;
+
+  const placer = new LabelPlacer({ x0: 0, y0: 0, x1: L.plot.w, y1: L.plot.h });
+  for (const b of opts.reserved ?? []) placer.reserve(b);
+  const segs = (Ms: number[], Ps: number[]): Segment[] => Ms.slice(1).map((_, i) => [X(Ms[i]!), Y(Ps[i]!), X(Ms[i + 1]!), Y(Ps[i + 1]!)] as Segment);
+
   family.curves.forEach((c, k) => {
     const colour = curveColour(k, n);
     for (const fam of families) {
       const P = fam === 'design' ? c.phiPn : c.Pn;
       const M = fam === 'design' ? c.phiMn : c.Mn;
       const id = `${fam}-${c.rho}`;
+      const cut = smooth ? innerChord(P, skip) : skip;
+      const idx = Array.from(P, (_, i) => i).filter((i) => !cut.has(i));
       // drawn within SIMPLIFY_TOLERANCE_PT of every computed point
-      const keep = simplifyIndices(Array.from(M, (v) => (v / d) * sx), Array.from(P, (v) => (v / d) * sy), SIMPLIFY_TOLERANCE_PT);
-      keep.forEach((i, j) => out.curves.push({ curve: id, family: fam, i: j, M: r5(M[i]! / d), P: r5(P[i]! / d), colour }));
-    }
-  });
-
-  // ρg labels sit on the tension branch, each at a third of its own pure-tension force: the labels
-  // step down diagonally, where the curves run nearly parallel and well apart.
-  const tensionP = (k: number) => (family.curves[k]!.keyPoints.find((p) => p.id === 'pure-tension')?.[primary]?.P ?? 0) / d;
-  family.curves.forEach((c, k) => {
-    const level = LABEL_LEVEL * tensionP(k);
-    const P = primary === 'design' ? c.phiPn : c.Pn;
-    const M = primary === 'design' ? c.phiMn : c.Mn;
-    for (let i = 1; i < P.length; i++) {
-      const p0 = P[i - 1]! / d;
-      const p1 = P[i]! / d;
-      if (p0 <= level && p1 >= level) {
-        const t = p1 === p0 ? 0 : (level - p0) / (p1 - p0);
-        const m = (M[i - 1]! + t * (M[i]! - M[i - 1]!)) / d;
-        out.curveLabels.push({ M: r5(m), P: r5(level), text: curveKeyText(set, c.rho, k), colour: curveColour(k, n), z: out.curveLabels.length });
-        break;
-      }
+      const keep = simplifyIndices(idx.map((i) => X(M[i]! / d)), idx.map((i) => Y(P[i]! / d)), SIMPLIFY_TOLERANCE_PT).map((j) => idx[j]!);
+      const tone = both && fam === 'nominal' ? lighter(colour) : colour;
+      keep.forEach((i, j) => out.curves.push({ curve: id, family: fam, i: j, M: r5(M[i]! / d), P: r5(P[i]! / d), colour: tone }));
+      placer.addObstacle({ group: `curve-${k}`, weight: fam === primary ? 1 : 0.5, segments: segs(keep.map((i) => M[i]! / d), keep.map((i) => P[i]! / d)) });
     }
   });
 
@@ -205,56 +363,128 @@ export function plotLayers(ctx: { family: CurveFamily; set: Pick<ResolvedChartSe
       return v ? [{ rho: c.rho, v }] : [];
     });
 
-  out.refs.push({ line: 'zero', kind: 'zero', i: 0, M: 0, P: 0 });
-  let mMax = 0;
-  let pMax = 0;
-  let pMin = 0;
-  for (const c of out.curves) {
-    mMax = Math.max(mMax, c.M);
-    pMax = Math.max(pMax, c.P);
-    pMin = Math.min(pMin, c.P);
-  }
-  out.refs.push({ line: 'zero', kind: 'zero', i: 1, M: r5(mMax * 1.06), P: 0 });
+  out.refs.push({ line: 'zero', kind: 'zero', i: 0, M: r5(Math.max(0, m0)), P: 0 }, { line: 'zero', kind: 'zero', i: 1, M: r5(m1), P: 0 });
+  placer.addObstacle({ group: 'zero', weight: 0.4, segments: [[X(Math.max(0, m0)), Y(0), X(m1), Y(0)]] });
 
+  const refEnds: { kind: 'strain' | 'cap'; M: number; P: number; text: string }[] = [];
   if (set.referenceLines.strainStates) {
     for (const s of family.basis.strainStates) {
       const pts = pointsOf(s.id);
       pts.forEach((p, i) => out.refs.push({ line: `strain-${s.id}`, kind: 'strain', i, M: r5(p.v.M / d), P: r5(p.v.P / d) }));
+      placer.addObstacle({ group: `strain-${s.id}`, weight: 0.5, segments: segs(pts.map((p) => p.v.M / d), pts.map((p) => p.v.P / d)) });
       const last = pts[pts.length - 1];
-      if (last) out.refLabels.push({ kind: 'strain', M: r5(last.v.M / d), P: r5(last.v.P / d), text: shortLabel({ id: s.id, label: s.label }), z: out.refLabels.length });
+      if (last) refEnds.push({ kind: 'strain', M: last.v.M / d, P: last.v.P / d, text: shortLabel({ id: s.id, label: s.label }) });
     }
   }
   if (set.referenceLines.axialCap) {
     const pts = pointsOf('axial-cap');
     pts.forEach((p, i) => out.refs.push({ line: 'cap', kind: 'cap', i, M: r5(p.v.M / d), P: r5(p.v.P / d) }));
+    placer.addObstacle({ group: 'cap', weight: 0.5, segments: segs(pts.map((p) => p.v.M / d), pts.map((p) => p.v.P / d)) });
     const last = pts[pts.length - 1];
     const sy = family.basis.symbols;
-    if (last) out.refLabels.push({ kind: 'cap', M: r5(last.v.M / d), P: r5(last.v.P / d), text: `${primary === 'design' ? sy.designAxial : sy.nominalAxial},max`, z: out.refLabels.length });
+    if (last) refEnds.push({ kind: 'cap', M: last.v.M / d, P: last.v.P / d, text: `${primary === 'design' ? sy.designAxial : sy.nominalAxial},max` });
   }
-  // e/h rays: M/(Ag·h) = e/h · P/Ag, from the origin to just past the outermost curve.
+  // e/h rays: M/(Ag·h) = e/h · P/Ag, from the origin to the plot border (top, or right for large e/h)
+  const report = opts.rayValues !== 'border';
   const outer = family.curves[n - 1];
-  if (outer) {
-    const fams = families.includes('nominal') ? 'nominal' : primary;
-    const P = fams === 'design' ? outer.phiPn : outer.Pn;
-    const M = fams === 'design' ? outer.phiMn : outer.Mn;
-    for (const e of set.referenceLines.eccentricities) {
-      let hit: [number, number] | null = null;
-      for (let i = P.length - 1; i > 0 && !hit; i--) {
-        const f0 = M[i]! - e * P[i]!;
-        const f1 = M[i - 1]! - e * P[i - 1]!;
-        if (f0 <= 0 && f1 > 0 && P[i - 1]! > 0) {
-          const t = f0 / (f0 - f1);
-          hit = [(M[i]! + t * (M[i - 1]! - M[i]!)) / d, (P[i]! + t * (P[i - 1]! - P[i]!)) / d];
-        }
-      }
-      if (!hit) continue;
-      const [m, p] = [hit[0] * 1.07, hit[1] * 1.07];
-      out.refs.push({ line: `ray-${e}`, kind: 'ray', i: 0, M: 0, P: 0 }, { line: `ray-${e}`, kind: 'ray', i: 1, M: r5(m), P: r5(p) });
-      out.refLabels.push({ kind: 'ray', M: r5(m), P: r5(p), text: `e/h ${fmt(e)}`, z: out.refLabels.length });
+  for (const e of set.referenceLines.eccentricities) {
+    if (!(e > 0) || !(p1 > 0)) continue;
+    const hit = report && outer ? rayHit(outer, families.includes('nominal') ? 'nominal' : primary, e, d) : null;
+    if (report && !hit) continue;
+    const end = hit ? { M: hit.M * 1.07, P: hit.P * 1.07 } : e * p1 <= m1 ? { M: e * p1, P: p1 } : { M: m1, P: m1 / e };
+    out.refs.push({ line: `ray-${e}`, kind: 'ray', i: 0, M: 0, P: 0 }, { line: `ray-${e}`, kind: 'ray', i: 1, M: r5(end.M), P: r5(end.P) });
+    placer.addObstacle({ group: `ray-${e}`, weight: 0.4, segments: [[X(0), Y(0), X(end.M), Y(end.P)]] });
+    if (report) {
+      const text = `e/h ${fmt(e)}`;
+      out.refLabels.push({ kind: 'ray', M: r5(end.M), P: r5(end.P), text, z: out.refLabels.length });
+      // drawn at dx 2, dy −2 from the tip (spec.ts): other labels keep clear of it
+      const rfs = REF_LABEL_EM * u;
+      placer.reserve({ x0: X(end.M) + 2, y0: Y(end.P) - 2 - 0.6 * rfs, x1: X(end.M) + 2 + measure(text, rfs, false), y1: Y(end.P) - 2 + 0.6 * rfs });
     }
   }
-  // invisible frame: room right of the outermost curve for line labels
-  out.frame.push({ M: 0, P: r5(pMin) }, { M: r5(mMax * 1.2), P: r5(pMax * 1.04) });
+
+  // 1. one ρg label per curve in the compression zone (P > 0), never dropped: moved along the curve instead
+  const fs = CURVE_LABEL_EM * u;
+  const h = 1.05 * fs;
+  family.curves.forEach((c, k) => {
+    if (report) return;
+    const P = primary === 'design' ? c.phiPn : c.Pn;
+    const M = primary === 'design' ? c.phiMn : c.Mn;
+    const text = curveKeyText(set, c.rho, k);
+    const w = measure(text, fs, true);
+    let pMax = 0;
+    for (const v of P) pMax = Math.max(pMax, v / d);
+    const cands: { box: LabelBox; penalty: number; M: number; P: number }[] = [];
+    const at = (pt: { M: number; P: number } | null, penalty: number, dy = 0) => {
+      if (!pt || !(pt.P > 0)) return;
+      const x = X(pt.M);
+      const y = Y(pt.P) + dy;
+      cands.push({ box: centredBox(x, y, w, h, 1), penalty, M: pt.M, P: P_(y) });
+    };
+    for (const f of LEVELS) at(crossing(M, P, f * pMax, d), 3 * Math.abs(f - PREFERRED_LEVEL));
+    for (let f = 0.06; f < 0.97; f += 0.04) at(crossing(M, P, f * pMax, d), 0.5 + 3 * Math.abs(f - PREFERRED_LEVEL));
+    // on the cap segment: the flat top of a factored curve
+    const flat = Array.from(P, (v, i) => ({ v: v / d, m: M[i]! / d })).filter((q) => q.v >= pMax * (1 - 1e-9));
+    const capM = Math.max(...flat.map((q) => q.m));
+    if (flat.length > 1 && X(capM) > w + 4) for (const t of [0.5, 0.35, 0.65]) at({ M: capM * t, P: pMax }, 1.5 + Math.abs(t - 0.5));
+    let chosen = placer.place(cands, `curve-${k}`, 0.4 * h);
+    if (chosen < 0) {
+      // denser positions, then beside the curve rather than on it
+      cands.length = 0;
+      for (let f = 0.03; f < 0.99; f += 0.02) {
+        const pt = crossing(M, P, f * pMax, d);
+        const pen = 3 * Math.abs(f - PREFERRED_LEVEL);
+        at(pt, pen);
+        // beside the curve only as a last resort: a label off its curve reads less surely
+        at(pt, pen + 8, -1.1 * h);
+        at(pt, pen + 8, 1.1 * h);
+      }
+      chosen = placer.place(cands, `curve-${k}`, 0.4 * h);
+    }
+    const best = cands[chosen];
+    if (best) out.curveLabels.push({ M: r5(best.M), P: r5(best.P), text, colour: curveColour(k, n), z: out.curveLabels.length });
+  });
+
+  // 2. reference-line names at the outer end of their line: beside it, above or below; dropped if no room
+  for (const r of refEnds) {
+    const rfs = REF_LABEL_EM * u;
+    const w = measure(r.text, rfs, false);
+    const x = X(r.M);
+    const y = Y(r.P);
+    const rh = 1.1 * rfs;
+    const box = (x0: number, yc: number): LabelBox => ({ x0, y0: yc - rh / 2, x1: x0 + w, y1: yc + rh / 2 });
+    const cands = [
+      { box: box(x + 5, y), penalty: 0 },
+      { box: box(x + 4, y - rh), penalty: 0.3 },
+      { box: box(x + 4, y + rh), penalty: 0.3 },
+      { box: box(x - 5 - w, y - rh * 0.8), penalty: 0.6 },
+      { box: box(x - 5 - w, y + rh * 0.8), penalty: 0.6 },
+    ];
+    const i = placer.place(cands, r.kind === 'cap' ? 'cap' : undefined);
+    const b = cands[i];
+    if (b) out.refLabels.push({ kind: r.kind, M: r5(M_(b.box.x0)), P: r5(P_((b.box.y0 + b.box.y1) / 2)), text: r.text, z: out.refLabels.length });
+  }
+
+  // 3. a second ρg label on the tension branch where there is room (lowest priority)
+  const tensionP = (k: number) => (family.curves[k]!.keyPoints.find((p) => p.id === 'pure-tension')?.[primary]?.P ?? 0) / d;
+  family.curves.forEach((c, k) => {
+    const P = primary === 'design' ? c.phiPn : c.Pn;
+    const M = primary === 'design' ? c.phiMn : c.Mn;
+    const text = curveKeyText(set, c.rho, k);
+    const w = measure(text, fs, true);
+    const cands: { box: LabelBox; penalty: number; M: number; P: number }[] = [];
+    for (const f of [0.33, 0.25, 0.42, 0.18, 0.5]) {
+      const pt = crossing(M, P, f * tensionP(k), d);
+      if (pt) cands.push({ box: centredBox(X(pt.M), Y(pt.P), w, h, 1), penalty: Math.abs(f - 0.33), M: pt.M, P: pt.P });
+    }
+    const free = report ? cands : cands.filter((q) => placer.cost(q.box, `curve-${k}`) === 0);
+    const b = free[placer.place(free)];
+    if (b) out.curveLabels.push({ M: r5(b.M), P: r5(b.P), text, colour: curveColour(k, n), z: out.curveLabels.length });
+  });
+
+  // invisible frame: the axes' corners
+  out.frame.push({ M: r5(m0), P: r5(p0) }, { M: r5(m1), P: r5(p1) });
+  return axes;
 }
 
 // ── decoration in page points ──────────────────────────────────────────────────────────────────
@@ -263,12 +493,16 @@ export class Deco {
   constructor(
     readonly L: SheetLayout,
     readonly out: SheetData,
+    readonly measure: MeasureText = estimateText,
   ) {}
   private ox = (x: number) => round(x - this.L.plot.x);
   private oy = (y: number) => round(y - this.L.plot.y);
   size = (style: TextStyle) => TEXT_STYLES[style].size * this.L.u;
+  /** advance width of `text` in a text style, in points */
+  width = (style: TextStyle, text: string) => this.measure(text, this.size(style), TEXT_STYLES[style].weight === 'bold');
   text(style: TextStyle, x: number, y: number, text: string, maxW?: number): void {
-    const t = maxW === undefined ? text : truncate(text, maxW, this.size(style));
+    const bold = TEXT_STYLES[style].weight === 'bold';
+    const t = maxW === undefined ? text : truncate(text, maxW, this.size(style), (s, f) => this.measure(s, f, bold));
     this.out.texts.push({ style, x: this.ox(x), y: this.oy(y), text: t, z: this.out.texts.length });
   }
   rect(b: Box, fill: string, stroke = 'transparent', strokeWidth = 0): void {
@@ -284,7 +518,7 @@ export class Deco {
   /** wraps text into lines at an estimated width; returns the y after the last line */
   paragraph(style: TextStyle, x: number, y: number, w: number, text: string, leading = 1.38): number {
     const fs = this.size(style);
-    for (const line of wrap(text, w, fs)) {
+    for (const line of wrap(text, w, fs, (s, f) => this.measure(s, f, TEXT_STYLES[style].weight === 'bold'))) {
       this.text(style, x, y, line);
       y += fs * leading;
     }
@@ -294,22 +528,26 @@ export class Deco {
 
 export const estWidth = (s: string, fontSize: number) => s.length * AVG_CHAR_EM * fontSize;
 
-export function truncate(s: string, w: number, fs: number): string {
-  if (estWidth(s, fs) <= w) return s;
-  const n = Math.max(1, Math.floor(w / (AVG_CHAR_EM * fs)) - 1);
+/** Cuts text to width `w` with an ellipsis, by `measure` (default the estimate). */
+export function truncate(s: string, w: number, fs: number, measure: (s: string, fs: number) => number = estWidth): string {
+  if (measure(s, fs) <= w) return s;
+  let n = s.length;
+  while (n > 1 && measure(`${s.slice(0, n).trimEnd()}…`, fs) > w) n--;
   return `${s.slice(0, n).trimEnd()}…`;
 }
 
-export function wrap(text: string, w: number, fs: number): string[] {
-  const max = Math.max(8, Math.floor(w / (AVG_CHAR_EM * fs)));
+/** Wraps text into lines no wider than `w` by `measure` (default the estimate); a word longer than a line stands alone. */
+export function wrap(text: string, w: number, fs: number, measure?: (s: string, fs: number) => number): string[] {
+  const fits = measure ? (s: string) => measure(s, fs) <= w : (s: string) => s.length <= Math.max(8, Math.floor(w / (AVG_CHAR_EM * fs)));
   const lines: string[] = [];
   let line = '';
   for (const word of text.split(/\s+/)) {
     if (!word) continue;
-    if (line && line.length + 1 + word.length > max) {
+    const next = line ? `${line} ${word}` : word;
+    if (line && !fits(next)) {
       lines.push(line);
       line = word;
-    } else line = line ? `${line} ${word}` : word;
+    } else line = next;
   }
   if (line) lines.push(line);
   return lines;
@@ -320,7 +558,18 @@ function header(ctx: SheetContext, g: Deco): void {
   g.rect({ x: b.x, y: b.y, w: 0.7 * u, h: b.h }, COLOURS.accent);
   const right = `sheet ${ctx.sheetNumber} of ${ctx.sheetCount}`;
   g.text('headerRight', b.x + b.w, b.y + b.h * 0.62, right);
-  g.text('sheetTitle', b.x + 1.8 * u, b.y + b.h * 0.66, ctx.sheet.title, b.w - 1.8 * u - estWidth(right, g.size('headerRight')) - 3 * u);
+  const room = b.w - 1.8 * u - g.width('headerRight', right) - 3 * u;
+  const title = ctx.sheet.title;
+  // the title whole: full size, smaller, or in two smaller lines; cut only past that
+  if (g.width('sheetTitle', title) <= room) g.text('sheetTitle', b.x + 1.8 * u, b.y + b.h * 0.66, title);
+  else if (g.width('sheetTitleMid', title) <= room) g.text('sheetTitleMid', b.x + 1.8 * u, b.y + b.h * 0.62, title);
+  else {
+    const lines = wrap(title, room, g.size('sheetTitleSmall'), (t, f) => g.measure(t, f, true));
+    const fs = g.size('sheetTitleSmall');
+    const top = b.y + b.h / 2 - (fs * 1.15 * (Math.min(2, lines.length) - 1)) / 2 + 0.35 * fs;
+    const shown = lines.length > 2 ? [lines[0]!, lines.slice(1).join(' ')] : lines;
+    shown.forEach((l, i) => g.text('sheetTitleSmall', b.x + 1.8 * u, top + i * fs * 1.15, l, room));
+  }
   g.rule(b.x, b.y + b.h + 0.6 * u, b.x + b.w, b.y + b.h + 0.6 * u, COLOURS.rule, 0.8);
 }
 
@@ -389,14 +638,32 @@ function lookupPanel(ctx: SheetContext, table: LookupTable, primary: FamilyKind,
   g.rule(b.x, top, b.x + b.w, top, COLOURS.faint, 0.6);
 }
 
+/** Side-column variants, largest first: the first whose notes and caution fit the column is drawn. */
+const SIDE_FITS: { picture: number; notes: TextStyle }[] = [
+  { picture: 1, notes: 'body' },
+  { picture: 0.8, notes: 'bodySmall' },
+  { picture: 0.6, notes: 'bodyTiny' },
+];
+
 function sidePanel(ctx: SheetContext, g: Deco): void {
+  for (const fit of SIDE_FITS) {
+    const trial = new Deco(g.L, { curves: [], curveLabels: [], refs: [], refLabels: [], frame: [], texts: [], rects: [], rules: [], dots: [], rings: [] }, g.measure);
+    if (sideColumn(ctx, trial, fit) <= g.L.side.y + g.L.side.h + 0.01 || fit === SIDE_FITS[SIDE_FITS.length - 1]) {
+      sideColumn(ctx, g, fit);
+      return;
+    }
+  }
+}
+
+/** Draws the side column; returns the bottom of its caution box. */
+function sideColumn(ctx: SheetContext, g: Deco, fit: { picture: number; notes: TextStyle }): number {
   const { side: b, u } = g.L;
   const { family, sheet, set } = ctx;
   const basis = family.basis;
 
   // pictogram, to scale from the unit-depth bars of the family
   g.text('heading', b.x, b.y + 1.0 * u, 'Section (to scale)');
-  const picH = Math.min(0.27 * b.h, 0.62 * b.w);
+  const picH = fit.picture * Math.min(0.27 * b.h, 0.62 * b.w);
   const box: Box = { x: b.x, y: b.y + 2.0 * u, w: b.w, h: picH };
   g.rect(box, COLOURS.panel);
   const aspect = sheet.shape.kind === 'rectangle' ? sheet.shape.aspect : 1;
@@ -438,7 +705,7 @@ function sidePanel(ctx: SheetContext, g: Deco): void {
   g.text('heading', b.x, y, `Basis: ${basis.title}`);
   y += 1.5 * u;
   const params = Object.entries(basis.parameters).map(([k, v]) => `${k} ${typeof v === 'number' ? fmt(v, 6) : v}`);
-  y = g.paragraph('body', b.x, y, b.w, params.join('  ·  '));
+  y = g.paragraph(fit.notes, b.x, y, b.w, params.join('  ·  '));
   y += 1.0 * u;
   g.text('heading', b.x, y, 'Assumptions');
   y += 1.5 * u;
@@ -449,6 +716,10 @@ function sidePanel(ctx: SheetContext, g: Deco): void {
       : `Values are divided by Ag (and h for moments), in ${su}; h is the depth in the bending plane (D for circular columns).`,
     'Short column: slenderness, creep and second-order effects are not included.',
   ];
+  // the basis notes state why the curves step; a smoothed drawing says which model it then shows
+  if (set.referenceLines.barEntry === false && barEntryIndices(family.sweep.cOverH).size > 0) {
+    extra.push('Drawn smoothed: where a bar row enters the rectangular stress block the computed curve steps inward; each step is drawn here as a chord on its inner side. Key points and tables keep the computed model (block with displaced concrete deducted).');
+  }
   if (set.ratios.kind === 'omega') {
     const fyd = basis.design.steel.yieldStress;
     extra.unshift(
@@ -456,17 +727,18 @@ function sidePanel(ctx: SheetContext, g: Deco): void {
     );
   }
   for (const note of [...basis.notes, ...extra]) {
-    g.text('body', b.x, y, '•');
-    y = g.paragraph('body', b.x + 1.0 * u, y, b.w - 1.0 * u, note) + 0.35 * u;
+    g.text(fit.notes, b.x, y, '•');
+    y = g.paragraph(fit.notes, b.x + 1.0 * u, y, b.w - 1.0 * u, note) + 0.3 * u;
   }
   // caution, pinned to the bottom of the column
   const caution =
     'For use by qualified engineers only. Check every value against the governing code edition, the project specification and local practice; this sheet does not replace the judgement of the engineer of record.';
-  const lines = wrap(caution, b.w - 2 * u, g.size('caution'));
+  const lines = wrap(caution, b.w - 2 * u, g.size('caution'), (t, f) => g.measure(t, f, true));
   const ch = lines.length * g.size('caution') * 1.35 + 1.4 * u;
   const cTop = Math.max(y + 0.5 * u, b.y + b.h - ch);
   g.rect({ x: b.x, y: cTop, w: b.w, h: ch }, '#fbf1ef', COLOURS.caution, 0.7);
   g.paragraph('caution', b.x + u, cTop + 1.0 * u + 0.5 * g.size('caution'), b.w - 2 * u, caution, 1.35);
+  return cTop + ch;
 }
 
 function titleBlock(ctx: SheetContext, g: Deco): void {
@@ -481,30 +753,33 @@ function titleBlock(ctx: SheetContext, g: Deco): void {
   const M = set.families === 'both' ? `${sy.nominalMoment}, ${sy.designMoment}` : primary === 'design' ? sy.designMoment : sy.nominalMoment;
   const ratios = set.ratios.values;
   const curves = `${fam} · ${RATIO_SYMBOL[set.ratios.kind]} ${fmt(ratios[0]!, 4)}–${fmt(ratios[ratios.length - 1]!, 4)}`;
-  const rows: [string, string, number][][] = [
-    [
-      ['office', tb.office, 3],
-      ['project', tb.project, 3],
-      ['sheet title', sheet.title, 4.6],
-      ['sheet', `${ctx.sheetNumber} of ${ctx.sheetCount}`, 1.1],
-    ],
-    [
-      ['design basis', basis.title, 1.3],
-      ['materials', `${sy.concreteStrength} ${stressText(sheet.fc, set.units)} · ${sy.steelStrength} ${stressText(sheet.fy, set.units)}`, 1.9],
-      ['γ', sheet.gamma.toFixed(2), 0.6],
-      ['shape · bars', `${describeShape(sheet.shape)} · ${describeArrangement(sheet.arrangement)}`, 3.7],
-      ['transverse', describeTransverse(sheet.transverse), 0.9],
-      ['prepared · checked', [tb.preparedBy, tb.checkedBy].filter(Boolean).join(' · ') || '—', 1.5],
-      ['rev.', tb.revision, 0.5],
-      ['date', tb.date, 1.1],
-      ['generated by', ctx.generator, 1.4],
-    ],
-    [
-      ['factors', basis.factorSummary, 4.6],
-      ['normalisation', normalisationText(set, sy, P, M, basis.normalisingStress), 4.6],
-      ['curves', curves, 2.4],
-    ],
+  const sheetRow: [string, string, number][] = [
+    ['office', tb.office, 3],
+    ['project', tb.project, 3],
+    ['sheet title', sheet.title, 4.6],
+    ['sheet', `${ctx.sheetNumber} of ${ctx.sheetCount}`, 1.1],
   ];
+  const section: [string, string, number][] = [
+    ['design basis', basis.title, 1.3],
+    ['materials', `${sy.concreteStrength} ${stressText(sheet.fc, set.units)} · ${sy.steelStrength} ${stressText(sheet.fy, set.units)}`, 1.9],
+    ['γ', sheet.gamma.toFixed(2), 0.6],
+    ['shape · bars', `${describeShape(sheet.shape)} · ${describeArrangement(sheet.arrangement)}`, 3.7],
+  ];
+  const people: [string, string, number][] = [
+    ['transverse', describeTransverse(sheet.transverse), 0.9],
+    ['prepared · checked', [tb.preparedBy, tb.checkedBy].filter(Boolean).join(' · ') || '—', 1.5],
+    ['rev.', tb.revision, 0.5],
+    ['date', tb.date, 1.1],
+    ['generated by', ctx.generator, 1.4],
+  ];
+  const factors: [string, string, number][] = [['factors', basis.factorSummary, 4.6]];
+  const norm: [string, string, number][] = [
+    ['normalisation', normalisationText(set, sy, P, M, basis.normalisingStress), 4.6],
+    ['curves', curves, 2.4],
+  ];
+  // narrow pages: the crowded rows split in two, so no value is cut
+  const rows: [string, string, number][][] =
+    (g.L.titleRows ?? 3) >= 5 ? [[sheetRow[0]!, sheetRow[1]!, people[2]!, people[3]!, sheetRow[3]!], [sheetRow[2]!], section, [people[0]!, people[1]!, people[4]!, norm[1]!], [...factors, norm[0]!]] : [sheetRow, [...section, ...people], [...factors, ...norm]];
   g.rect(b, COLOURS.paper, COLOURS.ink, 0.9);
   const rowH = b.h / rows.length;
   rows.forEach((cells, r) => {
@@ -516,7 +791,10 @@ function titleBlock(ctx: SheetContext, g: Deco): void {
       const w = (b.w * wgt) / total;
       if (k > 0) g.rule(x, y, x, y + rowH, COLOURS.ink, 0.5);
       g.text('caption', x + 0.7 * u, y + 1.05 * u, cap.toUpperCase(), w - 1.4 * u);
-      g.text(r === 0 && k !== 2 ? 'valueBold' : 'value', x + 0.7 * u, y + rowH - 0.9 * u, val, w - 1.4 * u);
+      const bold = cap === 'office' || cap === 'project' || cap === 'sheet';
+      // a smaller size before any cut
+      const fits = g.width(bold ? 'valueBold' : 'value', val) <= w - 1.4 * u;
+      g.text(fits ? (bold ? 'valueBold' : 'value') : bold ? 'valueBoldSmall' : 'valueSmall', x + 0.7 * u, y + rowH - 0.9 * u, val, w - 1.4 * u);
       x += w;
     });
   });

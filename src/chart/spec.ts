@@ -5,6 +5,7 @@
  * and `padding` make the view exactly one page.
  */
 import type { SheetData, TemplateParams } from './sheet-data.js';
+import { tickFormat, tickValues } from './axes.js';
 import { chartConfig, COLOURS, round2, TEXT_STYLES, type TextStyle } from './style.js';
 
 export type VlSpec = Record<string, unknown>;
@@ -27,8 +28,9 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
   const { layout: L } = t;
   const u = L.u;
   const o = t.overlay;
-  const x = { field: 'M', type: 'quantitative', scale: o ? { domain: o.domainM, nice: false, zero: false } : { zero: true, nice: true } };
-  const y = { field: 'P', type: 'quantitative', scale: o ? { domain: o.domainP, nice: false, zero: false } : { zero: true, nice: true } };
+  const a = t.axes;
+  const x = { field: 'M', type: 'quantitative', scale: o ? { domain: o.domainM, nice: false, zero: false } : a ? { domain: a.M.domain, nice: false, zero: false } : { zero: true, nice: true } };
+  const y = { field: 'P', type: 'quantitative', scale: o ? { domain: o.domainP, nice: false, zero: false } : a ? { domain: a.P.domain, nice: false, zero: false } : { zero: true, nice: true } };
   const plotLine = (name: string, kind: string, mark: Record<string, unknown>) => ({
     name,
     data: { name: 'refs' },
@@ -75,8 +77,8 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
   });
   layers.push(
     refLabel('ray', COLOURS.muted, 2, -2),
-    refLabel('strain', COLOURS.strain, 5, 0),
-    refLabel('cap', COLOURS.cap, 5, -1),
+    refLabel('strain', COLOURS.strain, 0, 0),
+    refLabel('cap', COLOURS.cap, 0, 0),
     {
       name: 'curve_label_halo',
       data: { name: 'curveLabels' },
@@ -94,7 +96,7 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
     { name: 'dots', data: { name: 'dots' }, mark: { type: 'point', shape: 'circle', filled: true, opacity: 1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), fill: lit('fill'), order: z } },
     ...(Object.keys(TEXT_STYLES) as TextStyle[]).map(textLayer),
   );
-  if (o) layers.splice(layers.findIndex((l) => l.name === 'rules'), 0, ...overlayLayers(x, y, u));
+  if (o) layers.splice(layers.findIndex((l) => l.name === 'rules'), 0, ...overlayLayers(x, y, u, o.loadRays !== false));
 
   return {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
@@ -110,18 +112,25 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
     background: COLOURS.paper,
     config: chartConfig(u),
     encoding: {
-      x: { ...x, axis: { title: t.xTitle, tickCount: 12, orient: 'bottom' } },
-      y: { ...y, axis: { title: t.yTitle, tickCount: 14 } },
+      x: { ...x, axis: { title: t.xTitle, orient: 'bottom', ...(a && !o ? { values: tickValues(a.M), format: tickFormat(a.M) } : { tickCount: 12 }) } },
+      y: { ...y, axis: { title: t.yTitle, ...(a && !o ? { values: tickValues(a.P), format: tickFormat(a.P) } : { tickCount: 14 }) } },
     },
     layer: layers,
   };
 }
 
+/** How the report's caption names the load marks (src/sheet/check-report.ts). */
+export const LOAD_MARK_WORDS = { mark: 'ringed crosses', governing: 'red ringed cross', ray: 'thin lines from the origin: their load rays' } as const;
+
+/** A plus sign as a vega symbol path (unit size), stroked: the cross inside a load's ring. */
+const CROSS = 'M-1,0L1,0M0,-1L0,1';
+
 /**
- * Load marks over the curves: the curve at the governing ρg required (ink, dashed), each load a small
- * ink dot, the governing load a larger caution-red diamond; labels with a paper halo.
+ * Load marks over the curves: the curve at the governing ρg required (ink, dashed); each load a ringed
+ * cross (a ring with a plus sign through its centre: our own mark), the governing load larger and in
+ * caution red; optionally each load's ray from the origin; labels with a paper halo.
  */
-function overlayLayers(x: object, y: object, u: number): Record<string, unknown>[] {
+function overlayLayers(x: object, y: object, u: number, rays: boolean): Record<string, unknown>[] {
   const gov = (v: 0 | 1) => [{ filter: `datum.governing === ${v}` }];
   const label = (name: string, v: 0 | 1, extra: Record<string, unknown>) => ({
     name,
@@ -130,6 +139,20 @@ function overlayLayers(x: object, y: object, u: number): Record<string, unknown>
     mark: { type: 'text', align: 'left', baseline: 'middle', fontSize: round2((v ? 0.86 : 0.76) * u), fontWeight: v ? 'bold' : 'normal', ...extra },
     encoding: { x: raw('x'), y: raw('y'), text: { field: 'text' }, order: z },
   });
+  const ring = (name: string, v: 0 | 1, size: number, colour: string, width: number) => ({
+    name,
+    data: { name: 'loadMarks' },
+    transform: gov(v),
+    mark: { type: 'point', shape: 'circle', filled: false, opacity: 1, size: round2(size * u * u), color: colour, strokeWidth: width },
+    encoding: { x, y, order: z },
+  });
+  const cross = (name: string, v: 0 | 1, size: number, colour: string, width: number) => ({
+    name,
+    data: { name: 'loadMarks' },
+    transform: gov(v),
+    mark: { type: 'point', shape: CROSS, filled: false, opacity: 1, size: round2(size * u * u), color: colour, strokeWidth: width },
+    encoding: { x, y, order: z },
+  });
   return [
     {
       name: 'extra_curves',
@@ -137,20 +160,20 @@ function overlayLayers(x: object, y: object, u: number): Record<string, unknown>
       mark: { type: 'line', color: COLOURS.ink, strokeWidth: 1.3, strokeDash: [6, 3], strokeJoin: 'round' },
       encoding: { x, y, detail: { field: 'curve' }, order: { field: 'i' } },
     },
-    {
-      name: 'load_marks',
-      data: { name: 'loadMarks' },
-      transform: gov(0),
-      mark: { type: 'point', shape: 'circle', filled: true, opacity: 1, size: round2(0.42 * u * u), color: COLOURS.ink, stroke: COLOURS.paper, strokeWidth: 0.5 },
-      encoding: { x, y, order: z },
-    },
-    {
-      name: 'load_governing',
-      data: { name: 'loadMarks' },
-      transform: gov(1),
-      mark: { type: 'point', shape: 'diamond', filled: true, opacity: 1, size: round2(1.5 * u * u), color: COLOURS.caution, stroke: COLOURS.paper, strokeWidth: 0.8 },
-      encoding: { x, y, order: z },
-    },
+    ...(rays
+      ? [
+          {
+            name: 'load_rays',
+            data: { name: 'loadMarks' },
+            mark: { type: 'rule', color: COLOURS.muted, strokeWidth: 0.45, opacity: 0.8 },
+            encoding: { x: { datum: 0, type: 'quantitative' }, y: { datum: 0, type: 'quantitative' }, x2: { field: 'M' }, y2: { field: 'P' } },
+          },
+        ]
+      : []),
+    ring('load_marks', 0, 0.9, COLOURS.ink, 0.9),
+    cross('load_marks_cross', 0, 1.6, COLOURS.ink, 0.8),
+    ring('load_governing', 1, 2.0, COLOURS.caution, 1.4),
+    cross('load_governing_cross', 1, 3.6, COLOURS.caution, 1.1),
     label('load_label_halo', 0, { stroke: COLOURS.paper, strokeWidth: 2.6, strokeJoin: 'round' }),
     label('load_labels', 0, { color: COLOURS.ink }),
     label('load_governing_label_halo', 1, { stroke: COLOURS.paper, strokeWidth: 3, strokeJoin: 'round' }),

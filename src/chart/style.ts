@@ -41,12 +41,21 @@ export function curveColour(k: number, n: number): string {
 /** Text classes: one vega-lite text layer each (font weight and alignment are mark properties). */
 export const TEXT_STYLES = {
   sheetTitle: { size: 2.0, weight: 'bold', align: 'left', colour: COLOURS.ink },
+  /** long titles on narrow pages: smaller, then in two lines */
+  sheetTitleMid: { size: 1.5, weight: 'bold', align: 'left', colour: COLOURS.ink },
+  sheetTitleSmall: { size: 1.15, weight: 'bold', align: 'left', colour: COLOURS.ink },
   headerRight: { size: 1.25, weight: 'normal', align: 'right', colour: COLOURS.muted },
   heading: { size: 1.0, weight: 'bold', align: 'left', colour: COLOURS.accent },
   caption: { size: 0.68, weight: 'normal', align: 'left', colour: COLOURS.muted },
   value: { size: 0.98, weight: 'normal', align: 'left', colour: COLOURS.ink },
   valueBold: { size: 0.98, weight: 'bold', align: 'left', colour: COLOURS.ink },
+  /** a title-block value too long for its cell at full size */
+  valueSmall: { size: 0.8, weight: 'normal', align: 'left', colour: COLOURS.ink },
+  valueBoldSmall: { size: 0.8, weight: 'bold', align: 'left', colour: COLOURS.ink },
   body: { size: 0.8, weight: 'normal', align: 'left', colour: COLOURS.ink },
+  /** notes in a crowded side column */
+  bodySmall: { size: 0.72, weight: 'normal', align: 'left', colour: COLOURS.ink },
+  bodyTiny: { size: 0.64, weight: 'normal', align: 'left', colour: COLOURS.ink },
   caution: { size: 0.86, weight: 'bold', align: 'left', colour: COLOURS.caution },
   cellRight: { size: 0.82, weight: 'normal', align: 'right', colour: COLOURS.ink },
   cellRho: { size: 0.82, weight: 'bold', align: 'left', colour: COLOURS.ink },

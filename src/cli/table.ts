@@ -12,7 +12,8 @@ import { generatorLabel } from '../version.js';
 import { csvLine, fmt, num, parseNumberList } from './format.js';
 import { addSectionOptions, resolveSectionFlags, type ResolvedSection, type SectionFlags } from './section-flags.js';
 
-export const TABLE_COLUMNS = ['rho_g', 'c_over_h', 'eps_t', 'phi', 'Pn_norm', 'Mn_norm', 'phiPn_norm', 'phiMn_norm'] as const;
+import { TABLE_COLUMNS } from '../chart/lookup-table.js';
+export { TABLE_COLUMNS };
 
 export interface TableOptions extends SectionFlags {
   rho?: string;

@@ -126,12 +126,13 @@ export function resolveChartSet(file: ChartSetFile, opts: ReadOptions = {}): Res
     const transverses = listOf(g.transverse ?? 'tied');
     const variantOptions = { ...(g.basisOptions ?? {}) };
     const basisOptions = { ...setOptions, ...variantOptions };
+    const axes = g.axes ? { ...(g.axes.P ? { P: axisLimits(g.axes.P, `${at}.axes.P`) } : {}), ...(g.axes.M ? { M: axisLimits(g.axes.M, `${at}.axes.M`) } : {}) } : undefined;
     for (const shape of shapes)
       for (const fc of fcs)
         for (const fy of fys)
           for (const gamma of gammas)
             for (const arrangement of arrangements)
-              for (const transverse of transverses) partial.push({ index: partial.length + 1, origin: at, shape, fc, fy, gamma, arrangement, transverse, basisOptions, variantOptions });
+              for (const transverse of transverses) partial.push({ index: partial.length + 1, origin: at, shape, fc, fy, gamma, arrangement, transverse, basisOptions, variantOptions, ...(axes ? { axes } : {}) });
   });
   const sheets: ResolvedSheet[] = partial.map((s) => ({
     ...s,
@@ -163,6 +164,7 @@ export function resolveChartSet(file: ChartSetFile, opts: ReadOptions = {}): Res
       strainStates: file.referenceLines?.strainStates ?? true,
       eccentricities: file.referenceLines?.eccentricities ?? [0.1, 0.25, 0.5, 1],
       axialCap: file.referenceLines?.axialCap ?? true,
+      barEntry: file.referenceLines?.barEntry ?? true,
     },
     outputs: {
       pdf: file.outputs?.pdf ?? true,
@@ -192,3 +194,11 @@ function defaultDate(opts: ReadOptions): string {
 }
 
 export type { UnitSystem };
+
+/** A group's fixed axis limits: finite and increasing. */
+function axisLimits(v: [number, number], path: string): [number, number] {
+  if (!Number.isFinite(v[0]) || !Number.isFinite(v[1]) || !(v[1] > v[0])) {
+    throw new PmError(ERROR_CODES.invalidValue, path, 'must be [low, high] with low below high', { value: JSON.stringify(v) });
+  }
+  return [v[0], v[1]];
+}

@@ -70,6 +70,14 @@ const SheetGroup = z
     arrangement: oneOrMany(Arrangement).describe('bar arrangement(s)'),
     transverse: oneOrMany(z.enum(['tied', 'spiral'])).describe('transverse reinforcement; default "tied"').optional(),
     basisOptions: BasisOptions.describe('basis options for these sheets only, over the set’s basis.options (e.g. a National Annex variant); the sheet titles name them').optional(),
+    axes: z
+      .object({
+        P: z.tuple([z.number(), z.number()]).describe('axial axis [low, high] in the sheet’s normalised units').optional(),
+        M: z.tuple([z.number(), z.number()]).describe('moment axis [low, high] in the sheet’s normalised units').optional(),
+      })
+      .strict()
+      .describe('fixed axis limits for these sheets; default: the next round values beyond the envelope of the group’s curves')
+      .optional(),
   })
   .strict();
 
@@ -115,6 +123,10 @@ export const ChartSetFileSchema = z
         strainStates: z.boolean().describe('lines through the basis’s strain states (εt = 0, εt = εty, tension-controlled limit); default true').optional(),
         eccentricities: z.array(z.number()).describe('radial lines of constant e/h; default [0.1, 0.25, 0.5, 1]').optional(),
         axialCap: z.boolean().describe('line through the points where each curve meets its axial cap; default true').optional(),
+        barEntry: z
+          .boolean()
+          .describe('draw the step where a bar row enters the rectangular stress block as computed (true), or smooth it into a chord on the inner side for presentation (false); tables keep the computed values; default true')
+          .optional(),
       })
       .strict()
       .optional(),

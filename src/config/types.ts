@@ -47,6 +47,8 @@ export interface ResolvedSheet {
   basisOptions: BasisOptions;
   /** the sheet group's own basisOptions ({} when it has none): a variant named in the title and file name */
   variantOptions: BasisOptions;
+  /** the sheet group's fixed axis limits, in the sheet's normalised units (absent: fitted to the group's curves) */
+  axes?: { P?: [number, number]; M?: [number, number] };
   title: string;
   /** file name without extension for sheets/ and tables/ */
   fileStem: string;
@@ -66,7 +68,7 @@ export interface ResolvedChartSet {
    * sheet converts to ρg with its own basis (src/sheet/curves.ts sheetRhos).
    */
   ratios: { kind: RatioKind; values: number[] };
-  referenceLines: { strainStates: boolean; eccentricities: number[]; axialCap: boolean };
+  referenceLines: { strainStates: boolean; eccentricities: number[]; axialCap: boolean; barEntry?: boolean };
   outputs: { pdf: boolean; svg: boolean; png: boolean; pngScale: number; tables: boolean };
   sheets: ResolvedSheet[];
 }

@@ -7,6 +7,7 @@ import type { View } from 'vega';
 import { datasetNames, sheetTemplate, type VlSpec } from '../chart/spec.js';
 import type { SheetData, TemplateParams } from '../chart/sheet-data.js';
 import { renderEnvironment, type RenderEnvironment } from './environment.js';
+import { FONT_FAMILY } from '../chart/style.js';
 
 type Row = Record<string, string | number>;
 interface ViewEntry {
@@ -42,6 +43,14 @@ export class SheetRenderer {
   static async create(): Promise<SheetRenderer> {
     return new SheetRenderer(await renderEnvironment());
   }
+
+  private measureCtx: import('canvas').CanvasRenderingContext2D | undefined;
+  /** Text widths in points with the sheet typeface, as vega measures them (chart/ labels.ts MeasureText). */
+  readonly measureText = (text: string, fontSize: number, bold: boolean): number => {
+    this.measureCtx ??= this.env.canvas.createCanvas(10, 10).getContext('2d');
+    this.measureCtx.font = `${bold ? 'bold ' : ''}${fontSize}px "${FONT_FAMILY}"`;
+    return this.measureCtx.measureText(text).width;
+  };
 
   /** Runs the view of this template on this sheet's data. */
   async show(page: SheetPage): Promise<View> {

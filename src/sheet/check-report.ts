@@ -16,6 +16,7 @@ import { computeFamily, type CurveFamily } from '../analysis/family.js';
 import { squashPoint } from '../analysis/biaxial.js';
 import { contourSpec } from '../chart/contour-spec.js';
 import type { Box, SheetLayout } from '../chart/layout.js';
+import { LOAD_MARK_WORDS } from '../chart/spec.js';
 import { Deco, estWidth, plotLayers, wrap, type LoadLabelRow, type SheetData, type TemplateParams } from '../chart/sheet-data.js';
 import { COLOURS, TEXT_STYLES, type TextStyle } from '../chart/style.js';
 import { contourPlot } from '../chart/contour-plot.js';
@@ -276,7 +277,7 @@ function plotCaption(g: Deco, L: ReportLayout, c: ColumnCheck): void {
   const gov = c.results[0];
   const vs = symbolsOf(c);
   const slender = `${c.slenderness ? ' Moments as checked: magnified for slenderness.' : ''}${c.biaxial ? ` The chart shows ${vs.M} about x${c.shape.kind === 'circle' ? ' (the resultant for a circle)' : ''}; ${vs.M}y enters the biaxial check.` : ''}`;
-  const text = `Curves at ρg ${c.chart.rhos.map((r) => fmt(r, 3)).join(', ')}; dashed ink: ρg required of the governing load and the checked ρg, where they fall between the steps. Dots: the ${n} load${n === 1 ? '' : 's'} at (${vs.M}/(Ag·${vs.depth}), ${vs.P}/Ag); red diamond: governing${gov ? ` (${gov.id})` : ''}${n > LABELLED_LOADS ? `; the first ${LABELLED_LOADS} by rank are labelled` : ''}.${slender}`;
+  const text = `Curves at ρg ${c.chart.rhos.map((r) => fmt(r, 3)).join(', ')}; dashed ink: ρg required of the governing load and the checked ρg, where they fall between the steps. ${LOAD_MARK_WORDS.mark[0]!.toUpperCase()}${LOAD_MARK_WORDS.mark.slice(1)}: the ${n} load${n === 1 ? '' : 's'} at (${vs.M}/(Ag·${vs.depth}), ${vs.P}/Ag), ${LOAD_MARK_WORDS.ray}; ${LOAD_MARK_WORDS.governing}: governing${gov ? ` (${gov.id})` : ''}${n > LABELLED_LOADS ? `; the first ${LABELLED_LOADS} by rank are labelled` : ''}.${slender}`;
   let yy = y;
   for (const line of wrap(text, L.colA.w, g.size('caption')).slice(0, 3)) {
     g.text('caption', L.colA.x, yy, line);

@@ -5,6 +5,8 @@ import { resolveBasis } from '../codes/registry.js';
 import type { Basis } from '../codes/types.js';
 import type { ResolvedChartSet, ResolvedSheet } from '../config/types.js';
 import type { Shape } from '../section/types.js';
+import { envelope, familyExtent, type AxisExtent } from '../chart/axes.js';
+import { primaryFamily } from '../chart/sheet-data.js';
 
 /**
  * Base points per curve for sheets. Key points are solved exactly whatever this is; it only sets how
@@ -36,4 +38,24 @@ export function sheetRhos(set: ResolvedChartSet, basis: Basis): number[] {
 export function familyForSheet(set: ResolvedChartSet, sheet: ResolvedSheet): CurveFamily {
   const basis = basisForSheet(set, sheet);
   return computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: sheetRhos(set, basis), basePoints: SHEET_BASE_POINTS });
+}
+
+/**
+ * One extent per sheet group (keyed by ResolvedSheet.origin): the envelope of its sheets' outermost
+ * curves (the largest ratio), so every sheet of a group is drawn to the same scale.
+ */
+export function groupExtents(set: ResolvedChartSet): Record<string, AxisExtent> {
+  const families = set.families === 'both' ? (['nominal', 'design'] as const) : [primaryFamily(set)];
+  const byGroup = new Map<string, AxisExtent[]>();
+  for (const sheet of set.sheets) {
+    const basis = basisForSheet(set, sheet);
+    const rhos = sheetRhos(set, basis);
+    const outer = Math.max(...rhos);
+    const f = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: [outer], basePoints: SHEET_BASE_POINTS });
+    const d = set.normalisation === 'dimensionless' ? basis.normalisingStress : 1;
+    const list = byGroup.get(sheet.origin) ?? [];
+    list.push(familyExtent(f, families, d));
+    byGroup.set(sheet.origin, list);
+  }
+  return Object.fromEntries([...byGroup].map(([k, v]) => [k, envelope(v)]));
 }

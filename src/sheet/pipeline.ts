@@ -20,7 +20,7 @@ import type { ResolvedChartSet } from '../config/types.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { SheetRenderer } from '../render/renderer.js';
 import { bindBook } from './book.js';
-import { basisForSheet } from './curves.js';
+import { basisForSheet, groupExtents } from './curves.js';
 import { normalisationText, primaryFamily } from '../chart/sheet-data.js';
 import { swapInFolder, writeFileAtomic } from './files.js';
 import { chunksOf, type ChunkTask } from './render-chunk.js';
@@ -57,7 +57,7 @@ export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions):
   mkdirSync(staging, { recursive: true });
   try {
     // 2–4: curves → spec → bytes, chunk by chunk
-    const tasks = chunksOf(set, staging, opts.generator, opts.chunkSize);
+    const tasks = chunksOf(set, staging, opts.generator, opts.chunkSize, groupExtents(set));
     let done = 0;
     const tick = () => opts.onSheet?.(++done, set.sheets.length);
     const jobs = Math.max(1, Math.min(opts.jobs ?? Math.min(4, availableParallelism()), tasks.length));

@@ -7,6 +7,7 @@ import { join } from 'node:path';
 import { tableCsv } from '../chart/lookup-table.js';
 import { buildSheet, primaryFamily } from '../chart/sheet-data.js';
 import type { ResolvedChartSet } from '../config/types.js';
+import type { AxisExtent } from '../chart/axes.js';
 import type { SheetRenderer } from '../render/renderer.js';
 import { familyForSheet } from './curves.js';
 import { writeFileAtomic } from './files.js';
@@ -23,13 +24,15 @@ export interface ChunkTask {
   /** the set's staging folder */
   staging: string;
   generator: string;
+  /** per sheet group (ResolvedSheet.origin): the envelope of its sheets' curves, so the group shares one scale */
+  extents?: Record<string, AxisExtent>;
 }
 
-export function chunksOf(set: ResolvedChartSet, staging: string, generator: string, size = CHUNK_SIZE): ChunkTask[] {
+export function chunksOf(set: ResolvedChartSet, staging: string, generator: string, size = CHUNK_SIZE, extents?: Record<string, AxisExtent>): ChunkTask[] {
   const tasks: ChunkTask[] = [];
   for (let start = 0, k = 0; start < set.sheets.length; start += size, k++) {
     const indices = Array.from({ length: Math.min(size, set.sheets.length - start) }, (_, i) => start + i);
-    tasks.push({ set, chunk: k, indices, staging, generator });
+    tasks.push({ set, chunk: k, indices, staging, generator, ...(extents ? { extents } : {}) });
   }
   return tasks;
 }
@@ -44,7 +47,8 @@ export async function renderChunk(task: ChunkTask, renderer: SheetRenderer, onSh
   for (const i of task.indices) {
     const sheet = set.sheets[i]!;
     const family = familyForSheet(set, sheet);
-    const built = buildSheet({ set, sheet, family, sheetNumber: i + 1, sheetCount: set.sheets.length, generator });
+    const extent = task.extents?.[sheet.origin];
+    const built = buildSheet({ set, sheet, family, sheetNumber: i + 1, sheetCount: set.sheets.length, generator, measureText: renderer.measureText, ...(extent ? { extent } : {}) });
     if (out.tables) {
       writeFileAtomic(join(staging, 'tables', `${sheet.fileStem}.csv`), tableCsv(built.table));
       writeFileAtomic(join(staging, 'tables', `${sheet.fileStem}.json`), tableJson(set, sheet, family.basis, built.table, primaryFamily(set), generator));

@@ -17,11 +17,11 @@ export async function renderSheet(set: ResolvedChartSet, index = 0, format: Shee
   if (!sheet) throw new RangeError(`sheet ${index} is not in the set (it has ${set.sheets.length})`);
   const basis = basisForSheet(set, sheet);
   const family = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: sheetRhos(set, basis), capContext: opts.capContext ?? {}, basePoints: SHEET_BASE_POINTS });
-  const built = buildSheet({ set, sheet, family, sheetNumber: index + 1, sheetCount: set.sheets.length, generator: generatorLabel() });
-  const page = { template: built.template, data: built.data };
   const { SheetRenderer } = await import('../render/renderer.js');
   const renderer = await SheetRenderer.create();
   try {
+    const built = buildSheet({ set, sheet, family, sheetNumber: index + 1, sheetCount: set.sheets.length, generator: generatorLabel(), measureText: renderer.measureText });
+    const page = { template: built.template, data: built.data };
     if (format === 'svg') return await renderer.svg(page);
     if (format === 'png') return await renderer.png(page, 2);
     const pdf = renderer.pdfPages();

@@ -1,8 +1,11 @@
-/** tables/*.json: the lookup table of one sheet with its parameters (CSV comes from src/chart/lookup-table.ts). */
+/**
+ * tables/*.json: the lookup table of one sheet with its parameters (CSV comes from src/chart/lookup-table.ts).
+ * Curves and key points use the names of `pmchart table --format json` (curves[].rho_g, key_points[].nominal/factored).
+ */
 import { describeArrangement, describeShape } from '../config/describe.js';
 import type { ResolvedChartSet, ResolvedSheet } from '../config/types.js';
 import type { Basis } from '../codes/types.js';
-import { roundPoint, type FamilyKind, type LookupTable } from '../chart/lookup-table.js';
+import { keyPointRecord, type FamilyKind, type LookupTable } from '../chart/lookup-table.js';
 import { DISPLAY_UNITS } from '../units/index.js';
 
 export function tableJson(set: ResolvedChartSet, sheet: ResolvedSheet, basis: Basis, table: LookupTable, primary: FamilyKind, generator: string): string {
@@ -30,10 +33,10 @@ export function tableJson(set: ResolvedChartSet, sheet: ResolvedSheet, basis: Ba
       : 'P/Ag and M/(Ag·h)',
     sheetShows: primary,
     curvesBy: set.ratios.kind,
-    rows: table.rows.map((r) => ({
+    curves: table.rows.map((r) => ({
+      rho_g: Number(r.rhoG.toPrecision(6)),
       ...(r.omega !== undefined ? { omega: r.omega } : {}),
-      rhoG: Number(r.rhoG.toPrecision(6)),
-      points: r.points.map((p) => ({ id: p.id, label: p.label, nominal: roundPoint(p.nominal), design: roundPoint(p.design) })),
+      key_points: r.points.map(keyPointRecord),
     })),
   };
   return `${JSON.stringify(doc, null, 2)}\n`;

@@ -7,7 +7,8 @@ import { describe, expect, it } from 'vitest';
 import { buildSheet, SIMPLIFY_TOLERANCE_PT } from '../../src/chart/sheet-data.js';
 import { simplifyIndices } from '../../src/chart/simplify.js';
 import { sheetSpec } from '../../src/chart/spec.js';
-import { tableCsv } from '../../src/chart/lookup-table.js';
+import { TABLE_COLUMNS, tableCsv } from '../../src/chart/lookup-table.js';
+import { runTable } from '../../src/cli/table.js';
 import { familyForSheet } from '../../src/sheet/curves.js';
 import { referenceSet } from '../helpers/chart-set.js';
 import { expectClose } from '../helpers/tolerance.js';
@@ -44,7 +45,8 @@ describe('sheet spec', () => {
 
   it('labels every curve with its ρg and gives axis titles with symbols and units', () => {
     const { built } = build();
-    expect(built.data.curveLabels.map((l) => l.text)).toEqual(['ρg 0.01', 'ρg 0.02', 'ρg 0.04', 'ρg 0.08']);
+    // the compression-zone label of each curve comes first; tension-branch labels follow where there is room
+    expect(built.data.curveLabels.slice(0, 4).map((l) => l.text)).toEqual(['ρg 0.01', 'ρg 0.02', 'ρg 0.04', 'ρg 0.08']);
     expect(built.template.yTitle).toBe('φPn / Ag   (ksi)');
     expect(built.template.xTitle).toBe('φMn / (Ag · h)   (ksi)');
     const dimless = build({ normalisation: 'dimensionless', families: 'both' }).built.template;
@@ -137,11 +139,28 @@ describe('lookup table', () => {
     expectClose(b.rows[1]!.points[0]!.nominal!.P, a.rows[1]!.points[0]!.nominal!.P / 4, 1e-12);
   });
 
-  it('writes CSV with one line per key point and family', () => {
+  it('writes CSV with the columns of `pmchart table`, then the key point, one row per point and depth', () => {
     const { built, family } = build();
     const lines = tableCsv(built.table).trim().split('\n');
-    expect(lines[0]).toBe('rhoG,point,label,family,cOverH,epsT,phi,P,M');
-    expect(lines.length - 1).toBe(family.curves.length * family.curves[0]!.keyPoints.length * 2);
-    expect(lines.filter((l) => l.startsWith('0.02,balanced,"εt = εty (balanced)",nominal,'))).toHaveLength(1);
+    expect(lines[0]!.split(',').slice(0, TABLE_COLUMNS.length)).toEqual([...TABLE_COLUMNS]);
+    expect(lines[0]).toBe('rho_g,c_over_h,eps_t,phi,Pn_norm,Mn_norm,phiPn_norm,phiMn_norm,point,point_label');
+    // balanced: one depth for both curves, one row with nominal and factored values
+    const bal = lines.filter((l) => l.startsWith('0.02,') && l.includes(',balanced,'));
+    expect(bal).toHaveLength(1);
+    const kp = family.curves[1]!.keyPoints.find((p) => p.id === 'balanced')!;
+    const cells = bal[0]!.split(',').map(Number);
+    expectClose(cells[4]!, kp.nominal!.P, 1e-5);
+    expectClose(cells[6]!, kp.design!.P, 1e-5);
+    // ACI 318-19 §2 of the outside values (first principles): balanced Pn/(b·h) = 1.505 ksi at ρg 0.02
+    expect(cells[4]!).toBeCloseTo(1.505, 2);
+  });
+
+  it('gives the set table and `pmchart table` the same columns for the same sheet', () => {
+    const set = referenceSet({});
+    const sheet = set.sheets[0]!;
+    const setHead = tableCsv(build().built.table).split('\n')[0]!.split(',');
+    const cmd = runTable({ code: 'aci318-19', fc: String(sheet.fc), fy: String(sheet.fy), gamma: String(sheet.gamma), rho: '0.02' } as never).split('\n')[0]!.split(',');
+    expect(setHead.slice(0, cmd.length)).toEqual(cmd);
+    expect(setHead.slice(cmd.length)).toEqual(['point', 'point_label']);
   });
 });

@@ -36,7 +36,7 @@ describe('readChartSet', () => {
     expect(set.paper).toEqual({ size: 'tabloid', orientation: 'landscape', widthPt: 1224, heightPt: 792 });
     expect(set.sheets[0]!.shape).toEqual({ kind: 'rectangle', aspect: 1 });
     expect(set.sheets[0]!.transverse).toBe('tied');
-    expect(set.referenceLines).toEqual({ strainStates: true, eccentricities: [0.1, 0.25, 0.5, 1], axialCap: true });
+    expect(set.referenceLines).toEqual({ strainStates: true, eccentricities: [0.1, 0.25, 0.5, 1], axialCap: true, barEntry: true });
   });
 
   it('converts units once: "48.26MPa" in a US set is 7 ksi (NIST SP 811 factor)', () => {

@@ -90,19 +90,28 @@ describe('makeChartSet', () => {
     const s = set.sheets[2]!;
     const json = JSON.parse(readFileSync(join(dirA, 'tables', `${s.fileStem}.json`), 'utf8'));
     const family = familyForSheet(set, s);
-    expect(json.rows).toHaveLength(family.curves.length);
+    expect(json.curves).toHaveLength(family.curves.length);
     family.curves.forEach((c, k) => {
+      expect(json.curves[k].rho_g).toBe(c.rho);
       c.keyPoints.forEach((kp, j) => {
-        const got = json.rows[k].points[j];
+        const got = json.curves[k].key_points[j];
         expect(got.id).toBe(kp.id);
-        for (const fam of ['nominal', 'design'] as const) {
-          if (kp[fam] === null) expect(got[fam]).toBeNull();
-          else for (const f of ['P', 'M', 'cOverH', 'phi'] as const) expect(got[fam][f]).toBeCloseTo(kp[fam]![f], 4);
+        for (const [fam, key, P, M] of [['nominal', 'nominal', 'Pn_norm', 'Mn_norm'], ['design', 'factored', 'phiPn_norm', 'phiMn_norm']] as const) {
+          const v = kp[fam];
+          if (v === null) expect(got[key]).toBeNull();
+          else {
+            expect(got[key][P]).toBeCloseTo(v.P, 4);
+            expect(got[key][M]).toBeCloseTo(v.M, 4);
+            expect(got[key].c_over_h).toBeCloseTo(v.cOverH, 4);
+            expect(got[key].phi).toBeCloseTo(v.phi, 4);
+          }
         }
       });
     });
     const csv = readFileSync(join(dirA, 'tables', `${s.fileStem}.csv`), 'utf8').trim().split('\n');
-    expect(csv).toHaveLength(1 + family.curves.length * family.curves[0]!.keyPoints.length * 2);
+    expect(csv[0]).toBe('rho_g,c_over_h,eps_t,phi,Pn_norm,Mn_norm,phiPn_norm,phiMn_norm,point,point_label');
+    // one row per key point, two where the nominal and factored curves reach it at different depths
+    expect(csv.length - 1).toBeGreaterThanOrEqual(family.curves.length * family.curves[0]!.keyPoints.length);
   });
 
   it('gives byte-identical SVG, PNG, CSV, JSON and PDF on a second run', () => {
