@@ -8,7 +8,7 @@ import type { Command } from 'commander';
 import type { CheckOutcome, LoadResult } from '../design/check.js';
 import type { BiaxialResult } from '../design/biaxial.js';
 import { biaxialFor, biaxialSectionFor, magnifyLoad, type AxisMember, type MagnifiedLoad, type SlendernessRequest } from '../design/column-effects.js';
-import { EI_OPTIONS, isEiOption, type SlendernessResult } from '../design/slenderness.js';
+import { EI_OPTIONS, endMomentConvention, isEiOption, type SlendernessResult } from '../design/slenderness.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { layoutBars } from '../section/arrangements.js';
 import { grossArea } from '../section/geometry.js';
@@ -25,6 +25,10 @@ export interface EffectsFlags {
   m2?: string;
   m1Y?: string;
   m2Y?: string;
+  m01?: string;
+  m02?: string;
+  m01Y?: string;
+  m02Y?: string;
   betaDns?: string;
   eiOption?: string;
   transverseLoads?: boolean;
@@ -55,10 +59,14 @@ export function addEffectsOptions(cmd: Command): Command {
     .option('--m2 <moment>', 'larger end moment about x, positive (default |Mu|); M2 column in --loads')
     .option('--m1-y <moment>', 'smaller end moment about y, negative in single curvature (default −M2y); M1y column')
     .option('--m2-y <moment>', 'larger end moment about y (default |Muy|); M2y column')
+    .option('--m01 <moment>', 'EN 1992-1-1: smaller end moment about x, same sign as --m02 in single curvature (rm = M01/M02 > 0, 5.8.3.1); M01 column in --loads')
+    .option('--m02 <moment>', 'EN 1992-1-1: larger end moment about x, with its sign (default |Mu|); M02 column')
+    .option('--m01-y <moment>', 'EN 1992-1-1: smaller end moment about y, same sign as --m02-y in single curvature; M01y column')
+    .option('--m02-y <moment>', 'EN 1992-1-1: larger end moment about y (default |Muy|); M02y column')
     .option('--beta-dns <ratio>', 'ACI 318-19 6.6.4.4.4 βdns, sustained ÷ total factored axial load, 0–1 (required with --klu for ACI)')
     .option('--ei-option <a|b|c>', 'ACI 318-19 6.6.4.4.4 (EI)eff option', 'a')
     .option('--transverse-loads', 'transverse loads between supports: Cm = 1.0 (ACI 318-19 6.6.4.5.3(b))')
-    .option('--creep <ratio>', 'EN 1992-1-1 5.8.4 effective creep ratio φef', '0');
+    .option('--creep <ratio>', 'EN 1992-1-1 5.8.4 effective creep ratio φef (not given: A = 0.7 by 5.8.3.1(1))');
 }
 
 const plain = (path: string, text: string, lo: number, hi: number): number => {
@@ -78,7 +86,15 @@ export function resolveEffects(o: EffectsFlags, rc: ResolvedCheck, single: boole
   const lengthRange: [number, number] = u === 'us' ? [12, 1200] : [300, 30000];
   const len = (path: string, text: string) => requireInRange(path, parseQuantity(text, 'length', u, path), lengthRange[0], lengthRange[1], DISPLAY_UNITS[u].length);
   let slenderness: SlendernessRequest | null = null;
-  const anyMember = [o.kluY, o.m1, o.m2, o.m1Y, o.m2Y].some((v) => v !== undefined);
+  const endFlags = { '--m1': o.m1, '--m2': o.m2, '--m1-y': o.m1Y, '--m2-y': o.m2Y, '--m01': o.m01, '--m02': o.m02, '--m01-y': o.m01Y, '--m02-y': o.m02Y };
+  const conv = endMomentConvention(rc.section.basis);
+  const ownFlags: readonly string[] = [conv.smallerFlag, conv.largerFlag, conv.smallerFlagY, conv.largerFlagY];
+  for (const [flag, v] of Object.entries(endFlags)) {
+    if (v !== undefined && !ownFlags.includes(flag)) {
+      throw new PmError(ERROR_CODES.conflict, flag, `is not the end-moment flag of ${rc.section.basis.title}: give ${ownFlags.join(', ')} instead, ${conv.rule}`);
+    }
+  }
+  const anyMember = [o.kluY, ...Object.values(endFlags)].some((v) => v !== undefined);
   if (o.klu === undefined && anyMember) throw new PmError(ERROR_CODES.missing, '--klu', 'is required with the other slenderness flags (an effective length)');
   if (o.klu !== undefined) {
     const ei = o.eiOption ?? 'a';
@@ -88,7 +104,7 @@ export function resolveEffects(o: EffectsFlags, rc: ResolvedCheck, single: boole
       ...(o.betaDns !== undefined ? { betaDns: plain('--beta-dns', o.betaDns, 0, 1) } : {}),
       eiOption: ei,
       transverseLoads: o.transverseLoads === true,
-      creepRatio: plain('--creep', o.creep ?? '0', 0, 5),
+      ...(o.creep !== undefined ? { creepRatio: plain('--creep', o.creep, 0, 5) } : {}),
     });
     if (o.betaDns === undefined && rc.section.basis.slendernessMethod === 'moment-magnification-aci318') {
       throw new PmError(ERROR_CODES.missing, '--beta-dns', 'is required with --klu (ACI 318-19 6.6.4.4.4: sustained ÷ total factored axial load, 0–1)');
@@ -105,8 +121,25 @@ export function resolveEffects(o: EffectsFlags, rc: ResolvedCheck, single: boole
       if (m2 !== undefined) l.M2 = m2;
       if (m1y !== undefined) l.M1y = m1y;
       if (m2y !== undefined) l.M2y = m2y;
-    } else if (anyMember && [o.m1, o.m2, o.m1Y, o.m2Y].some((v) => v !== undefined)) {
-      throw new PmError(ERROR_CODES.conflict, '--m1/--m2', 'apply to --pu/--mu; give M1, M2 (M1y, M2y) columns in --loads instead');
+      const m01 = moment('--m01', o.m01);
+      const m02 = moment('--m02', o.m02);
+      const m01y = moment('--m01-y', o.m01Y);
+      const m02y = moment('--m02-y', o.m02Y);
+      if (m01 !== undefined) l.M01 = m01;
+      if (m02 !== undefined) l.M02 = m02;
+      if (m01y !== undefined) l.M01y = m01y;
+      if (m02y !== undefined) l.M02y = m02y;
+    } else if (Object.values(endFlags).some((v) => v !== undefined)) {
+      throw new PmError(ERROR_CODES.conflict, `${conv.smallerFlag}/${conv.largerFlag}`, `apply to --pu/--mu; give ${conv.columns.join(', ')} columns in --loads instead`);
+    }
+    // a load file's end-moment columns must be the basis's own (signs differ between conventions)
+    const own: readonly string[] = conv.columns;
+    for (const l of loads) {
+      for (const key of ['M1', 'M2', 'M1y', 'M2y', 'M01', 'M02', 'M01y', 'M02y'] as const) {
+        if (l[key] !== undefined && !own.includes(key)) {
+          throw new PmError(ERROR_CODES.conflict, `--loads ${key} column`, `is not an end-moment column of ${rc.section.basis.title}: use ${own.join(', ')}, ${conv.rule}`);
+        }
+      }
     }
   }
   const bars = checkedBars(rc);
@@ -129,23 +162,23 @@ export function applySlenderness(rc: ResolvedCheck, fx: CheckEffects): void {
   const { basis } = rc.section;
   const shape = rc.request.shape;
   // option (a) needs no bars; (b) and (c) were checked to have them
-  const bars = fx.bars ?? [];
+  // without bars, positions from γ and the arrangement (EN 1992-1-1 5.8.8.3(2) needs is before bars are chosen)
+  const r = rc.request;
+  const bars = fx.bars ?? layoutBars(shape, r.arrangement, grossArea(shape), { gamma: r.gamma });
+  const positionsOnly = fx.bars === null;
   fx.loads = rc.request.loads.map((l) => {
     const firstOrder = { Mux: l.Mu, Muy: l.Muy ?? 0 };
     if (!fx.slenderness) return { firstOrder, magnified: null, biaxial: null };
-    const m = magnifyLoad(basis, shape, bars, { Pu: l.Pu, Mux: l.Mu, Muy: l.Muy ?? 0, ...pick(l) }, fx.slenderness);
+    const m = magnifyLoad(basis, shape, bars, { Pu: l.Pu, Mux: l.Mu, Muy: l.Muy ?? 0, ...pick(l) }, fx.slenderness, positionsOnly);
     l.Mu = m.Mux;
     if (l.Muy !== undefined || m.y) l.Muy = m.Muy;
     return { firstOrder, magnified: m, biaxial: null };
   });
 }
 
-const pick = (l: { M1?: number; M2?: number; M1y?: number; M2y?: number }) => ({
-  ...(l.M1 !== undefined ? { M1: l.M1 } : {}),
-  ...(l.M2 !== undefined ? { M2: l.M2 } : {}),
-  ...(l.M1y !== undefined ? { M1y: l.M1y } : {}),
-  ...(l.M2y !== undefined ? { M2y: l.M2y } : {}),
-});
+const END_KEYS = ['M1', 'M2', 'M1y', 'M2y', 'M01', 'M02', 'M01y', 'M02y'] as const;
+const pick = (l: Partial<Record<(typeof END_KEYS)[number], number>>) =>
+  Object.fromEntries(END_KEYS.filter((k) => l[k] !== undefined).map((k) => [k, l[k]!])) as Partial<Record<(typeof END_KEYS)[number], number>>;
 
 /** After `checkLoads`: the biaxial check of each load on the checked reinforcement; governing load by the exact utilisation. */
 export function finishEffects(rc: ResolvedCheck, fx: CheckEffects, outcome: CheckOutcome): void {

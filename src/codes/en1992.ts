@@ -220,6 +220,7 @@ function resolveEc2(input: BasisInput): Basis {
     barSet: 'en-common',
     factorSummary: `αcc ${alphaCc} · γc ${gammaC} · γs ${gammaS} (${nonDefault.length > 0 ? 'not all recommended: check the NA' : 'recommended'})`,
     biaxialExponent: en1992BiaxialExponent, // 5.8.9(4) Eq. 5.39
+    biaxialReferenceLoad: (Ac: number, As: number) => Ac * fcd + As * fyd, // 5.8.9(4): NRd = Ac·fcd + As·fyd
     slendernessMethod: 'nominal-curvature-en1992', // 5.8.8
     parameters: {
       fcd: r4(fcd),
@@ -244,7 +245,11 @@ function resolveEc2(input: BasisInput): Basis {
       lawName === 'rectangular-block'
         ? `Concrete: rectangular block η·fcd over λ·x with λ = ${fmt(t.lambda)}, η = ${fmt(t.eta)} (3.1.7(3)), strain limits εcu2 and εc2 as for the parabola–rectangle law; the 10 % reduction of η·fcd for compression zones that narrow toward the extreme fibre (circles) is not applied; use the parabola–rectangle law for circular sections.`
         : `Concrete: parabola–rectangle with εc2 = ${fmt(t.epsC2 * 1000)} ‰, εcu2 = ${fmt(t.epsCu2 * 1000)} ‰, n = ${fmt(t.n)} (3.1.7(1), Table 3.1); tensile strength neglected (6.1(2)).`,
-      `Strain limits per 6.1(5) and Fig. 6.1: εcu2 at the compression face while x ≤ h; for x > h the profile pivots about εc2 at (1 − εc2/εcu2)·h, so pure compression is a uniform εc2 (steel stress σs(εc2) = ${fmt(design.squash.steelStress)} MPa, not fyd).`,
+      `Strain limits per 6.1(5) and Fig. 6.1: εcu2 at the compression face while x ≤ h; for x > h the profile pivots about εc2 at (1 − εc2/εcu2)·h, so pure compression is a uniform εc2 (${
+        design.squash.steelStress < fyd * (1 - 1e-9)
+          ? `steel stress σs(εc2) = Es·εc2 = ${fmt(design.squash.steelStress)} MPa, below fyd = ${fmt(fyd)} MPa`
+          : `εc2 = ${fmt(t.epsC2 * 1000)} ‰ ≥ εyd = ${fmt(epsYd * 1000)} ‰, so the steel has yielded: σs(εc2) = ${fmt(design.squash.steelStress)} MPa${branch === 'inclined' ? ' on the inclined branch' : ' = fyd'}`
+      }).`,
       branch === 'inclined'
         ? `Reinforcement: inclined top branch to k·fyd at εuk, k = ${k}, εuk = ${epsUk}, limited to εud = 0.9·εuk = ${fmt(epsUd)} (3.2.7(2)a, pivot A of Fig. 6.1), Es = ${Es} MPa.`
         : `Reinforcement: horizontal top branch at fyd, no strain limit (3.2.7(2)b), Es = ${Es} MPa (3.2.7(4)).`,

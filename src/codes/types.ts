@@ -147,6 +147,12 @@ export interface Basis {
    * documented exponent.
    */
   biaxialExponent?(axialRatio: number, shape: ShapeKind): BiaxialExponent;
+  /**
+   * The axial resistance the exponent's ratio divides by, for gross area Ac and steel area As
+   * (EN 1992-1-1 5.8.9(4): NRd = Ac·fcd + As·fyd). Optional: without it the ratio is Pu/Po of the
+   * design model (the section's squash load).
+   */
+  biaxialReferenceLoad?(grossArea: number, steelArea: number): number;
   /** second-order method for slender columns the basis offers (src/design/slenderness.ts); none when absent */
   readonly slendernessMethod?: SlendernessMethodId;
 }

@@ -34,14 +34,80 @@ export interface SlendernessInput {
   eiOption?: EiOption;
   /** transverse loads between supports: Cm = 1.0 (ACI 318-19 6.6.4.5.3(b)) */
   transverseLoads?: boolean;
-  /** EN 1992-1-1 5.8.4 effective creep ratio φef (default 0) */
+  /**
+   * EN 1992-1-1 5.8.4 effective creep ratio φef. When not given, 5.8.3.1(1) takes A = 0.7, and the
+   * curvature factor Kφ (5.8.8.3(4)) uses the φef that A = 0.7 stands for, (1/0.7 − 1)/0.2 = 2.14.
+   */
   creepRatio?: number;
 }
+
+/**
+ * How the end moments of a method are signed and which flags and load-file columns carry them.
+ * ACI 318-19 6.2.5.1: M1/M2 negative in single curvature. EN 1992-1-1 5.8.3.1(1): rm = M01/M02
+ * positive when both end moments have the same sign (single curvature).
+ */
+export interface EndMomentConvention {
+  /** flag of the smaller end moment about x, e.g. "--m1" */
+  smallerFlag: string;
+  largerFlag: string;
+  smallerFlagY: string;
+  largerFlagY: string;
+  /** load-file columns, e.g. "M1", "M2", "M1y", "M2y" */
+  columns: readonly [string, string, string, string];
+  /** sign of the smaller moment relative to the larger in single curvature */
+  singleCurvature: 'opposite-sign' | 'same-sign';
+  /** the rule as text with its clause, for help and errors */
+  rule: string;
+}
+
+export const OPPOSITE_SIGN_END_MOMENTS: EndMomentConvention = {
+  smallerFlag: '--m1',
+  largerFlag: '--m2',
+  smallerFlagY: '--m1-y',
+  largerFlagY: '--m2-y',
+  columns: ['M1', 'M2', 'M1y', 'M2y'],
+  singleCurvature: 'opposite-sign',
+  rule: 'M1 negative in single curvature (ACI 318-19 6.2.5.1)',
+};
+
+export const SAME_SIGN_END_MOMENTS: EndMomentConvention = {
+  smallerFlag: '--m01',
+  largerFlag: '--m02',
+  smallerFlagY: '--m01-y',
+  largerFlagY: '--m02-y',
+  columns: ['M01', 'M02', 'M01y', 'M02y'],
+  singleCurvature: 'same-sign',
+  rule: 'M01 and M02 of the same sign in single curvature, rm = M01/M02 > 0 (EN 1992-1-1 5.8.3.1(1))',
+};
+
+/** The end-moment convention of the basis's slenderness method (opposite-sign where it declares none). */
+export function endMomentConvention(basis: Basis): EndMomentConvention {
+  return basis.slendernessMethod === 'nominal-curvature-en1992' ? SAME_SIGN_END_MOMENTS : OPPOSITE_SIGN_END_MOMENTS;
+}
+
+/**
+ * The smaller end moment in pmchart's internal sign (ACI 318-19 6.2.5.1: negative in single curvature)
+ * from end moments given in the same-sign convention (EN 1992-1-1 5.8.3.1: M01, M02 with |M02| ≥ |M01|).
+ */
+export function fromSameSign(M01: number, M02: number): { M1: number; M2: number } {
+  const s = M02 < 0 ? -1 : 1;
+  return { M1: -M01 * s, M2: Math.abs(M02) };
+}
+
+/** EN 1992-1-1 5.8.3.1(1): A = 0.7 "if φef is not known". */
+export const EN_A_UNKNOWN_CREEP = 0.7;
+/** The φef for which A = 1/(1 + 0.2φef) = 0.7, used for Kφ when φef is not given (pmchart's conservative choice). */
+export const EN_CREEP_FOR_A_UNKNOWN = (1 / EN_A_UNKNOWN_CREEP - 1) / 0.2;
 
 /** The section seen from the bending axis: depth h in the bending plane, width, bars (centroidal; y toward the compression face). */
 export interface SlendernessSection {
   shape: Shape;
   bars: readonly Bar[];
+  /**
+   * true when the bars only mark positions (no reinforcement chosen yet): their areas give the radius of
+   * gyration of the steel (EN 1992-1-1 5.8.8.3(2)) but not its amount, so ω is taken as unknown.
+   */
+  positionsOnly?: boolean;
 }
 
 export interface SlendernessStep {
@@ -70,12 +136,12 @@ export interface SlendernessResult {
 /** The same section seen for bending about the y axis: b and h swapped, bar x and y swapped. */
 export function aboutYAxis(section: SlendernessSection): SlendernessSection {
   const shape: Shape = section.shape.kind === 'rectangle' ? { kind: 'rectangle', b: section.shape.h, h: section.shape.b } : section.shape;
-  return { shape, bars: section.bars.map((b) => ({ x: b.y, y: b.x, area: b.area })) };
+  return { ...section, shape, bars: section.bars.map((b) => ({ x: b.y, y: b.x, area: b.area })) };
 }
 
 /** Runs the method the basis declares. */
 export function slendernessCheck(basis: Basis, section: SlendernessSection, input: SlendernessInput): SlendernessResult {
-  validate(input);
+  validate(input, endMomentConvention(basis));
   if (!(input.Pu > 0)) {
     return {
       method: 'no axial compression',
@@ -98,10 +164,10 @@ export function slendernessCheck(basis: Basis, section: SlendernessSection, inpu
   }
 }
 
-function validate(i: SlendernessInput): void {
+function validate(i: SlendernessInput, conv: EndMomentConvention): void {
   if (!(i.effectiveLength > 0)) throw new PmError(ERROR_CODES.outOfRange, '--klu', 'must be greater than 0', { value: i.effectiveLength });
-  if (!(i.M2 >= 0)) throw new PmError(ERROR_CODES.outOfRange, '--m2', 'must be ≥ 0 (the larger end moment, given positive)', { value: i.M2 });
-  if (Math.abs(i.M1) > i.M2 * (1 + 1e-9)) throw new PmError(ERROR_CODES.outOfRange, '--m1', 'must satisfy |M1| ≤ M2', { value: i.M1 });
+  if (!(i.M2 >= 0)) throw new PmError(ERROR_CODES.outOfRange, conv.largerFlag, 'must be ≥ 0 (the larger end moment, given positive)', { value: i.M2 });
+  if (Math.abs(i.M1) > i.M2 * (1 + 1e-9)) throw new PmError(ERROR_CODES.outOfRange, conv.smallerFlag, `must not exceed ${conv.largerFlag} in magnitude`, { value: i.M1 });
   if (i.betaDns !== undefined && !(i.betaDns >= 0 && i.betaDns <= 1)) throw new PmError(ERROR_CODES.outOfRange, '--beta-dns', 'is outside 0–1', { value: i.betaDns, allowed: '0–1' });
   if (i.creepRatio !== undefined && !(i.creepRatio >= 0 && i.creepRatio <= 5)) throw new PmError(ERROR_CODES.outOfRange, '--creep', 'is outside 0–5', { value: i.creepRatio, allowed: '0–5' });
 }
@@ -230,7 +296,7 @@ export function aciMomentMagnification(basis: Basis, section: SlendernessSection
 
 /**
  * EN 1992-1-1 5.8.8 nominal curvature for one axis (SI internal units N, mm; formulas in MPa and mm).
- * 5.8.3.1 Eq. 5.13N λlim = 20·A·B·C/√n with A = 1/(1 + 0.2φef), B = √(1 + 2ω), C = 1.7 − rm;
+ * 5.8.3.1 Eq. 5.13N λlim = 20·A·B·C/√n with A = 1/(1 + 0.2φef) (0.7 when φef is not known), B = √(1 + 2ω), C = 1.7 − rm;
  * 5.2(7) imperfection ei = l0/400 (5.2(9) Note, recommended θi); 6.1(4) e0 = max(h/30, 20 mm);
  * 5.8.8.2(2) Eq. 5.32 M0e = 0.6M02 + 0.4M01 ≥ 0.4M02; 5.8.8.3 Eq. 5.34–5.37: 1/r = Kr·Kφ·εyd/(0.45d),
  * Kr = (nu − n)/(nu − nbal) ≤ 1, nbal = 0.4, Kφ = 1 + β·φef ≥ 1, β = 0.35 + fck/200 − λ/150;
@@ -246,7 +312,8 @@ export function enNominalCurvature(basis: Basis, section: SlendernessSection, in
   const { shape, bars } = section;
   const h = L(depthOf(shape));
   const Ac = grossA(shape) * systemFactor('length', units, 'si') ** 2;
-  const As = bars.reduce((s, b) => s + b.area, 0) * systemFactor('length', units, 'si') ** 2;
+  const reinforcementKnown = section.positionsOnly !== true;
+  const As = reinforcementKnown ? bars.reduce((s, b) => s + b.area, 0) * systemFactor('length', units, 'si') ** 2 : 0;
   const fcd = stressToMPa(basis.normalisingStress, units);
   const fyd = stressToMPa(basis.design.steel.yieldStress, units);
   const fck = stressToMPa(basis.fc, units);
@@ -255,7 +322,8 @@ export function enNominalCurvature(basis: Basis, section: SlendernessSection, in
   const NEd = F(input.Pu);
   const M02 = input.M2 * systemFactor('moment', units, 'si');
   const M01 = -input.M1 * systemFactor('moment', units, 'si'); // EN: same sign in single curvature
-  const phiEf = input.creepRatio ?? 0;
+  const creepKnown = input.creepRatio !== undefined;
+  const phiEf = input.creepRatio ?? EN_CREEP_FOR_A_UNKNOWN;
 
   const i = shape.kind === 'rectangle' ? h / Math.sqrt(12) : h / 4;
   const lambda = l0 / i;
@@ -264,14 +332,24 @@ export function enNominalCurvature(basis: Basis, section: SlendernessSection, in
   const n = NEd / (Ac * fcd);
   const omega = (As * fyd) / (Ac * fcd);
   steps.push({ label: 'n = NEd/(Ac·fcd)', value: n });
-  steps.push({ label: 'ω = As·fyd/(Ac·fcd)', value: omega });
+  steps.push({
+    label: reinforcementKnown ? 'ω = As·fyd/(Ac·fcd)' : 'ω = 0: no reinforcement given, so B = 1 (the lower bound of B = √(1 + 2ω), conservative)',
+    value: omega,
+  });
   const rm = M02 > 0 ? M01 / M02 : 1;
-  const A = 1 / (1 + 0.2 * phiEf);
+  const A = creepKnown ? 1 / (1 + 0.2 * phiEf) : EN_A_UNKNOWN_CREEP;
   const B = Math.sqrt(1 + 2 * omega);
   const C = 1.7 - rm;
   const lambdaLim = n > 0 ? (20 * A * B * C) / Math.sqrt(n) : Infinity;
-  steps.push({ label: 'rm = M01/M02 (positive in single curvature)', value: rm });
-  steps.push({ label: 'λlim = 20·A·B·C/√n, A = 1/(1 + 0.2φef), B = √(1 + 2ω), C = 1.7 − rm (5.8.3.1 Eq. 5.13N)', value: lambdaLim });
+  steps.push({
+    label: `rm = M01/M02, positive when both end moments have the same sign (5.8.3.1(1)): ${rm > 0 ? 'single' : rm < 0 ? 'double' : 'no'} curvature`,
+    value: rm,
+  });
+  steps.push({
+    label: creepKnown ? 'A = 1/(1 + 0.2·φef) (5.8.3.1(1))' : 'A = 0.7: φef not given (--creep), the value 5.8.3.1(1) takes when φef is not known',
+    value: A,
+  });
+  steps.push({ label: 'λlim = 20·A·B·C/√n, B = √(1 + 2ω), C = 1.7 − rm (5.8.3.1 Eq. 5.13N)', value: lambdaLim });
   const neglected = lambda < lambdaLim;
   steps.push({ label: 'second-order effects may be ignored: λ < λlim (5.8.3.1(1))', value: neglected });
 
@@ -288,18 +366,33 @@ export function enNominalCurvature(basis: Basis, section: SlendernessSection, in
     return { method: 'EN 1992-1-1 5.8.8 nominal curvature', neglected, delta: 1, magnifiedMoment: Mback(mEnd), firstOrderMoment: Mback(mEnd), ok: true, warnings, steps };
   }
 
-  const is = As > 0 ? Math.sqrt(bars.reduce((s, b) => s + b.area * b.y * b.y, 0) / bars.reduce((s, b) => s + b.area, 0)) * systemFactor('length', units, 'si') : 0;
+  const barArea = bars.reduce((s, b) => s + b.area, 0);
+  const is = barArea > 0 ? Math.sqrt(bars.reduce((s, b) => s + b.area * b.y * b.y, 0) / barArea) * systemFactor('length', units, 'si') : 0;
   const d = h / 2 + is;
-  steps.push({ label: 'd = h/2 + is, is = radius of gyration of the reinforcement (5.8.8.3(2))', value: d, unit: 'mm' });
+  steps.push({
+    label: `d = h/2 + is, is = radius of gyration of the reinforcement (5.8.8.3(2))${reinforcementKnown ? '' : ', from the bar positions of γ and the arrangement'}`,
+    value: d,
+    unit: 'mm',
+  });
   const epsYd = fyd / Es;
   const invR0 = epsYd / (0.45 * d);
   steps.push({ label: '1/r0 = εyd/(0.45·d) (5.8.8.3(1))', value: invR0, unit: '1/mm' });
   const nu = 1 + omega;
-  const Kr = Math.min(1, (nu - n) / (nu - 0.4));
-  steps.push({ label: 'Kr = (nu − n)/(nu − nbal) ≤ 1, nu = 1 + ω, nbal = 0.4 (5.8.8.3(3) Eq. 5.36)', value: Kr });
+  const Kr = reinforcementKnown ? Math.min(1, (nu - n) / (nu - 0.4)) : 1;
+  steps.push({
+    label: reinforcementKnown
+      ? 'Kr = (nu − n)/(nu − nbal) ≤ 1, nu = 1 + ω, nbal = 0.4 (5.8.8.3(3) Eq. 5.36)'
+      : 'Kr = 1: no reinforcement given, the upper bound of Eq. 5.36 (5.8.8.3(3), conservative)',
+    value: Kr,
+  });
   const beta = 0.35 + fck / 200 - lambda / 150;
   const Kphi = Math.max(1, 1 + beta * phiEf);
-  steps.push({ label: 'Kφ = 1 + β·φef ≥ 1, β = 0.35 + fck/200 − λ/150 (5.8.8.3(4) Eq. 5.37)', value: Kphi });
+  steps.push({
+    label: creepKnown
+      ? 'Kφ = 1 + β·φef ≥ 1, β = 0.35 + fck/200 − λ/150 (5.8.8.3(4) Eq. 5.37)'
+      : `Kφ = 1 + β·φef ≥ 1, β = 0.35 + fck/200 − λ/150 (5.8.8.3(4) Eq. 5.37), φef = ${EN_CREEP_FOR_A_UNKNOWN.toFixed(3)} (the value A = 0.7 stands for; φef not given)`,
+    value: Kphi,
+  });
   const invR = Math.max(0, Kr) * Kphi * invR0;
   steps.push({ label: '1/r = Kr·Kφ·1/r0 (Eq. 5.34)', value: invR, unit: '1/mm' });
   const e2 = (invR * l0 * l0) / 10;
