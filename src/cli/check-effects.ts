@@ -106,8 +106,9 @@ export function resolveEffects(o: EffectsFlags, rc: ResolvedCheck, single: boole
       transverseLoads: o.transverseLoads === true,
       ...(o.creep !== undefined ? { creepRatio: plain('--creep', o.creep, 0, 5) } : {}),
     });
-    if (o.betaDns === undefined && rc.section.basis.slendernessMethod === 'moment-magnification-aci318') {
-      throw new PmError(ERROR_CODES.missing, '--beta-dns', 'is required with --klu (ACI 318-19 6.6.4.4.4: sustained ÷ total factored axial load, 0–1)');
+    const magnifier = rc.section.basis.slendernessMethod;
+    if (o.betaDns === undefined && magnifier !== undefined && magnifier.startsWith('moment-magnification')) {
+      throw new PmError(ERROR_CODES.missing, '--beta-dns', 'is required with --klu (sustained ÷ total factored axial load, 0–1: ACI 318-19 βdns, AS 3600 βd, CSA A23.3 βd)');
     }
     slenderness = { x: member(len('--klu', o.klu)), ...(o.kluY !== undefined ? { y: member(len('--klu-y', o.kluY)) } : {}) };
     const moment = (path: string, t: string | undefined) => (t === undefined ? undefined : parseQuantity(t, 'moment', u, path));
@@ -294,7 +295,7 @@ export function effectsText(rc: ResolvedCheck, fx: CheckEffects | undefined, out
         rows.push([
           r.id,
           axis,
-          f(st('kℓu/r') as number ?? (st('λ = l0/i') as number), 3),
+          f(st('kℓu/r') as number ?? (st('λ = l0/i') as number) ?? (st('Le/r') as number), 3),
           f(st('limit') as number ?? (st('λlim') as number), 3),
           s.neglected ? 'yes' : 'no',
           f(s.delta, 4),

@@ -63,7 +63,7 @@ export const GAMMA_RANGE: [number, number] = [0.3, 0.95];
 /** Registers the shared section flags on a command. */
 export function addSectionOptions(cmd: Command): Command {
   return cmd
-    .option('--code <id>', 'design basis: aci318-19, aci318-14, en1992-1-1, csa-a23.3-19', 'aci318-19')
+    .option('--code <id>', 'design basis: aci318-19, aci318-14, en1992-1-1, csa-a23.3-19, as3600-2018', 'aci318-19')
     .option('--units <system>', "unit system: us (kip, in, ksi) or si (kN, mm, MPa); default: the basis's first (us for ACI, si otherwise)")
     .option('--fc <stress>', "specified concrete strength f′c (fck), e.g. 4, 4ksi, 28MPa")
     .option('--fy <stress>', 'specified yield strength fy (fyk), e.g. 60, 420MPa')

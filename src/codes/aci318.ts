@@ -141,7 +141,7 @@ function resolveAci(edition: Edition, input: BasisInput): Basis {
     minimumBarCount: () => (transverse === 'spiral' ? 6 : 4),
     minimumBarRule: `at least ${transverse === 'spiral' ? 6 : 4} bars (${edition.title} 10.7.3.1, from memory)`,
     clearSpacingRule: `clear spacing ≥ max(${units === 'us' ? '1.5 in' : '38 mm'}, 1.5·db, 4/3·aggregate) (${edition.title} 25.2.3)`,
-    barSet: units === 'us' ? 'astm-a615' : 'metric',
+    barSet: units === 'us' ? 'astm-a615' : 'astm-a615m', // ACI in SI: ASTM A615M soft-metric sizes
     factorSummary: `φ ${phiC}–0.90 by εt (${edition.clause}) · Pn,max ${capRatio}·Po (22.4.2.1)`,
     parameters: {
       'β1': Number(beta1.toFixed(4)),

@@ -1,6 +1,7 @@
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { DISPLAY_UNITS } from '../units/index.js';
 import { ACI_318_14, ACI_318_19 } from './aci318.js';
+import { AS_3600_2018 } from './as3600.js';
 import { CSA_A23_3_19 } from './csa-a23.js';
 import { EN_1992_1_1 } from './en1992.js';
 import type { Basis, BasisInput, CodeId, DesignCode } from './types.js';
@@ -11,6 +12,7 @@ export const DESIGN_CODES: Partial<Record<CodeId, DesignCode>> = {
   'aci318-14': ACI_318_14,
   'en1992-1-1': EN_1992_1_1,
   'csa-a23.3-19': CSA_A23_3_19,
+  'as3600-2018': AS_3600_2018,
 };
 
 export function designCode(id: string, path = '--code'): DesignCode {

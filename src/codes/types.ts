@@ -6,7 +6,7 @@ import type { ConcreteLaw, SteelLaw } from '../materials/types.js';
 import type { ShapeKind } from '../section/types.js';
 import type { UnitSystem } from '../units/index.js';
 
-export const CODE_IDS = ['aci318-19', 'aci318-14', 'en1992-1-1', 'csa-a23.3-19'] as const;
+export const CODE_IDS = ['aci318-19', 'aci318-14', 'en1992-1-1', 'csa-a23.3-19', 'as3600-2018'] as const;
 export type CodeId = (typeof CODE_IDS)[number];
 export const isCodeId = (s: unknown): s is CodeId => CODE_IDS.includes(s as CodeId);
 
@@ -78,7 +78,7 @@ export interface BasisOptions {
   steelEpsUk?: number;
 }
 
-export const BAR_SET_IDS = ['astm-a615', 'metric', 'en-common', 'csa-g30.18'] as const;
+export const BAR_SET_IDS = ['astm-a615', 'metric', 'en-common', 'csa-g30.18', 'as4671-d500n', 'astm-a615m'] as const;
 export type BarSetId = (typeof BAR_SET_IDS)[number];
 
 export type StrainClass = 'compression-controlled' | 'transition' | 'tension-controlled';
@@ -153,6 +153,12 @@ export interface Basis {
    * design model (the section's squash load).
    */
   biaxialReferenceLoad?(grossArea: number, steelArea: number): number;
+  /**
+   * true where the code replaces the curve between the decompression point (εt = 0) and the squash load
+   * by a straight line (AS 3600-2018 10.6.2.3): for c beyond the extreme tension bar the section's
+   * response is the linear blend of the decompression response and the squash load. Default false.
+   */
+  readonly linearTransitionToSquash?: boolean;
   /** second-order method for slender columns the basis offers (src/design/slenderness.ts); none when absent */
   readonly slendernessMethod?: SlendernessMethodId;
 }
@@ -163,7 +169,7 @@ export interface BiaxialExponent {
   source: string;
 }
 
-export const SLENDERNESS_METHODS = ['moment-magnification-aci318', 'nominal-curvature-en1992'] as const;
+export const SLENDERNESS_METHODS = ['moment-magnification-aci318', 'nominal-curvature-en1992', 'moment-magnification-as3600', 'moment-magnification-csa-a23'] as const;
 export type SlendernessMethodId = (typeof SLENDERNESS_METHODS)[number];
 
 export interface BasisSymbols {
@@ -182,6 +188,10 @@ export interface BasisSymbols {
   concreteStrength: string;
   /** symbol of the specified yield strength of the bars: "fy" (ACI, CSA), "fyk" (EN) */
   steelStrength: string;
+  /** symbol of the factored axial load ("N*" for AS 3600); absent: "Pu" */
+  axialLoad?: string;
+  /** symbol of the factored moment ("M*" for AS 3600); absent: "Mu" */
+  momentLoad?: string;
   /** symbol of the dimensionless axial value P/(normalising stress·Ag) where the code's practice has one ("ν" for EN); absent: the ratio is spelled out */
   dimensionlessAxial?: string;
   /** symbol of the dimensionless moment M/(normalising stress·Ag·h) ("μ" for EN); absent: spelled out */

@@ -6,6 +6,7 @@
  * The basis names its method (`Basis.slendernessMethod`); nothing here branches on a code's name.
  * Every step is kept in the result for the report. Pure: no I/O.
  */
+import { biaxialResultant, prepareBiaxial } from '../analysis/biaxial.js';
 import type { Basis } from '../codes/types.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import type { Bar, Shape } from '../section/types.js';
@@ -80,9 +81,30 @@ export const SAME_SIGN_END_MOMENTS: EndMomentConvention = {
   rule: 'M01 and M02 of the same sign in single curvature, rm = M01/M02 > 0 (EN 1992-1-1 5.8.3.1(1))',
 };
 
+/** CSA A23.3-19 10.15.3.2 (from memory): M1/M2 positive in single curvature, the same-sign convention. */
+export const CSA_END_MOMENTS: EndMomentConvention = {
+  ...SAME_SIGN_END_MOMENTS,
+  rule: 'end moments of the same sign in single curvature, M1/M2 > 0 (CSA A23.3-19 10.15.3.2, from memory)',
+};
+
+/** AS 3600-2018 10.3.1, 10.4.2 (from memory): M1* ÷ M2* negative in single curvature, as in ACI 318. */
+export const AS_END_MOMENTS: EndMomentConvention = {
+  ...OPPOSITE_SIGN_END_MOMENTS,
+  rule: 'M1* negative in single curvature (AS 3600-2018 10.4.2, from memory)',
+};
+
 /** The end-moment convention of the basis's slenderness method (opposite-sign where it declares none). */
 export function endMomentConvention(basis: Basis): EndMomentConvention {
-  return basis.slendernessMethod === 'nominal-curvature-en1992' ? SAME_SIGN_END_MOMENTS : OPPOSITE_SIGN_END_MOMENTS;
+  switch (basis.slendernessMethod) {
+    case 'nominal-curvature-en1992':
+      return SAME_SIGN_END_MOMENTS;
+    case 'moment-magnification-csa-a23':
+      return CSA_END_MOMENTS;
+    case 'moment-magnification-as3600':
+      return AS_END_MOMENTS;
+    default:
+      return OPPOSITE_SIGN_END_MOMENTS;
+  }
 }
 
 /**
@@ -159,6 +181,10 @@ export function slendernessCheck(basis: Basis, section: SlendernessSection, inpu
       return aciMomentMagnification(basis, section, input);
     case 'nominal-curvature-en1992':
       return enNominalCurvature(basis, section, input);
+    case 'moment-magnification-as3600':
+      return as3600MomentMagnification(basis, section, input);
+    case 'moment-magnification-csa-a23':
+      return csaMomentMagnification(basis, section, input);
     default:
       throw new PmError(ERROR_CODES.notPossible, '--klu', `is not supported: ${basis.title} declares no slenderness method in pmchart`);
   }
@@ -413,4 +439,152 @@ export function enNominalCurvature(basis: Basis, section: SlendernessSection, in
     warnings,
     steps,
   };
+}
+
+/**
+ * AS 3600-2018 braced column moment magnifier for one axis (SI: N, mm, N·mm). From memory of the standard:
+ * 10.5.2 r = 0.3D (rectangle), 0.25D (circle); 10.3.1(b) short braced column when Le/r ≤ 25 or
+ * Le/r ≤ αc(38 − f′c/15)(1 + M1* ÷ M2*), αc = √(2.25 − 2.5·N* ÷ (0.6Nuo)) for N* ÷ (0.6Nuo) ≥ 0.15, else
+ * √(1/(3.5·N* ÷ (0.6Nuo))); 10.1.2 M2* ≥ N*·0.05D; 10.4.2 km = 0.6 − 0.4·M1* ÷ M2* ≥ 0.4 (1.0 with transverse
+ * loads); 10.4.4 Nc = (π²/Le²)·182·do·(φ·Mub)/(1 + βd) with φ = 0.6 and Mub the balanced moment;
+ * 10.4.2 δb = km/(1 − N* ÷ Nc) ≥ 1.
+ */
+export function as3600MomentMagnification(basis: Basis, section: SlendernessSection, input: SlendernessInput): SlendernessResult {
+  const method = 'AS 3600-2018 10.4 moment magnifier (braced)';
+  const steps: SlendernessStep[] = [];
+  const warnings: string[] = [];
+  const { shape } = section;
+  const D = depthOf(shape);
+  const Ag = grossA(shape);
+  const { effectiveLength: Le, M1, M2, Pu: N } = input;
+  const ratio = M2 > 0 ? M1 / M2 : -1;
+  const knownBars = section.positionsOnly ? section.bars.map((b) => ({ ...b, area: 0 })) : section.bars;
+  const As = knownBars.reduce((s, b) => s + b.area, 0);
+  const Nuo = basis.nominal.squash.concreteStress * (Ag - As) + basis.nominal.squash.steelStress * As;
+
+  const r = shape.kind === 'rectangle' ? 0.3 * D : 0.25 * D;
+  steps.push({ label: `r = ${shape.kind === 'rectangle' ? '0.3·D' : '0.25·D'} (10.5.2)`, value: r, unit: 'mm' });
+  const slenderness = Le / r;
+  steps.push({ label: 'Le/r', value: slenderness });
+  steps.push({ label: 'M1*/M2* (negative in single curvature, 10.3.1)', value: ratio });
+  steps.push({ label: `Nuo = α1·f′c·(Ag − As) + fsy·As (10.6.2.2)${section.positionsOnly ? ', bars not given: As = 0' : ''}`, value: Nuo, unit: 'N' });
+  const q = N / (0.6 * Nuo);
+  const alphaC = q >= 0.15 ? Math.sqrt(Math.max(0, 2.25 - 2.5 * q)) : Math.sqrt(1 / (3.5 * q));
+  steps.push({ label: 'αc = √(2.25 − 2.5·N*/(0.6Nuo)) for N*/(0.6Nuo) ≥ 0.15, else √(1/(3.5·N*/(0.6Nuo))) (10.3.1)', value: alphaC });
+  const limit = Math.max(25, alphaC * (38 - basis.fc / 15) * (1 + ratio));
+  steps.push({ label: 'limit max(25, αc·(38 − f′c/15)·(1 + M1*/M2*)) (10.3.1(b))', value: limit });
+  const neglected = slenderness <= limit * (1 + 1e-12);
+  steps.push({ label: 'short column: slenderness may be neglected (10.3.1)', value: neglected });
+  const Mmin = N * 0.05 * D;
+  steps.push({ label: 'M*min = N*·0.05·D (10.1.2)', value: Mmin, unit: 'N·mm' });
+  const M2c = Math.max(M2, Mmin);
+  steps.push({ label: 'M2* used = max(M2*, N*·0.05·D)', value: M2c, unit: 'N·mm' });
+  if (neglected) return { method, neglected, delta: 1, magnifiedMoment: M2c, firstOrderMoment: M2c, ok: true, warnings, steps };
+
+  // balanced moment Mub at kuo = εcu/(εcu + εsy) about the bending axis (bars y toward the compression face)
+  const sec = prepareBiaxial(basis, shape, knownBars);
+  const yMin = section.bars.length > 0 ? Math.min(...section.bars.map((b) => b.y)) : -0.4 * D;
+  const dO = D / 2 - yMin;
+  steps.push({ label: `do = depth of the extreme tension bar${section.positionsOnly ? ' (bar positions from γ)' : ''}`, value: dO, unit: 'mm' });
+  const epsCu = basis.profile(1, 1).top;
+  const epsSy = basis.nominal.steel.yieldStress / basis.Es;
+  const kuoB = epsCu / (epsCu + epsSy);
+  steps.push({ label: 'kuo balanced = εcu/(εcu + εsy)', value: kuoB });
+  const Mub = Math.abs(biaxialResultant(sec, 0, kuoB * dO, 'nominal').Mx);
+  steps.push({ label: `Mub, balanced moment${section.positionsOnly ? ' of the concrete alone (bars not given, conservative)' : ''}`, value: Mub, unit: 'N·mm' });
+  const betaD = input.betaDns ?? 0;
+  steps.push({ label: 'βd, sustained ÷ total axial load (10.4.4)', value: betaD });
+  const Nc = ((Math.PI ** 2) / (Le * Le)) * ((182 * dO * 0.6 * Mub) / (1 + betaD));
+  steps.push({ label: 'Nc = (π²/Le²)·182·do·(φ·Mub)/(1 + βd), φ = 0.6 (10.4.4)', value: Nc, unit: 'N' });
+  let km: number;
+  if (input.transverseLoads) {
+    km = 1;
+    steps.push({ label: 'km = 1.0, transverse loads between the ends (10.4.2)', value: km });
+  } else {
+    km = Math.max(0.4, 0.6 - 0.4 * ratio);
+    steps.push({ label: 'km = 0.6 − 0.4·M1*/M2* ≥ 0.4 (10.4.2)', value: km });
+  }
+  const stable = N < Nc;
+  const delta = stable ? Math.max(1, km / (1 - N / Nc)) : Infinity;
+  steps.push({ label: 'N*/Nc', value: N / Nc });
+  steps.push({ label: 'δb = km/(1 − N*/Nc) ≥ 1 (10.4.2)', value: delta });
+  if (!stable) warnings.push('N* ≥ Nc: the column is unstable by AS 3600-2018 10.4.2; enlarge the section or brace it');
+  const magnified = delta * M2c;
+  steps.push({ label: 'M* = δb·M2* (10.4.2)', value: magnified, unit: 'N·mm' });
+  return { method, neglected: false, delta, magnifiedMoment: magnified, firstOrderMoment: M2c, ok: stable, warnings, steps };
+}
+
+/** CSA A23.3-19 8.6.2.3 (from memory): Ec = 4500·√f′c MPa for normal-density concrete. */
+export const csaEc = (fc: number): number => 4500 * Math.sqrt(fc);
+
+/**
+ * CSA A23.3-19 non-sway magnifier for one axis (SI: N, mm, N·mm). From memory of the standard:
+ * 10.14.2 r = 0.3h (rectangle), 0.25D (circle); 10.15.2 neglect when kℓu/r ≤ (25 − 10·M1/M2)/√(Pf/(f′c·Ag)),
+ * M1/M2 positive in single curvature; 10.15.3.1 EI = 0.4·Ec·Ig/(1 + βd) (option b: (0.2·Ec·Ig + Es·Ist)/(1 + βd)),
+ * Pc = π²EI/(kℓu)², M2 ≥ Pf·(15 + 0.03h); 10.15.3.2 Cm = 0.6 + 0.4·M1/M2 ≥ 0.4 (1.0 with transverse loads);
+ * δ = Cm/(1 − Pf/(φm·Pc)) ≥ 1.0 with φm = 0.75.
+ */
+export function csaMomentMagnification(basis: Basis, section: SlendernessSection, input: SlendernessInput): SlendernessResult {
+  const method = 'CSA A23.3-19 10.15.3 moment magnifier (non-sway)';
+  const steps: SlendernessStep[] = [];
+  const warnings: string[] = [];
+  const { shape, bars } = section;
+  const h = depthOf(shape);
+  const Ag = grossA(shape);
+  const Ig = grossI(shape);
+  const { effectiveLength: klu, Pu: Pf, M2 } = input;
+  const ratio = M2 > 0 ? -input.M1 / M2 : 1; // CSA sign: positive in single curvature
+  const r = shape.kind === 'rectangle' ? 0.3 * h : 0.25 * h;
+  steps.push({ label: `r = ${shape.kind === 'rectangle' ? '0.3·h' : '0.25·D'} (10.14.2)`, value: r, unit: 'mm' });
+  const slenderness = klu / r;
+  steps.push({ label: 'kℓu/r', value: slenderness });
+  steps.push({ label: 'M1/M2 (positive in single curvature, 10.15.2)', value: ratio });
+  const limit = (25 - 10 * ratio) / Math.sqrt(Pf / (basis.fc * Ag));
+  steps.push({ label: 'limit (25 − 10·M1/M2)/√(Pf/(f′c·Ag)) (10.15.2)', value: limit });
+  const neglected = slenderness <= limit * (1 + 1e-12);
+  steps.push({ label: 'slenderness may be neglected (10.15.2)', value: neglected });
+  if (neglected) return { method, neglected, delta: 1, magnifiedMoment: M2, firstOrderMoment: M2, ok: true, warnings, steps };
+
+  const Ec = csaEc(basis.fc);
+  steps.push({ label: 'Ec = 4500·√f′c (8.6.2.3)', value: Ec, unit: 'MPa' });
+  steps.push({ label: 'Ig', value: Ig, unit: 'mm⁴' });
+  const betaD = input.betaDns ?? 0;
+  steps.push({ label: 'βd, factored sustained ÷ total axial load (10.15.3.1)', value: betaD });
+  const M2min = Pf * (15 + 0.03 * h);
+  steps.push({ label: 'M2,min = Pf·(15 + 0.03h) (10.15.3.1)', value: M2min, unit: 'N·mm' });
+  const minimumGoverns = M2min > M2;
+  const M2c = Math.max(M2, M2min);
+  steps.push({ label: 'M2 used = max(M2, M2,min)', value: M2c, unit: 'N·mm' });
+  if (input.eiOption === 'c') throw new PmError(ERROR_CODES.invalidValue, '--ei-option', 'c is ACI 318 only; CSA A23.3-19 10.15.3.1 offers a or b', { value: 'c', allowed: 'a, b' });
+  let EI: number;
+  if ((input.eiOption ?? 'a') === 'b') {
+    const Ist = bars.reduce((s, b) => s + b.area * b.y * b.y, 0);
+    steps.push({ label: 'Ist = Σ As·y²', value: Ist, unit: 'mm⁴' });
+    EI = (0.2 * Ec * Ig + basis.Es * Ist) / (1 + betaD);
+    steps.push({ label: 'EI = (0.2·Ec·Ig + Es·Ist)/(1 + βd) (10.15.3.1)', value: EI, unit: 'N·mm²' });
+  } else {
+    EI = (0.4 * Ec * Ig) / (1 + betaD);
+    steps.push({ label: 'EI = 0.4·Ec·Ig/(1 + βd) (10.15.3.1)', value: EI, unit: 'N·mm²' });
+  }
+  const Pc = (Math.PI ** 2 * EI) / (klu * klu);
+  steps.push({ label: 'Pc = π²·EI/(kℓu)² (10.15.3.1)', value: Pc, unit: 'N' });
+  let Cm: number;
+  if (input.transverseLoads) {
+    Cm = 1;
+    steps.push({ label: 'Cm = 1.0, transverse loads between supports (10.15.3.2)', value: Cm });
+  } else if (minimumGoverns) {
+    Cm = 1;
+    steps.push({ label: 'Cm = 1.0 since M2,min governs (common practice, as ACI 318-19 6.6.4.5.4)', value: Cm });
+  } else {
+    Cm = Math.max(0.4, 0.6 + 0.4 * ratio);
+    steps.push({ label: 'Cm = 0.6 + 0.4·M1/M2 ≥ 0.4 (10.15.3.2)', value: Cm });
+  }
+  const stable = Pf < 0.75 * Pc;
+  const delta = stable ? Math.max(1, Cm / (1 - Pf / (0.75 * Pc))) : Infinity;
+  steps.push({ label: 'Pf/(φm·Pc), φm = 0.75', value: Pf / (0.75 * Pc) });
+  steps.push({ label: 'δ = Cm/(1 − Pf/(φm·Pc)) ≥ 1.0 (10.15.3.1)', value: delta });
+  if (!stable) warnings.push('Pf ≥ 0.75·Pc: the column is unstable by CSA A23.3-19 10.15.3.1; enlarge the section or brace it');
+  const magnified = delta * M2c;
+  steps.push({ label: 'Mc = δ·M2 (10.15.3.1)', value: magnified, unit: 'N·mm' });
+  return { method, neglected: false, delta, magnifiedMoment: magnified, firstOrderMoment: M2c, ok: stable, warnings, steps };
 }
