@@ -109,7 +109,7 @@ function resolveAs3600(input: BasisInput): Basis {
     strainStates: [
       { id: 'decompression', label: 'kuo = 1 (decompression)', epsT: 0 },
       { id: 'balanced', label: `kuo = ${fmt(kuoBalanced)} (balanced, εst = εsy)`, epsT: epsSy },
-      { id: 'tension-controlled', label: 'kuo = 0.36 (φ = 0.85)', epsT: epsTUpper },
+      { id: 'phi-upper', label: 'kuo = 0.36 (φ = 0.85 from here)', epsT: epsTUpper },
     ],
     classify: (epsT: number): StrainClass => (epsT <= epsSy ? 'compression-controlled' : epsT >= epsTUpper ? 'tension-controlled' : 'transition'),
     normalisingStress: fc,
