@@ -5,7 +5,7 @@
 import { readFileSync } from 'node:fs';
 import type { Command } from 'commander';
 import { designCode, resolveBasis } from '../codes/registry.js';
-import { isTransverse, TRANSVERSE_TYPES, type Basis, type BasisOptions, type CapContext, type CodeId } from '../codes/types.js';
+import { COLUMN_USES, isTransverse, TRANSVERSE_TYPES, type Basis, type BasisOptions, type CapContext, type CodeId, type ColumnUse } from '../codes/types.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { barSet, findBar, type BarSize } from '../section/bar-tables.js';
 import { gammaFromCover, sectionDepth, sectionWidth } from '../section/geometry.js';
@@ -31,6 +31,7 @@ export interface SectionFlags {
   customBars?: string;
   transverse?: string;
   alphaCc?: string;
+  columnUse?: string;
   gammaC?: string;
   gammaS?: string;
   concreteLaw?: string;
@@ -81,6 +82,7 @@ export function addSectionOptions(cmd: Command): Command {
     .option('--custom-bars <file>', 'JSON list of {x, y, share}: centroidal position ÷ b (or D) and ÷ h, share of Ast')
     .option('--transverse <type>', 'tied or spiral', 'tied')
     .option('--alpha-cc <value>', 'EN 1992-1-1 αcc (National Annex)')
+    .option('--column-use <use>', 'ACI 318 bar-grade limit by use: gravity (default) or special-seismic (Table 20.2.2.4(a))')
     .option('--gamma-c <value>', 'EN 1992-1-1 γc (National Annex)')
     .option('--gamma-s <value>', 'EN 1992-1-1 γs (National Annex)')
     .option('--concrete-law <law>', 'parabola-rectangle or rectangular-block, where the basis offers both')
@@ -167,6 +169,11 @@ export function resolveSectionFlags(f: SectionFlags, needSize = false): Resolved
     const branches = ['horizontal', 'inclined'] as const;
     if (!branches.includes(f.steelBranch as (typeof branches)[number])) oneOf('--steel-branch', f.steelBranch, branches);
     options.steelBranch = f.steelBranch as (typeof branches)[number];
+  }
+
+  if (f.columnUse !== undefined) {
+    if (!(COLUMN_USES as readonly string[]).includes(f.columnUse)) oneOf('--column-use', f.columnUse, COLUMN_USES);
+    options.columnUse = f.columnUse as ColumnUse;
   }
 
   // ranges are checked by the basis that reads them (EN 1992-1-1 names these flags in its errors)

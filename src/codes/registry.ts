@@ -27,7 +27,11 @@ export function designCode(id: string, path = '--code'): DesignCode {
 }
 
 /** Checks material strengths against the code's limits, then resolves the basis. */
-export function resolveBasis(id: string, input: BasisInput, paths = { code: '--code', fc: '--fc', fy: '--fy' }): Basis {
+export function resolveBasis(
+  id: string,
+  input: BasisInput,
+  paths: { code: string; fc: string; fy: string; columnUse?: string } = { code: '--code', fc: '--fc', fy: '--fy', columnUse: '--column-use' },
+): Basis {
   const code = designCode(id, paths.code);
   if (!code.unitSystems.includes(input.units)) {
     throw new PmError(ERROR_CODES.invalidValue, '--units', `is not available for ${code.title}`, {
@@ -39,5 +43,13 @@ export function resolveBasis(id: string, input: BasisInput, paths = { code: '--c
   const su = DISPLAY_UNITS[input.units].stress;
   requireInRange(paths.fc, input.fc, lim.fc[0], lim.fc[1], su);
   requireInRange(paths.fy, input.fy, lim.fy[0], lim.fy[1], su);
+  const use = input.options?.columnUse ?? 'gravity';
+  const edition = code.yieldLimit?.(input.units, use);
+  if (edition && input.fy > edition.max) {
+    throw new PmError(ERROR_CODES.outOfRange, paths.fy, `exceeds ${edition.rule} (${paths.columnUse ?? '--column-use'} ${use})`, {
+      value: `${input.fy} ${su}`,
+      allowed: `≤ ${edition.max} ${su}`,
+    });
+  }
   return code.resolve(input);
 }

@@ -74,9 +74,17 @@ export interface BasisOptions {
   steelBranch?: 'horizontal' | 'inclined';
   /** EN 1992-1-1 Annex C Table C.1 ratio k = (ft/fy)k for the inclined branch (default 1.08, class B) */
   steelK?: number;
+  /**
+   * What the column is part of, for edition limits on the bar grade (ACI 318-19 Table 20.2.2.4(a)):
+   * 'gravity' (the default) or 'special-seismic' (special moment frames and special structural walls).
+   */
+  columnUse?: ColumnUse;
   /** EN 1992-1-1 Annex C Table C.1 characteristic strain at maximum force εuk (default 0.05, class B); εud = 0.9·εuk (3.2.7(2) Note 1) */
   steelEpsUk?: number;
 }
+
+export const COLUMN_USES = ['gravity', 'special-seismic'] as const;
+export type ColumnUse = (typeof COLUMN_USES)[number];
 
 export const BAR_SET_IDS = ['astm-a615', 'metric', 'en-common', 'csa-g30.18', 'as4671-d500n', 'astm-a615m'] as const;
 export type BarSetId = (typeof BAR_SET_IDS)[number];
@@ -208,5 +216,11 @@ export interface DesignCode {
   readonly symbols: BasisSymbols;
   /** allowed specified strengths in the given system's stress unit */
   limits(units: UnitSystem): { fc: [number, number]; fy: [number, number] };
+  /**
+   * The edition's upper limit on the specified yield strength of longitudinal column bars for a use
+   * (ACI 318-14 and 318-19 Table 20.2.2.4(a)), in the system's stress unit, with the rule as text;
+   * absent where `limits` already says all.
+   */
+  yieldLimit?(units: UnitSystem, use: ColumnUse): { max: number; rule: string };
   resolve(input: BasisInput): Basis;
 }
