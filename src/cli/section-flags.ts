@@ -4,7 +4,7 @@
  */
 import { readFileSync } from 'node:fs';
 import type { Command } from 'commander';
-import { designCode, resolveBasis } from '../codes/registry.js';
+import { designCode, parseStrength, resolveBasis } from '../codes/registry.js';
 import { COLUMN_USES, isTransverse, TRANSVERSE_TYPES, type Basis, type BasisOptions, type CapContext, type CodeId, type ColumnUse } from '../codes/types.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { barSet, findBar, type BarSize } from '../section/bar-tables.js';
@@ -32,6 +32,7 @@ export interface SectionFlags {
   transverse?: string;
   alphaCc?: string;
   columnUse?: string;
+  lapZoneRhoMax?: string;
   gammaC?: string;
   gammaS?: string;
   concreteLaw?: string;
@@ -82,6 +83,7 @@ export function addSectionOptions(cmd: Command): Command {
     .option('--custom-bars <file>', 'JSON list of {x, y, share}: centroidal position ÷ b (or D) and ÷ h, share of Ast')
     .option('--transverse <type>', 'tied or spiral', 'tied')
     .option('--alpha-cc <value>', 'EN 1992-1-1 αcc (National Annex)')
+    .option('--lap-zone-rho-max <ratio>', 'EN 1992-1-1 9.5.2(3): the section is at a lap, As,max = ratio·Ac (0.04–0.08, 0.08 recommended)')
     .option('--column-use <use>', 'ACI 318 bar-grade limit by use: gravity (default) or special-seismic (Table 20.2.2.4(a))')
     .option('--gamma-c <value>', 'EN 1992-1-1 γc (National Annex)')
     .option('--gamma-s <value>', 'EN 1992-1-1 γs (National Annex)')
@@ -171,6 +173,8 @@ export function resolveSectionFlags(f: SectionFlags, needSize = false): Resolved
     options.steelBranch = f.steelBranch as (typeof branches)[number];
   }
 
+  const lap = plainNumber('--lap-zone-rho-max', f.lapZoneRhoMax);
+  if (lap !== undefined) options.lapZoneRhoMax = lap;
   if (f.columnUse !== undefined) {
     if (!(COLUMN_USES as readonly string[]).includes(f.columnUse)) oneOf('--column-use', f.columnUse, COLUMN_USES);
     options.columnUse = f.columnUse as ColumnUse;
@@ -182,8 +186,9 @@ export function resolveSectionFlags(f: SectionFlags, needSize = false): Resolved
   if (steelK !== undefined) options.steelK = steelK;
   if (steelEpsUk !== undefined) options.steelEpsUk = steelEpsUk;
 
-  const fc = parseQuantity(f.fc, 'stress', u, '--fc');
-  const fy = parseQuantity(f.fy, 'stress', u, '--fy');
+  const code = designCode(f.code ?? 'aci318-19');
+  const fc = parseStrength(code, f.fc, 'concrete', u, '--fc');
+  const fy = parseStrength(code, f.fy, 'steel', u, '--fy');
   const basis = resolveBasis(f.code ?? 'aci318-19', { units: u, fc, fy, transverse: transverse as 'tied' | 'spiral', options });
 
   const shapeKind = f.shape ?? 'rectangle';

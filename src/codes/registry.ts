@@ -1,5 +1,5 @@
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
-import { DISPLAY_UNITS } from '../units/index.js';
+import { DISPLAY_UNITS, parseQuantity, type UnitSystem } from '../units/index.js';
 import { ACI_318_14, ACI_318_19 } from './aci318.js';
 import { AS_3600_2018 } from './as3600.js';
 import { CSA_A23_3_19 } from './csa-a23.js';
@@ -52,4 +52,16 @@ export function resolveBasis(
     });
   }
   return code.resolve(input);
+}
+
+/** A strength from a flag or config value: the code's class names first ("C50/60", "B500B"), else a quantity. */
+export function parseStrength(code: DesignCode, text: string | number, kind: 'concrete' | 'steel', units: UnitSystem, path: string): number {
+  if (typeof text === 'string') {
+    const named = code.namedStrength?.(text.trim(), kind);
+    if (named !== undefined && Number.isNaN(named)) {
+      throw new PmError(ERROR_CODES.invalidValue, path, `is not a ${kind === 'concrete' ? 'strength' : 'steel'} class of ${code.title}`, { value: text });
+    }
+    if (named !== undefined) return named;
+  }
+  return parseQuantity(text, 'stress', units, path);
 }

@@ -79,6 +79,11 @@ export interface BasisOptions {
    * 'gravity' (the default) or 'special-seismic' (special moment frames and special structural walls).
    */
   columnUse?: ColumnUse;
+  /**
+   * EN 1992-1-1 9.5.2(3): the section is at a lap, where As,max is 0.08·Ac (recommended) instead of
+   * 0.04·Ac; the value is the lap-zone maximum ratio, 0.04–0.08 (National Annex). Absent: outside laps.
+   */
+  lapZoneRhoMax?: number;
   /** EN 1992-1-1 Annex C Table C.1 characteristic strain at maximum force εuk (default 0.05, class B); εud = 0.9·εuk (3.2.7(2) Note 1) */
   steelEpsUk?: number;
 }
@@ -222,5 +227,11 @@ export interface DesignCode {
    * absent where `limits` already says all.
    */
   yieldLimit?(units: UnitSystem, use: ColumnUse): { max: number; rule: string };
+  /**
+   * A strength given by the code's own class name, in MPa ("C50/60" → fck 50 for EN 1992-1-1 Table 3.1,
+   * "B500B" → fyk 500); NaN for a name of the right form that the code does not list; undefined where
+   * the text is not such a name.
+   */
+  namedStrength?(text: string, kind: 'concrete' | 'steel'): number | undefined;
   resolve(input: BasisInput): Basis;
 }
