@@ -179,6 +179,11 @@ function resolveAci(edition: Edition, input: BasisInput): Basis {
       `Displaced concrete is deducted for bars inside the stress block, so a curve steps slightly where a bar row enters the block; moments are taken about the gross-section centroid.`,
       `φ per ${edition.clause}: ${phiC} (${transverse}) for εt ≤ εty, 0.90 for εt ≥ ${edition.tensionLimitText}, linear between.`,
       `Axial cap Pn,max = ${capRatio}·Po (22.4.2.1) with Po = 0.85·f′c·(Ag − Ast) + fy·Ast (22.4.2.2), fy in Po ≤ ${aciPoYieldCap(units)} ${su}.`,
+      `Pure compression is one value: the nominal curve ends at Po (22.4.2.2), as do the tables and key points.${
+        fy > aciPoYieldCap(units)
+          ? ` Here fy = ${fy} ${su} > ${aciPoYieldCap(units)} ${su}: strain compatibility at a uniform εcu = 0.003 would put the bars at ${fmt(Math.min(fy, ACI_EPS_CU * Es))} ${su}, more than Po counts (22.4.2.2), so the curve is held at Po.`
+          : ''
+      }`,
       `Column steel 0.01·Ag ≤ Ast ≤ 0.08·Ag (10.6.1.1). f′c = ${fc} ${su} (${fcMPa.toFixed(1)} MPa).`,
       `Bar grade: ${yieldLimitOf(edition, units, input.options?.columnUse ?? 'gravity').rule}; use: ${input.options?.columnUse ?? 'gravity'} columns.`,
     ],
@@ -190,6 +195,8 @@ export function aciProfile(c: number, _h: number): StrainProfile {
   if (!Number.isFinite(c)) return { top: ACI_EPS_CU, curvature: 0 };
   return { top: ACI_EPS_CU, curvature: ACI_EPS_CU / c };
 }
+
+const fmt = (x: number): string => String(Number(x.toPrecision(4)));
 
 export const ACI_318_19: DesignCode = makeAci(EDITIONS['aci318-19']);
 export const ACI_318_14: DesignCode = makeAci(EDITIONS['aci318-14']);
