@@ -145,6 +145,7 @@ function resolveAs3600(input: BasisInput): Basis {
       `φ = 1.24 − 13·kuo/12 within 0.65–0.85 for Class N reinforcement in bending with axial force (Table 2.2.2, from memory), kuo = c/do with do the depth of the extreme tension bar; φ = 0.65 for kuo ≥ ${fmt((1.24 - 0.65) * 12 / 13)} and at Nuo. No separate axial cap: the minimum eccentricity stands for it.`,
       `Minimum design moment N*·0.05·D (10.1.2, from memory). Column steel 0.01·Ag ≤ As ≤ 0.04·Ag (10.7.1, from memory).`,
       `Displaced concrete is deducted for bars inside the stress block; moments about the gross-section centroid. Clause numbers from memory of AS 3600-2018: check them against the standard.`,
+      `Circular sections: the block is applied unreduced over the circular segment; any reduction of α2 the standard makes where the compression zone narrows toward the extreme fibre (from memory, 8.1.3) is not applied — check it for circles.`,
     ],
   };
 }
