@@ -307,12 +307,14 @@ function resultsTable(rc: ResolvedCheck, outcome: CheckOutcome): string {
   const ap = rc.section.shape.kind === 'circle' ? 'Ag' : 'b·h';
   const ag = rc.section.shape.kind === 'circle' ? 'Ag·D' : 'b·h²';
   const withUtil = outcome.checked !== null;
+  // the basis's load symbols (N*, M* for AS 3600), Pu and Mu otherwise
+  const [pSym, mSym] = [rc.section.basis.symbols.axialLoad ?? 'Pu', rc.section.basis.symbols.momentLoad ?? 'Mu'];
   const headers = [
     'id',
-    `Pu ${un.force}`,
-    `Mu ${un.moment}`,
-    `Pu/${ap}`,
-    `Mu/${ag}`,
+    `${pSym} ${un.force}`,
+    `${mSym} ${un.moment}`,
+    `${pSym}/${ap}`,
+    `${mSym}/${ag}`,
     'e/h',
     'ρg req',
     'ρg chart',
