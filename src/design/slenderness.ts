@@ -116,7 +116,10 @@ export function fromSameSign(M01: number, M02: number): { M1: number; M2: number
   return { M1: -M01 * s, M2: Math.abs(M02) };
 }
 
-/** EN 1992-1-1 5.8.3.1(1): A = 0.7 "if φef is not known". */
+/**
+ * EN 1992-1-1 5.8.3.1(1): "if φef is not known, A = 0,7 may be used" (checked against the published
+ * text of the clause; the same clause takes rm positive when M01 and M02 give tension on the same side).
+ */
 export const EN_A_UNKNOWN_CREEP = 0.7;
 /** The φef for which A = 1/(1 + 0.2φef) = 0.7, used for Kφ when φef is not given (pmchart's conservative choice). */
 export const EN_CREEP_FOR_A_UNKNOWN = (1 / EN_A_UNKNOWN_CREEP - 1) / 0.2;
@@ -359,7 +362,9 @@ export function enNominalCurvature(basis: Basis, section: SlendernessSection, in
   const omega = (As * fyd) / (Ac * fcd);
   steps.push({ label: 'n = NEd/(Ac·fcd)', value: n });
   steps.push({
-    label: reinforcementKnown ? 'ω = As·fyd/(Ac·fcd)' : 'ω = 0: no reinforcement given, so B = 1 (the lower bound of B = √(1 + 2ω), conservative)',
+    label: reinforcementKnown
+      ? 'ω = As·fyd/(Ac·fcd)'
+      : 'ω = 0: no reinforcement given, so B = 1 (5.8.3.1(1) allows B = 1.1 when ω is not known; B = 1 is the lower bound, conservative)',
     value: omega,
   });
   const rm = M02 > 0 ? M01 / M02 : 1;

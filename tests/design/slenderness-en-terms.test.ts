@@ -23,6 +23,8 @@ const step = (r: { steps: { label: string; value: unknown }[] }, start: string) 
   return s.value as number;
 };
 
+// EN 1992-1-1:2004 5.8.3.1(1), published text: "A = 1/(1 + 0,2φef) (if φef is not known, A = 0,7 may be used)";
+// "If M01 and M02 give tension on the same side, rm should be taken positive (C ≤ 0,7), otherwise negative".
 // 400 × 400 mm, C30/37, B500 (fcd = 20 MPa, fyd = 434.78 MPa), 8 Ø20 on four faces (3 per face) at γ = 0.75,
 // NEd = 1500 kN, l0 = 5.0 m. By hand:
 //   i = 400/√12 = 115.470 mm, λ = 5000/115.470 = 43.301 (5.8.3.2(1))
