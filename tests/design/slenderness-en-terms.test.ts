@@ -127,6 +127,18 @@ describe('EN 1992-1-1 5.8.9(4) Eq. 5.39: exponent a with NRd = Ac·fcd + As·fyd
   });
 });
 
+describe('EN 1992-1-1 5.8.9(4): a textbook worked example (Bond et al., Worked Examples to Eurocode 2, The Concrete Centre, biaxial column check)', () => {
+  // 300 × 300 mm, C30/37 with αcc = 0.85, 4 H25 (1964 mm²), fyk = 500: NRd = 300²·0.85·30/1.5 + 1964·500/1.15
+  // = 1530.0 + 853.9 = 2383.9 kN; NEd = 0.6·b·h·fck = 1620 kN; a = 1.48 by interpolation (the example's values).
+  it('NRd = 2383.9 kN and a = 1.48', () => {
+    const b = EN_1992_1_1.resolve({ units: 'si', fc: 30, fy: 500, transverse: 'tied', options: { alphaCc: 0.85 } });
+    const NRd = b.biaxialReferenceLoad!(300 * 300, 1964);
+    expectClose(NRd / 1000, 2383.9, 1e-4);
+    const a = b.biaxialExponent!(1620e3 / NRd, 'rectangle').alpha;
+    expectClose(a, 1.48, 0, 0.005);
+  });
+});
+
 describe('EN 1992-1-1 Fig. 6.1 pure-compression note states the steel stress consistently', () => {
   it('C30/37: σs(εc2) = 400 MPa below fyd = 434.8 MPa', () => {
     const note = en.notes.find((n) => n.includes('uniform εc2'))!;
