@@ -543,7 +543,7 @@ function slendernessTable(fl: Flow, rc: ResolvedCheck, fx: CheckEffects, outcome
       rows.push([
         r.id,
         axis,
-        num(st('kℓu/r') ?? st('λ = l0/i')),
+        num(st('kℓu/r') ?? st('λ = l0/i') ?? st('Le/r')),
         num(st('limit') ?? st('λlim')),
         s.neglected ? 'yes' : 'no',
         f(s.delta, 4),
@@ -619,7 +619,7 @@ function sidePanel(g: Deco, L: ReportLayout, rc: ResolvedCheck, input: CheckRepo
     const e = fx.loads[gov.index]!.magnified!;
     g.text('heading', b.x, y + 1.0 * u, `Slenderness steps, ${gov.id}`);
     y += 2.0 * u;
-    const axes = [['x', e.x], ['y', e.y]].filter((a): a is ['x' | 'y', NonNullable<typeof e.x>] => a[1] !== undefined);
+    const axes = [['x', e.x], ['y', e.y]].filter((a): a is ['x' | 'y', NonNullable<typeof e.x>] => a[1] !== undefined && a[1] !== null);
     const colW = b.w / axes.length;
     let yEnd = y;
     axes.forEach(([axis, s], k) => {

@@ -7,7 +7,7 @@ import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { runCheck } from '../../src/cli/check.js';
+import { runCheck, runCheckAsync } from '../../src/cli/check.js';
 import { runTable } from '../../src/cli/table.js';
 import { expectClose } from '../helpers/tolerance.js';
 
@@ -34,6 +34,14 @@ describe('pmchart with AS 3600-2018', () => {
     // M* raised to N*·0.05·D = 3000 kN · 0.03 m = 90 kN·m: 90e6/(400·600²) = 0.625 MPa
     expectClose(out.results[0].normalised.M, 0.625, 1e-9);
   });
+  it('a drawn report of a slender column bent about x alone (no y step) is written (regression: a null y step crashed the drawing)', async () => {
+    const file = join(tmp, 'slender.pdf');
+    await runCheckAsync({ code: 'as3600-2018', fc: '40', fy: '500', b: '400', h: '600', arrangement: 'four-faces', barsPerFace: '3', gamma: '0.8', pu: '3000', mu: '400', klu: '6000mm', betaDns: '0.6', m1: '-200', m2: '400', report: file, date: '2026-05-20' });
+    expect(existsSync(file)).toBe(true);
+    const page = pdfText(file, 1);
+    expect(page).toContain('AS 3600-2018 10.4 moment magnifier');
+    expect(page).toContain('Le/r');
+  }, 60_000);
   it.runIf(built)('sheet and set: γ₂, fsy and φNu on the page', () => {
     const pdf = join(tmp, 'one.pdf');
     const r = spawnSync(process.execPath, [bin, 'sheet', '--code', 'as3600-2018', '--fc', '40', '--fy', '500', '--gamma', '0.8', '--rho', '0.01:0.04:0.01', '--out', pdf, '--date', '2026-05-01'], { encoding: 'utf8' });
