@@ -96,7 +96,14 @@ export function biaxialResultant(sec: BiaxialSection, theta: number, c: number, 
   const depth = 2 * sMax;
   let sMin = Infinity;
   for (const bar of sec.bars) sMin = Math.min(sMin, bar.x * nx + bar.y * ny);
-  const p = sec.basis.profile(c, depth, sMax - sMin);
+  const dt = sMax - sMin;
+  const p = sec.basis.profile(c, depth, dt);
+  if (sec.basis.linearTransitionToSquash && c > dt && dt > 0) {
+    // AS 3600-2018 10.6.2.3: straight line from the decompression point (c = dt) to the squash load
+    const dec = biaxialResultant(sec, theta, dt, kind);
+    const t = Number.isFinite(c) ? 1 - dt / c : 1;
+    return { P: (1 - t) * dec.P + t * sec.squash[kind], Mx: (1 - t) * dec.Mx, My: (1 - t) * dec.My, epsT: -strainAt(p, dt) };
+  }
 
   let P = 0;
   let Mx = 0;

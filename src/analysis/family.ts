@@ -209,8 +209,12 @@ export function familyOf(section: PreparedSection, arrangement: Arrangement, gam
     const phiPn = new Float64Array(n);
     const phiMn = new Float64Array(n);
     const capD = section.cap('design', rho);
+    // The nominal curve ends at the code's Po (one value for the curve's last point, the key point and
+    // the notes): where Po limits the steel stress (ACI 318-19 22.4.2.2, fy ≤ 80 ksi) the strain-compatible
+    // section at uniform strain would give more, which the code does not count. Elsewhere this is a no-op.
+    const poN = section.squash('nominal', rho);
     for (let i = 0; i < n; i++) {
-      Pn[i] = cols[R.PcN]![i]! + rho * cols[R.PsN]![i]!;
+      Pn[i] = Math.min(cols[R.PcN]![i]! + rho * cols[R.PsN]![i]!, poN);
       Mn[i] = cols[R.McN]![i]! + rho * cols[R.MsN]![i]!;
       const f = phi[i]!;
       phiPn[i] = Math.min(f * (cols[R.PcD]![i]! + rho * cols[R.PsD]![i]!), capD);

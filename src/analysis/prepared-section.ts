@@ -81,6 +81,16 @@ export function prepareSection(basis: Basis, shape: Shape, bars: readonly Bar[],
     area,
     respond(cOverH: number, out = new Float64Array(RESPONSE_SIZE)): Float64Array {
       const epsT = tensionStrain(basis.profile(cOverH, 1, dt), dt);
+      if (basis.linearTransitionToSquash && cOverH > dt) {
+        // AS 3600-2018 10.6.2.3: straight line from the decompression point (c = dt) to the squash load
+        this.respond(dt, out);
+        const t = Number.isFinite(cOverH) ? 1 - dt / cOverH : 1;
+        blendToSquash(out, R.PcN, t, nominal);
+        blendToSquash(out, R.PcD, t, design);
+        out[R.epsT] = epsT;
+        out[R.factor] = design.factor(epsT);
+        return out;
+      }
       out[R.epsT] = epsT;
       out[R.factor] = design.factor(epsT);
       partial(nominal, cOverH, out, R.PcN);
@@ -103,6 +113,18 @@ export function prepareSection(basis: Basis, shape: Shape, bars: readonly Bar[],
       return Number.isFinite(f) ? f * this.squash(kind, rho) : Infinity;
     },
   };
+}
+
+/**
+ * Moves the four slots (Pc, Mc, Ps, Ms) at `at` a fraction t of the way to the model's squash load,
+ * Po/Ag = concreteStress + ρ·(steelStress − concreteStress) with no moment.
+ */
+function blendToSquash(out: Float64Array, at: number, t: number, model: ResistanceModel): void {
+  const sq = model.squash;
+  out[at] = (1 - t) * out[at]! + t * sq.concreteStress;
+  out[at + 1] = (1 - t) * out[at + 1]!;
+  out[at + 2] = (1 - t) * out[at + 2]! + t * (sq.steelStress - sq.concreteStress);
+  out[at + 3] = (1 - t) * out[at + 3]!;
 }
 
 /** Nominal (Pn, Mn) at ρg from a response vector. */

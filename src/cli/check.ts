@@ -73,7 +73,7 @@ export function parseLoadsCsv(text: string, units: UnitSystem, path = '--loads')
     const Pu = parseQuantity(cell(iP, 'Pu'), 'force', units, `${path} line ${line} Pu`);
     const Mu = parseQuantity(cell(iM, 'Mu'), 'moment', units, `${path} line ${line} Mu`);
     const load: FactoredLoad = { id: cell(iId, 'id'), Pu, Mu };
-    for (const [name, key] of [['Muy', 'Muy'], ['M1', 'M1'], ['M2', 'M2'], ['M1y', 'M1y'], ['M2y', 'M2y']] as const) {
+    for (const [name, key] of [['Muy', 'Muy'], ['M1', 'M1'], ['M2', 'M2'], ['M1y', 'M1y'], ['M2y', 'M2y'], ['M01', 'M01'], ['M02', 'M02'], ['M01y', 'M01y'], ['M02y', 'M02y']] as const) {
       const i = col(name);
       const v = i < 0 ? undefined : cells[i]?.trim();
       if (v !== undefined && v !== '') load[key] = parseQuantity(v, 'moment', units, `${path} line ${line} ${name}`);

@@ -4,8 +4,8 @@
  */
 import { readFileSync } from 'node:fs';
 import type { Command } from 'commander';
-import { designCode, resolveBasis } from '../codes/registry.js';
-import { isTransverse, TRANSVERSE_TYPES, type Basis, type BasisOptions, type CapContext, type CodeId } from '../codes/types.js';
+import { designCode, parseStrength, resolveBasis } from '../codes/registry.js';
+import { COLUMN_USES, isTransverse, TRANSVERSE_TYPES, type Basis, type BasisOptions, type CapContext, type CodeId, type ColumnUse } from '../codes/types.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { barSet, findBar, type BarSize } from '../section/bar-tables.js';
 import { gammaFromCover, sectionDepth, sectionWidth } from '../section/geometry.js';
@@ -31,6 +31,8 @@ export interface SectionFlags {
   customBars?: string;
   transverse?: string;
   alphaCc?: string;
+  columnUse?: string;
+  lapZoneRhoMax?: string;
   gammaC?: string;
   gammaS?: string;
   concreteLaw?: string;
@@ -63,7 +65,7 @@ export const GAMMA_RANGE: [number, number] = [0.3, 0.95];
 /** Registers the shared section flags on a command. */
 export function addSectionOptions(cmd: Command): Command {
   return cmd
-    .option('--code <id>', 'design basis: aci318-19, aci318-14, en1992-1-1, csa-a23.3-19', 'aci318-19')
+    .option('--code <id>', 'design basis: aci318-19, aci318-14, en1992-1-1, csa-a23.3-19, as3600-2018', 'aci318-19')
     .option('--units <system>', "unit system: us (kip, in, ksi) or si (kN, mm, MPa); default: the basis's first (us for ACI, si otherwise)")
     .option('--fc <stress>', "specified concrete strength f′c (fck), e.g. 4, 4ksi, 28MPa")
     .option('--fy <stress>', 'specified yield strength fy (fyk), e.g. 60, 420MPa')
@@ -81,6 +83,8 @@ export function addSectionOptions(cmd: Command): Command {
     .option('--custom-bars <file>', 'JSON list of {x, y, share}: centroidal position ÷ b (or D) and ÷ h, share of Ast')
     .option('--transverse <type>', 'tied or spiral', 'tied')
     .option('--alpha-cc <value>', 'EN 1992-1-1 αcc (National Annex)')
+    .option('--lap-zone-rho-max <ratio>', 'EN 1992-1-1 9.5.2(3): the section is at a lap, As,max = ratio·Ac (0.04–0.08, 0.08 recommended)')
+    .option('--column-use <use>', 'ACI 318 bar-grade limit by use: gravity (default) or special-seismic (Table 20.2.2.4(a))')
     .option('--gamma-c <value>', 'EN 1992-1-1 γc (National Annex)')
     .option('--gamma-s <value>', 'EN 1992-1-1 γs (National Annex)')
     .option('--concrete-law <law>', 'parabola-rectangle or rectangular-block, where the basis offers both')
@@ -169,14 +173,22 @@ export function resolveSectionFlags(f: SectionFlags, needSize = false): Resolved
     options.steelBranch = f.steelBranch as (typeof branches)[number];
   }
 
+  const lap = plainNumber('--lap-zone-rho-max', f.lapZoneRhoMax);
+  if (lap !== undefined) options.lapZoneRhoMax = lap;
+  if (f.columnUse !== undefined) {
+    if (!(COLUMN_USES as readonly string[]).includes(f.columnUse)) oneOf('--column-use', f.columnUse, COLUMN_USES);
+    options.columnUse = f.columnUse as ColumnUse;
+  }
+
   // ranges are checked by the basis that reads them (EN 1992-1-1 names these flags in its errors)
   const steelK = plainNumber('--steel-k', f.steelK);
   const steelEpsUk = plainNumber('--steel-eps-uk', f.steelEpsUk);
   if (steelK !== undefined) options.steelK = steelK;
   if (steelEpsUk !== undefined) options.steelEpsUk = steelEpsUk;
 
-  const fc = parseQuantity(f.fc, 'stress', u, '--fc');
-  const fy = parseQuantity(f.fy, 'stress', u, '--fy');
+  const code = designCode(f.code ?? 'aci318-19');
+  const fc = parseStrength(code, f.fc, 'concrete', u, '--fc');
+  const fy = parseStrength(code, f.fy, 'steel', u, '--fy');
   const basis = resolveBasis(f.code ?? 'aci318-19', { units: u, fc, fy, transverse: transverse as 'tied' | 'spiral', options });
 
   const shapeKind = f.shape ?? 'rectangle';

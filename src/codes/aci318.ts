@@ -6,7 +6,7 @@ import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
 import { rectangularBlock } from '../materials/rectangular-block.js';
 import { stressToMPa, type UnitSystem } from '../units/index.js';
 import { bresslerBiaxialExponent } from './biaxial-exponent.js';
-import type { Basis, BasisInput, CodeId, DesignCode, ResistanceModel, StrainClass, StrainProfile } from './types.js';
+import type { Basis, BasisInput, CodeId, ColumnUse, DesignCode, ResistanceModel, StrainClass, StrainProfile } from './types.js';
 
 /** ACI 318-19 22.2.2.1: maximum usable strain at the extreme concrete compression fibre. */
 export const ACI_EPS_CU = 0.003;
@@ -37,7 +37,12 @@ interface Edition {
   tensionLimit(epsTy: number): number;
   tensionLimitText: string;
   clause: string;
+  /** Table 20.2.2.4(a): maximum fy of longitudinal column bars by use, ksi (from memory) */
+  fyMaxKsi: Record<ColumnUse, number>;
 }
+
+/** ksi → MPa as the SI editions round the grades: 60 → 420, 80 → 550, 100 → 690. */
+const GRADE_MPA: Record<number, number> = { 60: 420, 80: 550, 100: 690 };
 
 const EDITIONS: Record<'aci318-19' | 'aci318-14', Edition> = {
   'aci318-19': {
@@ -46,6 +51,8 @@ const EDITIONS: Record<'aci318-19' | 'aci318-14', Edition> = {
     tensionLimit: (epsTy) => epsTy + 0.003,
     tensionLimitText: 'εty + 0.003',
     clause: 'ACI 318-19 Table 21.2.2',
+    // Table 20.2.2.4(a) (from memory): Grade 100 in gravity columns; special moment frames and special walls Grade 80
+    fyMaxKsi: { gravity: 100, 'special-seismic': 80 },
   },
   'aci318-14': {
     id: 'aci318-14',
@@ -53,6 +60,8 @@ const EDITIONS: Record<'aci318-19' | 'aci318-14', Edition> = {
     tensionLimit: () => 0.005,
     tensionLimitText: '0.005',
     clause: 'ACI 318-14 Table 21.2.2',
+    // Table 20.2.2.4(a) (from memory): 80 ksi for longitudinal column bars; 20.2.2.5: A706 Grade 60 in special seismic systems
+    fyMaxKsi: { gravity: 80, 'special-seismic': 60 },
   },
 };
 
@@ -79,8 +88,16 @@ function makeAci(edition: Edition): DesignCode {
       units === 'us'
         ? { fc: [2.5, 20], fy: [40, 100] }
         : { fc: [17, 140], fy: [280, 690] },
+    yieldLimit: (units, use) => yieldLimitOf(edition, units, use),
     resolve: (input: BasisInput): Basis => resolveAci(edition, input),
   };
+}
+
+function yieldLimitOf(edition: Edition, units: UnitSystem, use: ColumnUse): { max: number; rule: string } {
+  const ksi = edition.fyMaxKsi[use];
+  const max = units === 'us' ? ksi : GRADE_MPA[ksi]!;
+  const what = use === 'gravity' ? 'longitudinal bars of columns outside special seismic systems' : 'longitudinal bars of special moment frames and special structural walls';
+  return { max, rule: `the ${edition.title} limit fy ≤ ${max} ${units === 'us' ? 'ksi' : 'MPa'} for ${what} (Table 20.2.2.4(a), from memory)` };
 }
 
 function resolveAci(edition: Edition, input: BasisInput): Basis {
@@ -141,7 +158,7 @@ function resolveAci(edition: Edition, input: BasisInput): Basis {
     minimumBarCount: () => (transverse === 'spiral' ? 6 : 4),
     minimumBarRule: `at least ${transverse === 'spiral' ? 6 : 4} bars (${edition.title} 10.7.3.1, from memory)`,
     clearSpacingRule: `clear spacing ≥ max(${units === 'us' ? '1.5 in' : '38 mm'}, 1.5·db, 4/3·aggregate) (${edition.title} 25.2.3)`,
-    barSet: units === 'us' ? 'astm-a615' : 'metric',
+    barSet: units === 'us' ? 'astm-a615' : 'astm-a615m', // ACI in SI: ASTM A615M soft-metric sizes
     factorSummary: `φ ${phiC}–0.90 by εt (${edition.clause}) · Pn,max ${capRatio}·Po (22.4.2.1)`,
     parameters: {
       'β1': Number(beta1.toFixed(4)),
@@ -162,7 +179,13 @@ function resolveAci(edition: Edition, input: BasisInput): Basis {
       `Displaced concrete is deducted for bars inside the stress block, so a curve steps slightly where a bar row enters the block; moments are taken about the gross-section centroid.`,
       `φ per ${edition.clause}: ${phiC} (${transverse}) for εt ≤ εty, 0.90 for εt ≥ ${edition.tensionLimitText}, linear between.`,
       `Axial cap Pn,max = ${capRatio}·Po (22.4.2.1) with Po = 0.85·f′c·(Ag − Ast) + fy·Ast (22.4.2.2), fy in Po ≤ ${aciPoYieldCap(units)} ${su}.`,
+      `Pure compression is one value: the nominal curve ends at Po (22.4.2.2), as do the tables and key points.${
+        fy > aciPoYieldCap(units)
+          ? ` Here fy = ${fy} ${su} > ${aciPoYieldCap(units)} ${su}: strain compatibility at a uniform εcu = 0.003 would put the bars at ${fmt(Math.min(fy, ACI_EPS_CU * Es))} ${su}, more than Po counts (22.4.2.2), so the curve is held at Po.`
+          : ''
+      }`,
       `Column steel 0.01·Ag ≤ Ast ≤ 0.08·Ag (10.6.1.1). f′c = ${fc} ${su} (${fcMPa.toFixed(1)} MPa).`,
+      `Bar grade: ${yieldLimitOf(edition, units, input.options?.columnUse ?? 'gravity').rule}; use: ${input.options?.columnUse ?? 'gravity'} columns.`,
     ],
   };
 }
@@ -172,6 +195,8 @@ export function aciProfile(c: number, _h: number): StrainProfile {
   if (!Number.isFinite(c)) return { top: ACI_EPS_CU, curvature: 0 };
   return { top: ACI_EPS_CU, curvature: ACI_EPS_CU / c };
 }
+
+const fmt = (x: number): string => String(Number(x.toPrecision(4)));
 
 export const ACI_318_19: DesignCode = makeAci(EDITIONS['aci318-19']);
 export const ACI_318_14: DesignCode = makeAci(EDITIONS['aci318-14']);

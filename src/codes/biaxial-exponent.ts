@@ -7,7 +7,8 @@ import type { BiaxialExponent } from './types.js';
 /**
  * EN 1992-1-1 5.8.9(4), Eq. 5.39: for rectangular sections a = 1.0, 1.5, 2.0 at NEd/NRd = 0.1, 0.7, 1.0,
  * linear between (and held at the end values outside); a = 2 for circular and elliptical sections.
- * NRd = Ac·fcd + As·fyd.
+ * NRd = Ac·fcd + As·fyd with the gross area Ac, as in the biaxial column check of Bond et al., Worked
+ * Examples to Eurocode 2 (The Concrete Centre): 300²·0.85·30/1.5 + 1964·500/1.15 = 2383.9 kN.
  */
 export function en1992BiaxialExponent(axialRatio: number, shape: ShapeKind): BiaxialExponent {
   if (shape === 'circle') return { alpha: 2, source: 'EN 1992-1-1 5.8.9(4): a = 2 for circular sections' };

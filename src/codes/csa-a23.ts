@@ -135,6 +135,7 @@ function resolveCsa(input: BasisInput): Basis {
     minimumBarRule: `at least ${transverse === 'spiral' ? 6 : 4} bars (CSA A23.3-19 10.9.3, from memory)`,
     clearSpacingRule: 'clear spacing ≥ max(1.4·db, 1.4·aggregate, 30 mm) (CSA A23.1-19 6.6.5.2, from memory)',
     barSet: 'csa-g30.18',
+    slendernessMethod: 'moment-magnification-csa-a23', // 10.15.3 non-sway (from memory)
     factorSummary: `φc ${CSA_PHI_C} · φs ${CSA_PHI_S} · α1 ${fmt(alpha1)} · β1 ${fmt(beta1)} (8.4.2, 8.4.3, 10.1.7)`,
     parameters: {
       'α1': r4(alpha1),
@@ -153,7 +154,7 @@ function resolveCsa(input: BasisInput): Basis {
       `Reinforcement elastic–perfectly plastic, Es = ${Es} MPa (8.5.4.1); εy = fy/Es = ${fmt(epsY)}.`,
       `Displaced concrete is deducted for bars inside the stress block, so a curve steps slightly where a bar row enters the block; moments about the gross-section centroid.`,
       `Pro = α1·φc·f′c·(Ag − Ast) + φs·fy·Ast; ${capText}.`,
-      `Column steel 0.01·Ag ≤ Ast ≤ 0.08·Ag (10.9.1, 10.9.2). Slenderness (10.15, 10.16) is not included. Clause numbers from memory of CSA A23.3-19.`,
+      `Column steel 0.01·Ag ≤ Ast ≤ 0.08·Ag (10.9.1, 10.9.2). Slender non-sway columns by the moment magnifier of 10.15.3 in \`check\` (end moments same sign in single curvature); sway frames (10.16) are not included. Clause numbers from memory of CSA A23.3-19.`,
     ],
   };
 }

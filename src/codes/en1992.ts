@@ -137,8 +137,32 @@ export const EN_1992_1_1: DesignCode = {
   symbols: EC2_SYMBOLS,
   // Table 3.1 covers C12/15 to C90/105; 3.2.2(3) covers fyk = 400 to 600 MPa.
   limits: () => ({ fc: [12, 90], fy: [400, 600] }),
+  namedStrength: ec2NamedStrength,
   resolve: (input: BasisInput): Basis => resolveEc2(input),
 };
+
+/** EN 1992-1-1 Table 3.1 strength classes C12/15 … C90/105 (fck/fck,cube). */
+export const EC2_STRENGTH_CLASSES: readonly (readonly [number, number])[] = [
+  [12, 15], [16, 20], [20, 25], [25, 30], [30, 37], [35, 45], [40, 50], [45, 55], [50, 60], [55, 67], [60, 75], [70, 85], [80, 95], [90, 105],
+];
+
+/**
+ * "C50/60" → fck = 50 MPa when the pair is a class of Table 3.1; "B500B" (B500A, B500C, B450C …) → fyk in
+ * MPa from the grade name (designations as in EN 10080 practice, common practice; the ductility letter
+ * A/B/C is Annex C's class and does not change fyk). A C-name outside Table 3.1: NaN. Anything else: undefined.
+ */
+export function ec2NamedStrength(text: string, kind: 'concrete' | 'steel'): number | undefined {
+  if (kind === 'concrete') {
+    const m = /^C\s*(\d+)\s*\/\s*(\d+)$/i.exec(text);
+    if (!m) return undefined;
+    const [fck, cube] = [Number(m[1]), Number(m[2])];
+    const known = EC2_STRENGTH_CLASSES.some(([a, b]) => a === fck && b === cube);
+    return known ? fck : NaN;
+    return fck;
+  }
+  const m = /^B\s*(\d{3})\s*[ABC]?$/i.exec(text);
+  return m ? Number(m[1]) : undefined;
+}
 
 function resolveEc2(input: BasisInput): Basis {
   const { units, fc: fck, fy: fyk, transverse } = input;
@@ -151,6 +175,8 @@ function resolveEc2(input: BasisInput): Basis {
   const branch = o.steelBranch ?? 'horizontal';
   const k = requireInRange('--steel-k', o.steelK ?? EC2_CLASS_B.k, 1.0, 1.35); // Table C.1 classes A–C
   const epsUk = requireInRange('--steel-eps-uk', o.steelEpsUk ?? EC2_CLASS_B.epsUk, 0.025, 0.15);
+  const lapMax = o.lapZoneRhoMax === undefined ? undefined : requireInRange('--lap-zone-rho-max', o.lapZoneRhoMax, 0.04, 0.08); // 9.5.2(3)
+  const rhoMax = lapMax ?? 0.04;
   const epsUd = branch === 'inclined' ? EC2_EPS_UD_RATIO * epsUk : Infinity; // 3.2.7(2)b: no limit on the horizontal branch
 
   const Es = EC2_STEEL_MODULUS;
@@ -212,9 +238,9 @@ function resolveEc2(input: BasisInput): Basis {
     classify: yieldClass(epsYd),
     normalisingStress: fcd,
     symbols: EC2_SYMBOLS,
-    rhoLimits: { min: 0.002, max: 0.04 }, // 9.5.2(2), (3) recommended values
-    // 9.5.2(2): As,min = max(0.10·NEd/fyd, 0.002·Ac); 9.5.2(3): As,max = 0.04·Ac outside laps.
-    steelAreaLimits: (NEd: number, Ac: number) => ({ min: Math.max((0.1 * Math.max(0, NEd)) / fyd, 0.002 * Ac), max: 0.04 * Ac }),
+    rhoLimits: { min: 0.002, max: rhoMax }, // 9.5.2(2), (3) recommended values
+    // 9.5.2(2): As,min = max(0.10·NEd/fyd, 0.002·Ac); 9.5.2(3): As,max = 0.04·Ac outside laps, 0.08·Ac at laps.
+    steelAreaLimits: (NEd: number, Ac: number) => ({ min: Math.max((0.1 * Math.max(0, NEd)) / fyd, 0.002 * Ac), max: rhoMax * Ac }),
     // 6.1(4): e0 = max(h/30, 20 mm) for compression; N in N, h in mm, moment in N·mm.
     minimumMoment: (NEd: number, h: number) => Math.max(0, NEd) * Math.max(h / 30, 20),
     // 8.2(2): clear distance ≥ max(k1·φ, dg + k2, 20 mm), recommended k1 = 1, k2 = 5 mm.
@@ -226,6 +252,7 @@ function resolveEc2(input: BasisInput): Basis {
     barSet: 'en-common',
     factorSummary: `αcc ${alphaCc} · γc ${gammaC} · γs ${gammaS} (${nonDefault.length > 0 ? 'not all recommended: check the NA' : 'recommended'})`,
     biaxialExponent: en1992BiaxialExponent, // 5.8.9(4) Eq. 5.39
+    biaxialReferenceLoad: (Ac: number, As: number) => Ac * fcd + As * fyd, // 5.8.9(4): NRd = Ac·fcd + As·fyd
     slendernessMethod: 'nominal-curvature-en1992', // 5.8.8
     parameters: {
       fcd: r4(fcd),
@@ -250,13 +277,19 @@ function resolveEc2(input: BasisInput): Basis {
       lawName === 'rectangular-block'
         ? `Concrete: rectangular block η·fcd over λ·x with λ = ${fmt(t.lambda)}, η = ${fmt(t.eta)} (3.1.7(3)), strain limits εcu2 and εc2 as for the parabola–rectangle law; the 10 % reduction of η·fcd for compression zones that narrow toward the extreme fibre (circles) is not applied; use the parabola–rectangle law for circular sections.`
         : `Concrete: parabola–rectangle with εc2 = ${fmt(t.epsC2 * 1000)} ‰, εcu2 = ${fmt(t.epsCu2 * 1000)} ‰, n = ${fmt(t.n)} (3.1.7(1), Table 3.1); tensile strength neglected (6.1(2)).`,
-      `Strain limits per 6.1(5) and Fig. 6.1: εcu2 at the compression face while x ≤ h; for x > h the profile pivots about εc2 at (1 − εc2/εcu2)·h, so pure compression is a uniform εc2 (steel stress σs(εc2) = ${fmt(design.squash.steelStress)} MPa, not fyd).`,
+      `Strain limits per 6.1(5) and Fig. 6.1: εcu2 at the compression face while x ≤ h; for x > h the profile pivots about εc2 at (1 − εc2/εcu2)·h, so pure compression is a uniform εc2 (${
+        design.squash.steelStress < fyd * (1 - 1e-9)
+          ? `steel stress σs(εc2) = Es·εc2 = ${fmt(design.squash.steelStress)} MPa, below fyd = ${fmt(fyd)} MPa`
+          : `εc2 = ${fmt(t.epsC2 * 1000)} ‰ ≥ εyd = ${fmt(epsYd * 1000)} ‰, so the steel has yielded: σs(εc2) = ${fmt(design.squash.steelStress)} MPa${branch === 'inclined' ? ' on the inclined branch' : ' = fyd'}`
+      }).`,
       branch === 'inclined'
         ? `Reinforcement: inclined top branch to k·fyd at εuk, k = ${k}, εuk = ${epsUk}, limited to εud = 0.9·εuk = ${fmt(epsUd)} (3.2.7(2)a, pivot A of Fig. 6.1), Es = ${Es} MPa.`
         : `Reinforcement: horizontal top branch at fyd, no strain limit (3.2.7(2)b), Es = ${Es} MPa (3.2.7(4)).`,
       `Displaced concrete is deducted for bars in compressed concrete; moments about the gross-section centroid.`,
       `Normalisation ν = NRd/(b·h·fcd), μ = MRd/(b·h²·fcd); the characteristic family NRk, MRk (γc = γs = 1) is normalised by the same fcd.`,
-      `Longitudinal steel As,min = max(0.10·NEd/fyd, 0.002·Ac), As,max = 0.04·Ac outside laps (9.5.2(2), (3), recommended values).`,
+      lapMax === undefined
+        ? `Longitudinal steel As,min = max(0.10·NEd/fyd, 0.002·Ac), As,max = 0.04·Ac outside laps (9.5.2(2), (3), recommended values).`
+        : `Lap zone: As,max = ${lapMax}·Ac at laps (9.5.2(3); 0.08 recommended); As,min = max(0.10·NEd/fyd, 0.002·Ac) (9.5.2(2)).`,
       `Minimum eccentricity e0 = max(h/30, 20 mm) (6.1(4)): MEd is raised to NEd·e0 where smaller. Second-order effects (5.8) are not included.`,
     ],
   };

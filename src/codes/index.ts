@@ -4,3 +4,4 @@ export * from './registry.js';
 export * from './en1992.js';
 export * from './csa-a23.js';
 export * from './mechanical-ratio.js';
+export * from './as3600.js';

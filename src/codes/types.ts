@@ -6,7 +6,7 @@ import type { ConcreteLaw, SteelLaw } from '../materials/types.js';
 import type { ShapeKind } from '../section/types.js';
 import type { UnitSystem } from '../units/index.js';
 
-export const CODE_IDS = ['aci318-19', 'aci318-14', 'en1992-1-1', 'csa-a23.3-19'] as const;
+export const CODE_IDS = ['aci318-19', 'aci318-14', 'en1992-1-1', 'csa-a23.3-19', 'as3600-2018'] as const;
 export type CodeId = (typeof CODE_IDS)[number];
 export const isCodeId = (s: unknown): s is CodeId => CODE_IDS.includes(s as CodeId);
 
@@ -74,11 +74,24 @@ export interface BasisOptions {
   steelBranch?: 'horizontal' | 'inclined';
   /** EN 1992-1-1 Annex C Table C.1 ratio k = (ft/fy)k for the inclined branch (default 1.08, class B) */
   steelK?: number;
+  /**
+   * What the column is part of, for edition limits on the bar grade (ACI 318-19 Table 20.2.2.4(a)):
+   * 'gravity' (the default) or 'special-seismic' (special moment frames and special structural walls).
+   */
+  columnUse?: ColumnUse;
+  /**
+   * EN 1992-1-1 9.5.2(3): the section is at a lap, where As,max is 0.08·Ac (recommended) instead of
+   * 0.04·Ac; the value is the lap-zone maximum ratio, 0.04–0.08 (National Annex). Absent: outside laps.
+   */
+  lapZoneRhoMax?: number;
   /** EN 1992-1-1 Annex C Table C.1 characteristic strain at maximum force εuk (default 0.05, class B); εud = 0.9·εuk (3.2.7(2) Note 1) */
   steelEpsUk?: number;
 }
 
-export const BAR_SET_IDS = ['astm-a615', 'metric', 'en-common', 'csa-g30.18'] as const;
+export const COLUMN_USES = ['gravity', 'special-seismic'] as const;
+export type ColumnUse = (typeof COLUMN_USES)[number];
+
+export const BAR_SET_IDS = ['astm-a615', 'metric', 'en-common', 'csa-g30.18', 'as4671-d500n', 'astm-a615m'] as const;
 export type BarSetId = (typeof BAR_SET_IDS)[number];
 
 export type StrainClass = 'compression-controlled' | 'transition' | 'tension-controlled';
@@ -147,6 +160,18 @@ export interface Basis {
    * documented exponent.
    */
   biaxialExponent?(axialRatio: number, shape: ShapeKind): BiaxialExponent;
+  /**
+   * The axial resistance the exponent's ratio divides by, for gross area Ac and steel area As
+   * (EN 1992-1-1 5.8.9(4): NRd = Ac·fcd + As·fyd). Optional: without it the ratio is Pu/Po of the
+   * design model (the section's squash load).
+   */
+  biaxialReferenceLoad?(grossArea: number, steelArea: number): number;
+  /**
+   * true where the code replaces the curve between the decompression point (εt = 0) and the squash load
+   * by a straight line (AS 3600-2018 10.6.2.3): for c beyond the extreme tension bar the section's
+   * response is the linear blend of the decompression response and the squash load. Default false.
+   */
+  readonly linearTransitionToSquash?: boolean;
   /** second-order method for slender columns the basis offers (src/design/slenderness.ts); none when absent */
   readonly slendernessMethod?: SlendernessMethodId;
 }
@@ -157,7 +182,7 @@ export interface BiaxialExponent {
   source: string;
 }
 
-export const SLENDERNESS_METHODS = ['moment-magnification-aci318', 'nominal-curvature-en1992'] as const;
+export const SLENDERNESS_METHODS = ['moment-magnification-aci318', 'nominal-curvature-en1992', 'moment-magnification-as3600', 'moment-magnification-csa-a23'] as const;
 export type SlendernessMethodId = (typeof SLENDERNESS_METHODS)[number];
 
 export interface BasisSymbols {
@@ -182,7 +207,7 @@ export interface BasisSymbols {
   dimensionlessMoment?: string;
   /** the code's words for the strain classes of `Basis.classify`; absent: ACI 318's words (`STRAIN_CLASS_WORDS`) */
   strainClassWords?: Readonly<Record<StrainClass, string>>;
-  /** symbols of the factored actions: "Pu"/"Mu" (ACI), "NEd"/"MEd" (EN), "Pf"/"Mf" (CSA); absent: Pu, Mu */
+  /** symbols of the factored actions: "Pu"/"Mu" (ACI), "NEd"/"MEd" (EN), "Pf"/"Mf" (CSA), "N*"/"M*" (AS 3600); absent: Pu, Mu */
   actionAxial?: string;
   actionMoment?: string;
   /** the slenderness table's moments: first-order and second-order ("M2"/"Mc" for ACI, "M0Ed"/"MEd" for EN); absent: M2, Mc */
@@ -210,5 +235,17 @@ export interface DesignCode {
   readonly symbols: BasisSymbols;
   /** allowed specified strengths in the given system's stress unit */
   limits(units: UnitSystem): { fc: [number, number]; fy: [number, number] };
+  /**
+   * The edition's upper limit on the specified yield strength of longitudinal column bars for a use
+   * (ACI 318-14 and 318-19 Table 20.2.2.4(a)), in the system's stress unit, with the rule as text;
+   * absent where `limits` already says all.
+   */
+  yieldLimit?(units: UnitSystem, use: ColumnUse): { max: number; rule: string };
+  /**
+   * A strength given by the code's own class name, in MPa ("C50/60" → fck 50 for EN 1992-1-1 Table 3.1,
+   * "B500B" → fyk 500); NaN for a name of the right form that the code does not list; undefined where
+   * the text is not such a name.
+   */
+  namedStrength?(text: string, kind: 'concrete' | 'steel'): number | undefined;
   resolve(input: BasisInput): Basis;
 }

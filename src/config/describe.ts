@@ -41,6 +41,8 @@ const OPTION_TEXT: { [K in keyof Required<BasisOptions>]: [symbol: string, slug:
   steelBranch: ['steel branch', 'steel'],
   steelK: ['k', 'k'],
   steelEpsUk: ['εuk', 'epsuk'],
+  columnUse: ['use', 'use'],
+  lapZoneRhoMax: ['lap ρmax', 'lap'],
 };
 
 /** Basis options as title text: { alphaCc: 0.85 } → "αcc 0.85"; "" for none. */

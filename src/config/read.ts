@@ -7,7 +7,7 @@
  * Pure: the caller reads the file; `now` stands in for the clock.
  */
 import type { z } from 'zod';
-import { DESIGN_CODES } from '../codes/registry.js';
+import { DESIGN_CODES, parseStrength } from '../codes/registry.js';
 import { CODE_IDS, type CodeId } from '../codes/types.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { parseQuantity, type UnitSystem } from '../units/index.js';
@@ -119,8 +119,9 @@ export function resolveChartSet(file: ChartSetFile, opts: ReadOptions = {}): Res
   file.sheets.forEach((g, gi) => {
     const at = `sheets[${gi}]`;
     const shapes = listOf(g.shape ?? 'rectangle').map(resolveShape);
-    const fcs = listOf(g.fc).map((q, k) => parseQuantity(q, 'stress', units, indexed(`${at}.fc`, g.fc, k)));
-    const fys = listOf(g.fy).map((q, k) => parseQuantity(q, 'stress', units, indexed(`${at}.fy`, g.fy, k)));
+    const dc = DESIGN_CODES[code]!;
+    const fcs = listOf(g.fc).map((q, k) => parseStrength(dc, q, 'concrete', units, indexed(`${at}.fc`, g.fc, k)));
+    const fys = listOf(g.fy).map((q, k) => parseStrength(dc, q, 'steel', units, indexed(`${at}.fy`, g.fy, k)));
     const gammas = expandNumbers(g.gamma, `${at}.gamma`);
     const arrangements = listOf(g.arrangement);
     const transverses = listOf(g.transverse ?? 'tied');

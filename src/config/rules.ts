@@ -3,7 +3,7 @@
  * (PmError with code, path and facts); the reader throws the first error.
  */
 import { rhoFromOmega } from '../codes/mechanical-ratio.js';
-import { DESIGN_CODES } from '../codes/registry.js';
+import { DESIGN_CODES, parseStrength } from '../codes/registry.js';
 import type { Basis, BasisOptions, DesignCode } from '../codes/types.js';
 import { ERROR_CODES, PmError, isPmError } from '../errors.js';
 import { DISPLAY_UNITS, parseQuantity } from '../units/index.js';
@@ -77,11 +77,11 @@ export function checkRules(set: ResolvedChartSet, file: ChartSetFile): RuleRepor
     if (code) {
       const lim = code.limits(set.units);
       each(g.fc, 'fc', (q, path) => {
-        const v = parseQuantity(q, 'stress', set.units, path);
+        const v = parseStrength(code, q, 'concrete', set.units, path);
         if (!inRange(v, lim.fc)) errors.push(outside(path, Number(v.toFixed(4)), lim.fc, su));
       });
       each(g.fy, 'fy', (q, path) => {
-        const v = parseQuantity(q, 'stress', set.units, path);
+        const v = parseStrength(code, q, 'steel', set.units, path);
         if (!inRange(v, lim.fy)) errors.push(outside(path, Number(v.toFixed(4)), lim.fy, su));
       });
     }

@@ -30,6 +30,11 @@ const BasisOptions = z
     steelBranch: z.enum(['horizontal', 'inclined']).describe('EN 1992-1-1 3.2.7(2) top branch; default "horizontal"').optional(),
     steelK: z.number().describe('EN 1992-1-1 inclined branch k = (ft/fy)k; default 1.08 (class B)').optional(),
     steelEpsUk: z.number().describe('EN 1992-1-1 inclined branch εuk; default 0.05 (class B)').optional(),
+    lapZoneRhoMax: z.number().describe('EN 1992-1-1 9.5.2(3): a lap zone with As,max = this ratio·Ac, 0.04–0.08 (0.08 recommended)').optional(),
+    columnUse: z
+      .enum(['gravity', 'special-seismic'])
+      .describe('ACI 318 bar-grade limit by use (Table 20.2.2.4(a)): "gravity" (default) or "special-seismic" (special moment frames and special walls)')
+      .optional(),
   })
   .strict();
 

@@ -150,7 +150,8 @@ export function checkBiaxial(sec: BiaxialSection, load: BiaxialLoad): BiaxialRes
   }
 
   // 3. load contour with the basis's exponent
-  const axialRatio = Pu / Po;
+  // EN 1992-1-1 5.8.9(4) divides by NRd = Ac·fcd + As·fyd, not by the strain-compatibility squash load
+  const axialRatio = Pu / (basis.biaxialReferenceLoad ? basis.biaxialReferenceLoad(sec.grossArea, sec.steelArea) : Po);
   const ex = loadContourExponent(basis, axialRatio, sec.shape.kind);
   let lc: LoadContourResult;
   if (!reach) {

@@ -20,6 +20,11 @@ export interface FactoredLoad {
   M2?: number;
   M1y?: number;
   M2y?: number;
+  /** end moments in the same-sign convention (EN 1992-1-1 5.8.3.1: same sign in single curvature) */
+  M01?: number;
+  M02?: number;
+  M01y?: number;
+  M02y?: number;
 }
 
 /** A given layout to check: discrete bars of total area `area` at `gamma`. */

@@ -24,7 +24,7 @@ import { isSelectableKind, proposeBars, type BarProposal, type Detailing } from 
 import { checkBiaxial, type BiaxialResult } from './biaxial.js';
 import { rhoLimitsFor, withMinimum, type FactoredLoad, type GivenLayout } from './check.js';
 import { buildChartSet, readCharts, type ChartSet, type SheetReading } from './chart-reading.js';
-import { magnifyLoad, type MagnifiedLoad, type SlendernessRequest } from './column-effects.js';
+import { magnifyLoad, type EndMoments, type MagnifiedLoad, type SlendernessRequest } from './column-effects.js';
 import { capacityAlongRay, strainReport, tabulate, type NormalisedLoad, type RayTable } from './ray.js';
 import { rhoRequired, type RhoStatus } from './rho-required.js';
 
@@ -221,6 +221,8 @@ export interface ColumnCheckContext {
   readonly checkedRho: number | null;
   /** the checked bars, actual areas and positions (as drawn) */
   readonly checkedBars: Bar[] | null;
+  /** bar positions from γ and the arrangement (areas adding to Ag), for slenderness steps before bars are chosen */
+  readonly positionBars: Bar[];
   /** biaxial surface of the checked bars */
   readonly checkedBiaxial: BiaxialSection | null;
   readonly biaxial: boolean;
@@ -250,7 +252,8 @@ export function prepareColumnCheck(input: ColumnCheckInput, opts: { readings?: b
   });
   const biaxial = input.loads.some((l) => l.Muy !== undefined);
   const checkedBiaxial = checkedBars && biaxial ? prepareBiaxial(basis, shape, checkedBars, capContext) : null;
-  return { input, basis, area, depth, capContext, variants, charts, checkedRho, checkedBars, checkedBiaxial, biaxial };
+  const positionBars = layoutBars(shape, input.arrangement, area, { gamma: input.gamma });
+  return { input, basis, area, depth, capContext, variants, charts, checkedRho, checkedBars, positionBars, checkedBiaxial, biaxial };
 }
 
 // ───────────────────────────── one load ─────────────────────────────
@@ -324,7 +327,9 @@ function demandOf(ctx: ColumnCheckContext, load: FactoredLoad): Demand {
   let Mux = load.Mu;
   let Muy = load.Muy;
   if (input.slenderness) {
-    magnified = magnifyLoad(basis, input.shape, ctx.checkedBars ?? [], { Pu: load.Pu, Mux: load.Mu, Muy: load.Muy ?? 0, ...endMoments(load) }, input.slenderness);
+    // without bars, positions from γ and the arrangement (EN 1992-1-1 5.8.8.3(2) needs d and is before bars are chosen)
+    const bars = ctx.checkedBars ?? ctx.positionBars;
+    magnified = magnifyLoad(basis, input.shape, bars, { Pu: load.Pu, Mux: load.Mu, Muy: load.Muy ?? 0, ...endMoments(load) }, input.slenderness, ctx.checkedBars === null);
     Mux = magnified.Mux;
     if (load.Muy !== undefined || magnified.y) Muy = magnified.Muy;
   }
@@ -451,12 +456,9 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
   };
 }
 
-const endMoments = (l: FactoredLoad) => ({
-  ...(l.M1 !== undefined ? { M1: l.M1 } : {}),
-  ...(l.M2 !== undefined ? { M2: l.M2 } : {}),
-  ...(l.M1y !== undefined ? { M1y: l.M1y } : {}),
-  ...(l.M2y !== undefined ? { M2y: l.M2y } : {}),
-});
+/** End moments in either sign convention (ACI M1/M2; EN and CSA M01/M02), as given. */
+const END_KEYS = ['M1', 'M2', 'M1y', 'M2y', 'M01', 'M02', 'M01y', 'M02y'] as const;
+const endMoments = (l: FactoredLoad): EndMoments => Object.fromEntries(END_KEYS.filter((k) => l[k] !== undefined).map((k) => [k, l[k]!])) as EndMoments;
 
 /** Status from the checks, worst first: unstable, outside the method's scope, not possible, fails. */
 function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measureValue: number; notPossible: boolean; finite: boolean; limitsMax: number }): {
@@ -479,8 +481,8 @@ function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measur
 }
 
 /** The clause a slenderness method names for instability: read from the method's own words. */
-const stabilityClause = (method: string): string | null => (/6\.6\.4/.test(method) ? 'ACI 318-19 6.6.4.5.2 (Pu ≥ 0.75·Pc)' : null);
-const scopeClause = (method: string): string | null => (/6\.6\.4/.test(method) ? 'ACI 318-19 6.2.5.3 (second-order moment ≤ 1.4 × first-order)' : null);
+const stabilityClause = (method: string): string | null => (/6\.6\.4/.test(method) ? 'ACI 318-19 6.6.4.5.2 (Pu ≥ 0.75·Pc)' : method);
+const scopeClause = (method: string): string | null => (/6\.6\.4/.test(method) ? 'ACI 318-19 6.2.5.3 (second-order moment ≤ 1.4 × first-order)' : method);
 
 // ───────────────────────────── all loads ─────────────────────────────
 

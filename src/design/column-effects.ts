@@ -11,14 +11,31 @@ import type { Basis, CapContext } from '../codes/types.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import type { Bar, Shape } from '../section/types.js';
 import { checkBiaxial, type BiaxialResult } from './biaxial.js';
-import { aboutYAxis, slendernessCheck, type EiOption, type SlendernessResult } from './slenderness.js';
+import { aboutYAxis, fromSameSign, slendernessCheck, type EiOption, type SlendernessResult } from './slenderness.js';
 
-/** End moments of one load for the slenderness check; each defaults as described in `magnifyLoad`. */
+/**
+ * End moments of one load for the slenderness check; each defaults as described in `magnifyLoad`.
+ * M1, M2 follow ACI 318-19 6.2.5.1 (M1 negative in single curvature); M01, M02 follow EN 1992-1-1
+ * 5.8.3.1 (same sign in single curvature). A load gives one pair per axis, in its basis's convention.
+ */
 export interface EndMoments {
   M1?: number;
   M2?: number;
   M1y?: number;
   M2y?: number;
+  M01?: number;
+  M02?: number;
+  M01y?: number;
+  M02y?: number;
+}
+
+/** One axis's end moments in the internal (opposite-sign) convention, or undefined where not given. */
+function endPair(M1: number | undefined, M2: number | undefined, M01: number | undefined, M02: number | undefined): { M1?: number; M2?: number } {
+  if (M01 !== undefined || M02 !== undefined) {
+    if (M02 === undefined) throw new PmError(ERROR_CODES.missing, '--m02', 'is required with --m01 (the larger end moment, with its sign)');
+    return fromSameSign(M01 ?? M02, M02);
+  }
+  return { ...(M1 !== undefined ? { M1 } : {}), ...(M2 !== undefined ? { M2 } : {}) };
 }
 
 /** Member data for one bending axis. */
@@ -49,6 +66,8 @@ export interface MagnifiedLoad {
  * Second-order moments about each axis separately (ACI 318-19 6.6.4: each axis magnified for its own
  * conditions, common practice). M2 defaults to |Mu| about that axis; M1 defaults to −M2 (equal end
  * moments in single curvature, M1/M2 = −1, the most severe case: Cm = 1.0). Signs of Mux and Muy are kept.
+ * M01 without M02 is refused; M02 alone means equal end moments in single curvature (M01 = M02).
+ * `positionsOnly`: the bars mark positions from γ and the arrangement, not a chosen reinforcement.
  */
 export function magnifyLoad(
   basis: Basis,
@@ -56,16 +75,19 @@ export function magnifyLoad(
   bars: readonly Bar[],
   load: { Pu: number; Mux: number; Muy: number } & EndMoments,
   req: SlendernessRequest,
+  positionsOnly = false,
 ): MagnifiedLoad {
-  const sec = { shape, bars };
-  const m2x = load.M2 ?? Math.abs(load.Mux);
-  const x = slendernessCheck(basis, sec, { ...req.x, Pu: load.Pu, M2: m2x, M1: load.M1 ?? -m2x });
+  const sec = { shape, bars, positionsOnly };
+  const ex = endPair(load.M1, load.M2, load.M01, load.M02);
+  const ey = endPair(load.M1y, load.M2y, load.M01y, load.M02y);
+  const m2x = ex.M2 ?? Math.abs(load.Mux);
+  const x = slendernessCheck(basis, sec, { ...req.x, Pu: load.Pu, M2: m2x, M1: ex.M1 ?? -m2x });
   const sign = (m: number) => (m < 0 ? -1 : 1);
   let y: SlendernessResult | null = null;
   let Muy = load.Muy;
-  if (load.Muy !== 0 || req.y !== undefined || load.M2y !== undefined) {
-    const m2y = load.M2y ?? Math.abs(load.Muy);
-    y = slendernessCheck(basis, aboutYAxis(sec), { ...(req.y ?? req.x), Pu: load.Pu, M2: m2y, M1: load.M1y ?? -m2y });
+  if (load.Muy !== 0 || req.y !== undefined || ey.M2 !== undefined) {
+    const m2y = ey.M2 ?? Math.abs(load.Muy);
+    y = slendernessCheck(basis, aboutYAxis(sec), { ...(req.y ?? req.x), Pu: load.Pu, M2: m2y, M1: ey.M1 ?? -m2y });
     Muy = sign(load.Muy) * y.magnifiedMoment;
   }
   return { Mux: sign(load.Mux) * x.magnifiedMoment, Muy, x, y };

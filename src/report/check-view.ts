@@ -158,7 +158,7 @@ export function slendernessView(c: ColumnCheck): { method: string; table: TableV
       rows.push([
         r.id,
         axis,
-        f(((st('kℓu/r') ?? st('λ = l0/i')) as number | undefined) ?? null, 3),
+        f(((st('kℓu/r') ?? st('λ = l0/i') ?? st('Le/r')) as number | undefined) ?? null, 3),
         f(((st('limit') ?? st('λlim')) as number | undefined) ?? null, 3),
         sl.neglected ? 'yes' : 'no',
         f(sl.delta, 4),

@@ -25,7 +25,7 @@ export function basisForSheet(set: ResolvedChartSet, sheet: ResolvedSheet): Basi
   return resolveBasis(
     set.code,
     { units: set.units, fc: sheet.fc, fy: sheet.fy, transverse: sheet.transverse, options: sheet.basisOptions },
-    { code: 'basis.code', fc: `${at}.fc`, fy: `${at}.fy` },
+    { code: 'basis.code', fc: `${at}.fc`, fy: `${at}.fy`, columnUse: 'basis.options.columnUse (or the sheet group’s basisOptions.columnUse)' },
   );
 }
 

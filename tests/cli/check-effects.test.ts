@@ -100,7 +100,7 @@ describe('check on EN 1992-1-1: the basis declares its own methods', () => {
   it('nominal curvature (5.8.8) feeds Mu; the load-contour exponent follows Eq. 5.39', () => {
     // the hand-calculated column of tests/design/slenderness.test.ts: MEd = 155.06 kN·m (As = 8 Ø20 ≈ 0.0157·Ac)
     const out = JSON.parse(
-      runCheck({ code: 'en1992-1-1', fc: '30', fy: '500', b: '400', h: '400', arrangement: 'four-faces', barsPerFace: '3', gamma: '0.75', rho: '0.01570796', pu: '1500', mu: '60', muy: '30', klu: '6000mm', m1: '-30', creep: '1', proposals: '0', json: true }),
+      runCheck({ code: 'en1992-1-1', fc: '30', fy: '500', b: '400', h: '400', arrangement: 'four-faces', barsPerFace: '3', gamma: '0.75', rho: '0.01570796', pu: '1500', mu: '60', muy: '30', klu: '6000mm', m01: '30', m02: '60', creep: '1', proposals: '0', json: true }),
     );
     const r = out.results[0];
     expect(r.slenderness.method).toMatch(/5\.8\.8/);

@@ -13,10 +13,12 @@ describe('resolveSectionFlags', () => {
     expect(s.bar).toMatchObject({ name: '#11', diameter: 1.41, area: 1.56 });
     expect(s.capContext.depth).toBe(24);
   });
-  it('converts SI sizes and metric bars', () => {
+  it('converts SI sizes; ACI in SI reads bar names from the ASTM A615M soft-metric table', () => {
+    // ASTM A615M Table 1 (from memory): #10 is 9.5 mm, #25 is 25.4 mm and 510 mm²
     const s = resolveSectionFlags({ units: 'si', fc: '35', fy: '420', b: '500', h: '600', cover: '40', tie: '10', bar: '25' });
-    expectClose(s.gamma, (600 - 2 * (40 + 10 + 12.5)) / 600, 1e-12);
-    expect(s.bar!.area).toBeCloseTo(490.9, 1);
+    expectClose(s.gamma, (600 - 2 * (40 + 9.5 + 12.7)) / 600, 1e-12);
+    expect(s.bar!.area).toBe(510);
+    expect(s.bar!.name).toBe('#25 (A615M)');
   });
   it('accepts a circle with a ring', () => {
     const s = resolveSectionFlags({ fc: '5', fy: '60', shape: 'circle', diameter: '24', arrangement: 'ring', bars: '10', gamma: '0.75', transverse: 'spiral' });

@@ -2,6 +2,8 @@
 import { describe, expect, it } from 'vitest';
 import { ACI_318_14, ACI_318_19, aciBeta1, aciPhi } from '../../src/codes/aci318.js';
 import { resolveBasis } from '../../src/codes/registry.js';
+import { PmError } from '../../src/errors.js';
+import { barSet, findBar } from '../../src/section/bar-tables.js';
 import { expectClose } from '../helpers/tolerance.js';
 
 describe('aciBeta1 (ACI 318-19 Table 22.2.2.4.3)', () => {
@@ -61,5 +63,56 @@ describe('ACI basis', () => {
     expect(() => resolveBasis('aci318-19', { units: 'us', fc: 30, fy: 60, transverse: 'tied' })).toThrow('--fc: 30 ksi is outside 2.5–20 ksi');
     expect(() => resolveBasis('aci318-19', { units: 'si', fc: 30, fy: 1000, transverse: 'tied' })).toThrow('--fy: 1000 MPa is outside 280–690 MPa');
     expect(() => resolveBasis('nope', { units: 'si', fc: 30, fy: 400, transverse: 'tied' })).toThrow('--code: nope is not a known design basis');
+  });
+});
+
+describe('edition limits on the bar grade (Table 20.2.2.4(a), from memory of ACI 318-14 and 318-19)', () => {
+  const fail = (code: string, fy: number, units: 'us' | 'si', columnUse?: 'gravity' | 'special-seismic') => {
+    try {
+      resolveBasis(code, { units, fc: units === 'us' ? 5 : 35, fy, transverse: 'tied', ...(columnUse ? { options: { columnUse } } : {}) });
+      return null;
+    } catch (e) {
+      return e as PmError;
+    }
+  };
+  it('ACI 318-14: fy = 100 ksi is refused (80 ksi for longitudinal column bars), naming --fy, the limit and the use', () => {
+    const e = fail('aci318-14', 100, 'us')!;
+    expect(e).toBeInstanceOf(PmError);
+    expect(e.path).toBe('--fy');
+    expect(e.exitCode).toBe(2);
+    expect(e.message).toMatch(/fy ≤ 80 ksi/);
+    expect(e.message).toMatch(/--column-use gravity/);
+    expect(fail('aci318-14', 80, 'us')).toBeNull();
+    expect(fail('aci318-14', 690, 'si')!.message).toMatch(/fy ≤ 550 MPa/);
+  });
+  it('ACI 318-19: 100 ksi allowed in gravity columns (the default), 80 ksi in special seismic systems', () => {
+    expect(fail('aci318-19', 100, 'us')).toBeNull();
+    expect(fail('aci318-19', 100, 'us', 'gravity')).toBeNull();
+    const e = fail('aci318-19', 100, 'us', 'special-seismic')!;
+    expect(e.message).toMatch(/fy ≤ 80 ksi/);
+    expect(fail('aci318-19', 80, 'us', 'special-seismic')).toBeNull();
+    expect(fail('aci318-19', 550, 'si', 'special-seismic')).toBeNull();
+  });
+  it('ACI 318-14 special seismic systems: Grade 60 (20.2.2.5, from memory)', () => {
+    expect(fail('aci318-14', 80, 'us', 'special-seismic')!.message).toMatch(/fy ≤ 60 ksi/);
+  });
+  it('the sheet notes say which limit applies', () => {
+    const b = resolveBasis('aci318-19', { units: 'us', fc: 5, fy: 60, transverse: 'tied' });
+    expect(b.notes.some((n) => /fy ≤ 100 ksi/.test(n) && /gravity/.test(n))).toBe(true);
+  });
+});
+
+describe('ASTM A615M soft-metric bars for ACI in SI (areas from memory of ASTM A615M Table 1, as listed beside each)', () => {
+  it('#10 71, #13 129, #16 199, #19 284, #22 387, #25 510, #29 645, #32 819, #36 1006, #43 1452, #57 2581 mm², labelled (A615M)', () => {
+    const b = resolveBasis('aci318-19', { units: 'si', fc: 35, fy: 420, transverse: 'tied' });
+    const set = barSet(b.barSet);
+    const want: [string, number][] = [['#10', 71], ['#13', 129], ['#16', 199], ['#19', 284], ['#22', 387], ['#25', 510], ['#29', 645], ['#32', 819], ['#36', 1006], ['#43', 1452], ['#57', 2581]];
+    for (const [n, area] of want) {
+      const bar = findBar(set, n)!;
+      expect(bar.name).toBe(`${n} (A615M)`);
+      expect(bar.area).toBe(area);
+    }
+    // a US #10 is 1.27 in²; the inch-pound table is untouched
+    expect(findBar(barSet('astm-a615'), '#10')!.area).toBe(1.27);
   });
 });

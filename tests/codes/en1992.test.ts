@@ -244,3 +244,23 @@ describe('EN 1992-1-1 parameters and input', () => {
     expect(() => ec2(30, { alphaCc: 0.7 })).toThrowError(/--alpha-cc: 0.7 is outside 0.8–1/);
   });
 });
+
+describe('EN 1992-1-1 class names and lap zones (issue 13)', () => {
+  it('"C50/60" is fck = 50 MPa and "C70/85" 70 MPa (Table 3.1); "B500B" is fyk = 500 MPa', async () => {
+    const { parseStrength } = await import('../../src/codes/registry.js');
+    expect(parseStrength(EN_1992_1_1, 'C50/60', 'concrete', 'si', '--fc')).toBe(50);
+    expect(parseStrength(EN_1992_1_1, 'c70/85', 'concrete', 'si', '--fc')).toBe(70);
+    expect(parseStrength(EN_1992_1_1, 'B500B', 'steel', 'si', '--fy')).toBe(500);
+    expect(parseStrength(EN_1992_1_1, '45MPa', 'concrete', 'si', '--fc')).toBe(45);
+    // a pair Table 3.1 does not list is refused, naming the path
+    expect(() => parseStrength(EN_1992_1_1, 'C33/40', 'concrete', 'si', 'sheets[0].fc')).toThrow(/sheets\[0\]\.fc: C33\/40 is not a strength class/);
+  });
+  it('9.5.2(3): a lap zone raises As,max to 0.08·Ac (recommended); outside laps 0.04·Ac', () => {
+    const outside = resolveBasis('en1992-1-1', { units: 'si', fc: 30, fy: 500, transverse: 'tied' });
+    const lap = resolveBasis('en1992-1-1', { units: 'si', fc: 30, fy: 500, transverse: 'tied', options: { lapZoneRhoMax: 0.08 } });
+    expect(outside.rhoLimits.max).toBe(0.04);
+    expect(lap.rhoLimits.max).toBe(0.08);
+    expect(lap.steelAreaLimits(0, 160_000).max).toBeCloseTo(12_800, 9);
+    expect(() => resolveBasis('en1992-1-1', { units: 'si', fc: 30, fy: 500, transverse: 'tied', options: { lapZoneRhoMax: 0.1 } })).toThrow(/--lap-zone-rho-max/);
+  });
+});
