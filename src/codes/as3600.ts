@@ -56,6 +56,8 @@ export const AS_SYMBOLS = {
   steelStrength: 'fsy',
   actionAxial: 'N*',
   actionMoment: 'M*',
+  firstOrderMoment: 'M*',
+  secondOrderMoment: 'δb·M*',
 } as const;
 
 export const AS_3600_2018: DesignCode = {
