@@ -1,3 +1,5 @@
+/// <reference lib="dom" />
+/// <reference lib="dom.iterable" />
 /**
  * The live page (`pmchart page`) in a real browser: Debian's `chromium` driven by playwright-core, one
  * browser, one file, tests in order. The page must give what the CLI gives for the same input, so most
@@ -64,7 +66,7 @@ describe.sequential('pmchart page in Chromium', () => {
     page.on('pageerror', (e) => problems.push(`exception: ${e.message}`));
     page.on('request', (q) => requests.push(q.url()));
     await page.goto(`file://${file}`);
-    await page.waitForFunction(() => (window as unknown as { pmchartPage?: { draws(): number } }).(pmchartPage?.draws() ?? 0) > 0, null, { timeout: 60_000 });
+    await page.waitForFunction(() => ((window as unknown as { pmchartPage?: { draws(): number } }).pmchartPage?.draws() ?? 0) > 0, null, { timeout: 60_000 });
   }, 120_000);
 
   afterAll(async () => {
