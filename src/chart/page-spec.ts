@@ -63,7 +63,7 @@ export function pageChartTemplate(t: TemplateParams): VlSpec {
   layers.splice(layers.findIndex((l) => String(l.name).startsWith('curves_')), 0, {
     name: 'sheet_curves',
     data: { name: 'sheetCurves' },
-    mark: { type: 'line', color: COLOURS.faint, strokeWidth: 2.2, opacity: 0.5, strokeJoin: 'round' },
+    mark: { type: 'line', color: COLOURS.faint, strokeWidth: 1.8, opacity: 0.5, strokeJoin: 'round' },
     encoding: { x, y, detail: { field: 'curve' }, order: { field: 'i' } },
   });
   const label = (name: string, v: 0 | 1, extra: Record<string, unknown>) => ({

@@ -119,10 +119,21 @@ async function draw(cv: ChartView, check: CheckJson | null): Promise<void> {
     const declared = new Set(((vgSpec.data ?? []) as { name: string }[]).map((d) => d.name));
     datasetNames = Object.keys(data).filter((name) => declared.has(name));
     await view.runAsync();
+    fitToWidth(template);
     return;
   }
   for (const name of datasetNames) view.data(name, (data as unknown as Record<string, unknown[]>)[name] ?? []);
   await view.runAsync();
+}
+
+/** A viewBox lets the drawing scale with the page's width (vega gives the SVG a fixed size). */
+function fitToWidth(template: Record<string, unknown>): void {
+  const svg = $('chart').querySelector('svg');
+  const pad = template.padding as { left: number; right: number; top: number; bottom: number };
+  const w = (template.width as number) + pad.left + pad.right;
+  const h = (template.height as number) + pad.top + pad.bottom;
+  svg?.setAttribute('viewBox', `0 0 ${w} ${h}`);
+  svg?.setAttribute('preserveAspectRatio', 'xMinYMin meet');
 }
 
 // ── reading aid ─────────────────────────────────────────────────────────────────────────────────

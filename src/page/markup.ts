@@ -68,7 +68,7 @@ h2{font-size:14px;margin:16px 0 6px;border-bottom:1px solid var(--rule)}
 .sub,.muted{color:var(--muted)}
 .sub{margin:2px 0 6px}
 .caution{margin:8px 16px;padding:6px 10px;border:1px solid var(--caution);background:#fbf1ef;color:var(--caution)}
-main{display:grid;grid-template-columns:310px 1fr;gap:14px;padding:0 16px 24px}
+main{display:grid;grid-template-columns:310px minmax(0,1fr);gap:14px;padding:0 16px 24px}
 form .group{border:1px solid var(--rule);background:var(--panel);margin:0 0 8px;padding:4px 8px 6px}
 details.group>fieldset{border:0;padding:0;margin:0}
 details.group>fieldset>legend{display:none}
@@ -87,6 +87,7 @@ button{font:inherit;padding:3px 10px;margin-right:6px;border:1px solid var(--acc
 #chart svg,#chart canvas{width:100%;height:auto;display:block}
 #crosshair{position:absolute;width:9px;height:9px;margin:-5px 0 0 -5px;border:1px solid var(--caution);border-radius:50%;pointer-events:none}
 .reading{margin:6px 0;padding:4px 8px;background:var(--panel);font-variant-numeric:tabular-nums;min-height:1.6em}
+#loads-table{overflow-x:auto}
 table{border-collapse:collapse;font-variant-numeric:tabular-nums}
 th,td{border-bottom:1px solid var(--rule);padding:2px 8px;text-align:right;white-space:nowrap}
 th:first-child,td:first-child,td.status{text-align:left}
