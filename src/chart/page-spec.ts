@@ -51,6 +51,12 @@ export type PageChartData = SheetData & { sheetCurves: SheetCurveRow[]; pageLoad
 
 const r5 = (x: number): number => Math.round(x * 1e5) / 1e5 + 0;
 
+/**
+ * Drawing tolerance of the faint bracketing families, in sheet points: coarser than the exact family's
+ * (a wide pale line hides it), and every point saved is one less for vega's expression interpreter.
+ */
+export const SHEET_CURVE_TOLERANCE_PT = 4 * SIMPLIFY_TOLERANCE_PT;
+
 /** The page template: the sheet template with the bracketing-sheet and load layers; no datasets. */
 export function pageChartTemplate(t: TemplateParams): VlSpec {
   const spec = sheetTemplate(t);
@@ -114,7 +120,7 @@ export function pageChartData(input: PageChartInput): PageChartData {
       const P = fam === 'design' ? c.phiPn : c.Pn;
       const M = fam === 'design' ? c.phiMn : c.Mn;
       const id = `γ ${fmt(s.gamma)} ρg ${c.rho}`;
-      const keep = simplifyIndices(Array.from(M, (v) => (v / divisor) * sx), Array.from(P, (v) => (v / divisor) * sy), SIMPLIFY_TOLERANCE_PT);
+      const keep = simplifyIndices(Array.from(M, (v) => (v / divisor) * sx), Array.from(P, (v) => (v / divisor) * sy), SHEET_CURVE_TOLERANCE_PT);
       keep.forEach((i, j) => sheetCurves.push({ curve: id, i: j, M: r5(M[i]! / divisor), P: r5(P[i]! / divisor) }));
     }
   }
