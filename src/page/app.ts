@@ -252,6 +252,7 @@ async function update(): Promise<void> {
   draws++;
   $('timing').textContent = `redrawn in ${lastMs.toFixed(0)} ms`;
   $('loads-table').innerHTML = check ? loadsTable(check) : `<p class="muted">Type Pu and Mu, or paste a load CSV, with b and h (or D).</p>`;
+  $('view-title').textContent = cv.value.set.sheets[0]!.title;
   sheetsNote(cv.value);
   assumptions(cv.value, check);
   commands(cv.value, fields, loads);

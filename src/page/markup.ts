@@ -40,6 +40,7 @@ export function pageBody(caution: string): string {
 <form id="inputs" autocomplete="off">${groups}<div class="msg general" id="m-general" role="alert" hidden></div></form>
 <section id="out">
   <div class="toolbar"><button type="button" id="export-svg">Export SVG</button><button type="button" id="export-png">Export PNG</button><button type="button" id="print">Print</button><span id="timing" class="muted"></span></div>
+  <h2 id="view-title"></h2>
   <div id="chart-wrap"><div id="chart"></div><div id="crosshair" hidden></div></div>
   <div id="reading" class="reading" aria-live="polite">Move the pointer over the chart to read P/Ag, M/(Ag·h), e/h and the interpolated ρg.</div>
   <div id="sheets-note" class="muted"></div>
@@ -47,7 +48,7 @@ export function pageBody(caution: string): string {
   <div id="loads-table"><p class="muted">Type Pu and Mu, or paste a load CSV, with b and h (or D).</p></div>
   <h2>Basis and assumptions</h2>
   <ul id="assumptions"></ul>
-  <h2>Reproduce this view</h2>
+  <h2 id="reproduce">Reproduce this view</h2>
   <p class="muted">On the command line (with the same inputs):</p>
   <pre id="cmd-sheet" class="copy"></pre>
   <pre id="cmd-check" class="copy"></pre>
@@ -96,9 +97,11 @@ pre.copy{background:var(--panel);padding:6px 8px;white-space:pre-wrap;word-break
 .print-only{display:none}
 @media print{
   @page{size:landscape;margin:10mm}
-  header .sub,form,.toolbar,#reading,#crosshair,#cmd-sheet,#cmd-check,#set-json,#out>p.muted{display:none}
+  header .sub,form,.toolbar,#reading,#crosshair,#reproduce,#cmd-sheet,#cmd-check,#set-json,#out>p.muted{display:none}
   main{display:block;padding:0}
-  #chart-wrap{border:0;page-break-after:always}
+  #chart-wrap{border:0;page-break-inside:avoid}
+  #chart svg{width:auto;max-width:100%;max-height:150mm}
+  table,#assumptions{page-break-inside:avoid}
   .print-only{display:block}
   body{font-size:10px}
 }
