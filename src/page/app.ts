@@ -164,7 +164,9 @@ function pointerReading(ev: PointerEvent): void {
   const sy = current.request.section.basis.symbols;
   const rho =
     r.reading.position === 'between' ? fmt(r.reading.rho) : r.reading.position === 'inside-lowest' ? `≤ ${fmt(r.reading.rho)}` : `> ${fmt(current.family.curves[current.family.curves.length - 1]?.rho)}`;
-  $('reading').textContent = `P/Ag ${fmt(r.P)} ${su} · M/(Ag·h) ${fmt(r.M)} ${su} · e/h ${fmt(r.eOverH, 3)} · ρg ${rho} (read on the ${sy.designFamily} curves at γ ${fmt(current.family.gamma)})`;
+  const d = current.request.section.shape.kind === 'circle' ? 'D' : 'h';
+  const chartUnits = current.divisor === 1 ? '' : ` (chart axes: ${fmt(M)}, ${fmt(P)})`;
+  $('reading').textContent = `P/Ag ${fmt(r.P)} ${su} · M/(Ag·${d}) ${fmt(r.M)} ${su}${chartUnits} · e/${d} ${fmt(r.eOverH, 3)} · ρg ${rho} (read on the ${sy.designFamily} curves at γ ${fmt(current.family.gamma)})`;
   const wrap = $('chart-wrap').getBoundingClientRect();
   hair.style.left = `${ev.clientX - wrap.left}px`;
   hair.style.top = `${ev.clientY - wrap.top}px`;
@@ -179,7 +181,8 @@ const cell = (v: unknown, d = 4, cls = ''): string =>
 
 function loadsTable(check: CheckJson): string {
   const u = check.units as { force: string; moment: string; stress: string; area: string };
-  const head = ['id', `Pu ${u.force}`, `Mu ${u.moment}`, `P/Ag ${u.stress}`, `M/(Ag·h) ${u.stress}`, 'e/h', 'ρg required', 'ρg chart', 'ρg rounded', `steel cost ${u.area}`, 'status'];
+  const d = (check.section as { shape: { kind: string } }).shape.kind === 'circle' ? 'D' : 'h';
+  const head = ['id', `Pu ${u.force}`, `Mu ${u.moment}`, `P/Ag ${u.stress}`, `M/(Ag·${d}) ${u.stress}`, `e/${d}`, 'ρg required', 'ρg chart', 'ρg rounded', `steel cost ${u.area}`, 'status'];
   const rows = check.results.map((r) => {
     const n = r.normalised as { P: number; M: number; eOverH: number | null };
     const status = [String(r.rhoStatus), r.governedBy !== 'curve' ? `${String(r.governedBy)} governs` : '', ...((r.notes as string[]) ?? [])].filter(Boolean).join('; ');
