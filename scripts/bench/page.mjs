@@ -1,6 +1,6 @@
 // Live page figures: time from an input change to the redrawn chart, measured in the browser with
 // performance.now() (the page's own timer, from reading the form to the finished vega run), for the
-// default 8-curve family with and without the bracketing sheets and with four loads; and the file size.
+// default 8-curve family (medians) with and without the bracketing sheets and with four loads; and the file size.
 import { statSync } from 'node:fs';
 import { openPage, writePage } from '../page-browser.mjs';
 
@@ -26,10 +26,10 @@ export async function run() {
   const { browser, page } = await openPage(plain);
   try {
     await timeChanges(page, 'gamma', gammas.slice(0, 5)); // warm up
-    rows.push({ figure: 'γ change → redrawn chart, 8 curves + 2 bracketing sheets (median)', value: await timeChanges(page, 'gamma', gammas), unit: 'ms', target: '≤ 50 ms' });
-    rows.push({ figure: 'f′c change → redrawn chart, same (median)', value: await timeChanges(page, 'fc', ['7.5ksi', '8ksi', '8.5ksi', '9ksi', '9.5ksi', '10ksi', '7ksi']), unit: 'ms', target: '≤ 50 ms' });
+    rows.push({ figure: 'page γ change → redrawn, 8 curves + 2 bracketing sheets', value: await timeChanges(page, 'gamma', gammas), unit: 'ms', target: '≤ 50 ms' });
+    rows.push({ figure: 'page f′c change → redrawn, same', value: await timeChanges(page, 'fc', ['7.5ksi', '8ksi', '8.5ksi', '9ksi', '9.5ksi', '10ksi', '7ksi']), unit: 'ms', target: '≤ 50 ms' });
     await page.evaluate(() => { document.getElementById('show-sheets').checked = false; });
-    rows.push({ figure: 'γ change → redrawn chart, 8 curves alone (median)', value: await timeChanges(page, 'gamma', gammas), unit: 'ms', target: '≤ 50 ms' });
+    rows.push({ figure: 'page γ change → redrawn, 8 curves alone', value: await timeChanges(page, 'gamma', gammas), unit: 'ms', target: '≤ 50 ms' });
   } finally {
     await browser.close();
   }
@@ -37,10 +37,10 @@ export async function run() {
   const opened = await openPage(demo);
   try {
     await timeChanges(opened.page, 'gamma', ['0.73', '0.74', '0.75']);
-    rows.push({ figure: 'γ change → chart and 4-load check redrawn (median)', value: await timeChanges(opened.page, 'gamma', gammas), unit: 'ms', target: '(reported)' });
+    rows.push({ figure: 'page γ change → chart and 4-load check redrawn', value: await timeChanges(opened.page, 'gamma', gammas), unit: 'ms', target: '(reported)' });
   } finally {
     await opened.browser.close();
   }
-  rows.push({ figure: 'page HTML size (vega, vega-lite and the core bundled)', value: statSync(plain).size / 1024 / 1024, unit: 'MB', target: '(reported)' });
+  rows.push({ figure: 'page HTML file size (vega, vega-lite, core)', value: statSync(plain).size / 1024 / 1024, unit: 'MB', target: '(reported)' });
   return rows;
 }
