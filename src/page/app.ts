@@ -239,10 +239,11 @@ async function update(): Promise<void> {
   const loads = readLoads();
   clearMessages('loads');
   let check: CheckJson | null = null;
+  let effects = '';
   if (loads) {
     const lv = await loadsView(fields, loads, grid());
     if (my !== seq) return;
-    if (lv.ok) check = lv.value;
+    if (lv.ok) ({ json: check, effectsText: effects } = lv.value);
     else showProblem(lv.problem.path, lv.problem.message);
   }
   const t2 = performance.now();
@@ -254,7 +255,7 @@ async function update(): Promise<void> {
   lastMs = performance.now() - t0;
   draws++;
   $('timing').textContent = `redrawn in ${lastMs.toFixed(0)} ms`;
-  $('loads-table').innerHTML = check ? loadsTable(check) : `<p class="muted">Type Pu and Mu, or paste a load CSV, with b and h (or D).</p>`;
+  $('loads-table').innerHTML = check ? loadsTable(check) + (effects ? `<pre class="effects">${esc(effects)}</pre>` : '') : `<p class="muted">Type Pu and Mu, or paste a load CSV, with b and h (or D).</p>`;
   $('view-title').textContent = cv.value.set.sheets[0]!.title;
   sheetsNote(cv.value);
   assumptions(cv.value, check);

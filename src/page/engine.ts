@@ -15,6 +15,7 @@
 import { computeFamily, type CurveFamily } from '../analysis/family.js';
 import { buildSheet, type BuiltSheet } from '../chart/sheet-data.js';
 import { checkJson, computeCheck, type CheckOptions } from '../cli/check.js';
+import { effectsText } from '../cli/check-effects.js';
 import { sheetSetFromFlags, type SheetOptions } from '../cli/sheet.js';
 import { familyFor, resolveTableOptions, type TableRequest } from '../cli/table.js';
 import type { ResolvedChartSet } from '../config/types.js';
@@ -91,13 +92,19 @@ export type PageLoads = { kind: 'typed'; pu: string; mu: string; muy?: string } 
 /** What `pmchart check --json` prints for the same flags (parsed). */
 export type CheckJson = Record<string, unknown> & { results: Record<string, unknown>[]; caution: string; assumptions: string[] };
 
+/** The check as the page shows it: the JSON, and the text the CLI prints about Muy and slenderness (often empty). */
+export interface LoadsView {
+  json: CheckJson;
+  effectsText: string;
+}
+
 /** The column check for the page's section and loads; the chart sheets read are those of the chosen grid. */
-export function loadsView(fields: PageFields, loads: PageLoads, grid: number): Promise<Outcome<CheckJson>> {
+export function loadsView(fields: PageFields, loads: PageLoads, grid: number): Promise<Outcome<LoadsView>> {
   return attempt(() => {
     const o: CheckOptions = { ...checkFlags(fields, loads, grid), json: true };
     if (loads.kind === 'csv') putVirtualFile(PASTED_LOADS, loads.text);
     const { rc, outcome } = computeCheck(o);
-    return JSON.parse(checkJson(rc, outcome)) as CheckJson;
+    return { json: JSON.parse(checkJson(rc, outcome)) as CheckJson, effectsText: (effectsText(rc, rc.effects, outcome) ?? '').trim() };
   });
 }
 

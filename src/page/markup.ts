@@ -93,6 +93,7 @@ table{border-collapse:collapse;font-variant-numeric:tabular-nums}
 th,td{border-bottom:1px solid var(--rule);padding:2px 8px;text-align:right;white-space:nowrap}
 th:first-child,td:first-child,td.status{text-align:left}
 tr.governing td{font-weight:bold;color:var(--caution)}
+pre.effects{background:#fbf1ef;padding:6px 8px;white-space:pre-wrap;font-size:12px}
 pre.copy{background:var(--panel);padding:6px 8px;white-space:pre-wrap;word-break:break-all;user-select:all;font-size:12px}
 .print-only{display:none}
 @media print{
