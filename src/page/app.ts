@@ -221,6 +221,8 @@ function commands(cv: ChartView, fields: PageFields, loads: PageLoads | null): v
 
 let seq = 0;
 let draws = 0;
+/** updates finished, drawn or stopped at a message */
+let settled = 0;
 let lastMs = NaN;
 let phases: Record<string, number> = {};
 
@@ -268,7 +270,9 @@ function schedule(): void {
   queued = true;
   requestAnimationFrame(() => {
     queued = false;
-    void update().catch(internalError);
+    void update()
+      .catch(internalError)
+      .finally(() => settled++);
   });
 }
 
@@ -354,6 +358,7 @@ window.pmchartPage = {
     },
   check: () => currentCheck,
   draws: () => draws,
+  settled: () => settled,
   lastMs: () => lastMs,
   phases: () => ({ ...phases, compiles }),
   exportSvg,

@@ -36,15 +36,11 @@ let page: Page;
 const problems: string[] = [];
 const requests: string[] = [];
 
-/** Sets a field as a user types it; resolves once the page has redrawn or shown a message. */
+/** Sets a field as a user types it; resolves once the page has finished the update it starts (drawn, or stopped at a message). */
 async function setField(key: string, value: string): Promise<void> {
-  const before = await page.evaluate(() => (window as unknown as { pmchartPage: { draws(): number } }).pmchartPage.draws());
+  const before = await page.evaluate(() => (window as unknown as { pmchartPage: { settled(): number } }).pmchartPage.settled());
   await page.evaluate(([k, v]) => (window as unknown as { pmchartPage: { set(k: string, v: string): void } }).pmchartPage.set(k!, v!), [key, value]);
-  await page.waitForFunction(
-    (n) => (window as unknown as { pmchartPage: { draws(): number } }).pmchartPage.draws() > n || [...document.querySelectorAll('.msg')].some((m) => !(m as HTMLElement).hidden),
-    before,
-    { timeout: 30_000 },
-  );
+  await page.waitForFunction((n) => (window as unknown as { pmchartPage: { settled(): number } }).pmchartPage.settled() > n, before, { timeout: 30_000 });
 }
 
 const visibleMessages = () =>
@@ -183,6 +179,18 @@ describe.sequential('pmchart page in Chromium', () => {
     expect(svg).toMatch(/^<svg/);
     expect(svg).toContain('For use by qualified engineers only. Check every result against the governing code edition and local practice');
     expect(svg).toContain('ACI 318-19');
+    expect(problems).toEqual([]);
+  });
+
+  it('typed Pu, Mu and Muy: the page prints the CLI’s own note that ρg required is for Mux alone', async () => {
+    await setField('loads', '');
+    await setField('pu', '900');
+    await setField('mu', '600');
+    await setField('muy', '300');
+    const note = await page.locator('#loads-table pre.effects').innerText();
+    const text = cli(['check', ...section, '--b', '24', '--h', '24', '--pu', '900', '--mu', '600', '--muy', '300', '--proposals', '0']).stdout;
+    expect(note).toContain('Mux alone');
+    expect(text).toContain(note.trim());
     expect(problems).toEqual([]);
   });
 
