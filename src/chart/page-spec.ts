@@ -45,6 +45,8 @@ export interface PageChartInput {
   /** chart value × divisor = stress (the normalising stress on dimensionless charts, else 1) */
   divisor: number;
   loads: readonly PageLoad[];
+  /** a line naming the bracketing sheets, set just above the plot of the whole sheet (exports) */
+  sheetsCaption?: string;
 }
 
 export type PageChartData = SheetData & { sheetCurves: SheetCurveRow[]; pageLoads: PageLoadRow[] };
@@ -128,7 +130,10 @@ export function pageChartData(input: PageChartInput): PageChartData {
   const pageLoads: PageLoadRow[] = [...loads].reverse().map((l, z) => ({ id: l.id, M: r5(l.M), P: r5(l.P), governing: l.governing ? 1 : 0, z }));
   // the invisible frame grows to hold loads outside the family, so every mark stays on the plot
   const frame = [...built.data.frame, ...pageLoads.map((l) => ({ M: r5(l.M * 1.08), P: r5(l.P * 1.04) }))];
-  return { ...built.data, frame, sheetCurves, pageLoads };
+  const texts = input.sheetsCaption
+    ? [...built.data.texts, { style: 'caption' as const, x: 0, y: round2(-0.5 * built.template.layout.u), text: input.sheetsCaption, z: built.data.texts.length }]
+    : built.data.texts;
+  return { ...built.data, texts, frame, sheetCurves, pageLoads };
 }
 
 /**

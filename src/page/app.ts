@@ -106,7 +106,7 @@ async function draw(cv: ChartView, check: CheckJson | null): Promise<void> {
   });
   const showSheets = $<HTMLInputElement>('show-sheets').checked;
   const template = pageChartTemplate(liveTemplateParams(cv.built.template));
-  currentData = pageChartData({ set: cv.set, built: cv.built, sheets: showSheets ? cv.sheets : [], divisor: cv.divisor, loads });
+  currentData = pageChartData({ set: cv.set, built: cv.built, sheets: showSheets ? cv.sheets : [], divisor: cv.divisor, loads, sheetsCaption: sheetsText(cv) });
   const data = liveData(currentData);
   const key = JSON.stringify(template);
   if (!view || key !== templateKey) {
@@ -199,14 +199,19 @@ function assumptions(cv: ChartView, check: CheckJson | null): void {
   $('assumptions').innerHTML = items.map((t) => `<li>${esc(t)}</li>`).join('');
 }
 
-function sheetsNote(cv: ChartView): void {
+/** What the faint families are, for the page and for the exported sheet. */
+function sheetsText(cv: ChartView): string {
   const g = cv.sheets.map((s) => s.gamma);
   const exact = fmt(cv.family.gamma);
-  $('sheets-note').textContent = $<HTMLInputElement>('show-sheets').checked
+  return $<HTMLInputElement>('show-sheets').checked
     ? g.length === 2
       ? `Faint grey families: the printed sheets γ = ${g[0]} and ${g[1]} of the ${grid()} grid; coloured: the exact γ = ${exact}.`
       : `γ = ${exact} sits on the ${grid()} grid: the printed sheet is the exact family.`
     : '';
+}
+
+function sheetsNote(cv: ChartView): void {
+  $('sheets-note').textContent = sheetsText(cv);
 }
 
 function commands(cv: ChartView, fields: PageFields, loads: PageLoads | null): void {
