@@ -9,6 +9,7 @@ import { isPmError } from '../errors.js';
 import { GENERATOR } from '../version.js';
 import { registerCheck } from './check.js';
 import { registerContour } from './contour.js';
+import { registerPage } from './page.js';
 import { registerSet } from './set.js';
 import { registerSheet } from './sheet.js';
 import { registerTable } from './table.js';
@@ -44,6 +45,7 @@ export function buildProgram(): Command {
   registerContour(program, runAction);
   registerSet(program, runAction);
   registerSheet(program, runAction);
+  registerPage(program, runAction);
   return program;
 }
 

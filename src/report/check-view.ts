@@ -287,22 +287,30 @@ function checkTextBody(c: ColumnCheck): string[] {
   lines.push(`Chart sheets read: γ = ${c.chart.lower}${c.chart.upper !== null ? ` and ${c.chart.upper}` : ''}`, '');
   lines.push(textTable(resultsView(c)), ...resultsFootnotes(c));
   lines.push('', `Summary: ${c.summary.text}.`);
+  const fx = effectsText(c);
+  if (fx) lines.push('', fx);
+  const bars = barsView(c);
+  lines.push('', typeof bars === 'string' ? bars : textTable(bars));
+  return lines;
+}
+
+/** The slenderness and biaxial sections of the text table (empty for a short uniaxial check). */
+export function effectsText(c: ColumnCheck): string {
+  const parts: string[] = [];
   const sl = slendernessView(c);
-  if (sl) lines.push('', `Slenderness (${sl.method}):`, textTable(sl.table));
+  if (sl) parts.push(`Slenderness (${sl.method}):`, textTable(sl.table));
   const bx = biaxialView(c);
   if (bx) {
-    lines.push(
-      '',
+    parts.push(
+      ...(parts.length ? [''] : []),
       'Biaxial (checked reinforcement, actual bars; > 1 fails). exact: along the load ray in (P, Mx, My); reciprocal: Pu/Pn (or the linear moment sum);',
       'contour: left-hand side (Mux/Mxo)^α + (Muy/Myo)^α. The M@P columns compare moments at fixed P: exact, and the contour value^(1/α).',
       textTable(bx),
     );
   } else if (c.biaxial) {
-    lines.push('', 'Biaxial: no reinforcement given, so ρg req biax is the exact biaxial ρg required; give --rho or a bar layout for the three methods side by side.');
+    parts.push(...(parts.length ? [''] : []), 'Biaxial: no reinforcement given, so ρg req biax is the exact biaxial ρg required (Mux and Muy together; ρg req is for Mux alone); give --rho or a bar layout for the three methods side by side.');
   }
-  const bars = barsView(c);
-  lines.push('', typeof bars === 'string' ? bars : textTable(bars));
-  return lines;
+  return parts.join('\n');
 }
 
 /** Text report: inputs, assumptions and clauses, results, slenderness steps, biaxial details, caution. */

@@ -1,0 +1,384 @@
+/// <reference lib="dom" />
+/**
+ * The live page in the browser: reads the form, asks engine.ts for every figure, draws the chart with
+ * vega-lite (the sheet template of src/chart/) and formats tables. Computes nothing itself.
+ */
+import * as vega from 'vega';
+import { compile } from 'vega-lite';
+import { expressionInterpreter } from 'vega-interpreter';
+import { liveData, liveTemplateParams, pageChartData, pageChartTemplate, type PageChartData, type PageLoad } from '../chart/page-spec.js';
+import { chartSetSnippet, commandLine } from './commands.js';
+import { chartView, checkFlags, loadsView, PAGE_CAUTION, readingAt, type ChartView, type CheckJson, type PageFields, type PageLoads } from './engine.js';
+import { ALL_FIELDS, FIELD_DEFAULTS, fieldForPath } from './fields.js';
+
+interface Presets {
+  fields: Record<string, string | boolean>;
+  grid?: number;
+  date: string;
+}
+
+const $ = <T extends HTMLElement = HTMLElement>(id: string): T => document.getElementById(id) as T;
+const presets = JSON.parse($('pmchart-presets').textContent ?? '{}') as Presets;
+
+// ── form ────────────────────────────────────────────────────────────────────────────────────────
+
+const control = (key: string) => $<HTMLInputElement & HTMLSelectElement & HTMLTextAreaElement>(`f-${key}`);
+
+function fillForm(): void {
+  const values = { ...FIELD_DEFAULTS, ...presets.fields };
+  for (const d of ALL_FIELDS) {
+    const v = values[d.key];
+    const el = control(d.key);
+    if (d.kind === 'checkbox') el.checked = v === true;
+    else el.value = v === undefined || v === true || v === false ? '' : String(v);
+  }
+  $<HTMLInputElement>('gamma-slider').value = control('gamma').value;
+  if (presets.grid) $<HTMLSelectElement>('grid').value = String(presets.grid);
+}
+
+/** The form as CLI options: empty fields are left out, so the CLI's defaults apply. */
+function readFields(): PageFields {
+  const o: Record<string, string | boolean | undefined> = {};
+  for (const d of ALL_FIELDS) {
+    if (['ratioKind', 'ratios', 'loads', 'pu', 'mu', 'muy'].includes(d.key)) continue;
+    const el = control(d.key);
+    if (d.kind === 'checkbox') o[d.key] = el.checked || undefined;
+    else if (el.value.trim() !== '') o[d.key] = el.value.trim();
+  }
+  const ratios = control('ratios').value.trim();
+  if (ratios !== '') o[control('ratioKind').value === 'omega' ? 'omega' : 'rho'] = ratios;
+  return o as PageFields;
+}
+
+function readLoads(): PageLoads | null {
+  const text = control('loads').value;
+  if (text.trim() !== '') return { kind: 'csv', text };
+  const pu = control('pu').value.trim();
+  const mu = control('mu').value.trim();
+  const muy = control('muy').value.trim();
+  if (pu === '' && mu === '' && muy === '') return null;
+  return { kind: 'typed', pu, mu, ...(muy ? { muy } : {}) } as PageLoads;
+}
+
+const grid = (): number => Number($<HTMLSelectElement>('grid').value);
+
+function clearMessages(scope: 'chart' | 'loads'): void {
+  const loadKeys = new Set(['pu', 'mu', 'muy', 'loads', 'b', 'h', 'diameter']);
+  for (const d of ALL_FIELDS) {
+    if ((scope === 'loads') !== loadKeys.has(d.key)) continue;
+    const m = $(`m-${d.key}`);
+    m.hidden = true;
+    m.textContent = '';
+    m.parentElement!.classList.remove('invalid');
+  }
+  if (scope === 'chart') {
+    $('m-general').hidden = true;
+  }
+}
+
+function showProblem(path: string, message: string): void {
+  const key = fieldForPath(path);
+  const m = key ? $(`m-${key}`) : $('m-general');
+  m.textContent = message;
+  m.hidden = false;
+  m.parentElement!.classList.add('invalid');
+  const details = m.closest('details');
+  if (details) details.open = true;
+}
+
+// ── chart ───────────────────────────────────────────────────────────────────────────────────────
+
+let view: vega.View | null = null;
+let templateKey = '';
+let current: ChartView | null = null;
+let currentCheck: CheckJson | null = null;
+let datasetNames: string[] = [];
+
+let currentData: PageChartData | null = null;
+let compiles = 0;
+
+const compileView = (template: Record<string, unknown>, data: PageChartData) => vega.parse(compile({ ...template, datasets: data } as never).spec, undefined, { ast: true });
+
+async function draw(cv: ChartView, check: CheckJson | null): Promise<void> {
+  const loads: PageLoad[] = (check?.results ?? []).map((r) => {
+    const n = r.normalised as { P: number | null; M: number | null };
+    return { id: String(r.id), M: (n.M ?? NaN) / cv.divisor, P: (n.P ?? NaN) / cv.divisor, governing: r.governing === true };
+  });
+  const showSheets = $<HTMLInputElement>('show-sheets').checked;
+  const template = pageChartTemplate(liveTemplateParams(cv.built.template));
+  currentData = pageChartData({ set: cv.set, built: cv.built, sheets: showSheets ? cv.sheets : [], divisor: cv.divisor, loads, sheetsCaption: sheetsText(cv) });
+  const data = liveData(currentData);
+  const key = JSON.stringify(template);
+  if (!view || key !== templateKey) {
+    // compile once per template; later changes only swap the datasets
+    const vgSpec = compile({ ...template, datasets: data } as never).spec;
+    view?.finalize();
+    view = new vega.View(vega.parse(vgSpec, undefined, { ast: true }), { expr: expressionInterpreter as never, renderer: 'svg', container: '#chart', hover: false });
+    templateKey = key;
+    compiles++;
+    const declared = new Set(((vgSpec.data ?? []) as { name: string }[]).map((d) => d.name));
+    datasetNames = Object.keys(data).filter((name) => declared.has(name));
+    await view.runAsync();
+    fitToWidth(template);
+    return;
+  }
+  for (const name of datasetNames) view.data(name, (data as unknown as Record<string, unknown[]>)[name] ?? []);
+  await view.runAsync();
+}
+
+/** A viewBox lets the drawing scale with the page's width (vega gives the SVG a fixed size). */
+function fitToWidth(template: Record<string, unknown>): void {
+  const svg = $('chart').querySelector('svg');
+  const pad = template.padding as { left: number; right: number; top: number; bottom: number };
+  const w = (template.width as number) + pad.left + pad.right;
+  const h = (template.height as number) + pad.top + pad.bottom;
+  svg?.setAttribute('viewBox', `0 0 ${w} ${h}`);
+  svg?.setAttribute('preserveAspectRatio', 'xMinYMin meet');
+}
+
+// ── reading aid ─────────────────────────────────────────────────────────────────────────────────
+
+const fmt = (x: number | null | undefined, d = 4): string => (x === null || x === undefined || Number.isNaN(x) ? '—' : Number.isFinite(x) ? String(Number(x.toPrecision(d))) : '∞');
+
+function pointerReading(ev: PointerEvent): void {
+  if (!view || !current) return;
+  const el = $('chart').querySelector('svg, canvas');
+  if (!el) return;
+  // the drawing is scaled to the page's width: back to the view's own units
+  const box = el.getBoundingClientRect();
+  const live = liveTemplateParams(current.built.template).layout;
+  const k = live.page.w / box.width;
+  const [ox, oy] = view.origin();
+  const x = (ev.clientX - box.left) * k - ox;
+  const y = (ev.clientY - box.top) * k - oy;
+  const L = live.plot;
+  const hair = $('crosshair');
+  if (x < 0 || y < 0 || x > L.w || y > L.h) {
+    hair.hidden = true;
+    return;
+  }
+  const M = (view.scale('x') as unknown as { invert(v: number): number }).invert(x);
+  const P = (view.scale('y') as unknown as { invert(v: number): number }).invert(y);
+  const r = readingAt(current, M, P);
+  const su = current.request.section.units === 'us' ? 'ksi' : 'MPa';
+  const sy = current.request.section.basis.symbols;
+  const rho =
+    r.reading.position === 'between' ? fmt(r.reading.rho) : r.reading.position === 'inside-lowest' ? `≤ ${fmt(r.reading.rho)}` : `> ${fmt(current.family.curves[current.family.curves.length - 1]?.rho)}`;
+  const d = current.request.section.shape.kind === 'circle' ? 'D' : 'h';
+  const chartUnits = current.divisor === 1 ? '' : ` (chart axes: ${fmt(M)}, ${fmt(P)})`;
+  $('reading').textContent = `P/Ag ${fmt(r.P)} ${su} · M/(Ag·${d}) ${fmt(r.M)} ${su}${chartUnits} · e/${d} ${fmt(r.eOverH, 3)} · ρg ${rho} (read on the ${sy.designFamily} curves at γ ${fmt(current.family.gamma)})`;
+  const wrap = $('chart-wrap').getBoundingClientRect();
+  hair.style.left = `${ev.clientX - wrap.left}px`;
+  hair.style.top = `${ev.clientY - wrap.top}px`;
+  hair.hidden = false;
+}
+
+// ── tables and text ─────────────────────────────────────────────────────────────────────────────
+
+const esc = (s: string): string => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
+const cell = (v: unknown, d = 4, cls = ''): string =>
+  `<td${cls ? ` class="${cls}"` : ''} data-value="${v === null || v === undefined ? '' : esc(String(v))}">${typeof v === 'number' ? fmt(v, d) : v === null || v === undefined ? '—' : esc(String(v))}</td>`;
+
+function loadsTable(check: CheckJson): string {
+  const u = check.units as { force: string; moment: string; stress: string; area: string };
+  const d = (check.section as { shape: { kind: string } }).shape.kind === 'circle' ? 'D' : 'h';
+  const biax = check.results.some((r) => r.biaxial != null);
+  const head = ['id', `Pu ${u.force}`, `Mu ${u.moment}`, `P/Ag ${u.stress}`, `M/(Ag·${d}) ${u.stress}`, `e/${d}`, 'ρg required', ...(biax ? ['ρg req biax'] : []), 'ρg chart', 'ρg rounded', `steel cost ${u.area}`, 'status'];
+  const rows = check.results.map((r) => {
+    const n = r.normalised as { P: number; M: number; eOverH: number | null };
+    const b = r.biaxial as { rhoRequired: number | null } | null | undefined;
+    // the check engine's status, its reason, and the notes (the CLI's words)
+    const status = [String(r.status), String(r.statusReason ?? ''), ...((r.notes as string[]) ?? [])].filter(Boolean).join('; ');
+    return `<tr class="${r.governing ? 'governing' : ''}" data-id="${esc(String(r.id))}">${cell(`${r.governing ? '◆ ' : ''}${String(r.id)}`)}${cell(r.Pu, 5)}${cell(r.Mu, 5)}${cell(n.P)}${cell(n.M)}${cell(n.eOverH, 3)}${cell(r.rhoRequired, 4, 'rho-required')}${biax ? cell(b?.rhoRequired ?? null, 4, 'rho-required-biaxial') : ''}${cell(r.rhoFromChart, 4, 'rho-chart')}${cell(r.rhoRoundedDown, 3, 'rho-rounded')}${cell(r.extraSteelRoundedDown, 3, 'steel-cost')}${cell(status, 4, 'status')}</tr>`;
+  });
+  const chart = check.chart as { sheets: number[]; gammaStep: number };
+  return `<table id="results"><thead><tr>${head.map((h) => `<th>${esc(h)}</th>`).join('')}</tr></thead><tbody>${rows.join('')}</tbody></table>
+<p class="muted">◆ governing load. Chart readings as read on the printed sheets γ = ${chart.sheets.join(' and ')} (grid ${chart.gammaStep}); rounded: the next lower sheet, next curve out; steel cost: what that rounding adds over the exact ρg.</p>`;
+}
+
+function assumptions(cv: ChartView, check: CheckJson | null): void {
+  const b = cv.request.section.basis;
+  const items = [`${b.title}.`, ...b.notes, ...(check ? check.assumptions : []), PAGE_CAUTION];
+  $('assumptions').innerHTML = items.map((t) => `<li>${esc(t)}</li>`).join('');
+}
+
+/** What the faint families are, for the page and for the exported sheet. */
+function sheetsText(cv: ChartView): string {
+  const g = cv.sheets.map((s) => s.gamma);
+  const exact = fmt(cv.family.gamma);
+  return $<HTMLInputElement>('show-sheets').checked
+    ? g.length === 2
+      ? `Faint grey families: the printed sheets γ = ${g[0]} and ${g[1]} of the ${grid()} grid; coloured: the exact γ = ${exact}.`
+      : `γ = ${exact} sits on the ${grid()} grid: the printed sheet is the exact family.`
+    : '';
+}
+
+function sheetsNote(cv: ChartView): void {
+  $('sheets-note').textContent = sheetsText(cv);
+}
+
+function commands(cv: ChartView, fields: PageFields, loads: PageLoads | null): void {
+  $('cmd-sheet').textContent = commandLine('sheet', fields as Record<string, unknown>, ['--out', 'sheet.pdf']);
+  $('cmd-check').textContent = loads
+    ? commandLine('check', checkFlags(fields, loads, grid()) as Record<string, unknown>).replace('pasted-loads.csv', 'loads.csv') + (loads.kind === 'csv' ? '    # save the pasted CSV as loads.csv' : '')
+    : 'pmchart check … (enter loads and b·h to get this line)';
+  $('set-json').textContent = chartSetSnippet(cv, fields);
+}
+
+// ── update loop ─────────────────────────────────────────────────────────────────────────────────
+
+let seq = 0;
+let draws = 0;
+/** updates finished, drawn or stopped at a message */
+let settled = 0;
+let lastMs = NaN;
+let phases: Record<string, number> = {};
+
+async function update(): Promise<void> {
+  const my = ++seq;
+  const t0 = performance.now();
+  const fields = readFields();
+  const cv = await chartView(fields, grid(), presets.date);
+  const t1 = performance.now();
+  if (my !== seq) return;
+  clearMessages('chart');
+  if (!cv.ok) {
+    showProblem(cv.problem.path, cv.problem.message);
+    return; // the chart keeps its last valid state
+  }
+  const loads = readLoads();
+  clearMessages('loads');
+  let check: CheckJson | null = null;
+  let effects = '';
+  if (loads) {
+    const lv = await loadsView(fields, loads, grid());
+    if (my !== seq) return;
+    if (lv.ok) ({ json: check, effectsText: effects } = lv.value);
+    else showProblem(lv.problem.path, lv.problem.message);
+  }
+  const t2 = performance.now();
+  await draw(cv.value, check);
+  if (my !== seq) return;
+  phases = { chart: t1 - t0, loads: t2 - t1, draw: performance.now() - t2 };
+  current = cv.value;
+  currentCheck = check;
+  lastMs = performance.now() - t0;
+  draws++;
+  $('timing').textContent = `redrawn in ${lastMs.toFixed(0)} ms`;
+  $('loads-table').innerHTML = check ? loadsTable(check) + (effects ? `<pre class="effects">${esc(effects)}</pre>` : '') : `<p class="muted">Type Pu and Mu, or paste a load CSV, with b and h (or D).</p>`;
+  $('view-title').textContent = cv.value.set.sheets[0]!.title;
+  sheetsNote(cv.value);
+  assumptions(cv.value, check);
+  commands(cv.value, fields, loads);
+}
+
+let queued = false;
+function schedule(): void {
+  if (queued) return;
+  queued = true;
+  requestAnimationFrame(() => {
+    queued = false;
+    void update()
+      .catch(internalError)
+      .finally(() => settled++);
+  });
+}
+
+function internalError(e: unknown): void {
+  const m = $('m-general');
+  m.textContent = `internal error: ${e instanceof Error ? e.message : String(e)}`;
+  m.hidden = false;
+  console.error(e);
+}
+
+// ── export ──────────────────────────────────────────────────────────────────────────────────────
+
+function download(name: string, href: string): void {
+  const a = document.createElement('a');
+  a.href = href;
+  a.download = name;
+  document.body.appendChild(a);
+  a.click();
+  a.remove();
+}
+
+/** The chart as SVG, with the caution and the basis assumptions carried in its description. */
+/** The whole sheet (title block, lookup table, basis notes, caution) with the page's overlays, drawn off screen. */
+function sheetView(): vega.View | null {
+  if (!current || !currentData) return null;
+  return new vega.View(compileView(pageChartTemplate(current.built.template), currentData), { expr: expressionInterpreter as never, renderer: 'none' });
+}
+
+async function exportSvg(): Promise<string> {
+  const full = sheetView();
+  if (!full || !current) return '';
+  const svg = await full.toSVG();
+  full.finalize();
+  const b = current.request.section.basis;
+  const desc = [PAGE_CAUTION, `${b.title}.`, ...b.notes, ...(currentCheck ? currentCheck.assumptions : [])].join('\n');
+  return svg.replace(/<svg\b[^>]*>/, (open) => `${open}<title>pmchart live chart</title><desc>${esc(desc)}</desc>`);
+}
+
+function wire(): void {
+  const form = $('inputs');
+  form.addEventListener('input', (ev) => {
+    const t = ev.target as HTMLElement;
+    if (t.id === 'gamma-slider') control('gamma').value = (t as HTMLInputElement).value;
+    if (t.id === 'f-gamma') {
+      const v = Number(control('gamma').value);
+      if (Number.isFinite(v)) $<HTMLInputElement>('gamma-slider').value = String(v);
+    }
+    schedule();
+  });
+  form.addEventListener('change', schedule);
+  form.addEventListener('submit', (ev) => ev.preventDefault());
+  $('clear-loads').addEventListener('click', () => {
+    for (const k of ['pu', 'mu', 'muy', 'loads']) control(k).value = '';
+    schedule();
+  });
+  $('chart').addEventListener('pointermove', pointerReading);
+  $('chart').addEventListener('pointerleave', () => ($('crosshair').hidden = true));
+  $('export-svg').addEventListener('click', () => {
+    void exportSvg().then((svg) => download('pmchart-chart.svg', URL.createObjectURL(new Blob([svg], { type: 'image/svg+xml' }))));
+  });
+  $('export-png').addEventListener('click', () => {
+    const full = sheetView();
+    void full?.toImageURL('png', 2).then((url) => {
+      full.finalize();
+      download('pmchart-chart.png', url);
+    });
+  });
+  $('print').addEventListener('click', () => window.print());
+}
+
+/** Hooks for the browser tests and the bench (read-only views of what the page holds). */
+declare global {
+  interface Window {
+    pmchartPage: unknown;
+  }
+}
+window.pmchartPage = {
+  family: () =>
+    current && {
+      gamma: current.family.gamma,
+      cOverH: Array.from(current.family.sweep.cOverH),
+      curves: current.family.curves.map((c) => ({ rho: c.rho, Pn: Array.from(c.Pn), Mn: Array.from(c.Mn), phiPn: Array.from(c.phiPn), phiMn: Array.from(c.phiMn), keyPoints: c.keyPoints })),
+    },
+  check: () => currentCheck,
+  draws: () => draws,
+  settled: () => settled,
+  lastMs: () => lastMs,
+  phases: () => ({ ...phases, compiles }),
+  exportSvg,
+  /** sets a field as a user would and resolves when the page has redrawn (or given up with a message) */
+  set: (key: string, value: string) => {
+    const el = key === 'grid' ? $<HTMLSelectElement>('grid') : control(key);
+    el.value = value;
+    el.dispatchEvent(new Event('input', { bubbles: true }));
+  },
+  update: () => update(),
+};
+
+fillForm();
+wire();
+void update().catch(internalError);

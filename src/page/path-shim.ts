@@ -1,0 +1,8 @@
+/** Stands in for `node:path` in the browser bundle (src/page/build.ts aliases it): the two calls the CLI modules the page reuses make. */
+export function extname(p: string): string {
+  const base = p.slice(p.lastIndexOf('/') + 1);
+  const dot = base.lastIndexOf('.');
+  return dot <= 0 ? '' : base.slice(dot);
+}
+export const resolve = (...parts: string[]): string => parts[parts.length - 1] ?? '';
+export default { extname, resolve };

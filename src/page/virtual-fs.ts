@@ -1,0 +1,27 @@
+/**
+ * Stands in for `node:fs` in the browser bundle only (src/page/build.ts aliases it). The page has no disk:
+ * text the user pasted is offered under a made-up file name, so the CLI's own readers (which read files)
+ * run unchanged on it and nothing is parsed twice. Pasted data never leaves the page.
+ * Goes away when the check takes loads as data (issue 9) and the CSV reader is browser-safe (issue 14).
+ */
+const files = new Map<string, string>();
+
+/** Offers `text` as the contents of `name` to the next `readFileSync(name)`. */
+export function putVirtualFile(name: string, text: string): void {
+  files.set(name, text);
+}
+
+export function readFileSync(name: string): string {
+  const text = files.get(String(name));
+  if (text === undefined) throw Object.assign(new Error(`${String(name)}: no such file in the page`), { code: 'ENOENT' });
+  return text;
+}
+
+const noDisk = (): never => {
+  throw Object.assign(new Error('the page writes no files'), { code: 'EROFS' });
+};
+export const writeFileSync = noDisk;
+export const renameSync = noDisk;
+export const rmSync = noDisk;
+export const existsSync = (name: string): boolean => files.has(String(name));
+export default { readFileSync, writeFileSync, renameSync, rmSync, existsSync };
