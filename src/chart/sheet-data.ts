@@ -716,6 +716,12 @@ function sideColumn(ctx: SheetContext, g: Deco, fit: { picture: number; notes: T
       : `Values are divided by Ag (and h for moments), in ${su}; h is the depth in the bending plane (D for circular columns).`,
     'Short column: slenderness, creep and second-order effects are not included.',
   ];
+  const arr = family.arrangement;
+  if (arr.kind === 'ring') {
+    extra.push(
+      `Orientation: the ${arr.bars} bars are drawn with one bar at the compression extreme. Turned half a bar pitch (${fmt(180 / arr.bars, 3)}°) the curves differ slightly; pmchart check takes the weaker orientation for every load.`,
+    );
+  }
   // the basis notes state why the curves step; a smoothed drawing says which model it then shows
   if (set.referenceLines.barEntry === false && barEntryIndices(family.sweep.cOverH).size > 0) {
     extra.push('Drawn smoothed: where a bar row enters the rectangular stress block the computed curve steps inward; each step is drawn here as a chord on its inner side. Key points and tables keep the computed model (block with displaced concrete deducted).');
