@@ -8,6 +8,7 @@
  *
  * EN 1992-1-1 is an SI code: the basis accepts `units: 'si'` only (N, mm, MPa).
  */
+import { STEEL_EPS_UK_RANGE, STEEL_K_RANGE } from '../input/limits.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
 import { inclinedBranchSteel } from '../materials/inclined-branch-steel.js';
@@ -143,8 +144,8 @@ function resolveEc2(input: BasisInput): Basis {
   const gammaS = requireInRange('--gamma-s', o.gammaS ?? EC2_RECOMMENDED.gammaS, 1.0, 1.5);
   const lawName = o.concreteLaw ?? 'parabola-rectangle';
   const branch = o.steelBranch ?? 'horizontal';
-  const k = requireInRange('--steel-k', o.steelK ?? EC2_CLASS_B.k, 1.0, 1.35); // Table C.1 classes A–C
-  const epsUk = requireInRange('--steel-eps-uk', o.steelEpsUk ?? EC2_CLASS_B.epsUk, 0.025, 0.15);
+  const k = requireInRange('--steel-k', o.steelK ?? EC2_CLASS_B.k, ...STEEL_K_RANGE); // Table C.1 classes A–C
+  const epsUk = requireInRange('--steel-eps-uk', o.steelEpsUk ?? EC2_CLASS_B.epsUk, ...STEEL_EPS_UK_RANGE);
   const epsUd = branch === 'inclined' ? EC2_EPS_UD_RATIO * epsUk : Infinity; // 3.2.7(2)b: no limit on the horizontal branch
 
   const Es = EC2_STEEL_MODULUS;

@@ -6,7 +6,7 @@
  * Unit-free limits (γ, ρg, ω, counts) also go into the generated JSON Schema; ranges that depend on
  * units or on the basis (f′c, fy, lengths) stay in the rule stages that know them.
  */
-import { MAX_QUANTITY_CHARS } from '../units/index.js';
+import { MAX_QUANTITY_CHARS, unitSuffixes, type QuantityKind } from '../units/index.js';
 
 /** γ a sheet or a section may use (common practice: outer rows closer than 0.3·h or beyond 0.95·h are not buildable). */
 export const GAMMA_RANGE = [0.3, 0.95] as const;
@@ -69,13 +69,33 @@ export const LOAD_MAX_ABS = 1e9;
 export const ALPHA_CC_RANGE = [0.8, 1.0] as const;
 export const GAMMA_C_RANGE = [1.0, 2.0] as const;
 export const GAMMA_S_RANGE = [1.0, 1.5] as const;
+/** EN 1992-1-1 Annex C Table C.1, classes A–C: k = (ft/fy)k and εuk. */
+export const STEEL_K_RANGE = [1.0, 1.35] as const;
+export const STEEL_EPS_UK_RANGE = [0.025, 0.15] as const;
 
 /** Enums shared by flags and config. */
 export const CONCRETE_LAWS = ['parabola-rectangle', 'rectangular-block'] as const;
 export const STEEL_BRANCHES = ['horizontal', 'inclined'] as const;
 
-/** Pattern of a quantity written as text: a decimal number and an optional unit (no hex, no "Infinity"). */
-export const QUANTITY_PATTERN = '^\\s*[-+]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][-+]?\\d+)?\\s*[A-Za-z/·\\-0-9²]*\\s*$';
+/**
+ * Pattern of a quantity of `kind` written as text: a decimal number and an optional unit of that
+ * kind in any letter case (no hex, no "Infinity"). JSON Schema patterns have no flags, so each
+ * letter is spelled [kK]; "-" also matches "·" and "2" also "²", as the parser reads them.
+ */
+export function quantityPattern(kind: QuantityKind): string {
+  const letter = (c: string) => {
+    if (/[a-z]/.test(c)) return `[${c}${c.toUpperCase()}]`;
+    if (c === '-') return '[-·]';
+    if (c === '2') return '[2²]';
+    if (c === '/') return '/';
+    return c;
+  };
+  const units = unitSuffixes(kind)
+    .sort((a, b) => b.length - a.length)
+    .map((u) => [...u].map(letter).join(''))
+    .join('|');
+  return `^\\s*[-+]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][-+]?\\d+)?\\s*(${units})?\\s*$`;
+}
 /** Pattern of a set name (also the output folder name). */
 export const NAME_PATTERN = '^[A-Za-z0-9][A-Za-z0-9_-]*$';
 /** Pattern of an issue date; the calendar check is `isCalendarDate`. */

@@ -153,6 +153,13 @@ export function splitQuantity(raw: string): { number: string; unit: string } | u
   return UNIT_CHARS.test(unit) ? { number, unit } : undefined;
 }
 
+/** The unit suffixes accepted for a kind, in lower case ("ksi", "psi", "mpa", …). */
+export function unitSuffixes(kind: QuantityKind): string[] {
+  return Object.entries(SUFFIXES)
+    .filter(([, d]) => d.kind === kind)
+    .map(([s]) => s);
+}
+
 function exampleUnits(kind: QuantityKind): string {
   return Object.entries(SUFFIXES)
     .filter(([, d]) => d.kind === kind)
