@@ -7,6 +7,7 @@ import { computeFamily, type CurveFamily, type KeyPoint, type PointValues } from
 import { omegaFromRho, rhoFromOmega } from '../codes/mechanical-ratio.js';
 import type { Basis } from '../codes/types.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
+import { RHO_RANGE, TABLE_CURVES_MAX, TABLE_POINTS_RANGE, TABLE_ROWS_MAX } from '../input/limits.js';
 import { DISPLAY_UNITS } from '../units/index.js';
 import { generatorLabel } from '../version.js';
 import { csvLine, fmt, num, parseNumberList } from './format.js';
@@ -24,7 +25,16 @@ export interface TableOptions extends SectionFlags {
 }
 
 /** ρg span every family must stay inside (for --rho and --omega alike). */
-export const RHO_RANGE: [number, number] = [0.001, 0.1];
+export { RHO_RANGE };
+
+/** Every value in range and larger than the one before (as chart-set files require), at most TABLE_CURVES_MAX. */
+function requireIncreasing(path: string, list: number[], range: readonly [number, number]): void {
+  if (list.length > TABLE_CURVES_MAX) throw new PmError(ERROR_CODES.outOfRange, path, `gives ${list.length} curves, beyond ${TABLE_CURVES_MAX}`, { allowed: `1–${TABLE_CURVES_MAX}` });
+  list.forEach((r, k) => {
+    requireInRange(path, r, range[0], range[1]);
+    if (k > 0 && !(r > list[k - 1]!)) throw new PmError(ERROR_CODES.invalidValue, path, 'must be larger than the value before it', { value: r });
+  });
+}
 
 /** Parses a ρg list flag against the allowed 0.001–0.10 span. */
 export function parseRhoList(text: string | undefined, path = '--rho'): number[] {
@@ -32,7 +42,7 @@ export function parseRhoList(text: string | undefined, path = '--rho'): number[]
   if (!list || list.length === 0) {
     throw new PmError(ERROR_CODES.invalidValue, path, 'is not a list (0.01,0.02) or a range start:stop:step', { value: text });
   }
-  for (const r of list) requireInRange(path, r, RHO_RANGE[0], RHO_RANGE[1]);
+  requireIncreasing(path, list, RHO_RANGE);
   return list;
 }
 
@@ -47,7 +57,7 @@ export function parseOmegaList(text: string, basis: Basis, path = '--omega'): { 
   }
   const lo = Number(omegaFromRho(basis, RHO_RANGE[0]).toPrecision(3));
   const hi = Number(omegaFromRho(basis, RHO_RANGE[1]).toPrecision(3));
-  for (const w of list) requireInRange(path, w, lo, hi);
+  requireIncreasing(path, list, [lo, hi]);
   return { omegas: list, rhos: list.map((w) => Number(rhoFromOmega(basis, w).toPrecision(12))) };
 }
 
@@ -68,13 +78,23 @@ export function resolveTableOptions(o: TableOptions): TableRequest {
   }
   const basePoints = o.points === undefined ? 400 : Number(o.points);
   if (!Number.isInteger(basePoints)) throw new PmError(ERROR_CODES.invalidValue, '--points', 'is not a whole number', { value: o.points });
-  requireInRange('--points', basePoints, 400, 20000);
+  requireInRange('--points', basePoints, TABLE_POINTS_RANGE[0], TABLE_POINTS_RANGE[1]);
   if (o.omega !== undefined) {
     if (o.rho !== undefined) throw new PmError(ERROR_CODES.conflict, '--omega', 'and --rho both set the families; give one of them');
     const { omegas, rhos } = parseOmegaList(o.omega, section.basis);
+    requireRows(rhos.length, basePoints);
     return { section, rhos, omegas, dimensionless: o.dimensionless === true, basePoints };
   }
-  return { section, rhos: parseRhoList(o.rho), dimensionless: o.dimensionless === true, basePoints };
+  const rhos = parseRhoList(o.rho);
+  requireRows(rhos.length, basePoints);
+  return { section, rhos, dimensionless: o.dimensionless === true, basePoints };
+}
+
+/** Curves × points is bounded before any curve is computed. */
+function requireRows(curves: number, points: number): void {
+  if (curves * points > TABLE_ROWS_MAX) {
+    throw new PmError(ERROR_CODES.outOfRange, '--points', `× ${curves} curves gives ${curves * points} rows, beyond ${TABLE_ROWS_MAX}`, { value: points, allowed: `curves × points ≤ ${TABLE_ROWS_MAX}` });
+  }
 }
 
 export function familyFor(req: TableRequest): CurveFamily {

@@ -8,7 +8,6 @@
  *
  * EN 1992-1-1 is an SI code: the basis accepts `units: 'si'` only (N, mm, MPa).
  */
-import { STEEL_EPS_UK_RANGE, STEEL_K_RANGE } from '../input/limits.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
 import { inclinedBranchSteel } from '../materials/inclined-branch-steel.js';
@@ -27,6 +26,9 @@ export const EC2_RECOMMENDED = { alphaCc: 1.0, gammaC: 1.5, gammaS: 1.15 } as co
 
 /** Reinforcement ductility class B (EN 1992-1-1 Annex C, Table C.1): k ≥ 1.08, εuk ≥ 5.0 %. */
 export const EC2_CLASS_B = { k: 1.08, epsUk: 0.05 } as const;
+/** k = (ft/fy)k and εuk over reinforcement classes A–C (EN 1992-1-1 Annex C, Table C.1). */
+export const STEEL_K_RANGE = [1.0, 1.35] as const;
+export const STEEL_EPS_UK_RANGE = [0.025, 0.15] as const;
 
 /** EN 1992-1-1 3.2.7(2) Note 1: recommended εud = 0.9·εuk. */
 export const EC2_EPS_UD_RATIO = 0.9;

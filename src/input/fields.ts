@@ -70,10 +70,11 @@ export function deepestIssue(issues: readonly Issue[]): Issue {
 export function describeIssue(i: Issue): string {
   switch (i.code) {
     case 'invalid_type':
-      return `must be ${i.expected === 'array' ? 'a list' : `a ${i.expected}`}`;
+      return `must be ${i.expected === 'array' ? 'a list' : i.expected === 'object' ? 'an object' : `a ${i.expected}`}`;
     case 'unrecognized_keys':
       return `has unknown field${i.keys.length > 1 ? 's' : ''} ${i.keys.map((k) => `"${k}"`).join(', ')}`;
     case 'invalid_value':
+      if (!i.message.startsWith('Invalid')) return i.message;
       return `must be one of ${i.values.map((v) => JSON.stringify(v)).join(', ')}`;
     case 'invalid_union':
       return 'has the wrong form (see charts-config/chart-set.schema.json)';
@@ -82,15 +83,18 @@ export function describeIssue(i: Issue): string {
   }
 }
 
-/** The value an issue is about, shown before the words when it is short and plain. */
-export function shownInput(i: Issue): string | undefined {
+/**
+ * The value an issue is about, shown before the words when it is short and plain. Config files
+ * quote strings as JSON does; flags show them as typed (`raw`).
+ */
+export function shownInput(i: Issue, raw = false): string | undefined {
   const v = (i as { input?: unknown }).input;
   if (i.code === 'too_small' || i.code === 'too_big') {
     if (typeof v === 'number') return String(v);
     return undefined;
   }
-  if (i.code === 'invalid_format' || i.code === 'custom') {
-    if (typeof v === 'string') return v.length > 24 ? `${JSON.stringify(v.slice(0, 12))}…` : JSON.stringify(v);
+  if (i.code === 'invalid_format' || i.code === 'custom' || (raw && i.code === 'invalid_value')) {
+    if (typeof v === 'string') return v.length > 24 ? `${JSON.stringify(v.slice(0, 12))}…` : raw && v.trim() !== '' && !/\s/.test(v) ? v : JSON.stringify(v);
   }
   return undefined;
 }
@@ -106,10 +110,10 @@ export function formatPath(path: readonly PropertyKey[]): string {
  * safeParse with the first (deepest) issue turned into one PmError. `place` maps the issue's path
  * (the field key) to what the user wrote: a config path, a flag, a CSV line and column.
  */
-export function parseOrThrow<T extends z.ZodType>(schema: T, value: unknown, place: (path: readonly PropertyKey[]) => string = formatPath): z.output<T> {
+export function parseOrThrow<T extends z.ZodType>(schema: T, value: unknown, place: (path: readonly PropertyKey[]) => string = formatPath, raw = false): z.output<T> {
   const r = schema.safeParse(value, { reportInput: true });
   if (r.success) return r.data;
   const issue = deepestIssue(r.error.issues);
-  const shown = shownInput(issue);
+  const shown = shownInput(issue, raw);
   throw new PmError(ERROR_CODES.invalidValue, place(issue.path), describeIssue(issue), shown === undefined ? {} : { value: shown });
 }

@@ -69,9 +69,8 @@ export const LOAD_MAX_ABS = 1e9;
 export const ALPHA_CC_RANGE = [0.8, 1.0] as const;
 export const GAMMA_C_RANGE = [1.0, 2.0] as const;
 export const GAMMA_S_RANGE = [1.0, 1.5] as const;
-/** EN 1992-1-1 Annex C Table C.1, classes A–C: k = (ft/fy)k and εuk. */
-export const STEEL_K_RANGE = [1.0, 1.35] as const;
-export const STEEL_EPS_UK_RANGE = [0.025, 0.15] as const;
+/** EN 1992-1-1 Annex C Table C.1, classes A–C: k = (ft/fy)k and εuk (the basis checks them too). */
+export { STEEL_EPS_UK_RANGE, STEEL_K_RANGE } from '../codes/en1992.js';
 
 /** Enums shared by flags and config. */
 export const CONCRETE_LAWS = ['parabola-rectangle', 'rectangular-block'] as const;

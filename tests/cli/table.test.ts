@@ -48,7 +48,7 @@ describe('pmchart table (CLI)', () => {
       [['--fc', '30'], '--fc: 30 ksi is outside 2.5–20 ksi'],
       [['--rho', '0.2'], '--rho: 0.2 is outside 0.001–0.1'],
       [['--format', 'xml'], '--format: xml is not one of the allowed values (allowed: csv, json)'],
-      [['--arrangement', 'ring', '--shape', 'circle', '--bars', '2'], '--bars: 2 is outside 4–60'],
+      [['--arrangement', 'ring', '--shape', 'circle', '--bars', '2'], '--bars: 2 is outside 4–48'], // the chart-set limit (issue 14: CLI and config share limits),
     ] as [string[], string][]) {
       const r = cli([...base, ...args]);
       expect(r.status).toBe(2);
