@@ -9,6 +9,7 @@ import type { Command } from 'commander';
 import type { Detailing } from '../design/bar-selection.js';
 import { checkLoads, type CheckOutcome, type CheckRequest, type FactoredLoad, type LoadResult } from '../design/check.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
+import { parseLoadQuantity, parseLoadsCsv as readLoadsCsv } from '../input/loads-csv.js';
 import { barSet } from '../section/bar-tables.js';
 import { barCount } from '../section/arrangements.js';
 import { DISPLAY_UNITS, parseQuantity, systemFactor, toDisplay, type UnitSystem } from '../units/index.js';
@@ -52,58 +53,9 @@ export interface ResolvedCheck {
   effects?: CheckEffects;
 }
 
-/** Parses a load file: a header naming id, Pu and Mu (any order, other columns ignored), one row per combination. */
+/** Load files are read by src/input/loads-csv.ts (csv-parse; header units, ";" files, duplicates refused). */
 export function parseLoadsCsv(text: string, units: UnitSystem, path = '--loads'): FactoredLoad[] {
-  const lines = text.replace(/^\uFEFF/, '').split(/\r?\n/);
-  const rows = lines.map((l, i) => ({ line: i + 1, cells: splitCsv(l) })).filter((r) => r.cells.some((c) => c.trim() !== '') && !r.cells[0]!.trim().startsWith('#'));
-  if (rows.length === 0) throw new PmError(ERROR_CODES.invalidValue, path, 'is empty; it needs a header id,Pu,Mu and one row per load');
-  const header = rows[0]!.cells.map((c) => c.trim().toLowerCase());
-  const col = (name: string) => header.indexOf(name.toLowerCase());
-  const [iId, iP, iM] = [col('id'), col('Pu'), col('Mu')];
-  if (iId < 0 || iP < 0 || iM < 0) {
-    throw new PmError(ERROR_CODES.invalidValue, `${path} header`, 'must name the columns id, Pu and Mu', { value: rows[0]!.cells.join(',') });
-  }
-  if (rows.length === 1) throw new PmError(ERROR_CODES.invalidValue, path, 'has a header but no load rows');
-  return rows.slice(1).map(({ line, cells }) => {
-    const cell = (i: number, name: string) => {
-      const v = cells[i]?.trim();
-      if (v === undefined || v === '') throw new PmError(ERROR_CODES.missing, `${path} line ${line} ${name}`, 'is empty');
-      return v;
-    };
-    const Pu = parseQuantity(cell(iP, 'Pu'), 'force', units, `${path} line ${line} Pu`);
-    const Mu = parseQuantity(cell(iM, 'Mu'), 'moment', units, `${path} line ${line} Mu`);
-    const load: FactoredLoad = { id: cell(iId, 'id'), Pu, Mu };
-    for (const [name, key] of [['Muy', 'Muy'], ['M1', 'M1'], ['M2', 'M2'], ['M1y', 'M1y'], ['M2y', 'M2y']] as const) {
-      const i = col(name);
-      const v = i < 0 ? undefined : cells[i]?.trim();
-      if (v !== undefined && v !== '') load[key] = parseQuantity(v, 'moment', units, `${path} line ${line} ${name}`);
-      else if (name === 'Muy' && i >= 0) load.Muy = 0;
-    }
-    return load;
-  });
-}
-
-/** One CSV line into cells; double quotes protect commas. */
-function splitCsv(line: string): string[] {
-  const out: string[] = [];
-  let cur = '';
-  let quoted = false;
-  for (let i = 0; i < line.length; i++) {
-    const ch = line[i]!;
-    if (quoted) {
-      if (ch === '"' && line[i + 1] === '"') {
-        cur += '"';
-        i++;
-      } else if (ch === '"') quoted = false;
-      else cur += ch;
-    } else if (ch === '"') quoted = true;
-    else if (ch === ',') {
-      out.push(cur);
-      cur = '';
-    } else cur += ch;
-  }
-  out.push(cur);
-  return out;
+  return readLoadsCsv(text, units, path);
 }
 
 export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
@@ -131,7 +83,7 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
   } else {
     if (o.pu === undefined) throw new PmError(ERROR_CODES.missing, '--pu', `is required, or --loads FILE.csv (a force, default unit ${DISPLAY_UNITS[u].force}; tension negative)`);
     if (o.mu === undefined) throw new PmError(ERROR_CODES.missing, '--mu', `is required with --pu (a moment, default unit ${DISPLAY_UNITS[u].moment})`);
-    loads = [{ id: 'load', Pu: parseQuantity(o.pu, 'force', u, '--pu'), Mu: parseQuantity(o.mu, 'moment', u, '--mu') }];
+    loads = [{ id: 'load', Pu: parseLoadQuantity(o.pu, 'force', u, '--pu'), Mu: parseLoadQuantity(o.mu, 'moment', u, '--mu') }];
   }
 
   const request: CheckRequest = {
