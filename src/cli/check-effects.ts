@@ -236,7 +236,8 @@ export function effectsJson(rc: ResolvedCheck, fx: CheckEffects | undefined, r: 
 const f = (x: number | null | undefined, d = 4): string => (x === null || x === undefined ? '—' : Number.isFinite(x) ? fmt(x, d) : x > 0 ? '∞' : '—');
 
 function table(headers: string[], rows: string[][]): string {
-  const w = headers.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? '').length)));
+  // a loop, not Math.max(...rows): 200k rows overflow the call stack as spread arguments
+  const w = headers.map((h, i) => rows.reduce((m, r) => Math.max(m, (r[i] ?? '').length), h.length));
   const line = (cells: string[]) => cells.map((c, i) => (i === 0 ? c.padEnd(w[i]!) : c.padStart(w[i]!))).join('  ').trimEnd();
   return [line(headers), line(w.map((n) => '-'.repeat(n))), ...rows.map(line)].join('\n');
 }

@@ -239,7 +239,8 @@ export function checkLoads(req: CheckRequest): CheckOutcome {
       },
       { min: 0, max: Infinity },
     );
-    const requiredArea = Math.max(...results.map((r) => r.steelRequired ?? 0));
+    // a loop, not Math.max(...list): 200k loads overflow the call stack as spread arguments
+    const requiredArea = results.reduce((m, r) => Math.max(m, r.steelRequired ?? 0), 0);
     const sel = req.barSelection;
     bars = proposeBars({
       basis: req.basis,
