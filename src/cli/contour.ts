@@ -4,7 +4,7 @@
  * CSV columns (stable interface): na_angle_deg,na_depth,eps_t,phi,P,Mx,My — forces and moments in the
  * system's display units (kip, kip-ft / kN, kN·m), named in the JSON header.
  */
-import { renameSync, writeFileSync } from 'node:fs';
+import { renameSync, rmSync, writeFileSync } from 'node:fs';
 import { extname } from 'node:path';
 import type { Command } from 'commander';
 import { contourAtAxial, momentUtilisationAtAxial, squashPoint, type BiaxialSection } from '../analysis/biaxial.js';
@@ -119,7 +119,8 @@ export function runContour(o: ContourOptions): string {
       writeFileSync(tmp, text);
       renameSync(tmp, o.out);
     } catch (e) {
-      throw new PmError(ERROR_CODES.io, '--out', `cannot be written (${(e as Error).message.split('\n')[0]})`, { value: o.out });
+      rmSync(tmp, { force: true });
+      throw new PmError(ERROR_CODES.io, '--out', `cannot be written (${(e as NodeJS.ErrnoException).code ?? (e as Error).message.split('\n')[0]})`, { value: o.out });
     }
     return '';
   }

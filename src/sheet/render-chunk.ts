@@ -42,6 +42,8 @@ export async function renderChunk(task: ChunkTask, renderer: SheetRenderer, onSh
   const out = set.outputs;
   const pdf = out.pdf ? renderer.pdfPages() : undefined;
   for (const i of task.indices) {
+    // a render process whose parent has gone stops between sheets (worker.ts exits on disconnect)
+    if (process.send !== undefined && !process.connected) throw new Error('the parent process has gone');
     const sheet = set.sheets[i]!;
     const family = familyForSheet(set, sheet);
     const built = buildSheet({ set, sheet, family, sheetNumber: i + 1, sheetCount: set.sheets.length, generator });
