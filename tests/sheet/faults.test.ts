@@ -22,6 +22,8 @@ const generator = 'pmchart 0.1.0';
 const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
 const root = mkdtempSync(join(tmpdir(), 'pmchart-faults-'));
 const notes: string[] = [];
+type Failure = { message: string; exitCode: number };
+const failure = (p: Promise<unknown>): Promise<Failure> => p.then(() => ({ message: 'no error', exitCode: 0 }), (x: unknown) => x as Failure);
 const make = (outDir: string, extra: { jobs?: number; chunkSize?: number } = {}) => makeChartSet(set, { outDir, generator, jobs: 1, onNote: (n) => notes.push(n), ...extra });
 
 let n = 0;
@@ -46,7 +48,7 @@ describe('faults inside the run', () => {
   it('a write that fails (ENOSPC on book.pdf): exit 3, one line, previous book intact', async () => {
     const r = await withBook();
     process.env.PMCHART_INJECT_FAULT = 'write:book.pdf';
-    const e = await make(r.out).catch((x: unknown) => x as { message: string; exitCode: number });
+    const e = await failure(make(r.out));
     expect(e.message).toMatch(/book\.pdf: cannot be written \(ENOSPC\)$/);
     expect(e.exitCode).toBe(3);
     intact(r);
@@ -54,7 +56,7 @@ describe('faults inside the run', () => {
   it('a rename that fails during the swap: the previous set is put back', async () => {
     const r = await withBook();
     process.env.PMCHART_INJECT_FAULT = 'swap-rename';
-    const e = await make(r.out).catch((x: unknown) => x as { message: string; exitCode: number });
+    const e = await failure(make(r.out));
     expect(e.message).toMatch(/reference: cannot be written \(EIO\)$/);
     expect(e.exitCode).toBe(3);
     intact(r);
@@ -62,7 +64,7 @@ describe('faults inside the run', () => {
   it('a render process that dies after its sibling finished: one line, exit 1, others stopped, staging removed', async () => {
     const r = await withBook();
     process.env.PMCHART_INJECT_FAULT = 'child-crash:2';
-    const e = await make(r.out, { jobs: 2, chunkSize: 1 }).catch((x: unknown) => x as { message: string; exitCode: number });
+    const e = await failure(make(r.out, { jobs: 2, chunkSize: 1 }));
     expect(e.message).toMatch(/^render process [12] stopped \(SIGKILL\)$/);
     expect(e.exitCode).toBe(1);
     intact(r);
@@ -74,7 +76,7 @@ describe('the place the set goes', () => {
     const out = join(root, 'file-target');
     mkdirSync(out);
     writeFileSync(join(out, 'reference'), 'my notes');
-    const e = await make(out).catch((x: unknown) => x as { message: string; exitCode: number });
+    const e = await failure(make(out));
     expect(e.message).toMatch(/reference: exists and is not a folder/);
     expect(e.exitCode).toBe(2);
     expect(readFileSync(join(out, 'reference'), 'utf8')).toBe('my notes');
@@ -83,7 +85,7 @@ describe('the place the set goes', () => {
   it('--out naming a file: exit 2 naming --out', async () => {
     const file = join(root, 'plain-file');
     writeFileSync(file, 'x');
-    const e = await make(file).catch((x: unknown) => x as { message: string; exitCode: number });
+    const e = await failure(make(file));
     expect(e.message).toBe(`--out: ${file} is a file, not a folder`);
     expect(e.exitCode).toBe(2);
   });
