@@ -11,7 +11,7 @@ import { CODE_IDS, type CodeId } from '../codes/types.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { parseQuantity, type UnitSystem } from '../units/index.js';
 import { formatPath, parseOrThrow } from '../input/fields.js';
-import { dateFromEpoch, MAX_SHEETS } from '../input/limits.js';
+import { issueDate, MAX_SHEETS } from '../input/limits.js';
 import { DEFAULT_TITLE_PATTERN, fileStemFor, fillPattern, titleFields } from './describe.js';
 import { expandNumbers } from './expand.js';
 import { checkRules } from './rules.js';
@@ -172,14 +172,7 @@ function resolveShape(s: ShapeFile): ResolvedShape {
 }
 
 function defaultDate(opts: ReadOptions): string {
-  if (opts.sourceDateEpoch !== undefined) {
-    const d = dateFromEpoch(opts.sourceDateEpoch);
-    if (d === undefined) {
-      throw new PmError(ERROR_CODES.invalidValue, 'SOURCE_DATE_EPOCH', 'is not a count of seconds since 1970-01-01 (UTC) up to year 9999', { value: JSON.stringify(opts.sourceDateEpoch.slice(0, 24)) });
-    }
-    return d;
-  }
-  return (opts.now ?? new Date()).toISOString().slice(0, 10);
+  return issueDate(undefined, 'titleBlock.date', opts.sourceDateEpoch, opts.now);
 }
 
 export type { UnitSystem };

@@ -6,6 +6,7 @@
  * Unit-free limits (γ, ρg, ω, counts) also go into the generated JSON Schema; ranges that depend on
  * units or on the basis (f′c, fy, lengths) stay in the rule stages that know them.
  */
+import { ERROR_CODES, PmError } from '../errors.js';
 import { MAX_QUANTITY_CHARS, unitSuffixes, type QuantityKind } from '../units/index.js';
 
 /** γ a sheet or a section may use (common practice: outer rows closer than 0.3·h or beyond 0.95·h are not buildable). */
@@ -130,4 +131,23 @@ export function parseDecimal(text: string): number | undefined {
   if (t.length === 0 || t.length > MAX_QUANTITY_CHARS || !/^[-+]?(\d+(\.\d*)?|\.\d+)([eE][-+]?\d+)?$/.test(t)) return undefined;
   const v = Number(t);
   return Number.isFinite(v) ? v : undefined;
+}
+
+/**
+ * The issue date of a sheet, report or book: the flag's date when given, else SOURCE_DATE_EPOCH,
+ * else today (UTC). Each must be a real calendar date; errors name the flag or the variable.
+ */
+export function issueDate(given: string | undefined, flag: string, sourceDateEpoch: string | undefined, now: Date = new Date()): string {
+  if (given !== undefined) {
+    if (!isCalendarDate(given)) throw new PmError(ERROR_CODES.invalidValue, flag, /^\d{4}-\d{2}-\d{2}$/.test(given) ? 'is not a calendar date' : 'is not a date in the form YYYY-MM-DD', { value: given });
+    return given;
+  }
+  if (sourceDateEpoch !== undefined && sourceDateEpoch !== '') {
+    const d = dateFromEpoch(sourceDateEpoch);
+    if (d === undefined) {
+      throw new PmError(ERROR_CODES.invalidValue, 'SOURCE_DATE_EPOCH', 'is not a count of seconds since 1970-01-01 (UTC) up to year 9999', { value: JSON.stringify(sourceDateEpoch.slice(0, 24)) });
+    }
+    return d;
+  }
+  return now.toISOString().slice(0, 10);
 }
