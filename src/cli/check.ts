@@ -410,7 +410,7 @@ export function resultJson(r: LoadResult, u: UnitSystem) {
     id: r.id,
     Pu: num(toDisplay(r.Pu, 'force', u)),
     Mu: num(toDisplay(r.Mu, 'moment', u)),
-    normalised: { P: num(r.normalised.P), M: num(r.normalised.M), eOverH: num(r.normalised.eOverH) },
+    normalised: { P: num(r.normalised.P), M: num(r.normalised.M), eOverH: r.normalised.eOverH === null ? null : num(r.normalised.eOverH) },
     rhoRequired: r.rhoRequired === null ? null : num(r.rhoRequired),
     rhoStatus: r.rhoStatus,
     governedBy: r.governedBy,

@@ -66,7 +66,8 @@ export interface LoadResult {
   Mu: number;
   /** moment used: |Mu| raised to the basis minimum where one applies */
   Mdesign: number;
-  normalised: { P: number; M: number; eOverH: number };
+  /** eOverH: null where there is no axial load to divide by (pure bending): outputs stay finite */
+  normalised: { P: number; M: number; eOverH: number | null };
   rhoRequired: number | null;
   rhoStatus: RhoStatus;
   governedBy: 'curve' | 'cap' | 'minimum';
@@ -120,6 +121,13 @@ export function normaliseLoad(basis: Basis, shape: Shape, load: FactoredLoad): {
   const depth = sectionDepth(shape);
   const Mdesign = Math.max(Math.abs(load.Mu), basis.minimumMoment(load.Pu, depth));
   return { load: { P: load.Pu / area, M: Mdesign / (area * depth) }, Mdesign };
+}
+
+/** M/P, 0 for no load, null where it is not finite (no axial load, or one too small to divide by). */
+function eccentricityRatio(P: number, M: number): number | null {
+  if (P === 0 && M === 0) return 0;
+  const r = M / P;
+  return Number.isFinite(r) ? r : null;
 }
 
 export function prepareCheck(req: CheckRequest): CheckContext {
@@ -179,7 +187,7 @@ export function checkLoad(ctx: CheckContext, load: FactoredLoad, index: number):
     Pu: load.Pu,
     Mu: load.Mu,
     Mdesign,
-    normalised: { P: n.P, M: n.M, eOverH: n.P === 0 ? (n.M === 0 ? 0 : Infinity) : n.M / n.P },
+    normalised: { P: n.P, M: n.M, eOverH: eccentricityRatio(n.P, n.M) },
     rhoRequired: req.rho,
     rhoStatus: req.status,
     governedBy: req.governedBy,
