@@ -57,6 +57,11 @@ export function checkRules(set: ResolvedChartSet, file: ChartSetFile): RuleRepor
     errors.push(new PmError(ERROR_CODES.invalidValue, 'basis.code', 'is not available in this build', { value: set.code, allowed: Object.keys(DESIGN_CODES).join(', ') }));
   }
   const su = DISPLAY_UNITS[set.units].stress;
+  if (code && !code.unitSystems.includes(set.units)) {
+    // named first: every strength would otherwise look out of range in the wrong units
+    errors.push(new PmError(ERROR_CODES.invalidValue, 'units', `is not a unit system of ${code.title ?? set.code}`, { value: set.units, allowed: code.unitSystems.join(', ') }));
+    return { errors, warnings };
+  }
 
   file.sheets.forEach((g, gi) => {
     const at = `sheets[${gi}]`;

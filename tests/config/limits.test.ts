@@ -76,6 +76,14 @@ describe('silent surprises are refused', () => {
     // 1767225600 s = 2026-01-01T00:00:00Z (reproducible-builds.org SOURCE_DATE_EPOCH specification)
     expect(readChartSet(JSON.stringify(noDate), { sourceDateEpoch: '1767225600' }).titleBlock.date).toBe('2026-01-01');
   });
+  it('a basis in units it does not use is named at units, not at every strength', () => {
+    const d = variant((x) => {
+      x.basis.code = 'en1992-1-1';
+      x.sheets[0].fc = '60MPa';
+      x.sheets[0].fy = '500MPa';
+    });
+    expect(pmPath(d)).toMatch(/^units: us is not a unit system of EN 1992-1-1.* \(allowed: si\)$/);
+  });
   it('the same bar limits as the command line', () => {
     expect(pmPath(variant((x) => (x.sheets[0].arrangement.barsPerFace = 21)))).toBe('sheets[0].arrangement.barsPerFace: 21 is outside 1–20');
     expect(pmPath(variant((x) => (x.sheets[0] = { ...x.sheets[0], shape: 'circle', arrangement: { kind: 'ring', bars: 49 } })))).toBe('sheets[0].arrangement.bars: 49 is outside 4–48');
