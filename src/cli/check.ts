@@ -4,7 +4,8 @@
  * (src/report/check-view.ts) and sets the exit status: 0 when every load passes, 1 when any load fails,
  * is not possible, unstable or outside the method's scope (2 bad input, 3 internal or I/O error).
  */
-import { readFileSync, renameSync, rmSync, writeFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
+import { ioError, writeFileAtomic } from '../sheet/files.js';
 import { extname } from 'node:path';
 import type { Command } from 'commander';
 import type { Detailing } from '../design/bar-selection.js';
@@ -13,6 +14,7 @@ import { checkColumn, type ColumnCheck, type ColumnCheckInput } from '../design/
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { CAUTION } from '../report/caution.js';
 import { checkAssumptions, checkJson, checkReportText, checkText } from '../report/check-view.js';
+import { parseLoadQuantity, parseLoadsCsv as readLoadsCsv } from '../input/loads-csv.js';
 import { barSet } from '../section/bar-tables.js';
 import { barCount } from '../section/arrangements.js';
 import { DISPLAY_UNITS, parseQuantity, systemFactor, type UnitSystem } from '../units/index.js';
@@ -52,58 +54,9 @@ export interface ResolvedCheck {
   report?: string;
 }
 
-/** Parses a load file: a header naming id, Pu and Mu (any order, other columns ignored), one row per combination. */
+/** Load files are read by src/input/loads-csv.ts (csv-parse; header units, ";" files, duplicates refused). */
 export function parseLoadsCsv(text: string, units: UnitSystem, path = '--loads'): FactoredLoad[] {
-  const lines = text.replace(/^\uFEFF/, '').split(/\r?\n/);
-  const rows = lines.map((l, i) => ({ line: i + 1, cells: splitCsv(l) })).filter((r) => r.cells.some((c) => c.trim() !== '') && !r.cells[0]!.trim().startsWith('#'));
-  if (rows.length === 0) throw new PmError(ERROR_CODES.invalidValue, path, 'is empty; it needs a header id,Pu,Mu and one row per load');
-  const header = rows[0]!.cells.map((c) => c.trim().toLowerCase());
-  const col = (name: string) => header.indexOf(name.toLowerCase());
-  const [iId, iP, iM] = [col('id'), col('Pu'), col('Mu')];
-  if (iId < 0 || iP < 0 || iM < 0) {
-    throw new PmError(ERROR_CODES.invalidValue, `${path} header`, 'must name the columns id, Pu and Mu', { value: rows[0]!.cells.join(',') });
-  }
-  if (rows.length === 1) throw new PmError(ERROR_CODES.invalidValue, path, 'has a header but no load rows');
-  return rows.slice(1).map(({ line, cells }) => {
-    const cell = (i: number, name: string) => {
-      const v = cells[i]?.trim();
-      if (v === undefined || v === '') throw new PmError(ERROR_CODES.missing, `${path} line ${line} ${name}`, 'is empty');
-      return v;
-    };
-    const Pu = parseQuantity(cell(iP, 'Pu'), 'force', units, `${path} line ${line} Pu`);
-    const Mu = parseQuantity(cell(iM, 'Mu'), 'moment', units, `${path} line ${line} Mu`);
-    const load: FactoredLoad = { id: cell(iId, 'id'), Pu, Mu };
-    for (const [name, key] of [['Muy', 'Muy'], ['M1', 'M1'], ['M2', 'M2'], ['M1y', 'M1y'], ['M2y', 'M2y'], ['M01', 'M01'], ['M02', 'M02'], ['M01y', 'M01y'], ['M02y', 'M02y']] as const) {
-      const i = col(name);
-      const v = i < 0 ? undefined : cells[i]?.trim();
-      if (v !== undefined && v !== '') load[key] = parseQuantity(v, 'moment', units, `${path} line ${line} ${name}`);
-      else if (name === 'Muy' && i >= 0) load.Muy = 0;
-    }
-    return load;
-  });
-}
-
-/** One CSV line into cells; double quotes protect commas. */
-function splitCsv(line: string): string[] {
-  const out: string[] = [];
-  let cur = '';
-  let quoted = false;
-  for (let i = 0; i < line.length; i++) {
-    const ch = line[i]!;
-    if (quoted) {
-      if (ch === '"' && line[i + 1] === '"') {
-        cur += '"';
-        i++;
-      } else if (ch === '"') quoted = false;
-      else cur += ch;
-    } else if (ch === '"') quoted = true;
-    else if (ch === ',') {
-      out.push(cur);
-      cur = '';
-    } else cur += ch;
-  }
-  out.push(cur);
-  return out;
+  return readLoadsCsv(text, units, path);
 }
 
 export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
@@ -131,7 +84,7 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
   } else {
     if (o.pu === undefined) throw new PmError(ERROR_CODES.missing, '--pu', `is required, or --loads FILE.csv (a force, default unit ${DISPLAY_UNITS[u].force}; tension negative)`);
     if (o.mu === undefined) throw new PmError(ERROR_CODES.missing, '--mu', `is required with --pu (a moment, default unit ${DISPLAY_UNITS[u].moment})`);
-    loads = [{ id: 'load', Pu: parseQuantity(o.pu, 'force', u, '--pu'), Mu: parseQuantity(o.mu, 'moment', u, '--mu') }];
+    loads = [{ id: 'load', Pu: parseLoadQuantity(o.pu, 'force', u, '--pu'), Mu: parseLoadQuantity(o.mu, 'moment', u, '--mu') }];
   }
 
   const input: ColumnCheckInput = {
@@ -232,13 +185,12 @@ export async function runCheckAsync(o: CheckOptions): Promise<string> {
 
 /** Writes through a temporary file and a rename, so a failed run leaves no half-written file. */
 export function writeAtomic(file: string, body: string): void {
-  const tmp = `${file}.${process.pid}.tmp`;
   try {
-    writeFileSync(tmp, body);
-    renameSync(tmp, file);
+    writeFileAtomic(file, body);
   } catch (e) {
-    rmSync(tmp, { force: true, recursive: true });
-    throw new PmError(ERROR_CODES.io, '--report', `cannot be written (${(e as NodeJS.ErrnoException).code ?? 'error'})`, { value: file }, 3);
+    // the file module names the place and classes the error: 2 for a place the user can change, 3 for a fault
+    const err = ioError(file, e);
+    throw new PmError(err.code, '--report', err.message.replace(/^[^:]*: /, ''), { value: file }, err.exitCode);
   }
 }
 

@@ -4,10 +4,11 @@
  * CSV columns (stable interface): na_angle_deg,na_depth,eps_t,phi,P,Mx,My — forces and moments in the
  * system's display units (kip, kip-ft / kN, kN·m), named in the JSON header.
  */
-import { renameSync, writeFileSync } from 'node:fs';
+import { renameSync, rmSync, writeFileSync } from 'node:fs';
 import { extname } from 'node:path';
 import type { Command } from 'commander';
 import { squashPoint } from '../analysis/biaxial.js';
+import { ioError } from '../sheet/files.js';
 import { contourText } from '../report/contour-view.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { DISPLAY_UNITS, parseQuantity, toDisplay } from '../units/index.js';
@@ -72,7 +73,8 @@ export function runContour(o: ContourOptions): string {
       writeFileSync(tmp, text);
       renameSync(tmp, o.out);
     } catch (e) {
-      throw new PmError(ERROR_CODES.io, '--out', `cannot be written (${(e as Error).message.split('\n')[0]})`, { value: o.out }, 3);
+      rmSync(tmp, { force: true });
+      throw ioError('--out', e);
     }
     return '';
   }

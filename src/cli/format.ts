@@ -1,4 +1,5 @@
 /** Deterministic number and CSV formatting shared by every command's output. */
+import { issueDate } from '../input/limits.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { fmt } from '../report/format.js';
 
@@ -31,10 +32,6 @@ export function parseNumberList(text: string): number[] | null {
 
 /** --date, else SOURCE_DATE_EPOCH, else today (as `pmchart sheet`): the PDF dates are this day at 00:00 UTC. */
 export function reportDate(text: string | undefined): string {
-  const date = text ?? (process.env.SOURCE_DATE_EPOCH ? new Date(Number(process.env.SOURCE_DATE_EPOCH) * 1000) : new Date()).toISOString().slice(0, 10);
-  if (!/^\d{4}-\d{2}-\d{2}$/.test(date) || Number.isNaN(Date.parse(`${date}T00:00:00Z`))) {
-    throw new PmError(ERROR_CODES.invalidValue, '--date', 'is not a date in the form YYYY-MM-DD', { value: text });
-  }
-  return date;
+  return issueDate(text, '--date', process.env.SOURCE_DATE_EPOCH);
 }
 

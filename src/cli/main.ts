@@ -27,6 +27,7 @@ export async function runAction(fn: () => Promise<void> | void): Promise<void> {
     const msg = e instanceof Error ? e.message.split('\n')[0] : String(e);
     process.stderr.write(`pmchart: internal error: ${msg}\n`);
     if (process.env.PMCHART_DEBUG && e instanceof Error) process.stderr.write(`${e.stack}\n`);
+    // internal or I/O error (exit codes: 2 bad input, 1 failing loads or a stopped render, 3 internal or I/O)
     process.exitCode = 3;
   }
 }
@@ -49,13 +50,53 @@ export function buildProgram(): Command {
   return program;
 }
 
-export async function main(argv: string[]): Promise<void> {
-  // `pmchart table … | head` closes the pipe early; that is the reader's choice, not an error.
+let watching = false;
+/**
+ * `pmchart table … | head` closes the pipe early; that is the reader's choice, not an error: exit 0.
+ * Any other failure of standard output (ENOSPC on a full disk, EIO) is one line and exit 3.
+ */
+function watchStdout(): void {
+  if (watching) return;
+  watching = true;
   process.stdout.on('error', (e: NodeJS.ErrnoException) => {
     if (e.code === 'EPIPE') process.exit(0);
-    throw e;
+    process.stderr.write(`pmchart: standard output cannot be written (${e.code ?? e.message.split('\n')[0]})\n`);
+    process.exit(3);
   });
+}
+
+/**
+ * The first long option given twice on the command line (`--fc 4 --fc 5`), read with the command's
+ * own option list so that values are skipped; undefined when none repeats.
+ */
+export function repeatedOption(program: Command, argv: readonly string[]): string | undefined {
+  const args = argv.slice(2);
+  const cmd = program.commands.find((c) => c.name() === args[0] || c.aliases().includes(args[0] ?? ''));
+  if (!cmd) return undefined;
+  const seen = new Set<string>();
+  for (let i = 1; i < args.length; i++) {
+    const a = args[i]!;
+    if (a === '--') break;
+    if (!a.startsWith('--')) continue;
+    const name = a.includes('=') ? a.slice(0, a.indexOf('=')) : a;
+    const opt = cmd.options.find((o) => o.long === name);
+    const key = opt ? opt.attributeName() : name;
+    if (seen.has(key)) return name;
+    seen.add(key);
+    if (opt && (opt.required || opt.optional) && !a.includes('=') && !(opt.optional && (args[i + 1] ?? '-').startsWith('-'))) i++;
+  }
+  return undefined;
+}
+
+export async function main(argv: string[]): Promise<void> {
+  watchStdout();
   const program = buildProgram();
+  const twice = repeatedOption(program, argv);
+  if (twice !== undefined) {
+    process.stderr.write(`pmchart: ${twice}: is given more than once; give it once\n`);
+    process.exitCode = 2;
+    return;
+  }
   try {
     await program.parseAsync(argv);
   } catch (e) {

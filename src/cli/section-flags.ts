@@ -2,15 +2,18 @@
  * The section flags shared by `table`, `sheet` and `check`: code, units, materials, shape, γ (or the
  * detailing it comes from), arrangement and transverse type. Read once, resolved once.
  */
-import { readFileSync } from 'node:fs';
+import { readFileSync, statSync } from 'node:fs';
 import type { Command } from 'commander';
 import { designCode, parseStrength, resolveBasis } from '../codes/registry.js';
-import { COLUMN_USES, isTransverse, TRANSVERSE_TYPES, type Basis, type BasisOptions, type CapContext, type CodeId, type ColumnUse } from '../codes/types.js';
+import type { Basis, BasisOptions, CapContext, CodeId, ColumnUse } from '../codes/types.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
+import { parseCustomBars } from '../input/custom-bars.js';
+import { parseFlags, SectionFlagsSchema, type CheckedSectionFlags } from '../input/flags.js';
+import { BARS_PER_FACE_RANGE, GAMMA_RANGE, MAX_CUSTOM_BARS_BYTES, RING_BARS_RANGE } from '../input/limits.js';
 import { barSet, findBar, type BarSize } from '../section/bar-tables.js';
 import { gammaFromCover, sectionDepth, sectionWidth } from '../section/geometry.js';
-import { ARRANGEMENTS, isArrangementKind, isShapeKind, SHAPES, type Arrangement, type CustomBar, type Shape } from '../section/types.js';
-import { DISPLAY_UNITS, isUnitSystem, parseQuantity, systemFactor, UNIT_SYSTEMS, type UnitSystem } from '../units/index.js';
+import type { Arrangement, ArrangementKind, CustomBar, Shape } from '../section/types.js';
+import { DISPLAY_UNITS, parseQuantity, systemFactor, type UnitSystem } from '../units/index.js';
 
 export interface SectionFlags {
   code?: string;
@@ -60,7 +63,8 @@ export interface ResolvedSection {
   capContext: CapContext;
 }
 
-export const GAMMA_RANGE: [number, number] = [0.3, 0.95];
+/** γ range of flags and chart sets alike (src/input/limits.ts). */
+export { GAMMA_RANGE };
 
 /** Registers the shared section flags on a command. */
 export function addSectionOptions(cmd: Command): Command {
@@ -93,23 +97,6 @@ export function addSectionOptions(cmd: Command): Command {
     .option('--steel-eps-uk <strain>', 'EN 1992-1-1 inclined branch: εuk, 0.025–0.15 (default 0.05, class B); εud = 0.9·εuk');
 }
 
-const oneOf = (path: string, value: string, allowed: readonly string[]): never => {
-  throw new PmError(ERROR_CODES.invalidValue, path, 'is not one of the allowed values', { value, allowed: allowed.join(', ') });
-};
-
-function positiveInt(path: string, text: string | undefined, fallback: number, lo: number, hi: number): number {
-  const n = text === undefined ? fallback : Number(text);
-  if (!Number.isInteger(n)) throw new PmError(ERROR_CODES.invalidValue, path, 'is not a whole number', { value: text, allowed: `${lo}–${hi}` });
-  return requireInRange(path, n, lo, hi);
-}
-
-function plainNumber(path: string, text: string | undefined): number | undefined {
-  if (text === undefined) return undefined;
-  const v = Number(text);
-  if (!Number.isFinite(v)) throw new PmError(ERROR_CODES.invalidValue, path, 'is not a number', { value: text });
-  return v;
-}
-
 /** A bar size by name, or a plain diameter with an optional length unit. */
 function barOrDiameter(path: string, text: string, units: UnitSystem, basis: Basis): { size?: BarSize; diameter: number } {
   const set = barSet(basis.barSet);
@@ -123,76 +110,54 @@ function barOrDiameter(path: string, text: string, units: UnitSystem, basis: Bas
 }
 
 function readCustomBars(path: string, file: string): CustomBar[] {
-  let data: unknown;
+  let text: string;
   try {
-    data = JSON.parse(readFileSync(file, 'utf8'));
+    if (statSync(file).size > MAX_CUSTOM_BARS_BYTES) throw new PmError(ERROR_CODES.invalidValue, path, `is larger than ${MAX_CUSTOM_BARS_BYTES} bytes`, { value: file });
+    text = readFileSync(file, 'utf8');
   } catch (e) {
-    throw new PmError(ERROR_CODES.io, path, `cannot be read as JSON (${(e as Error).message.split('\n')[0]})`, { value: file });
+    if (e instanceof PmError) throw e;
+    throw new PmError(ERROR_CODES.io, path, `cannot be read (${(e as NodeJS.ErrnoException).code ?? (e as Error).message.split('\n')[0]})`, { value: file });
   }
-  if (!Array.isArray(data) || data.length < 2) {
-    throw new PmError(ERROR_CODES.invalidValue, path, 'must hold a JSON list of at least 2 bars {x, y, share}', { value: file });
-  }
-  return data.map((b, i) => {
-    const o = b as Record<string, unknown>;
-    const x = Number(o.x ?? 0);
-    const y = Number(o.y);
-    const share = Number(o.share ?? 1);
-    if (![x, y, share].every(Number.isFinite) || Math.abs(x) > 0.5 || Math.abs(y) > 0.5 || share <= 0) {
-      throw new PmError(ERROR_CODES.outOfRange, `${path}[${i}]`, 'needs |x| ≤ 0.5, |y| ≤ 0.5 and share > 0', { value: JSON.stringify(b) });
-    }
-    return { x, y, share };
-  });
+  return parseCustomBars(text, path);
+}
+
+/** Bars per face or ring bars: the ranges chart-set files use (src/input/limits.ts). */
+function barCount(kind: Exclude<ArrangementKind, 'custom'>, f: CheckedSectionFlags): Arrangement {
+  if (kind === 'ring') return { kind, bars: requireInRange('--bars', f.bars ?? 8, ...RING_BARS_RANGE) };
+  const range = BARS_PER_FACE_RANGE[kind];
+  return { kind, barsPerFace: requireInRange('--bars-per-face', f.barsPerFace ?? (kind === 'two-faces' ? 2 : 3), range[0], range[1]) };
 }
 
 /** Resolves the shared flags; `needSize` makes b/h or D mandatory (checks). */
-export function resolveSectionFlags(f: SectionFlags, needSize = false): ResolvedSection {
-  const units = f.units ?? designCode(f.code ?? 'aci318-19').unitSystems[0]!;
-  if (!isUnitSystem(units)) oneOf('--units', units, UNIT_SYSTEMS);
-  const u = units as UnitSystem;
+export function resolveSectionFlags(given: SectionFlags, needSize = false): ResolvedSection {
+  // 1. each flag on its own: the zod schema of src/input/flags.ts (form, enums, unit-free ranges)
+  const f = parseFlags(SectionFlagsSchema, given);
+  const code = f.code ?? 'aci318-19';
+  const u: UnitSystem = f.units ?? designCode(code).unitSystems[0]!;
   const su = DISPLAY_UNITS[u];
   if (f.fc === undefined) throw new PmError(ERROR_CODES.missing, '--fc', `is required (a stress, default unit ${su.stress})`);
   if (f.fy === undefined) throw new PmError(ERROR_CODES.missing, '--fy', `is required (a stress, default unit ${su.stress})`);
   const transverse = f.transverse ?? 'tied';
-  if (!isTransverse(transverse)) oneOf('--transverse', transverse, TRANSVERSE_TYPES);
 
-  const options: BasisOptions = {};
-  const alphaCc = plainNumber('--alpha-cc', f.alphaCc);
-  const gammaC = plainNumber('--gamma-c', f.gammaC);
-  const gammaS = plainNumber('--gamma-s', f.gammaS);
-  if (alphaCc !== undefined) options.alphaCc = requireInRange('--alpha-cc', alphaCc, 0.8, 1.0);
-  if (gammaC !== undefined) options.gammaC = requireInRange('--gamma-c', gammaC, 1.0, 2.0);
-  if (gammaS !== undefined) options.gammaS = requireInRange('--gamma-s', gammaS, 1.0, 1.5);
-  if (f.concreteLaw !== undefined) {
-    const laws = ['parabola-rectangle', 'rectangular-block'] as const;
-    if (!laws.includes(f.concreteLaw as (typeof laws)[number])) oneOf('--concrete-law', f.concreteLaw, laws);
-    options.concreteLaw = f.concreteLaw as (typeof laws)[number];
-  }
-  if (f.steelBranch !== undefined) {
-    const branches = ['horizontal', 'inclined'] as const;
-    if (!branches.includes(f.steelBranch as (typeof branches)[number])) oneOf('--steel-branch', f.steelBranch, branches);
-    options.steelBranch = f.steelBranch as (typeof branches)[number];
-  }
+  // 2. the basis, with its options
+  const options: BasisOptions = {
+    ...(f.alphaCc !== undefined ? { alphaCc: f.alphaCc } : {}),
+    ...(f.gammaC !== undefined ? { gammaC: f.gammaC } : {}),
+    ...(f.gammaS !== undefined ? { gammaS: f.gammaS } : {}),
+    ...(f.concreteLaw !== undefined ? { concreteLaw: f.concreteLaw } : {}),
+    ...(f.steelBranch !== undefined ? { steelBranch: f.steelBranch } : {}),
+    ...(f.steelK !== undefined ? { steelK: f.steelK } : {}),
+    ...(f.steelEpsUk !== undefined ? { steelEpsUk: f.steelEpsUk } : {}),
+    ...(f.lapZoneRhoMax !== undefined ? { lapZoneRhoMax: f.lapZoneRhoMax } : {}),
+    ...(f.columnUse !== undefined ? { columnUse: f.columnUse as ColumnUse } : {}),
+  };
+  // strengths by class name where the basis has them ("C50/60", "B500B"), else quantities
+  const fc = parseStrength(designCode(code), f.fc, 'concrete', u, '--fc');
+  const fy = parseStrength(designCode(code), f.fy, 'steel', u, '--fy');
+  const basis = resolveBasis(code, { units: u, fc, fy, transverse, options });
 
-  const lap = plainNumber('--lap-zone-rho-max', f.lapZoneRhoMax);
-  if (lap !== undefined) options.lapZoneRhoMax = lap;
-  if (f.columnUse !== undefined) {
-    if (!(COLUMN_USES as readonly string[]).includes(f.columnUse)) oneOf('--column-use', f.columnUse, COLUMN_USES);
-    options.columnUse = f.columnUse as ColumnUse;
-  }
-
-  // ranges are checked by the basis that reads them (EN 1992-1-1 names these flags in its errors)
-  const steelK = plainNumber('--steel-k', f.steelK);
-  const steelEpsUk = plainNumber('--steel-eps-uk', f.steelEpsUk);
-  if (steelK !== undefined) options.steelK = steelK;
-  if (steelEpsUk !== undefined) options.steelEpsUk = steelEpsUk;
-
-  const code = designCode(f.code ?? 'aci318-19');
-  const fc = parseStrength(code, f.fc, 'concrete', u, '--fc');
-  const fy = parseStrength(code, f.fy, 'steel', u, '--fy');
-  const basis = resolveBasis(f.code ?? 'aci318-19', { units: u, fc, fy, transverse: transverse as 'tied' | 'spiral', options });
-
+  // 3. shape and size
   const shapeKind = f.shape ?? 'rectangle';
-  if (!isShapeKind(shapeKind)) oneOf('--shape', shapeKind, SHAPES);
   const len = (path: string, text: string) => {
     const v = parseQuantity(text, 'length', u, path);
     return requireInRange(path, v, u === 'us' ? 6 : 150, u === 'us' ? 240 : 6000, su.length);
@@ -213,29 +178,18 @@ export function resolveSectionFlags(f: SectionFlags, needSize = false): Resolved
     throw new PmError(ERROR_CODES.missing, shapeKind === 'circle' ? '--diameter' : '--b/--h', 'is required for this command (a length, default unit ' + su.length + ')');
   }
 
+  // 4. arrangement
   const kind = f.arrangement ?? 'two-faces';
-  if (!isArrangementKind(kind)) oneOf('--arrangement', kind, ARRANGEMENTS);
   if (shapeKind === 'circle' && kind !== 'ring' && kind !== 'custom') {
     throw new PmError(ERROR_CODES.conflict, '--arrangement', 'must be ring or custom for a circle', { value: kind });
   }
   let arrangement: Arrangement;
-  switch (kind) {
-    case 'two-faces':
-      arrangement = { kind, barsPerFace: positiveInt('--bars-per-face', f.barsPerFace, 2, 1, 30) };
-      break;
-    case 'four-faces':
-    case 'side-faces':
-      arrangement = { kind, barsPerFace: positiveInt('--bars-per-face', f.barsPerFace, 3, 2, 30) };
-      break;
-    case 'ring':
-      arrangement = { kind, bars: positiveInt('--bars', f.bars, 8, 4, 60) };
-      break;
-    default:
-      if (f.customBars === undefined) throw new PmError(ERROR_CODES.missing, '--custom-bars', 'is required with --arrangement custom');
-      arrangement = { kind: 'custom', bars: readCustomBars('--custom-bars', f.customBars) };
-  }
+  if (kind === 'custom') {
+    if (f.customBars === undefined) throw new PmError(ERROR_CODES.missing, '--custom-bars', 'is required with --arrangement custom');
+    arrangement = { kind: 'custom', bars: readCustomBars('--custom-bars', f.customBars) };
+  } else arrangement = barCount(kind, f);
 
-  // γ: given, or from cover + tie + db/2 on each side (common practice).
+  // 5. γ: given, or from cover + tie + db/2 on each side (common practice).
   let gamma: number;
   let gammaSource: ResolvedSection['gammaSource'] = 'given';
   let bar: BarSize | undefined;
@@ -254,7 +208,7 @@ export function resolveSectionFlags(f: SectionFlags, needSize = false): Resolved
   if (f.tie !== undefined) tieDiameter = barOrDiameter('--tie', f.tie, u, basis).diameter;
   if (f.gamma !== undefined) {
     if (f.cover !== undefined) throw new PmError(ERROR_CODES.conflict, '--gamma', 'and --cover both set γ; give one of them');
-    gamma = requireInRange('--gamma', plainNumber('--gamma', f.gamma)!, GAMMA_RANGE[0], GAMMA_RANGE[1]);
+    gamma = f.gamma;
   } else if (cover !== undefined) {
     if (!sized) throw new PmError(ERROR_CODES.missing, shapeKind === 'circle' ? '--diameter' : '--h', 'is required to derive γ from --cover');
     if (bar === undefined) throw new PmError(ERROR_CODES.missing, '--bar', 'is required to derive γ from --cover');
@@ -262,8 +216,13 @@ export function resolveSectionFlags(f: SectionFlags, needSize = false): Resolved
     gammaSource = 'detailing';
     requireInRange('γ from --cover/--tie/--bar', Number(gamma.toFixed(4)), GAMMA_RANGE[0], GAMMA_RANGE[1]);
   } else if (arrangement.kind === 'custom') {
-    const ys = arrangement.bars.map((b) => b.y);
-    gamma = Math.max(...ys) - Math.min(...ys);
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (const b of arrangement.bars) {
+      lo = Math.min(lo, b.y);
+      hi = Math.max(hi, b.y);
+    }
+    gamma = hi - lo;
     gammaSource = 'detailing';
   } else {
     throw new PmError(ERROR_CODES.missing, '--gamma', `is required, or --cover with --bar and --h (allowed: ${GAMMA_RANGE[0]}–${GAMMA_RANGE[1]})`);

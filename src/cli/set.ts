@@ -3,9 +3,10 @@
  * book.pdf, sheets/*.svg|png and tables/*.csv|json. Render modules are imported lazily so other
  * commands never load vega, canvas or pdf-lib.
  */
-import { readFileSync } from 'node:fs';
+import { readFileSync, statSync } from 'node:fs';
 import type { Command } from 'commander';
 import { ERROR_CODES, PmError } from '../errors.js';
+import { MAX_CONFIG_BYTES } from '../input/limits.js';
 import { generatorLabel } from '../version.js';
 
 export interface SetOptions {
@@ -25,8 +26,10 @@ export interface SetResult {
 export async function runSet(file: string, o: SetOptions = {}, stderr: NodeJS.WriteStream = process.stderr): Promise<SetResult> {
   let text: string;
   try {
+    if (statSync(file).size > MAX_CONFIG_BYTES) throw new PmError(ERROR_CODES.invalidValue, file, `is larger than ${MAX_CONFIG_BYTES} bytes`);
     text = readFileSync(file, 'utf8');
   } catch (e) {
+    if (e instanceof PmError) throw e;
     throw new PmError(ERROR_CODES.io, file, `cannot be read (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`);
   }
   const { readChartSetReport } = await import('../config/read.js');

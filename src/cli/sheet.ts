@@ -2,6 +2,7 @@
  * `pmchart sheet <section flags>`: one sheet for a quick look, as SVG, PNG or PDF (from the --out
  * extension). Same section flags as `pmchart table`; render modules are imported lazily.
  */
+import { issueDate } from '../input/limits.js';
 import { extname, resolve } from 'node:path';
 import type { Command } from 'commander';
 import type { ResolvedChartSet } from '../config/types.js';
@@ -42,8 +43,7 @@ export async function sheetSetFromFlags(o: SheetOptions): Promise<{ set: Resolve
   if (!(FAMILY_CHOICES as readonly string[]).includes(families)) throw new PmError(ERROR_CODES.invalidValue, '--families', 'is not one of the allowed values', { value: families, allowed: FAMILY_CHOICES.join(', ') });
   const size = o.paper ?? (section.units === 'us' ? 'tabloid' : 'a3');
   if (!(PAPER_SIZES as readonly string[]).includes(size)) throw new PmError(ERROR_CODES.invalidValue, '--paper', 'is not one of the allowed values', { value: size, allowed: PAPER_SIZES.join(', ') });
-  const date = o.date ?? (process.env.SOURCE_DATE_EPOCH ? new Date(Number(process.env.SOURCE_DATE_EPOCH) * 1000) : new Date()).toISOString().slice(0, 10);
-  if (!/^\d{4}-\d{2}-\d{2}$/.test(date)) throw new PmError(ERROR_CODES.invalidValue, '--date', 'is not a date in the form YYYY-MM-DD', { value: date });
+  const date = issueDate(o.date, '--date', process.env.SOURCE_DATE_EPOCH);
   const ecc = o.eccentricities === undefined ? [0.1, 0.25, 0.5, 1] : parseNumberList(o.eccentricities);
   if (!ecc) throw new PmError(ERROR_CODES.invalidValue, '--eccentricities', 'is not a comma list of e/h values', { value: o.eccentricities });
   for (const e of ecc) requireInRange('--eccentricities', e, 0.01, 10);

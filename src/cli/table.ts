@@ -7,6 +7,7 @@ import { computeFamily, type CurveFamily, type KeyPoint, type PointValues } from
 import { omegaFromRho, rhoFromOmega } from '../codes/mechanical-ratio.js';
 import type { Basis } from '../codes/types.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
+import { RHO_RANGE, TABLE_CURVES_MAX, TABLE_POINTS_RANGE, TABLE_ROWS_MAX } from '../input/limits.js';
 import { DISPLAY_UNITS } from '../units/index.js';
 import { generatorLabel } from '../version.js';
 import { csvLine, fmt, num, parseNumberList } from './format.js';
@@ -25,7 +26,16 @@ export interface TableOptions extends SectionFlags {
 }
 
 /** ρg span every family must stay inside (for --rho and --omega alike). */
-export const RHO_RANGE: [number, number] = [0.001, 0.1];
+export { RHO_RANGE };
+
+/** Every value in range and larger than the one before (as chart-set files require), at most TABLE_CURVES_MAX. */
+function requireIncreasing(path: string, list: number[], range: readonly [number, number]): void {
+  if (list.length > TABLE_CURVES_MAX) throw new PmError(ERROR_CODES.outOfRange, path, `gives ${list.length} curves, beyond ${TABLE_CURVES_MAX}`, { allowed: `1–${TABLE_CURVES_MAX}` });
+  list.forEach((r, k) => {
+    requireInRange(path, r, range[0], range[1]);
+    if (k > 0 && !(r > list[k - 1]!)) throw new PmError(ERROR_CODES.invalidValue, path, 'must be larger than the value before it', { value: r });
+  });
+}
 
 /** Parses a ρg list flag against the allowed 0.001–0.10 span. */
 export function parseRhoList(text: string | undefined, path = '--rho'): number[] {
@@ -33,7 +43,7 @@ export function parseRhoList(text: string | undefined, path = '--rho'): number[]
   if (!list || list.length === 0) {
     throw new PmError(ERROR_CODES.invalidValue, path, 'is not a list (0.01,0.02) or a range start:stop:step', { value: text });
   }
-  for (const r of list) requireInRange(path, r, RHO_RANGE[0], RHO_RANGE[1]);
+  requireIncreasing(path, list, RHO_RANGE);
   return list;
 }
 
@@ -48,7 +58,7 @@ export function parseOmegaList(text: string, basis: Basis, path = '--omega'): { 
   }
   const lo = Number(omegaFromRho(basis, RHO_RANGE[0]).toPrecision(3));
   const hi = Number(omegaFromRho(basis, RHO_RANGE[1]).toPrecision(3));
-  for (const w of list) requireInRange(path, w, lo, hi);
+  requireIncreasing(path, list, [lo, hi]);
   return { omegas: list, rhos: list.map((w) => Number(rhoFromOmega(basis, w).toPrecision(12))) };
 }
 
@@ -69,45 +79,84 @@ export function resolveTableOptions(o: TableOptions): TableRequest {
   }
   const basePoints = o.points === undefined ? 400 : Number(o.points);
   if (!Number.isInteger(basePoints)) throw new PmError(ERROR_CODES.invalidValue, '--points', 'is not a whole number', { value: o.points });
-  requireInRange('--points', basePoints, 400, 20000);
+  requireInRange('--points', basePoints, TABLE_POINTS_RANGE[0], TABLE_POINTS_RANGE[1]);
   if (o.omega !== undefined) {
     if (o.rho !== undefined) throw new PmError(ERROR_CODES.conflict, '--omega', 'and --rho both set the families; give one of them');
     const { omegas, rhos } = parseOmegaList(o.omega, section.basis);
+    requireRows(rhos.length, basePoints);
     return { section, rhos, omegas, dimensionless: o.dimensionless === true, basePoints };
   }
-  return { section, rhos: parseRhoList(o.rho), dimensionless: o.dimensionless === true, basePoints };
+  const rhos = parseRhoList(o.rho);
+  requireRows(rhos.length, basePoints);
+  return { section, rhos, dimensionless: o.dimensionless === true, basePoints };
 }
 
-export function familyFor(req: TableRequest): CurveFamily {
+/** Curves × points is bounded before any curve is computed. */
+function requireRows(curves: number, points: number): void {
+  if (curves * points > TABLE_ROWS_MAX) {
+    throw new PmError(ERROR_CODES.outOfRange, '--points', `× ${curves} curves gives ${curves * points} rows, beyond ${TABLE_ROWS_MAX}`, { value: points, allowed: `curves × points ≤ ${TABLE_ROWS_MAX}` });
+  }
+}
+
+export function familyFor(req: TableRequest, rhos: number[] = req.rhos): CurveFamily {
   const s = req.section;
   return computeFamily({
     basis: s.basis,
     shape: s.shape,
     arrangement: s.arrangement,
     gamma: s.gamma,
-    rhos: req.rhos,
+    rhos,
     capContext: s.capContext,
     basePoints: req.basePoints,
   });
 }
 
+/**
+ * Curves computed together share one c/h sweep that holds every curve's key points, so rows grow
+ * as curves² (2,000 curves gave 6,374 rows each and 1.7 GB of JSON). Up to BATCH curves (a chart
+ * set's limit) are computed together as before; longer lists go in batches of BATCH, one at a time,
+ * so memory stays flat and rows stay within curves × (points + key points of BATCH curves).
+ */
+export const TABLE_BATCH = 20;
+export function* familyBatches(req: TableRequest): Generator<{ family: CurveFamily; first: number }> {
+  for (let first = 0; first < req.rhos.length; first += TABLE_BATCH) yield { family: familyFor(req, req.rhos.slice(first, first + TABLE_BATCH)), first };
+}
+
 /** Runs the command and returns the text it prints (tests call this without the parser). */
 export function runTable(o: TableOptions): string {
+  return [...tablePieces(o)].join('');
+}
+
+/** The command's output in pieces of one curve each, so that it can be streamed with flat memory. */
+export function tablePieces(o: TableOptions): Iterable<string> {
   const req = resolveTableOptions(o);
-  const family = familyFor(req);
-  return (o.format ?? 'csv') === 'json' ? tableJson(family, req) : tableCsv(family, req);
+  return (o.format ?? 'csv') === 'json' ? tableJsonPieces(familyBatches(req), req) : tableCsvPieces(familyBatches(req), req);
+}
+
+/** Writes the pieces to a stream, waiting for it to drain: memory stays flat for 2,000 curves. */
+export async function streamTable(o: TableOptions, out: NodeJS.WritableStream = process.stdout): Promise<void> {
+  for (const piece of tablePieces(o)) if (!out.write(piece)) await new Promise((r) => out.once('drain', r));
 }
 
 export function tableCsv(family: CurveFamily, req: TableRequest): string {
+  return [...tableCsvPieces([{ family, first: 0 }], req)].join('');
+}
+
+function* tableCsvPieces(batches: Iterable<{ family: CurveFamily; first: number }>, req: TableRequest): Generator<string> {
+  yield `${csvLine(TABLE_COLUMNS)}\n`;
+  for (const { family } of batches) yield* curveCsvPieces(family, req);
+}
+
+function* curveCsvPieces(family: CurveFamily, req: TableRequest): Generator<string> {
   const k = req.dimensionless ? 1 / family.basis.normalisingStress : 1;
   const { cOverH, epsT, phi } = family.sweep;
-  const lines = [csvLine(TABLE_COLUMNS)];
   for (const c of family.curves) {
+    const lines: string[] = [];
     for (let i = 0; i < cOverH.length; i++) {
       lines.push(csvLine([c.rho, cOverH[i]!, epsT[i]!, phi[i]!, c.Pn[i]! * k, c.Mn[i]! * k, c.phiPn[i]! * k, c.phiMn[i]! * k]));
     }
+    yield `${lines.join('\n')}\n`;
   }
-  return lines.join('\n') + '\n';
 }
 
 const pointJson = (p: PointValues | null, k: number, prefix: 'n' | 'phi') =>
@@ -140,11 +189,24 @@ export function normalisationInfo(family: CurveFamily, dimensionless: boolean) {
 }
 
 export function tableJson(family: CurveFamily, req: TableRequest): string {
+  return [...tableJsonPieces([{ family, first: 0 }], req)].join('');
+}
+
+/** Placeholder for the curves while the rest of the document is written (the curves follow one by one). */
+const CURVES_SLOT = '\u0000curves\u0000';
+
+/**
+ * The JSON document in pieces with exactly the bytes of JSON.stringify(document, null, 1): the
+ * head with a placeholder for the curve list, then each curve indented to its depth.
+ */
+function* tableJsonPieces(batches: Iterable<{ family: CurveFamily; first: number }>, req: TableRequest): Generator<string> {
+  const it = batches[Symbol.iterator]();
+  const firstBatch = it.next().value as { family: CurveFamily; first: number };
+  const family = firstBatch.family;
   const b = family.basis;
   const k = req.dimensionless ? 1 / b.normalisingStress : 1;
   const su = DISPLAY_UNITS[b.units].stress;
   const s = req.section;
-  const { cOverH, epsT, phi } = family.sweep;
   const out = {
     generator: generatorLabel(),
     code: b.code,
@@ -165,15 +227,29 @@ export function tableJson(family: CurveFamily, req: TableRequest): string {
     },
     basis: { parameters: b.parameters, notes: b.notes, symbols: b.symbols },
     columns: TABLE_COLUMNS,
-    curves: family.curves.map((c, j) => ({
-      rho_g: c.rho,
-      ...(req.omegas ? { omega: req.omegas[j] } : {}),
-      key_points: c.keyPoints.map((kp) => keyPointJson(kp, k)),
-      points: Array.from(cOverH, (_, i) => [c.rho, num(cOverH[i]!), num(epsT[i]!), num(phi[i]!), num(c.Pn[i]! * k), num(c.Mn[i]! * k), num(c.phiPn[i]! * k), num(c.phiMn[i]! * k)]),
-    })),
+    curves: CURVES_SLOT,
     caution: CAUTION,
   };
-  return JSON.stringify(out, null, 1) + '\n';
+  const curve = (f: CurveFamily, c: CurveFamily['curves'][number], j: number) => ({
+    rho_g: c.rho,
+    ...(req.omegas ? { omega: req.omegas[j] } : {}),
+    key_points: c.keyPoints.map((kp) => keyPointJson(kp, k)),
+    points: Array.from(f.sweep.cOverH, (_, i) => [c.rho, num(f.sweep.cOverH[i]!), num(f.sweep.epsT[i]!), num(f.sweep.phi[i]!), num(c.Pn[i]! * k), num(c.Mn[i]! * k), num(c.phiPn[i]! * k), num(c.phiMn[i]! * k)]),
+  });
+  const [head, tail] = (JSON.stringify(out, null, 1) + '\n').split(JSON.stringify(CURVES_SLOT)) as [string, string];
+  yield `${head}[\n`;
+  const total = req.rhos.length;
+  let batch: { family: CurveFamily; first: number } | undefined = firstBatch;
+  while (batch) {
+    for (const [j, c] of batch.family.curves.entries()) {
+      const at = batch.first + j;
+      const text = JSON.stringify(curve(batch.family, c, at), null, 1).replace(/\n/g, '\n  ');
+      yield `  ${text}${at < total - 1 ? ',' : ''}\n`;
+    }
+    const n = it.next();
+    batch = n.done ? undefined : n.value;
+  }
+  yield ` ]${tail}`;
 }
 
 import { CAUTION } from '../report/caution.js';
@@ -187,7 +263,7 @@ export function registerTable(program: Command, run: (fn: () => Promise<void> | 
     .option('--format <fmt>', 'csv or json', 'csv')
     .option('--dimensionless', 'divide the normalised values by the normalising stress (f′c, or fcd for EN 1992-1-1)')
     .option('--points <n>', 'base points per curve before key points are added (≥ 400)', '400')
-    .action((opts: TableOptions) => run(() => void process.stdout.write(runTable(opts))));
+    .action((opts: TableOptions) => run(() => streamTable(opts)));
 }
 
 export { fmt };

@@ -26,6 +26,9 @@ export const EC2_RECOMMENDED = { alphaCc: 1.0, gammaC: 1.5, gammaS: 1.15 } as co
 
 /** Reinforcement ductility class B (EN 1992-1-1 Annex C, Table C.1): k ≥ 1.08, εuk ≥ 5.0 %. */
 export const EC2_CLASS_B = { k: 1.08, epsUk: 0.05 } as const;
+/** k = (ft/fy)k and εuk over reinforcement classes A–C (EN 1992-1-1 Annex C, Table C.1). */
+export const STEEL_K_RANGE = [1.0, 1.35] as const;
+export const STEEL_EPS_UK_RANGE = [0.025, 0.15] as const;
 
 /** EN 1992-1-1 3.2.7(2) Note 1: recommended εud = 0.9·εuk. */
 export const EC2_EPS_UD_RATIO = 0.9;
@@ -173,8 +176,8 @@ function resolveEc2(input: BasisInput): Basis {
   const gammaS = requireInRange('--gamma-s', o.gammaS ?? EC2_RECOMMENDED.gammaS, 1.0, 1.5);
   const lawName = o.concreteLaw ?? 'parabola-rectangle';
   const branch = o.steelBranch ?? 'horizontal';
-  const k = requireInRange('--steel-k', o.steelK ?? EC2_CLASS_B.k, 1.0, 1.35); // Table C.1 classes A–C
-  const epsUk = requireInRange('--steel-eps-uk', o.steelEpsUk ?? EC2_CLASS_B.epsUk, 0.025, 0.15);
+  const k = requireInRange('--steel-k', o.steelK ?? EC2_CLASS_B.k, ...STEEL_K_RANGE); // Table C.1 classes A–C
+  const epsUk = requireInRange('--steel-eps-uk', o.steelEpsUk ?? EC2_CLASS_B.epsUk, ...STEEL_EPS_UK_RANGE);
   const lapMax = o.lapZoneRhoMax === undefined ? undefined : requireInRange('--lap-zone-rho-max', o.lapZoneRhoMax, 0.04, 0.08); // 9.5.2(3)
   const rhoMax = lapMax ?? 0.04;
   const epsUd = branch === 'inclined' ? EC2_EPS_UD_RATIO * epsUk : Infinity; // 3.2.7(2)b: no limit on the horizontal branch

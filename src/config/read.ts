@@ -11,6 +11,8 @@ import { DESIGN_CODES, parseStrength } from '../codes/registry.js';
 import { CODE_IDS, type CodeId } from '../codes/types.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { parseQuantity, type UnitSystem } from '../units/index.js';
+import { formatPath, parseOrThrow } from '../input/fields.js';
+import { issueDate, MAX_SHEETS } from '../input/limits.js';
 import { DEFAULT_TITLE_PATTERN, fileStemFor, fillPattern, titleFields } from './describe.js';
 import { expandNumbers } from './expand.js';
 import { checkRules } from './rules.js';
@@ -52,52 +54,38 @@ export function readChartSetReport(text: string, opts: ReadOptions = {}): { set:
 
 /** Stage 2: the schema check, with zod's first issue turned into one line naming the field. */
 export function checkSchema(json: unknown): ChartSetFile {
-  const r = ChartSetFileSchema.safeParse(json);
-  if (r.success) return r.data;
-  const issue = deepestIssue(r.error.issues);
-  throw new PmError(ERROR_CODES.invalidValue, formatPath(issue.path), describeIssue(issue), {});
+  return parseOrThrow(ChartSetFileSchema, json);
 }
 
-type Issue = z.core.$ZodIssue;
+export { formatPath };
 
-/** In a union, the branch that got furthest says most about what was meant. */
-function deepestIssue(issues: readonly Issue[]): Issue {
-  let best = issues[0]!;
-  for (const i of issues) {
-    if (i.code === 'invalid_union' && i.errors.length > 0) {
-      const inner = i.errors.map((branch) => deepestIssue(branch.map((b) => ({ ...b, path: [...i.path, ...b.path] }) as Issue)));
-      const deepest = inner.reduce((a, b) => (b.path.length > a.path.length ? b : a));
-      if (deepest.path.length > i.path.length) return deepest;
+/** How many values a list, a single value or {from, to, step} gives, without expanding it. */
+function countOf(v: unknown): number {
+  if (Array.isArray(v)) return v.length;
+  if (v !== null && typeof v === 'object' && 'step' in v) {
+    const r = v as { from: number; to: number; step: number };
+    return r.step > 0 && r.to >= r.from ? Math.floor((r.to - r.from) / r.step + 1e-9) + 1 : 1;
+  }
+  return 1;
+}
+
+/** Sheets the groups describe, from list lengths only: refused before anything is expanded. */
+export function countSheets(file: ChartSetFile): number {
+  let total = 0;
+  file.sheets.forEach((g, gi) => {
+    const n = [g.shape, g.fc, g.fy, g.gamma, g.arrangement, g.transverse].reduce<number>((p, v) => p * countOf(v), 1);
+    total += n;
+    if (total > MAX_SHEETS) {
+      throw new PmError(ERROR_CODES.outOfRange, gi === 0 ? 'sheets' : `sheets[${gi}]`, `describe ${total > 1e6 ? 'more than a million' : total} sheets, beyond ${MAX_SHEETS}`, { allowed: `1–${MAX_SHEETS} sheets` });
     }
-    if (i.path.length > best.path.length) best = i;
-  }
-  return best;
-}
-
-function describeIssue(i: Issue): string {
-  switch (i.code) {
-    case 'invalid_type':
-      return `must be ${i.expected === 'array' ? 'a list' : `a ${i.expected}`}`;
-    case 'unrecognized_keys':
-      return `has unknown field${i.keys.length > 1 ? 's' : ''} ${i.keys.map((k) => `"${k}"`).join(', ')}`;
-    case 'invalid_value':
-      return `must be one of ${i.values.map((v) => JSON.stringify(v)).join(', ')}`;
-    case 'invalid_union':
-      return 'has the wrong form (see charts-config/chart-set.schema.json)';
-    default:
-      return i.message;
-  }
-}
-
-/** ["sheets", 3, "gamma"] → "sheets[3].gamma" */
-export function formatPath(path: readonly PropertyKey[]): string {
-  let out = '';
-  for (const p of path) out += typeof p === 'number' ? `[${p}]` : out ? `.${String(p)}` : String(p);
-  return out || '(file)';
+  });
+  return total;
 }
 
 /** Stage 3: defaults, units and cross products. */
 export function resolveChartSet(file: ChartSetFile, opts: ReadOptions = {}): ResolvedChartSet {
+  countSheets(file);
+  const date = file.titleBlock.date ?? defaultDate(opts);
   const units = file.units;
   const code = file.basis.code as CodeId;
   if (!CODE_IDS.includes(code)) {
@@ -149,7 +137,7 @@ export function resolveChartSet(file: ChartSetFile, opts: ReadOptions = {}): Res
       preparedBy: file.titleBlock.preparedBy ?? '',
       checkedBy: file.titleBlock.checkedBy ?? '',
       revision: file.titleBlock.revision ?? '0',
-      date: file.titleBlock.date ?? defaultDate(opts),
+      date,
     },
     paper: { size, orientation, widthPt: orientation === 'landscape' ? ph : pw, heightPt: orientation === 'landscape' ? pw : ph },
     units,
@@ -188,10 +176,7 @@ function resolveShape(s: ShapeFile): ResolvedShape {
 }
 
 function defaultDate(opts: ReadOptions): string {
-  if (opts.sourceDateEpoch !== undefined && /^\d+$/.test(opts.sourceDateEpoch)) {
-    return new Date(Number(opts.sourceDateEpoch) * 1000).toISOString().slice(0, 10);
-  }
-  return (opts.now ?? new Date()).toISOString().slice(0, 10);
+  return issueDate(undefined, 'titleBlock.date', opts.sourceDateEpoch, opts.now);
 }
 
 export type { UnitSystem };

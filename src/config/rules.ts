@@ -8,19 +8,11 @@ import type { Basis, BasisOptions, DesignCode } from '../codes/types.js';
 import { ERROR_CODES, PmError, isPmError } from '../errors.js';
 import { DISPLAY_UNITS, parseQuantity } from '../units/index.js';
 import { expandNumbers } from './expand.js';
+import { ASPECT_RANGE, BARS_PER_FACE_RANGE, ECCENTRICITY_RANGE, GAMMA_RANGE, isCalendarDate, MAX_SHEETS, OMEGA_RANGE, PNG_SCALE_RANGE, RHO_RANGE, RING_BARS_RANGE, SET_CURVES_RANGE } from '../input/limits.js';
 import type { ChartSetFile } from './schema.js';
 import type { ResolvedChartSet } from './types.js';
 
-/** γ range a sheet may use (common practice: outer rows closer than 0.3·h or beyond 0.95·h are not buildable). */
-export const GAMMA_RANGE = [0.3, 0.95] as const;
-/** ρg values a family may hold; the basis's own column limits are printed on the sheet. */
-export const RHO_RANGE = [0.001, 0.1] as const;
-/** ω values a family may hold before each sheet's conversion to ρg is checked against RHO_RANGE. */
-export const OMEGA_RANGE = [0.01, 5] as const;
-export const ECCENTRICITY_RANGE = [0.01, 10] as const;
-export const ASPECT_RANGE = [0.2, 5] as const;
-export const PNG_SCALE_RANGE = [0.5, 8] as const;
-export const MAX_SHEETS = 5000;
+export { ASPECT_RANGE, ECCENTRICITY_RANGE, GAMMA_RANGE, MAX_SHEETS, OMEGA_RANGE, PNG_SCALE_RANGE, RHO_RANGE } from '../input/limits.js';
 
 export interface RuleReport {
   errors: PmError[];
@@ -40,7 +32,7 @@ export function checkRules(set: ResolvedChartSet, file: ChartSetFile): RuleRepor
   if (!/^[A-Za-z0-9][A-Za-z0-9_-]{0,79}$/.test(set.name)) {
     errors.push(new PmError(ERROR_CODES.invalidValue, 'name', 'must be 1–80 letters, digits, "-" or "_", starting with a letter or digit', { value: JSON.stringify(set.name) }));
   }
-  if (!/^\d{4}-\d{2}-\d{2}$/.test(set.titleBlock.date) || Number.isNaN(Date.parse(`${set.titleBlock.date}T00:00:00Z`))) {
+  if (!isCalendarDate(set.titleBlock.date)) {
     errors.push(new PmError(ERROR_CODES.invalidValue, 'titleBlock.date', 'is not a date in the form YYYY-MM-DD', { value: set.titleBlock.date }));
   }
   const { kind, values } = set.ratios;
@@ -52,7 +44,7 @@ export function checkRules(set: ResolvedChartSet, file: ChartSetFile): RuleRepor
     else if (k > 0 && !(r > values[k - 1]!)) errors.push(new PmError(ERROR_CODES.invalidValue, path, 'must be larger than the value before it', { value: r }));
   });
   if (values.length === 0) errors.push(new PmError(ERROR_CODES.missing, kind, 'must hold at least one value'));
-  if (values.length > 20) errors.push(outside(kind, values.length, [1, 20], 'curves'));
+  if (values.length > SET_CURVES_RANGE[1]) errors.push(outside(kind, values.length, SET_CURVES_RANGE, 'curves'));
   set.referenceLines.eccentricities.forEach((e, k) => {
     if (!inRange(e, ECCENTRICITY_RANGE)) errors.push(outside(`referenceLines.eccentricities[${k}]`, e, ECCENTRICITY_RANGE));
   });
@@ -65,6 +57,11 @@ export function checkRules(set: ResolvedChartSet, file: ChartSetFile): RuleRepor
     errors.push(new PmError(ERROR_CODES.invalidValue, 'basis.code', 'is not available in this build', { value: set.code, allowed: Object.keys(DESIGN_CODES).join(', ') }));
   }
   const su = DISPLAY_UNITS[set.units].stress;
+  if (code && !code.unitSystems.includes(set.units)) {
+    // named first: every strength would otherwise look out of range in the wrong units
+    errors.push(new PmError(ERROR_CODES.invalidValue, 'units', `is not a unit system of ${code.title ?? set.code}`, { value: set.units, allowed: code.unitSystems.join(', ') }));
+    return { errors, warnings };
+  }
 
   file.sheets.forEach((g, gi) => {
     const at = `sheets[${gi}]`;
@@ -92,10 +89,10 @@ export function checkRules(set: ResolvedChartSet, file: ChartSetFile): RuleRepor
     });
     each(g.arrangement, 'arrangement', (a, path) => {
       if (a.kind === 'ring') {
-        if (!inRange(a.bars, [4, 48])) errors.push(outside(`${path}.bars`, a.bars, [4, 48]));
+        if (!inRange(a.bars, RING_BARS_RANGE)) errors.push(outside(`${path}.bars`, a.bars, RING_BARS_RANGE));
       } else {
-        const lo = a.kind === 'two-faces' ? 1 : 2;
-        if (!inRange(a.barsPerFace, [lo, 20])) errors.push(outside(`${path}.barsPerFace`, a.barsPerFace, [lo, 20]));
+        const range = BARS_PER_FACE_RANGE[a.kind];
+        if (!inRange(a.barsPerFace, range)) errors.push(outside(`${path}.barsPerFace`, a.barsPerFace, range));
         if (hasCircle) errors.push(new PmError(ERROR_CODES.conflict, `${path}.kind`, 'cannot be used with a circular shape; use "ring"', { value: a.kind }));
       }
     });

@@ -5,32 +5,60 @@
  * can name the allowed range in the trade's terms.
  */
 import { z } from 'zod';
+import { calendarDate, list, quantity, ranged, rangedInt, text } from '../input/fields.js';
+import {
+  ALPHA_CC_RANGE,
+  ASPECT_RANGE,
+  BARS_PER_FACE_RANGE,
+  CONCRETE_LAWS,
+  ECCENTRICITY_RANGE,
+  GAMMA_C_RANGE,
+  GAMMA_RANGE,
+  GAMMA_S_RANGE,
+  MAX_LIST,
+  MAX_NAME_CHARS,
+  MAX_TEXT_CHARS,
+  MAX_TITLE_PATTERN_CHARS,
+  NAME_PATTERN,
+  OMEGA_RANGE,
+  PNG_SCALE_RANGE,
+  RHO_RANGE,
+  RING_BARS_RANGE,
+  SET_CURVES_RANGE,
+  STEEL_BRANCHES,
+  STEEL_EPS_UK_RANGE,
+  STEEL_K_RANGE,
+} from '../input/limits.js';
 
-/** A number in the set's unit system, or a string with a unit: 7, "7ksi", "48MPa". */
-const Quantity = z.union([z.number(), z.string()]);
+/** A stress in the set's unit system, or a string with a unit: 7, "7ksi", "48MPa". */
+const Quantity = quantity('stress');
+/** A strength by class name where the basis has classes (EN 1992-1-1 Table 3.1 "C50/60", steel "B500B"); the rule stage checks the basis. */
+const ConcreteStrength = z.union([Quantity, z.string().regex(/^C\d{2,3}\/\d{2,3}$/, { message: 'is not a strength class such as C50/60' })]);
+const SteelStrength = z.union([Quantity, z.string().regex(/^B\d{3}[A-C]?$/, { message: 'is not a steel grade such as B500B' })]);
 
-/** A list of values or an inclusive range with a step. */
-const NumberRange = z
-  .object({
-    from: z.number().describe('first value'),
-    to: z.number().describe('last value (included when the steps reach it)'),
-    step: z.number().describe('step between values'),
-  })
-  .strict();
+/** An inclusive range with a step, inside `range`; the count of values is checked before expanding. */
+const NumberRange = (range: readonly [number, number]) =>
+  z
+    .object({
+      from: ranged(range).describe('first value'),
+      to: ranged(range).describe('last value (included when the steps reach it)'),
+      step: z.number().positive({ message: 'must be greater than 0' }).describe('step between values'),
+    })
+    .strict();
 
-const oneOrMany = <T extends z.ZodType>(t: T) => z.union([t, z.array(t)]);
+const oneOrMany = <T extends z.ZodType>(t: T) => z.union([t, list(t)]);
 
 /** Options some bases read (src/codes/types.ts BasisOptions); the others ignore them. */
 const BasisOptions = z
   .object({
-    alphaCc: z.number().describe('EN 1992-1-1 αcc (3.1.6(1)); recommended 1.0').optional(),
-    gammaC: z.number().describe('EN 1992-1-1 γc (2.4.2.4); recommended 1.5').optional(),
-    gammaS: z.number().describe('EN 1992-1-1 γs (2.4.2.4); recommended 1.15').optional(),
-    concreteLaw: z.enum(['parabola-rectangle', 'rectangular-block']).describe('where the basis offers both; default "parabola-rectangle"').optional(),
-    steelBranch: z.enum(['horizontal', 'inclined']).describe('EN 1992-1-1 3.2.7(2) top branch; default "horizontal"').optional(),
-    steelK: z.number().describe('EN 1992-1-1 inclined branch k = (ft/fy)k; default 1.08 (class B)').optional(),
-    steelEpsUk: z.number().describe('EN 1992-1-1 inclined branch εuk; default 0.05 (class B)').optional(),
-    lapZoneRhoMax: z.number().describe('EN 1992-1-1 9.5.2(3): a lap zone with As,max = this ratio·Ac, 0.04–0.08 (0.08 recommended)').optional(),
+    alphaCc: ranged(ALPHA_CC_RANGE).describe('EN 1992-1-1 αcc (3.1.6(1)); recommended 1.0').optional(),
+    gammaC: ranged(GAMMA_C_RANGE).describe('EN 1992-1-1 γc (2.4.2.4); recommended 1.5').optional(),
+    gammaS: ranged(GAMMA_S_RANGE).describe('EN 1992-1-1 γs (2.4.2.4); recommended 1.15').optional(),
+    concreteLaw: z.enum(CONCRETE_LAWS).describe('where the basis offers both; default "parabola-rectangle"').optional(),
+    steelBranch: z.enum(STEEL_BRANCHES).describe('EN 1992-1-1 3.2.7(2) top branch; default "horizontal"').optional(),
+    steelK: ranged(STEEL_K_RANGE).describe('EN 1992-1-1 inclined branch k = (ft/fy)k; default 1.08 (class B)').optional(),
+    steelEpsUk: ranged(STEEL_EPS_UK_RANGE).describe('EN 1992-1-1 inclined branch εuk; default 0.05 (class B)').optional(),
+    lapZoneRhoMax: ranged([0.04, 0.08]).describe('EN 1992-1-1 9.5.2(3): a lap zone with As,max = this ratio·Ac, 0.04–0.08 (0.08 recommended)').optional(),
     columnUse: z
       .enum(['gravity', 'special-seismic'])
       .describe('ACI 318 bar-grade limit by use (Table 20.2.2.4(a)): "gravity" (default) or "special-seismic" (special moment frames and special walls)')
@@ -52,26 +80,26 @@ const Shape = z.union([
   z
     .object({
       kind: z.literal('rectangle'),
-      aspect: z.number().describe('width over depth, b/h; default 1').optional(),
+      aspect: ranged(ASPECT_RANGE).describe('width over depth, b/h; default 1').optional(),
     })
     .strict(),
   z.object({ kind: z.literal('circle') }).strict(),
 ]);
 
 const Arrangement = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('two-faces'), barsPerFace: z.number().int().describe('bars in each of the two faces parallel to the bending axis') }).strict(),
-  z.object({ kind: z.literal('four-faces'), barsPerFace: z.number().int().describe('bars along each of the four faces, corners counted on both') }).strict(),
-  z.object({ kind: z.literal('side-faces'), barsPerFace: z.number().int().describe('bars along each of the two faces perpendicular to the bending axis') }).strict(),
-  z.object({ kind: z.literal('ring'), bars: z.number().int().describe('bars equally spaced on a circle of diameter γ·h') }).strict(),
+  z.object({ kind: z.literal('two-faces'), barsPerFace: rangedInt(BARS_PER_FACE_RANGE['two-faces']).describe('bars in each of the two faces parallel to the bending axis') }).strict(),
+  z.object({ kind: z.literal('four-faces'), barsPerFace: rangedInt(BARS_PER_FACE_RANGE['four-faces']).describe('bars along each of the four faces, corners counted on both') }).strict(),
+  z.object({ kind: z.literal('side-faces'), barsPerFace: rangedInt(BARS_PER_FACE_RANGE['side-faces']).describe('bars along each of the two faces perpendicular to the bending axis') }).strict(),
+  z.object({ kind: z.literal('ring'), bars: rangedInt(RING_BARS_RANGE).describe('bars equally spaced on a circle of diameter γ·h') }).strict(),
 ]);
 
 /** One entry of `sheets`: every list field multiplies (cross product); a single value makes one sheet. */
 const SheetGroup = z
   .object({
     shape: oneOrMany(Shape).describe('section shape(s); default "rectangle"').optional(),
-    fc: oneOrMany(Quantity).describe('specified concrete strength(s): f′c, or fck for EN 1992-1-1; e.g. "7ksi" or 48 (set units)'),
-    fy: oneOrMany(Quantity).describe('specified yield strength(s) of the bars: fy, or fyk for EN 1992-1-1; e.g. "80ksi"'),
-    gamma: z.union([z.number(), z.array(z.number()), NumberRange]).describe('γ: centre-to-centre distance of the outer bar rows over h'),
+    fc: oneOrMany(ConcreteStrength).describe('specified concrete strength(s): f′c, or fck for EN 1992-1-1; e.g. "7ksi" or 48 (set units)'),
+    fy: oneOrMany(SteelStrength).describe('specified yield strength(s) of the bars: fy, or fyk for EN 1992-1-1; e.g. "80ksi"'),
+    gamma: z.union([ranged(GAMMA_RANGE), list(ranged(GAMMA_RANGE)), NumberRange(GAMMA_RANGE)]).describe('γ: centre-to-centre distance of the outer bar rows over h'),
     arrangement: oneOrMany(Arrangement).describe('bar arrangement(s)'),
     transverse: oneOrMany(z.enum(['tied', 'spiral'])).describe('transverse reinforcement; default "tied"').optional(),
     basisOptions: BasisOptions.describe('basis options for these sheets only, over the set’s basis.options (e.g. a National Annex variant); the sheet titles name them').optional(),
@@ -88,16 +116,18 @@ const SheetGroup = z
 
 export const ChartSetFileSchema = z
   .object({
-    $schema: z.string().describe('path of this JSON Schema, for editors').optional(),
-    name: z.string().describe('set name; also the output folder name (letters, digits, "-", "_")'),
+    $schema: text(1000).describe('path of this JSON Schema, for editors').optional(),
+    name: text(MAX_NAME_CHARS)
+      .regex(new RegExp(NAME_PATTERN), { message: 'must be 1–80 letters, digits, "-" or "_", starting with a letter or digit' })
+      .describe('set name; also the output folder name (letters, digits, "-", "_")'),
     titleBlock: z
       .object({
-        office: z.string().describe('office name on every sheet'),
-        project: z.string().describe('project name on every sheet'),
-        preparedBy: z.string().describe('initials or name; default ""').optional(),
-        checkedBy: z.string().describe('initials or name; default ""').optional(),
-        revision: z.string().describe('revision mark; default "0"').optional(),
-        date: z.string().describe('issue date YYYY-MM-DD printed on sheets and used as the PDF dates; default: SOURCE_DATE_EPOCH, else today (UTC)').optional(),
+        office: text(MAX_TEXT_CHARS).describe('office name on every sheet'),
+        project: text(MAX_TEXT_CHARS).describe('project name on every sheet'),
+        preparedBy: text(MAX_TEXT_CHARS).describe('initials or name; default ""').optional(),
+        checkedBy: text(MAX_TEXT_CHARS).describe('initials or name; default ""').optional(),
+        revision: text(MAX_TEXT_CHARS).describe('revision mark; default "0"').optional(),
+        date: calendarDate().describe('issue date YYYY-MM-DD printed on sheets and used as the PDF dates; default: SOURCE_DATE_EPOCH, else today (UTC)').optional(),
       })
       .strict(),
     paper: z
@@ -118,15 +148,15 @@ export const ChartSetFileSchema = z
       .strict(),
     normalisation: z.enum(NORMALISATIONS).describe('"stress": P/Ag and M/(Ag·h) in the stress unit; "dimensionless": also divided by the basis’s normalising stress (f′c, or fcd for EN 1992-1-1: ν and μ); default "stress"').optional(),
     families: z.enum(FAMILY_CHOICES).describe('curves to draw: "design" (φ-factored), "nominal" or "both"; default "design"').optional(),
-    rhoG: z.union([z.array(z.number()), NumberRange]).describe('ρg family (geometric ratio As/Ag); default 0.01 to 0.08 in 0.01 steps; give this or omega').optional(),
+    rhoG: z.union([list(ranged(RHO_RANGE), SET_CURVES_RANGE[1]), NumberRange(RHO_RANGE)]).describe('ρg family (geometric ratio As/Ag); default 0.01 to 0.08 in 0.01 steps; give this or omega').optional(),
     omega: z
-      .union([z.array(z.number()), NumberRange])
+      .union([list(ranged(OMEGA_RANGE), SET_CURVES_RANGE[1]), NumberRange(OMEGA_RANGE)])
       .describe('instead of rhoG: family of mechanical ratios ω = As·fyd/(Ac·fcd) (fy/f′c for ACI 318, φs·fy/f′c for CSA A23.3), customary on European charts; each sheet converts ω to ρg with its own design strengths')
       .optional(),
     referenceLines: z
       .object({
         strainStates: z.boolean().describe('lines through the basis’s strain states (εt = 0, εt = εty, tension-controlled limit); default true').optional(),
-        eccentricities: z.array(z.number()).describe('radial lines of constant e/h; default [0.1, 0.25, 0.5, 1]').optional(),
+        eccentricities: list(ranged(ECCENTRICITY_RANGE), 20).describe('radial lines of constant e/h; default [0.1, 0.25, 0.5, 1]').optional(),
         axialCap: z.boolean().describe('line through the points where each curve meets its axial cap; default true').optional(),
         barEntry: z
           .boolean()
@@ -135,8 +165,7 @@ export const ChartSetFileSchema = z
       })
       .strict()
       .optional(),
-    sheetTitle: z
-      .string()
+    sheetTitle: text(MAX_TITLE_PATTERN_CHARS)
       .describe('office pattern for sheet titles with {shape} {fcSymbol} {fc} {fySymbol} {fy} {gamma} {arrangement} {transverse} {family} {options} {index} ({fcSymbol}, {fySymbol}: the basis’s symbols, f′c/fy or fck/fyk; {options}: a sheet group’s own basisOptions, appended when the pattern leaves it out); default spells the parameters out')
       .optional(),
     outputs: z
@@ -144,12 +173,12 @@ export const ChartSetFileSchema = z
         pdf: z.boolean().describe('bound book.pdf; default true').optional(),
         svg: z.boolean().describe('sheets/*.svg; default false').optional(),
         png: z.boolean().describe('sheets/*.png; default false').optional(),
-        pngScale: z.number().describe('PNG pixels per point; default 2').optional(),
+        pngScale: ranged(PNG_SCALE_RANGE).describe('PNG pixels per point; default 2').optional(),
         tables: z.boolean().describe('tables/*.csv and *.json; default true').optional(),
       })
       .strict()
       .optional(),
-    sheets: z.array(SheetGroup).describe('sheet groups; each is the cross product of its lists'),
+    sheets: list(SheetGroup, MAX_LIST).describe('sheet groups; each is the cross product of its lists'),
   })
   .strict();
 

@@ -91,7 +91,8 @@ export interface ColumnLoadResult {
   /** moment about y after slenderness, signed; null for a uniaxial load */
   readonly Muy: number | null;
   /** normalised uniaxial demand (P/Ag, M/(Ag·h)), M ≥ 0 */
-  readonly normalised: { readonly P: number; readonly M: number; readonly eOverH: number };
+  /** eOverH: M/P, 0 for no load, null where it is not finite (no axial load): outputs stay finite */
+  readonly normalised: { readonly P: number; readonly M: number; readonly eOverH: number | null };
   /** where the load sits on a chart of this layout: M signed where the chart has both branches (unsymmetric layouts), else M */
   readonly chartM: number;
   /** the same over the basis's normalising stress (ν and μ for EN 1992-1-1) */
@@ -122,7 +123,7 @@ export interface ColumnLoadResult {
   readonly statusReason: string;
   readonly statusClause: string | null;
   /** the ranking value: max of the uniaxial and exact biaxial figures of `ColumnCheck.measure` (Infinity when not possible) */
-  readonly measureValue: number;
+  readonly measureValue: number | null;
   readonly governing: boolean;
   readonly notes: readonly string[];
 }
@@ -302,6 +303,13 @@ export function biaxialRhoRequired(
   return { rho: hi, status: 'ok' };
 }
 
+/** M/P, 0 for no load, null where it is not finite (no axial load, or one too small to divide by). */
+function eccentricityRatio(P: number, M: number): number | null {
+  if (P === 0 && M === 0) return 0;
+  const r = M / P;
+  return Number.isFinite(r) ? r : null;
+}
+
 const fmtRho = (r: number): string => String(Number(r.toFixed(4)));
 
 /** What a load demands of the section: slenderness applied, the moment raised to the minimum, the variants it meets. */
@@ -430,7 +438,7 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
     Mdesign,
     momentRaised: raised,
     Muy: Muy ?? null,
-    normalised: { P: n.P, M: n.M, eOverH: n.P === 0 ? (n.M === 0 ? 0 : Infinity) : n.M / n.P },
+    normalised: { P: n.P, M: n.M, eOverH: eccentricityRatio(n.P, n.M) },
     dimensionless: { P: n.P / basis.normalisingStress, M: n.M / basis.normalisingStress },
     chartM,
     rhoRequired: unbounded ? null : g.req.rho,
@@ -450,7 +458,8 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
     slenderness: magnified,
     biaxial,
     ...st,
-    measureValue,
+    // finite or null: a load beyond any capacity is a status, never ∞
+    measureValue: Number.isFinite(measureValue) ? measureValue : null,
     governing: false,
     notes,
   };
@@ -497,7 +506,9 @@ export function* checkColumnLoads(ctxOrInput: ColumnCheckContext | ColumnCheckIn
 export function governingOrder(a: ColumnLoadResult, b: ColumnLoadResult): number {
   const s = STATUS_RANK[a.status] - STATUS_RANK[b.status];
   if (s !== 0) return s;
-  if (a.measureValue !== b.measureValue) return b.measureValue - a.measureValue;
+  const ma = a.measureValue ?? Infinity;
+  const mb = b.measureValue ?? Infinity;
+  if (ma !== mb) return mb > ma ? 1 : -1;
   return b.demandRatio - a.demandRatio || a.index - b.index;
 }
 
@@ -524,8 +535,8 @@ export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadRe
     : gov.status !== 'ok' && gov.status !== 'fails'
       ? `${gov.status} ${gov.statusReason}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`
       : measure === 'utilisation'
-        ? `highest utilisation ${gov.measureValue.toFixed(3)} (the larger of the uniaxial and exact biaxial figures)`
-        : `largest ρg required ${Number.isFinite(gov.measureValue) ? gov.measureValue.toFixed(4) : '—'}${ctx.biaxial ? ' (the larger of the uniaxial and exact biaxial figures)' : ''}`;
+        ? `highest utilisation ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(3)} (the larger of the uniaxial and exact biaxial figures)`
+        : `largest ρg required ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(4)}${ctx.biaxial ? ' (the larger of the uniaxial and exact biaxial figures)' : ''}`;
   const summaryText =
     sorted.length === 0
       ? 'no loads'
@@ -552,7 +563,8 @@ export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadRe
       },
       { min: 0, max: Infinity },
     );
-    const requiredArea = Math.max(0, ...sorted.map((r) => Math.max(r.steelRequired ?? 0, (r.biaxial?.rhoRequired ?? 0) * ctx.area)));
+    // a loop, not Math.max(...list): 200k loads overflow the call stack as spread arguments
+    const requiredArea = sorted.reduce((m, r) => Math.max(m, r.steelRequired ?? 0, (r.biaxial?.rhoRequired ?? 0) * ctx.area), 0);
     const sel = input.barSelection;
     bars = proposeBars({
       basis,

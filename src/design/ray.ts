@@ -91,7 +91,8 @@ export interface RayCapacity {
 function rayDepth(t: RayTable, rho: number, load: NormalisedLoad, exact: boolean): number {
   const { P: p, M: m } = load;
   const n = t.c.length;
-  if (m === 0) return p >= 0 ? C_OVER_H_MAX : C_OVER_H_MIN;
+  // an axial load, or a moment lost in round-off beside it (denormal m): the ray is the P axis
+  if (Math.abs(m) <= 1e-12 * Math.abs(p)) return p >= 0 ? C_OVER_H_MAX : C_OVER_H_MIN;
   const hAt = (i: number) => (t.Pc[i]! + rho * t.Ps[i]!) * m - (t.Mc[i]! + rho * t.Ms[i]!) * p;
   const h0 = hAt(0);
   let prev = h0;
@@ -151,8 +152,10 @@ function responseAt(t: RayTable, c: number, exact: boolean): [epsT: number, phi:
  */
 export function capacityAlongRay(t: RayTable, rho: number, load: NormalisedLoad, exact = true): RayCapacity {
   const { P: p, M: m } = load;
-  const c = rayDepth(t, rho, load, exact);
-  if (Number.isNaN(c)) return missedRay(t, rho, load);
+  const found = rayDepth(t, rho, load, exact);
+  // a negligible load has no direction to miss with (its ray is round-off): report the axial end state
+  if (Number.isNaN(found) && !isNegligibleLoad(load)) return missedRay(t, rho, load);
+  const c = Number.isNaN(found) ? (p >= 0 ? C_OVER_H_MAX : C_OVER_H_MIN) : found;
   const [epsT, phi, Pc, Mc, Ps, Ms] = responseAt(t, c, exact);
   const P = phi * (Pc + rho * Ps);
   const M = phi * (Mc + rho * Ms);

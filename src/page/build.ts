@@ -45,8 +45,10 @@ export async function bundlePage(): Promise<string> {
     legalComments: 'eof',
     charset: 'utf8',
     logLevel: 'silent',
-    define: { 'process.env.NODE_ENV': '"production"' },
-    alias: { 'node:fs': sibling('virtual-fs'), 'node:path': sibling('path-shim') },
+    // the page has no environment: a fixed date comes from its own field
+    define: { 'process.env.NODE_ENV': '"production"', 'process.env.SOURCE_DATE_EPOCH': 'undefined' },
+    // csv-parse's browser build carries its own Buffer; the Node build expects the global one
+    alias: { 'node:fs': sibling('virtual-fs'), 'node:path': sibling('path-shim'), 'csv-parse/sync': 'csv-parse/browser/esm/sync' },
     plugins: [
       {
         name: 'pmchart-page-stubs',

@@ -24,4 +24,8 @@ export const writeFileSync = noDisk;
 export const renameSync = noDisk;
 export const rmSync = noDisk;
 export const existsSync = (name: string): boolean => files.has(String(name));
-export default { readFileSync, writeFileSync, renameSync, rmSync, existsSync };
+/** Size checks of the readers (input/limits.ts caps) see the pasted text's bytes. */
+export function statSync(name: string): { size: number } {
+  return { size: new TextEncoder().encode(readFileSync(name)).length };
+}
+export default { readFileSync, writeFileSync, renameSync, rmSync, existsSync, statSync };

@@ -271,7 +271,8 @@ export function checkAssumptions(c: ColumnCheck): string[] {
 /** Renders a table as aligned text, the governing row marked with "* ". */
 export function textTable(t: TableView): string {
   const rows = t.rows.map((r, i) => [(t.marked[i] ? '* ' : '') + r[0], ...r.slice(1)]);
-  const w = t.headers.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? '').length)));
+  // a loop, not Math.max(...rows): 200k rows overflow the call stack as spread arguments
+  const w = t.headers.map((h, i) => rows.reduce((m, r) => Math.max(m, (r[i] ?? '').length), h.length));
   const line = (cells: string[]) => cells.map((x, i) => (i === 0 ? x.padEnd(w[i]!) : x.padStart(w[i]!))).join('  ').trimEnd();
   return [line(t.headers), line(w.map((n) => '-'.repeat(n))), ...rows.map(line)].join('\n');
 }
@@ -404,7 +405,7 @@ export function resultJson(r: ColumnLoadResult, c: ColumnCheck) {
     firstOrder: { Mux: disp(r.firstOrder.Mux, 'moment', u), Muy: r.firstOrder.Muy === null ? null : disp(r.firstOrder.Muy, 'moment', u) },
     Mdesign: disp(r.Mdesign, 'moment', u),
     momentRaised: r.momentRaised,
-    normalised: { P: num(r.normalised.P), M: num(r.normalised.M), eOverH: num(r.normalised.eOverH) },
+    normalised: { P: num(r.normalised.P), M: num(r.normalised.M), eOverH: orNull(r.normalised.eOverH) },
     dimensionless: { P: num(r.dimensionless.P), M: num(r.dimensionless.M), ...(c.basis.symbols.dimensionlessAxial ? { symbols: [c.basis.symbols.dimensionlessAxial, c.basis.symbols.dimensionlessMoment] } : {}) },
     rhoRequired: orNull(r.rhoRequired),
     rhoStatus: r.rhoStatus,
@@ -429,7 +430,7 @@ export function resultJson(r: ColumnLoadResult, c: ColumnCheck) {
     status: r.status,
     statusReason: r.statusReason,
     statusClause: r.statusClause,
-    measure: num(r.measureValue),
+    measure: orNull(r.measureValue),
     governing: r.governing,
     notes: r.notes,
     ...(r.slenderness ? { slenderness: { ...slenderJson(r.slenderness.x, u), ...(r.slenderness.y ? { y: slenderJson(r.slenderness.y, u) } : {}) } } : {}),

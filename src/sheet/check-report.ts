@@ -267,7 +267,7 @@ function placeLoads(L: SheetLayout, d: { domainM: [number, number]; domainP: [nu
     placed.push({ x0: spot[0], y0: spot[1] - h / 2, x1: spot[0] + w, y1: spot[1] + h / 2 });
     labels.push({ x: Math.round(spot[0] * 100) / 100, y: Math.round(spot[1] * 100) / 100, text: r.id, governing: r.governing ? 1 : 0, z: labels.length });
   });
-  data.loadLabels!.push(...labels);
+  for (const l of labels) data.loadLabels!.push(l); // no spread: 200k loads overflow the call stack
 }
 
 function plotCaption(g: Deco, L: ReportLayout, c: ColumnCheck): void {

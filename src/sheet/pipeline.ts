@@ -11,7 +11,7 @@
  * 5. The binder (book.ts) joins the chunk PDFs behind a cover and index, adds the outline and the
  *    fixed metadata. Everything is made in a staging folder that replaces out/<set-name>/ at the end.
  */
-import { fork } from 'node:child_process';
+import { fork, type ChildProcess } from 'node:child_process';
 import { mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { dirname, extname, join, resolve } from 'node:path';
@@ -22,7 +22,7 @@ import { SheetRenderer } from '../render/renderer.js';
 import { bindBook } from './book.js';
 import { basisForSheet, groupExtents } from './curves.js';
 import { normalisationText, primaryFamily } from '../chart/sheet-data.js';
-import { swapInFolder, writeFileAtomic } from './files.js';
+import { checkTarget, ioError, recoverStale, swapInFolder, writeFileAtomic } from './files.js';
 import { chunksOf, type ChunkTask } from './render-chunk.js';
 import { renderChunk } from './render-chunk.js';
 import type { WorkerMessage } from './worker.js';
@@ -38,6 +38,8 @@ export interface MakeSetOptions {
   generator: string;
   /** sheets per chunk PDF (default CHUNK_SIZE); the book's bytes depend on it, not on `jobs` */
   chunkSize?: number;
+  /** notes about stale folders cleaned up or restored (default: one line each on stderr) */
+  onNote?: (text: string) => void;
 }
 
 export interface MadeSet {
@@ -53,8 +55,24 @@ export interface MadeSet {
 export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions): Promise<MadeSet> {
   const target = resolve(opts.outDir ?? 'out', set.name);
   const staging = `${target}.partial-${process.pid}`;
-  rmSync(staging, { recursive: true, force: true });
-  mkdirSync(staging, { recursive: true });
+  // 0. the place: a folder or nothing at the target; leftovers of killed runs cleaned or put back
+  checkTarget(target);
+  for (const note of recoverStale(target)) (opts.onNote ?? ((t: string) => process.stderr.write(`pmchart: ${t}\n`)))(note);
+  try {
+    rmSync(staging, { recursive: true, force: true });
+    mkdirSync(staging, { recursive: true });
+  } catch (e) {
+    throw ioError(staging, e);
+  }
+  const children = new Set<ChildProcess>();
+  const stopOnSignal = (signal: NodeJS.Signals) => {
+    for (const c of children) c.kill('SIGTERM');
+    rmSync(staging, { recursive: true, force: true });
+    process.stderr.write(`pmchart: stopped by ${signal}; removed ${staging}\n`);
+    process.exit(signal === 'SIGINT' ? 130 : 143);
+  };
+  process.on('SIGINT', stopOnSignal);
+  process.on('SIGTERM', stopOnSignal);
   try {
     // 2–4: curves → spec → bytes, chunk by chunk
     const tasks = chunksOf(set, staging, opts.generator, opts.chunkSize, groupExtents(set));
@@ -62,7 +80,7 @@ export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions):
     const tick = () => opts.onSheet?.(++done, set.sheets.length);
     const jobs = Math.max(1, Math.min(opts.jobs ?? Math.min(4, availableParallelism()), tasks.length));
     const childRss = { kb: 0 };
-    const pdfs = jobs === 1 ? await renderHere(tasks, tick) : await renderInChildren(tasks, jobs, tick, childRss);
+    const pdfs = jobs === 1 ? await renderHere(tasks, tick) : await renderInChildren(tasks, jobs, tick, childRss, children);
 
     // 5: bind the book
     let book: string | undefined;
@@ -105,6 +123,9 @@ export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions):
   } catch (e) {
     rmSync(staging, { recursive: true, force: true });
     throw e;
+  } finally {
+    process.off('SIGINT', stopOnSignal);
+    process.off('SIGTERM', stopOnSignal);
   }
 }
 
@@ -119,8 +140,11 @@ async function renderHere(tasks: ChunkTask[], tick: () => void): Promise<(string
   }
 }
 
-/** Chunks handed to `jobs` child processes as they become free (node-canvas cannot run in worker threads). */
-async function renderInChildren(tasks: ChunkTask[], jobs: number, tick: () => void, rss: { kb: number }): Promise<(string | undefined)[]> {
+/**
+ * Chunks handed to `jobs` child processes as they become free (node-canvas cannot run in worker
+ * threads). Any child that fails or stops stops the others: the caller then removes the staging folder.
+ */
+async function renderInChildren(tasks: ChunkTask[], jobs: number, tick: () => void, rss: { kb: number }, live: Set<ChildProcess>): Promise<(string | undefined)[]> {
   const here = fileURLToPath(import.meta.url);
   const ext = extname(here);
   const workerPath = join(dirname(here), `worker${ext}`);
@@ -128,15 +152,19 @@ async function renderInChildren(tasks: ChunkTask[], jobs: number, tick: () => vo
   const results: (string | undefined)[] = new Array(tasks.length);
   let next = 0;
   const children = Array.from({ length: jobs }, () => fork(workerPath, [], { execArgv, stdio: ['ignore', 'inherit', 'inherit', 'ipc'] }));
+  for (const c of children) live.add(c);
   try {
     await Promise.all(
       children.map(
-        (child) =>
+        (child, k) =>
           new Promise<void>((resolveChild, reject) => {
+            // a child is done only when told to exit; stopping before that, in any way, is a failure
+            let finished = false;
             const give = () => {
               const t = tasks[next++];
               if (t) child.send({ type: 'task', task: t });
               else {
+                finished = true;
                 child.send({ type: 'exit' });
                 resolveChild();
               }
@@ -152,8 +180,10 @@ async function renderInChildren(tasks: ChunkTask[], jobs: number, tick: () => vo
                 reject(pm ? new PmError(pm.code as never, '', pm.detail, {}, pm.exitCode) : new Error(m.error.message));
               }
             });
+            child.on('error', (e) => reject(new PmError(ERROR_CODES.environment, '', `render process ${k + 1} cannot be run (${(e as NodeJS.ErrnoException).code ?? e.message})`, {}, 1)));
             child.on('exit', (code, signal) => {
-              if (code !== 0 && next <= tasks.length) reject(new PmError(ERROR_CODES.environment, 'render process', `stopped (${signal ?? `exit code ${code}`})`, {}, 1));
+              live.delete(child);
+              if (!finished) reject(new PmError(ERROR_CODES.environment, '', `render process ${k + 1} stopped (${signal ?? `exit code ${code}`})`, {}, 1));
             });
             give();
           }),
@@ -161,7 +191,7 @@ async function renderInChildren(tasks: ChunkTask[], jobs: number, tick: () => vo
     );
   } catch (e) {
     // stop the others before the caller removes the staging folder they write into
-    for (const c of children) c.kill();
+    for (const c of children) if (c.exitCode === null && c.signalCode === null) c.kill('SIGTERM');
     await Promise.all(children.map((c) => (c.exitCode !== null || c.signalCode !== null ? undefined : new Promise((r) => c.once('exit', r)))));
     throw e;
   } finally {

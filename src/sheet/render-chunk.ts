@@ -43,8 +43,14 @@ export const chunkPdfPath = (staging: string, chunk: number): string => join(sta
 export async function renderChunk(task: ChunkTask, renderer: SheetRenderer, onSheet?: () => void): Promise<string | undefined> {
   const { set, staging, generator } = task;
   const out = set.outputs;
+  // Every chunk starts from fresh vega views. A reused view keeps the scene items of earlier sheets
+  // (axis ticks and grid lines enter and exit), so its draw order, and with it the PDF content
+  // stream, depended on which sheets the process had drawn before: --jobs changed the bytes.
+  renderer.finalize();
   const pdf = out.pdf ? renderer.pdfPages() : undefined;
   for (const i of task.indices) {
+    // a render process whose parent has gone stops between sheets (worker.ts exits on disconnect)
+    if (process.send !== undefined && !process.connected) throw new Error('the parent process has gone');
     const sheet = set.sheets[i]!;
     const family = familyForSheet(set, sheet);
     const extent = task.extents?.[sheet.origin];

@@ -5,6 +5,7 @@
  */
 import { isPmError } from '../errors.js';
 import { SheetRenderer } from '../render/renderer.js';
+import { injectedFault } from './files.js';
 import { renderChunk, type ChunkTask } from './render-chunk.js';
 
 export type WorkerMessage =
@@ -12,16 +13,26 @@ export type WorkerMessage =
   | { type: 'done'; chunk: number; pdf: string | undefined; maxRssKb: number }
   | { type: 'error'; error: { message: string; pm?: { code: string; path: string; facts: Record<string, unknown>; exitCode: number; detail: string } } };
 
-const send = (m: WorkerMessage) => process.send?.(m);
+const send = (m: WorkerMessage) => {
+  if (process.connected) process.send?.(m);
+};
 let renderer: Promise<SheetRenderer> | undefined;
+let exiting = false;
+
+// The parent is gone (killed, even by SIGKILL) or said goodbye: stop at once, writing nothing more.
+process.on('disconnect', () => {
+  if (!exiting) process.exit(1);
+});
 
 process.on('message', (msg: { type: 'task'; task: ChunkTask } | { type: 'exit' }) => {
   if (msg.type === 'exit') {
+    exiting = true;
     process.disconnect?.();
     return;
   }
   void (async () => {
     try {
+      if (injectedFault('child-crash') === String(msg.task.chunk)) process.kill(process.pid, 'SIGKILL');
       renderer ??= SheetRenderer.create();
       const pdf = await renderChunk(msg.task, await renderer, () => send({ type: 'sheet' }));
       send({ type: 'done', chunk: msg.task.chunk, pdf, maxRssKb: process.resourceUsage().maxRSS });

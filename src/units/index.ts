@@ -84,17 +84,22 @@ export function systemFactor(kind: QuantityKind, from: UnitSystem, to: UnitSyste
  * A bare number means the system's default unit for that kind (see DISPLAY_UNITS).
  */
 export function parseQuantity(text: string | number, kind: QuantityKind, system: UnitSystem, path: string): number {
-  const raw = String(text).trim();
-  const m = /^([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)\s*([a-z/·\-0-9²]*)$/i.exec(raw);
-  if (!m) {
+  if (typeof text === 'number') return finite(text * DEFAULT_FACTOR[system][kind], text, kind, path);
+  // refused before any scanning: the cap keeps every parse short (MAX_QUANTITY_CHARS in src/input/limits.ts)
+  if (text.length > MAX_QUANTITY_CHARS) {
+    throw new PmError(ERROR_CODES.invalidValue, path, `is longer than ${MAX_QUANTITY_CHARS} characters`, { value: `${JSON.stringify(text.slice(0, 12))}…` });
+  }
+  const raw = text.trim();
+  const split = splitQuantity(raw);
+  if (!split) {
     throw new PmError(ERROR_CODES.invalidValue, path, 'is not a number with an optional unit', {
       value: JSON.stringify(raw),
       allowed: `a number, optionally with a ${kind} unit such as ${exampleUnits(kind)}`,
     });
   }
-  const value = Number(m[1]);
-  const suffix = (m[2] ?? '').toLowerCase().replace('·', '-').replace('²', '2');
-  if (suffix === '') return value * DEFAULT_FACTOR[system][kind];
+  const value = Number(split.number);
+  const suffix = split.unit.toLowerCase().replace('·', '-').replace('²', '2');
+  if (suffix === '') return finite(value * DEFAULT_FACTOR[system][kind], raw, kind, path);
   const def = SUFFIXES[suffix];
   if (!def || def.kind !== kind) {
     throw new PmError(ERROR_CODES.invalidUnit, path, `has a unit that is not a ${kind} unit`, {
@@ -102,7 +107,57 @@ export function parseQuantity(text: string | number, kind: QuantityKind, system:
       allowed: exampleUnits(kind),
     });
   }
-  return value * def.toInternal * systemFactor(kind, def.system, system);
+  return finite(value * def.toInternal * systemFactor(kind, def.system, system), raw, kind, path);
+}
+
+/** Quantity text is limited to this many characters (the one limits module repeats it). */
+export const MAX_QUANTITY_CHARS = 64;
+
+function finite(v: number, raw: unknown, kind: QuantityKind, path: string): number {
+  if (!Number.isFinite(v)) throw new PmError(ERROR_CODES.invalidValue, path, `is not a finite ${kind}`, { value: String(raw) });
+  return v;
+}
+
+const isDigit = (c: number) => c >= 48 && c <= 57;
+const UNIT_CHARS = /^[a-z/·\-0-9²]*$/i;
+
+/**
+ * One left-to-right scan (no backtracking): [sign] digits [. digits] [e [sign] digits], blanks, unit.
+ * Returns undefined when the text is not of that form.
+ */
+export function splitQuantity(raw: string): { number: string; unit: string } | undefined {
+  let i = 0;
+  const n = raw.length;
+  if (raw[i] === '+' || raw[i] === '-') i++;
+  const intStart = i;
+  while (i < n && isDigit(raw.charCodeAt(i))) i++;
+  let digits = i - intStart;
+  if (raw[i] === '.') {
+    i++;
+    const fracStart = i;
+    while (i < n && isDigit(raw.charCodeAt(i))) i++;
+    digits += i - fracStart;
+  }
+  if (digits === 0) return undefined;
+  if (raw[i] === 'e' || raw[i] === 'E') {
+    let j = i + 1;
+    if (raw[j] === '+' || raw[j] === '-') j++;
+    const expStart = j;
+    while (j < n && isDigit(raw.charCodeAt(j))) j++;
+    // "e" not followed by digits is no exponent: it may start a unit, which the unit check then refuses
+    if (j > expStart) i = j;
+  }
+  const number = raw.slice(0, i);
+  while (i < n && (raw[i] === ' ' || raw[i] === '\t')) i++;
+  const unit = raw.slice(i);
+  return UNIT_CHARS.test(unit) ? { number, unit } : undefined;
+}
+
+/** The unit suffixes accepted for a kind, in lower case ("ksi", "psi", "mpa", …). */
+export function unitSuffixes(kind: QuantityKind): string[] {
+  return Object.entries(SUFFIXES)
+    .filter(([, d]) => d.kind === kind)
+    .map(([s]) => s);
 }
 
 function exampleUnits(kind: QuantityKind): string {

@@ -145,9 +145,15 @@ describe('check exit status (0 pass, 1 a load does not pass, 2 bad input, 3 I/O 
     expect(r.stderr.trim().split('\n')).toHaveLength(1);
     expect(r.stderr).toContain('--mu');
   });
-  it('3 when the report cannot be written, and no temporary file is left', () => {
-    const r = run([...section, '--pu', '900', '--mu', '600', '--report', '/nonexistent-dir/x.txt']);
+  it('3 when the report cannot be written (a full disk, injected), and no temporary file is left', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'pmchart-exit3-'));
+    const file = join(dir, 'c.txt');
+    const r = spawnSync(process.execPath, [bin, 'check', ...section, '--pu', '900', '--mu', '600', '--report', file], {
+      encoding: 'utf8',
+      env: { ...process.env, PMCHART_INJECT_FAULT: 'write:c.txt' },
+    });
     expect(r.status).toBe(3);
     expect(r.stderr).toContain('--report');
+    expect(readdirSync(dir)).toEqual([]);
   });
 });

@@ -18,7 +18,7 @@ describe('pmchart set', () => {
     writeFileSync(file, JSON.stringify(demo));
     const r = cli(['set', file, '--out', join(tmp, 'out')]);
     expect(r.status).toBe(2);
-    expect(r.stderr).toBe('pmchart: sheets[0].gamma: 1.2 is outside 0.3–0.95\n');
+    expect(r.stderr).toBe('pmchart: sheets[0].gamma.to: 1.2 is outside 0.3–0.95\n'); // the schema names the field of the range (issue 14)
     expect(existsSync(join(tmp, 'out'))).toBe(false);
   });
 

@@ -48,9 +48,16 @@ describe('pmchart table (CLI)', () => {
       [['--fc', '30'], '--fc: 30 ksi is outside 2.5–20 ksi'],
       [['--rho', '0.2'], '--rho: 0.2 is outside 0.001–0.1'],
       [['--format', 'xml'], '--format: xml is not one of the allowed values (allowed: csv, json)'],
-      [['--arrangement', 'ring', '--shape', 'circle', '--bars', '2'], '--bars: 2 is outside 4–60'],
+      [['--arrangement', 'ring', '--shape', 'circle', '--bars', '2'], '--bars: 2 is outside 4–48'], // the chart-set limit (issue 14: CLI and config share limits),
     ] as [string[], string][]) {
-      const r = cli([...base, ...args]);
+      // a flag given again replaces the base's (a repeated flag is an error of its own since issue 14)
+      const merged = [...base];
+      for (let i = 0; i < args.length; i += 2) {
+        const at = merged.indexOf(args[i]!);
+        if (at >= 0) merged[at + 1] = args[i + 1]!;
+        else merged.push(args[i]!, args[i + 1]!);
+      }
+      const r = cli(merged);
       expect(r.status).toBe(2);
       expect(r.stderr).toBe(`pmchart: ${msg}\n`);
       expect(r.stdout).toBe('');

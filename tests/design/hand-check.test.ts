@@ -26,7 +26,7 @@ describe('hand-check at γ = 0.75 (common practice, worked by hand)', () => {
     const r = checkLoad(ctx, load, 0);
     close(r.normalised.P, 1.5625, 1e-9);
     close(r.normalised.M, 0.5208, 1e-3);
-    close(r.normalised.eOverH, 8 / 24, 1e-9);
+    close(r.normalised.eOverH!, 8 / 24, 1e-9);
   });
 
   it('φPn along the load ray is about 825 kip at ρg = 0.02 and 954 kip at ρg = 0.03', () => {

@@ -1,0 +1,190 @@
+/**
+ * Load files: CSV with a header naming id, Pu and Mu (any order; Muy and the end moments M1, M2, M1y, M2y (ACI)
+ * or M01, M02, M01y, M02y (EN 1992-1-1, CSA) optional;
+ * other columns ignored), one row per load combination.
+ *
+ *   text ──1 size, separator──▶ csv-parse records ──2 header──▶ columns and units ──3 rows (zod)──▶ loads
+ *
+ * - A header may carry a unit: `Pu kip`, `Mu [kN·m]`, `Mu (kip-ft)`; bare cells in that column are
+ *   read in it and converted to the run's units, as flag suffixes are.
+ * - `;` separates cells when the header has more `;` than `,` (spreadsheets in many locales); decimal
+ *   commas are then read as points.
+ * - Duplicate columns and duplicate ids are refused with their line numbers; `#` starts a comment line.
+ * Every problem is one PmError naming `<at> line N <column>`. Browser-safe: the live page passes
+ * pasted text; the CLI passes the file's text.
+ */
+import { parse } from 'csv-parse/sync';
+import { z } from 'zod';
+import { ERROR_CODES, PmError } from '../errors.js';
+import { DISPLAY_UNITS, parseQuantity, splitQuantity, unitSuffixes, type QuantityKind, type UnitSystem } from '../units/index.js';
+import { parseOrThrow, quantityText, text } from './fields.js';
+import { LOAD_MAX_ABS, MAX_LOAD_ID_CHARS, MAX_LOAD_ROWS, MAX_LOADS_BYTES } from './limits.js';
+
+/** A load in internal units; the same shape as design's FactoredLoad. */
+export interface LoadRow {
+  id: string;
+  Pu: number;
+  Mu: number;
+  Muy?: number;
+  M1?: number;
+  M2?: number;
+  M1y?: number;
+  M2y?: number;
+  M01?: number;
+  M02?: number;
+  M01y?: number;
+  M02y?: number;
+}
+
+const COLUMNS = { id: null, Pu: 'force', Mu: 'moment', Muy: 'moment', M1: 'moment', M2: 'moment', M1y: 'moment', M2y: 'moment', M01: 'moment', M02: 'moment', M01y: 'moment', M02y: 'moment' } as const satisfies Record<string, QuantityKind | null>;
+type Column = keyof typeof COLUMNS;
+const OPTIONAL_MOMENTS = ['Muy', 'M1', 'M2', 'M1y', 'M2y', 'M01', 'M02', 'M01y', 'M02y'] as const;
+
+/** One row's cells by column, as text: the form of each cell is checked here, units after. */
+const RowSchema = z.object({
+  id: text(MAX_LOAD_ID_CHARS).trim().min(1, { message: 'is empty' }),
+  Pu: z.string().trim().min(1, { message: 'is empty' }).pipe(quantityText('force')),
+  Mu: z.string().trim().min(1, { message: 'is empty' }).pipe(quantityText('moment')),
+  ...Object.fromEntries(OPTIONAL_MOMENTS.map((k) => [k, z.string().trim().pipe(z.union([z.literal(''), quantityText('moment')])).optional()])),
+}) as unknown as z.ZodType<Partial<Record<Column, string>>>;
+
+interface HeaderColumn {
+  name: Column;
+  index: number;
+  /** unit suffix from the header, lower case, "" when none */
+  unit: string;
+}
+
+/** "Mu [kN·m]", "Pu kip", "Mu (kip-ft)", "Pu" → name and unit. */
+function headerCell(cell: string): { name: string; unit: string } {
+  const t = cell.trim();
+  const m = /^([A-Za-z][A-Za-z0-9]*)\s*(?:\[([^\]]*)\]|\(([^)]*)\)|\s([^\s].*))?$/.exec(t);
+  if (!m) return { name: t, unit: '' };
+  return { name: m[1]!, unit: (m[2] ?? m[3] ?? m[4] ?? '').trim() };
+}
+
+/** The separator: ";" when the first content line has more semicolons than commas. */
+export function detectSeparator(text: string): ',' | ';' {
+  for (const line of text.split(/\r?\n/, 50)) {
+    const t = line.trim();
+    if (t === '' || t.startsWith('#')) continue;
+    const count = (c: string) => t.split(c).length - 1;
+    return count(';') > count(',') ? ';' : ',';
+  }
+  return ',';
+}
+
+/** Parses a load file's text; `at` names it in errors (a flag such as --loads, or "pasted loads"). */
+export function parseLoadsCsv(textIn: string, units: UnitSystem, at = '--loads'): LoadRow[] {
+  // 1. size and separator, then csv-parse (quotes, CRLF, BOM)
+  if (textIn.length > MAX_LOADS_BYTES) throw new PmError(ERROR_CODES.invalidValue, at, `is larger than ${MAX_LOADS_BYTES} bytes`);
+  const delimiter = detectSeparator(textIn.replace(/^\uFEFF/, ''));
+  let lastLine = 0;
+  let records: { record: string[]; info: { lines: number } }[];
+  try {
+    // each record is kept as [line, ...cells]: csv-parse's `info` objects would triple the memory of a big file
+    const raw = parse(textIn, {
+      bom: true,
+      delimiter,
+      relax_column_count: true,
+      skip_empty_lines: true,
+      comment: '#',
+      comment_no_infix: true,
+      to: MAX_LOAD_ROWS + 2,
+      on_record: (record: string[], context: { lines: number }) => {
+        lastLine = context.lines;
+        return [String(context.lines), ...record];
+      },
+    });
+    records = raw.map((r) => ({ record: r.slice(1), info: { lines: Number(r[0]) } }));
+  } catch (e) {
+    const err = e as Error & { code?: string; lines?: number };
+    if (err.code === 'CSV_QUOTE_NOT_CLOSED') {
+      throw new PmError(ERROR_CODES.invalidValue, `${at} line ${lastLine + 1}`, `has a quote (") that is not closed by the end of the file (line ${err.lines ?? '?'})`);
+    }
+    throw new PmError(ERROR_CODES.invalidValue, `${at} line ${err.lines ?? lastLine + 1}`, `is not valid CSV (${err.message.split('\n')[0]})`);
+  }
+  records = records.filter((r) => r.record.some((c) => c.trim() !== ''));
+  if (records.length === 0) throw new PmError(ERROR_CODES.invalidValue, at, 'is empty; it needs a header id,Pu,Mu and one row per load');
+  if (records.length > MAX_LOAD_ROWS + 1) throw new PmError(ERROR_CODES.outOfRange, at, `has more than ${MAX_LOAD_ROWS} load rows`, { allowed: `1–${MAX_LOAD_ROWS} rows` });
+
+  // 2. header: known columns, each once, with an optional unit of its kind
+  const head = records[0]!;
+  const headLine = head.info.lines;
+  const columns = new Map<Column, HeaderColumn>();
+  const seen = new Map<string, number>();
+  head.record.forEach((cell, index) => {
+    const { name, unit } = headerCell(cell);
+    const known = (Object.keys(COLUMNS) as Column[]).find((c) => c.toLowerCase() === name.toLowerCase());
+    const key = known ?? cell.trim().toLowerCase();
+    const before = seen.get(key);
+    if (before !== undefined) {
+      throw new PmError(ERROR_CODES.conflict, `${at} line ${headLine}`, `names the column "${known ?? cell.trim()}" twice (columns ${before + 1} and ${index + 1})`);
+    }
+    seen.set(key, index);
+    if (!known) return;
+    const kind = COLUMNS[known];
+    const u = unit.toLowerCase().replace('·', '-').replace('²', '2');
+    if (u !== '' && (kind === null || !unitSuffixes(kind).includes(u))) {
+      throw new PmError(ERROR_CODES.invalidUnit, `${at} line ${headLine} ${known}`, kind === null ? 'takes no unit' : `has a unit that is not a ${kind} unit`, {
+        value: unit,
+        ...(kind ? { allowed: unitSuffixes(kind).join(', ') } : {}),
+      });
+    }
+    columns.set(known, { name: known, index, unit: u });
+  });
+  if (!columns.has('id') || !columns.has('Pu') || !columns.has('Mu')) {
+    throw new PmError(ERROR_CODES.invalidValue, `${at} header`, 'must name the columns id, Pu and Mu', { value: head.record.join(delimiter) });
+  }
+  if (records.length === 1) throw new PmError(ERROR_CODES.invalidValue, at, 'has a header but no load rows');
+
+  // 3. rows: form by the zod row schema, then units, finiteness and the magnitude cap
+  const ids = new Map<string, number>();
+  const loads: LoadRow[] = [];
+  for (let r = 1; r < records.length; r++) {
+    const { record, info } = records[r]!;
+    const line = info.lines;
+    const cells: Partial<Record<Column, string>> = {};
+    for (const c of columns.values()) {
+      const v = record[c.index];
+      cells[c.name] = v === undefined ? (c.name === 'id' || c.name === 'Pu' || c.name === 'Mu' ? '' : undefined) : delimiter === ';' && c.name !== 'id' ? v.replace(',', '.') : v;
+    }
+    const row = parseOrThrow(RowSchema, cells, (path) => `${at} line ${line}${path.length ? ` ${String(path[0])}` : ''}`, true);
+    const value = (name: Column, kind: QuantityKind): number => {
+      const cell = row[name]!;
+      const col = columns.get(name)!;
+      const split = splitQuantity(cell);
+      if (col.unit !== '' && split && split.unit !== '') {
+        throw new PmError(ERROR_CODES.conflict, `${at} line ${line} ${name}`, `has a unit while the header gives ${col.unit}`, { value: cell });
+      }
+      const v = parseQuantity(col.unit === '' ? cell : `${cell}${col.unit}`, kind, units, `${at} line ${line} ${name}`);
+      const shown = Math.abs(v / parseQuantity('1', kind, units, name));
+      if (!(shown <= LOAD_MAX_ABS)) {
+        throw new PmError(ERROR_CODES.outOfRange, `${at} line ${line} ${name}`, `is beyond ±${LOAD_MAX_ABS} ${DISPLAY_UNITS[units][kind]}`, { value: cell });
+      }
+      return v;
+    };
+    const id = row.id!;
+    const first = ids.get(id);
+    if (first !== undefined) throw new PmError(ERROR_CODES.conflict, `${at} line ${line} id`, `repeats the id of line ${first}`, { value: JSON.stringify(id) });
+    ids.set(id, line);
+    const load: LoadRow = { id, Pu: value('Pu', 'force'), Mu: value('Mu', 'moment') };
+    for (const name of OPTIONAL_MOMENTS) {
+      if (!columns.has(name)) continue;
+      const cell = row[name];
+      if (cell !== undefined && cell !== '') load[name] = value(name, 'moment');
+      else if (name === 'Muy') load.Muy = 0;
+    }
+    loads.push(load);
+  }
+  return loads;
+}
+
+/** A single load quantity from a flag (--pu, --mu): finite and within ±LOAD_MAX_ABS display units. */
+export function parseLoadQuantity(textIn: string, kind: 'force' | 'moment', units: UnitSystem, at: string): number {
+  const v = parseQuantity(textIn, kind, units, at);
+  if (!(Math.abs(v / parseQuantity('1', kind, units, at)) <= LOAD_MAX_ABS)) {
+    throw new PmError(ERROR_CODES.outOfRange, at, `is beyond ±${LOAD_MAX_ABS} ${DISPLAY_UNITS[units][kind]}`, { value: textIn });
+  }
+  return v;
+}
