@@ -8,5 +8,6 @@ const unavailable = (): never => {
 export const SheetRenderer = { create: unavailable };
 export const writeCheckReport = unavailable;
 export const writeFileAtomic = unavailable;
+export const ioError = unavailable;
 export const fixPdfMetadata = unavailable;
 export default {};
