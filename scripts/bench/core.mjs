@@ -1,5 +1,5 @@
 // Core figures: one family of 8 curves (≥ 400 points each), with the affine-in-ρg sweep and naively;
-// cold start of `pmchart table`.
+// cold start of `pmchart table`; peak memory of a table of 2,000 ρg values.
 import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { computeFamily } from '../../dist/analysis/family.js';
@@ -7,6 +7,7 @@ import { baseGrid } from '../../dist/analysis/family.js';
 import { prepareSection, nominalAt, designAt } from '../../dist/analysis/prepared-section.js';
 import { ACI_318_19 } from '../../dist/codes/aci318.js';
 import { layoutBars } from '../../dist/section/arrangements.js';
+import { runNode } from './lib/measure.mjs';
 
 export const name = 'core';
 
@@ -54,9 +55,13 @@ export async function run() {
     cold.push(Number(process.hrtime.bigint() - t0) / 1e9);
   }
   cold.sort((a, b) => a - b);
+  const big = runNode([bin, 'table', '--fc', '7', '--fy', '80', '--gamma', '0.8', '--rho', '0.01:0.08:0.000035'], { stdio: ['ignore', 'ignore', 'pipe'], allowFailure: true });
+  const bigNote = big.error ? `failed: ${big.error.replace(/^pmchart: /, '')}` : '';
   return [
     { figure: `family of 8 curves × ${n} points, shared sweep (warm median)`, value: tFast, unit: 'ms', target: '≤ 2 ms' },
     { figure: 'same family computed naively, curve by curve (warm median)', value: tNaive, unit: 'ms', target: '(comparison)' },
     { figure: '`pmchart table` cold start, wall (median of 7)', value: cold[3], unit: 's', target: '≤ 0.6 s' },
+    { figure: '`pmchart table` with 2,000 ρg values: peak RSS', value: big.rssMb, unit: 'MB', target: '≤ 200 MB (streamed)' },
+    { figure: '  same, wall', value: big.wall, unit: 's', target: bigNote },
   ];
 }

@@ -101,11 +101,13 @@ export interface SheetReading {
 /** Reads one sheet along the load ray. */
 export function readSheet(sheet: ChartSheet, load: NormalisedLoad): SheetReading {
   const curves = sheet.family.curves;
-  const scales = curves.map((c) => drawnScale(c, load));
-  if (scales[0]! >= 1) return { gamma: sheet.gamma, rho: curves[0]!.rho, roundedUp: curves[0]!.rho, position: 'inside-lowest' };
+  if (curves.length === 0) return { gamma: sheet.gamma, rho: null, roundedUp: null, position: 'outside-highest' };
+  // curve by curve, outward, stopping at the bracket (most loads need a few of the curves)
+  let b = drawnScale(curves[0]!, load);
+  if (b >= 1) return { gamma: sheet.gamma, rho: curves[0]!.rho, roundedUp: curves[0]!.rho, position: 'inside-lowest' };
   for (let k = 0; k + 1 < curves.length; k++) {
-    const a = scales[k]!;
-    const b = scales[k + 1]!;
+    const a = b;
+    b = drawnScale(curves[k + 1]!, load);
     if (a < 1 && b >= 1) {
       const rho = curves[k]!.rho + ((1 - a) / (b - a)) * (curves[k + 1]!.rho - curves[k]!.rho);
       return { gamma: sheet.gamma, rho, roundedUp: curves[k + 1]!.rho, position: 'between' };

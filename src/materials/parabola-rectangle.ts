@@ -14,5 +14,6 @@ export function parabolaRectangle(fcd: number, epsC2: number, n: number, label?:
     },
     breakpoints: [0, epsC2],
     peakStress: fcd,
+    ...(Number.isInteger(n) && n >= 0 ? { polynomialDegree: n } : {}),
   };
 }
