@@ -57,20 +57,16 @@ export function findRootOnGrid(f: (x: number) => number, grid: ArrayLike<number>
 /**
  * Bracketed root of f on [a, b] with f(a), f(b) known and of opposite signs, by the Anderson–Björck
  * variant of regula falsi (Anderson & Björck, BIT 13 (1973) 253–264): superlinear where Illinois
- * stalls on one side, so the biaxial solver needs fewer section evaluations. Safeguard: when two
- * steps in a row fail to halve |f|, the next step bisects (a strongly curved f, e.g. an exponential
- * over a wide bracket, otherwise makes regula falsi crawl from both ends). Stops when the bracket is
- * shorter than tol·(1 + |x|), as findRoot does. NaN when [a, b] does not bracket.
+ * stalls on one side, so the biaxial solver needs fewer section evaluations. Stops when the bracket
+ * is shorter than tol·(1 + |x|), as findRoot does. NaN when [a, b] does not bracket.
  */
 export function findRootAB(f: (x: number) => number, a: number, b: number, fa: number, fb: number, tol = 1e-12, maxIter = 200): number {
   if (fa === 0) return a;
   if (fb === 0) return b;
   if (Number.isNaN(fa) || Number.isNaN(fb) || fa * fb > 0) return NaN;
   let x = b;
-  let slow = 0;
   for (let i = 0; i < maxIter; i++) {
-    x = slow >= 2 ? (a + b) / 2 : (a * fb - b * fa) / (fb - fa);
-    if (slow >= 2) slow = 0;
+    x = (a * fb - b * fa) / (fb - fa);
     if (!(x > Math.min(a, b) && x < Math.max(a, b))) x = (a + b) / 2;
     const fx = f(x);
     if (fx === 0) return x;
@@ -81,7 +77,6 @@ export function findRootAB(f: (x: number) => number, a: number, b: number, fa: n
       const m = 1 - fx / fb;
       fa *= m > 0 ? m : 0.5;
     }
-    slow = Math.abs(fx) > Math.abs(fb) / 2 ? slow + 1 : 0;
     b = x;
     fb = fx;
     if (Math.abs(b - a) < tol * (1 + Math.abs(x))) return x;
