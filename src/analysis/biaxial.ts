@@ -15,16 +15,15 @@
  * Concrete on a rectangle: the chord of the section at depth d is a segment whose ends move linearly
  * with d between the depths of the corners, so its width and first moment are piecewise polynomials
  * of degree ≤ 2. Integrating Gauss–Legendre between corner depths and the law's strain breakpoints is
- * exact for the rectangular block and the n = 2 parabola (with the fewest points that are exact, from
- * the law's polynomialDegree) and accurate to rounding for other parabola exponents (10 points).
+ * exact for the rectangular block and accurate to rounding for the parabola–rectangle law.
  */
 import type { Basis, CapContext, ResistanceModel } from '../codes/types.js';
 import type { ConcreteLaw } from '../materials/types.js';
 import { grossArea } from '../section/geometry.js';
 import type { Bar, Shape } from '../section/types.js';
-import { gaussExactFor } from './gauss.js';
+import { GAUSS_10 } from './gauss.js';
 import { concreteResultant, strainAt } from './section-forces.js';
-import { findRoot, findRootAB } from './solve.js';
+import { findRoot } from './solve.js';
 import type { StrainProfile } from '../codes/types.js';
 
 export type ModelKind = 'nominal' | 'design';
@@ -32,8 +31,6 @@ export type ModelKind = 'nominal' | 'design';
 /** Ends of the depth search, as multiples of hθ: c → 0 is pure tension, c → ∞ pure compression. */
 const C_MIN = 1e-6;
 const C_MAX = 1e6;
-/** log(c/hθ) where a depth search with no nearby answer starts: c = hθ, mid-range of most checks. */
-const COLD_START = 0;
 
 export interface BiaxialSection {
   readonly basis: Basis;
@@ -157,9 +154,7 @@ function rectangleConcrete(b: number, h: number, nx: number, ny: number, sMax: n
   }
   cuts.sort((u, v) => u - v);
 
-  // between cuts the chord width and its centre are linear in d, so the moment integrands have the
-  // law's degree + 2: the smallest exact rule gives the same integral as GAUSS_10 to rounding
-  const { nodes, weights } = gaussExactFor(law.polynomialDegree === undefined ? undefined : law.polynomialDegree + 2);
+  const { nodes, weights } = GAUSS_10;
   const hb = b / 2;
   const hh = h / 2;
   const small = 1e-12;
@@ -230,42 +225,14 @@ const wrap = (a: number): number => {
  * Neutral-axis depth at angle θ where the resultant's (P, |M|) direction matches atan2(P, |M|) = ω.
  * The factor φ scales P and M alike, so the nominal-law or design-law resultant decides the direction.
  */
-function depthForDirection(sec: BiaxialSection, theta: number, omega: number, kind: ModelKind, guess?: number): number {
+function depthForDirection(sec: BiaxialSection, theta: number, omega: number, kind: ModelKind): number {
   const depth = 2 * extremeCoordinate(sec.shape, theta);
   const g = (logC: number) => {
     const r = biaxialResultant(sec, theta, Math.exp(logC) * depth, kind);
     return Math.atan2(r.P, Math.hypot(r.Mx, r.My)) - omega;
   };
-  const x = rootFrom(g, guess === undefined ? undefined : Math.log(guess / depth), Math.log(C_MIN), Math.log(C_MAX));
+  const x = findRoot(g, Math.log(C_MIN), Math.log(C_MAX), 1e-12, 200);
   return Number.isNaN(x) ? (g(Math.log(C_MAX)) < 0 ? C_MAX * depth : C_MIN * depth) : Math.exp(x) * depth;
-}
-
-/**
- * Root of g in [lo, hi] (log c), started from a guess x0 where one is known (the depth at a nearby
- * angle): steps away from x0 downhill of the sign, growing ×4, until the sign changes, then refines
- * the small bracket. The same tolerance as a search over the whole range, with a fraction of the
- * evaluations. With no guess it starts at c = hθ; when the steps find no sign change the whole range
- * is searched.
- */
-function rootFrom(g: (x: number) => number, x0: number | undefined, lo: number, hi: number): number {
-  if (x0 === undefined) x0 = COLD_START;
-  if (!(x0 > lo && x0 < hi)) return findRoot(g, lo, hi, 1e-12, 200);
-  const f0 = g(x0);
-  if (f0 === 0) return x0;
-  if (Number.isNaN(f0)) return findRoot(g, lo, hi, 1e-12, 200);
-  // g rises with c (more compression turns the resultant toward +P): below the root go up
-  const dir = f0 < 0 ? 1 : -1;
-  let a = x0;
-  let fa = f0;
-  for (let step = 0.01; ; step *= 4) {
-    const b = dir > 0 ? Math.min(hi, x0 + step) : Math.max(lo, x0 - step);
-    const fb = g(b);
-    if (fb === 0) return b;
-    if (!Number.isNaN(fb) && fb * f0 < 0) return findRootAB(g, a, b, fa, fb, 1e-12, 200);
-    if (b === hi || b === lo || Number.isNaN(fb)) return findRoot(g, lo, hi, 1e-12, 200);
-    a = b;
-    fa = fb;
-  }
 }
 
 export interface RayCapacity {
@@ -302,15 +269,13 @@ export function capacityAlongRay(sec: BiaxialSection, Pu: number, Mux: number, M
   } else {
     const psi = Math.atan2(Muy, Mux);
     const omega = Math.atan2(Pu, Mu);
-    let last: number | undefined; // the depth at the angle tried last: a close start for the next
     const resid = (theta: number): { r: number; c: number } => {
-      const c = depthForDirection(sec, theta, omega, kind, last);
-      last = c;
+      const c = depthForDirection(sec, theta, omega, kind);
       const q = biaxialResultant(sec, theta, c, kind);
       return { r: wrap(Math.atan2(q.My, q.Mx) - psi), c };
     };
     const theta = solveAngle(resid, psi);
-    const c = depthForDirection(sec, theta, omega, kind, last);
+    const c = depthForDirection(sec, theta, omega, kind);
     point = surfacePoint(sec, theta, c, kind);
     directionError = Math.abs(wrap(Math.atan2(point.My, point.Mx) - psi));
   }
@@ -357,7 +322,7 @@ function solveAngle(resid: (theta: number) => { r: number }, psi: number): numbe
     for (const i of [mid - d - 1, mid + d]) {
       if (r(i) === 0) return thetaAt(i);
       if (brackets(i)) {
-        const t = findRootAB((x) => resid(x).r, thetaAt(i), thetaAt(i + 1), r(i), r(i + 1), 1e-11, 100);
+        const t = findRoot((x) => resid(x).r, thetaAt(i), thetaAt(i + 1), 1e-11, 100);
         return Number.isNaN(t) ? thetaAt(i) : t;
       }
     }
@@ -372,10 +337,10 @@ function solveAngle(resid: (theta: number) => { r: number }, psi: number): numbe
  * Neutral-axis depth at angle θ where the factored (or nominal) axial force equals P, uncapped.
  * NaN when P is outside the range the angle reaches.
  */
-export function depthForAxial(sec: BiaxialSection, theta: number, P: number, kind: ModelKind = 'design', guess?: number): number {
+export function depthForAxial(sec: BiaxialSection, theta: number, P: number, kind: ModelKind = 'design'): number {
   const depth = 2 * extremeCoordinate(sec.shape, theta);
   const g = (logC: number) => surfacePoint(sec, theta, Math.exp(logC) * depth, kind).P - P;
-  const x = rootFrom(g, guess === undefined ? undefined : Math.log(guess / depth), Math.log(C_MIN), Math.log(C_MAX));
+  const x = findRoot(g, Math.log(C_MIN), Math.log(C_MAX), 1e-12, 200);
   return Number.isNaN(x) ? NaN : Math.exp(x) * depth;
 }
 
@@ -426,16 +391,14 @@ export function momentUtilisationAtAxial(sec: BiaxialSection, Pu: number, Mux: n
   const Mu = Math.hypot(Mux, Muy);
   if (Pu > sec.cap[kind]) return NaN;
   const psi = Math.atan2(Muy, Mux);
-  let last: number | undefined; // the depth at the angle tried last: a close start for the next
   const resid = (theta: number): { r: number } => {
-    const c = depthForAxial(sec, theta, Pu, kind, last);
+    const c = depthForAxial(sec, theta, Pu, kind);
     if (!Number.isFinite(c)) return { r: NaN };
-    last = c;
     const q = surfacePoint(sec, theta, c, kind);
     return { r: wrap(Math.atan2(q.My, q.Mx) - psi) };
   };
   const theta = solveAngle(resid, psi);
-  const c = depthForAxial(sec, theta, Pu, kind, last);
+  const c = depthForAxial(sec, theta, Pu, kind);
   if (!Number.isFinite(c)) return NaN;
   const q = surfacePoint(sec, theta, c, kind);
   return Mu / Math.hypot(q.Mx, q.My);

@@ -29,12 +29,3 @@ export function gaussLegendre(n: number): { nodes: Float64Array; weights: Float6
 
 /** The rule the section integrator uses: exact for polynomials to degree 19. */
 export const GAUSS_10 = gaussLegendre(10);
-
-/** Rules of 1 to 9 points: n points are exact for polynomials to degree 2n − 1. */
-const SMALL_RULES = [1, 2, 3, 4, 5, 6, 7, 8, 9].map(gaussLegendre);
-/** The smallest rule exact for polynomials of the given degree; GAUSS_10 when the degree is unknown or high. */
-export function gaussExactFor(degree: number | undefined): { nodes: Float64Array; weights: Float64Array } {
-  if (degree === undefined || !(degree >= 0)) return GAUSS_10;
-  const n = Math.max(1, Math.ceil((degree + 1) / 2));
-  return n >= 10 ? GAUSS_10 : SMALL_RULES[n - 1]!;
-}

@@ -3,11 +3,8 @@
  * regula falsi; Dowell & Jarratt, BIT 11 (1971) 168–174). Returns NaN when [a, b] does not bracket.
  */
 export function findRoot(f: (x: number) => number, a: number, b: number, tol = 1e-12, maxIter = 200): number {
-  return findRootWith(f, a, b, f(a), f(b), tol, maxIter);
-}
-
-/** findRoot when f(a) and f(b) are already known (callers that bracket first do not pay for them twice). */
-export function findRootWith(f: (x: number) => number, a: number, b: number, fa: number, fb: number, tol = 1e-12, maxIter = 200): number {
+  let fa = f(a);
+  let fb = f(b);
   if (fa === 0) return a;
   if (fb === 0) return b;
   if (Number.isNaN(fa) || Number.isNaN(fb) || fa * fb > 0) return NaN;
@@ -52,34 +49,4 @@ export function findRootOnGrid(f: (x: number) => number, grid: ArrayLike<number>
     prevF = fx;
   }
   return NaN;
-}
-
-/**
- * Bracketed root of f on [a, b] with f(a), f(b) known and of opposite signs, by the Anderson–Björck
- * variant of regula falsi (Anderson & Björck, BIT 13 (1973) 253–264): superlinear where Illinois
- * stalls on one side, so the biaxial solver needs fewer section evaluations. Stops when the bracket
- * is shorter than tol·(1 + |x|), as findRoot does. NaN when [a, b] does not bracket.
- */
-export function findRootAB(f: (x: number) => number, a: number, b: number, fa: number, fb: number, tol = 1e-12, maxIter = 200): number {
-  if (fa === 0) return a;
-  if (fb === 0) return b;
-  if (Number.isNaN(fa) || Number.isNaN(fb) || fa * fb > 0) return NaN;
-  let x = b;
-  for (let i = 0; i < maxIter; i++) {
-    x = (a * fb - b * fa) / (fb - fa);
-    if (!(x > Math.min(a, b) && x < Math.max(a, b))) x = (a + b) / 2;
-    const fx = f(x);
-    if (fx === 0) return x;
-    if (fx * fb < 0) {
-      a = b;
-      fa = fb;
-    } else {
-      const m = 1 - fx / fb;
-      fa *= m > 0 ? m : 0.5;
-    }
-    b = x;
-    fb = fx;
-    if (Math.abs(b - a) < tol * (1 + Math.abs(x))) return x;
-  }
-  return x;
 }

@@ -14,6 +14,5 @@ export function parabolaRectangle(fcd: number, epsC2: number, n: number, label?:
     },
     breakpoints: [0, epsC2],
     peakStress: fcd,
-    ...(Number.isInteger(n) && n >= 0 ? { polynomialDegree: n } : {}),
   };
 }

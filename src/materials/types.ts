@@ -12,11 +12,6 @@ export interface ConcreteLaw {
   readonly breakpoints: readonly number[];
   /** largest stress the law reaches */
   readonly peakStress: number;
-  /**
-   * Degree of stress(ε) as a polynomial between breakpoints, where it is one (0 for a block, 2 for
-   * the parabola with n = 2). Integrators may then use the smallest Gauss rule that is exact.
-   */
-  readonly polynomialDegree?: number;
 }
 
 export interface SteelLaw {
