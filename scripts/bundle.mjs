@@ -32,7 +32,7 @@ const common = {
   sourcemap: 'linked',
   sourcesContent: false,
   legalComments: 'linked',
-  external: ['canvas'],
+  external: ['canvas', 'esbuild'],
   metafile: true,
   // CommonJS dependencies (commander, fontkit, cli-progress) call require(); ESM output has none of its own
   banner: { js: "import{createRequire as __pmRequire}from'node:module';const require=__pmRequire(import.meta.url);" },

@@ -5,7 +5,7 @@
  * is not possible, unstable or outside the method's scope (2 bad input, 3 internal or I/O error).
  */
 import { readFileSync } from 'node:fs';
-import { ioError, writeFileAtomic } from '../sheet/files.js';
+import { ioError, writeFileAtomic } from '../io/files.js';
 import { extname } from 'node:path';
 import type { Command } from 'commander';
 import type { Detailing } from '../design/bar-selection.js';

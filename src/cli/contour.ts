@@ -8,7 +8,7 @@ import { renameSync, rmSync, writeFileSync } from 'node:fs';
 import { extname } from 'node:path';
 import type { Command } from 'commander';
 import { squashPoint } from '../analysis/biaxial.js';
-import { ioError } from '../sheet/files.js';
+import { ioError } from '../io/files.js';
 import { contourText } from '../report/contour-view.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { DISPLAY_UNITS, parseQuantity, toDisplay } from '../units/index.js';

@@ -7,6 +7,7 @@
  */
 import { createHash } from 'node:crypto';
 import { existsSync } from 'node:fs';
+import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { generatorLabel } from '../version.js';
@@ -21,9 +22,18 @@ export interface PagePresets {
   date: string;
 }
 
-const here = (name: string): string => fileURLToPath(new URL(name, import.meta.url));
-/** The module beside this one, as compiled (dist/page/*.js) or as source (src/page/*.ts under tsx). */
-const sibling = (stem: string): string => (existsSync(here(`./${stem}.js`)) ? here(`./${stem}.js`) : here(`./${stem}.ts`));
+/** The package root: the nearest folder above this module holding package.json (this module may run from src/page, dist/page or the CLI bundle in dist/bundle). */
+function packageRoot(): string {
+  let dir = dirname(fileURLToPath(import.meta.url));
+  while (!existsSync(join(dir, 'package.json')) && dirname(dir) !== dir) dir = dirname(dir);
+  return dir;
+}
+/** A page module, as compiled (dist/page/*.js) or as source (src/page/*.ts under tsx). */
+const sibling = (stem: string): string => {
+  const self = dirname(fileURLToPath(import.meta.url));
+  if (existsSync(join(self, `${stem}.ts`))) return join(self, `${stem}.ts`);
+  return join(packageRoot(), 'dist', 'page', `${stem}.js`);
+};
 
 /** The browser bundle (IIFE), minified. */
 export async function bundlePage(): Promise<string> {
@@ -33,7 +43,7 @@ export async function bundlePage(): Promise<string> {
   } catch {
     throw new PmError(ERROR_CODES.environment, 'page', 'needs the esbuild dev dependency; run `npm install` in the pmchart folder', {}, 3);
   }
-  const stubs = /\/(render\/renderer|render\/environment|sheet\/book|sheet\/files|sheet\/check-report-file|sheet\/pipeline|cli\/contour-plot)\.(js|ts)$/;
+  const stubs = /\/(render\/renderer|render\/environment|sheet\/book|sheet\/files|io\/files|sheet\/check-report-file|sheet\/pipeline|cli\/contour-plot)\.(js|ts)$/;
   const result = await esbuild.build({
     entryPoints: [sibling('app')],
     bundle: true,

@@ -1,0 +1,156 @@
+/**
+ * File writing for sets and reports: every file is written to a temporary name and renamed, so none
+ * is ever half-written, and the temporary file is removed on every failure path. A set is made in
+ * `<set>.partial-PID` and swapped in at the end; a run that was killed leaves `.partial-PID` and
+ * perhaps `.old-PID`, which the next run removes or puts back (`recoverStale`).
+ */
+import { existsSync, lstatSync, mkdirSync, readdirSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { basename, dirname, join } from 'node:path';
+import { ERROR_CODES, PmError } from '../errors.js';
+
+/**
+ * Faults a test may inject through PMCHART_INJECT_FAULT (CI runs as root, which ignores a read-only
+ * folder's permissions, so failures are injected): `write:<part of a path>` fails that write with
+ * ENOSPC, `swap-rename` fails the second rename of the swap, `swap-pause:<ms>` waits between the two
+ * renames, `child-crash:<chunk>` kills the render process that starts that chunk (worker.ts).
+ */
+export function injectedFault(kind: string): string | undefined {
+  const spec = process.env.PMCHART_INJECT_FAULT;
+  if (!spec) return undefined;
+  for (const part of spec.split(',')) {
+    const [k, ...rest] = part.split(':');
+    if (k === kind) return rest.join(':');
+  }
+  return undefined;
+}
+
+const errnoError = (code: string, op: string, path: string): NodeJS.ErrnoException => Object.assign(new Error(`${code}: injected fault, ${op} '${path}'`), { code });
+
+/** Errors the user can fix by choosing another place (exit 2); others are I/O faults (exit 3). */
+const USER_CODES = new Set(['EACCES', 'EPERM', 'EROFS', 'ENOTDIR', 'EISDIR', 'EEXIST', 'ENOTEMPTY', 'ENAMETOOLONG', 'ENOENT']);
+
+/** A file-system error as one line naming the path: exit 2 when the place is the problem, 3 otherwise. */
+export function ioError(path: string, e: unknown, verb = 'cannot be written'): PmError {
+  if (e instanceof PmError) return e;
+  const code = (e as NodeJS.ErrnoException).code;
+  const why = code ?? (e as Error).message.split('\n')[0];
+  return new PmError(ERROR_CODES.io, path, `${verb} (${why})`, {}, code !== undefined && USER_CODES.has(code) ? 2 : 3);
+}
+
+export function writeFileAtomic(path: string, data: string | Uint8Array): void {
+  const tmp = `${path}.${process.pid}.tmp`;
+  try {
+    mkdirSync(dirname(path), { recursive: true });
+    const fault = injectedFault('write');
+    if (fault !== undefined && path.includes(fault)) {
+      writeFileSync(tmp, data.slice(0, 16));
+      throw errnoError('ENOSPC', 'write', tmp);
+    }
+    writeFileSync(tmp, data);
+    renameSync(tmp, path);
+  } catch (e) {
+    rmSync(tmp, { force: true, recursive: false, maxRetries: 0 });
+    throw ioError(path, e);
+  }
+}
+
+const sleepSync = (ms: number) => Atomics.wait(new Int32Array(new SharedArrayBuffer(4)), 0, 0, ms);
+
+/**
+ * Checks the place a set goes before any work: the parent must be a folder (or creatable) and the
+ * target, when it exists, a folder. Nothing the user did not ask to replace is touched.
+ */
+export function checkTarget(target: string, outFlag = '--out'): void {
+  const parent = dirname(target);
+  let p: ReturnType<typeof statSync> | undefined;
+  try {
+    p = statSync(parent);
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    if (code === 'ENOTDIR') throw new PmError(ERROR_CODES.invalidValue, outFlag, 'lies under a file, not a folder', { value: parent }, 2);
+    if (code !== 'ENOENT') throw ioError(parent, e, 'cannot be read');
+  }
+  if (p && !p.isDirectory()) throw new PmError(ERROR_CODES.invalidValue, outFlag, 'is a file, not a folder', { value: parent }, 2);
+  let t: ReturnType<typeof lstatSync> | undefined;
+  try {
+    t = lstatSync(target);
+  } catch (e) {
+    if ((e as NodeJS.ErrnoException).code !== 'ENOENT') throw ioError(target, e, 'cannot be read');
+  }
+  if (t && !t.isDirectory()) {
+    throw new PmError(ERROR_CODES.conflict, target, 'exists and is not a folder; pmchart replaces only a set folder (move the file or choose another --out)', {}, 2);
+  }
+}
+
+const alive = (pid: number): boolean => {
+  if (pid === process.pid) return true;
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (e) {
+    return (e as NodeJS.ErrnoException).code === 'EPERM';
+  }
+};
+
+/**
+ * Cleans up after runs that were killed: `<set>.partial-PID` of a process that is gone is removed;
+ * `<set>.old-PID` is put back when `<set>` is missing (the run stopped between the two renames of
+ * its swap), removed otherwise. Runs still alive are left alone. Returns one note per action.
+ */
+export function recoverStale(target: string): string[] {
+  const parent = dirname(target);
+  const name = basename(target);
+  let entries: string[];
+  try {
+    entries = readdirSync(parent);
+  } catch {
+    return [];
+  }
+  const notes: string[] = [];
+  const stale = entries
+    .map((e) => ({ e, m: new RegExp(`^${name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}\\.(partial|old)-(\\d+)$`).exec(e) }))
+    .filter((x): x is { e: string; m: RegExpExecArray } => x.m !== null && !alive(Number(x.m[2])));
+  // an .old folder first: it is the user's previous set
+  for (const { e, m } of stale.sort((a, b) => (a.m[1] === 'old' ? -1 : 0) - (b.m[1] === 'old' ? -1 : 0))) {
+    const path = join(parent, e);
+    try {
+      if (m[1] === 'old' && !existsSync(target)) {
+        renameSync(path, target);
+        notes.push(`restored ${target} from ${e}, left by a run that stopped during its final swap`);
+      } else {
+        rmSync(path, { recursive: true, force: true });
+        notes.push(`removed ${path}, left by a run that stopped (process ${m[2]})`);
+      }
+    } catch (err) {
+      throw ioError(path, err, 'cannot be cleaned up');
+    }
+  }
+  return notes;
+}
+
+/** Replaces `target` with the finished `staging` folder; the old folder is removed only after the swap. */
+export function swapInFolder(staging: string, target: string): void {
+  let old: string | undefined;
+  try {
+    mkdirSync(dirname(target), { recursive: true });
+    if (existsSync(target)) {
+      old = `${target}.old-${process.pid}`;
+      renameSync(target, old);
+    }
+    const pause = injectedFault('swap-pause');
+    if (pause !== undefined) sleepSync(Number(pause));
+    if (injectedFault('swap-rename') !== undefined) throw errnoError('EIO', 'rename', staging);
+    renameSync(staging, target);
+  } catch (e) {
+    // put the previous set back: a failed swap leaves the user's folder as it was
+    if (old !== undefined && !existsSync(target)) {
+      try {
+        renameSync(old, target);
+      } catch {
+        /* the next run restores it (recoverStale) */
+      }
+    }
+    throw ioError(target, e);
+  }
+  if (old) rmSync(old, { recursive: true, force: true });
+}
