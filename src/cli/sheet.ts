@@ -2,82 +2,12 @@
  * `pmchart sheet <section flags>`: one sheet for a quick look, as SVG, PNG or PDF (from the --out
  * extension). Same section flags as `pmchart table`; render modules are imported lazily.
  */
-import { issueDate } from '../input/limits.js';
 import { extname, resolve } from 'node:path';
 import type { Command } from 'commander';
-import type { ResolvedChartSet } from '../config/types.js';
-import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
-import { sectionDepth, sectionWidth } from '../section/geometry.js';
-import { parseNumberList } from './format.js';
-import { addSectionOptions, resolveSectionFlags, type SectionFlags } from './section-flags.js';
-import { parseOmegaList, parseRhoList } from './table.js';
-
-export interface SheetOptions extends SectionFlags {
-  rho?: string;
-  omega?: string;
-  out?: string;
-  families?: string;
-  dimensionless?: boolean;
-  paper?: string;
-  portrait?: boolean;
-  office?: string;
-  project?: string;
-  date?: string;
-  eccentricities?: string;
-}
-
-/** Builds a one-sheet chart set from section flags (pure apart from reading --custom-bars). */
-export async function sheetSetFromFlags(o: SheetOptions): Promise<{ set: ResolvedChartSet; basis: ReturnType<typeof resolveSectionFlags>['basis']; capContext: ReturnType<typeof resolveSectionFlags>['capContext'] }> {
-  const section = resolveSectionFlags(o);
-  if (section.arrangement.kind === 'custom') {
-    throw new PmError(ERROR_CODES.invalidValue, '--arrangement', 'custom is not available for sheets yet', { value: 'custom', allowed: 'two-faces, four-faces, side-faces, ring' });
-  }
-  const { PAPER_POINTS } = await import('../config/types.js');
-  const { PAPER_SIZES, FAMILY_CHOICES } = await import('../config/schema.js');
-  const { DEFAULT_TITLE_PATTERN, fileStemFor, fillPattern, titleFields } = await import('../config/describe.js');
-  if (o.omega !== undefined && o.rho !== undefined) throw new PmError(ERROR_CODES.conflict, '--omega', 'and --rho both set the curves; give one of them');
-  const ratioFlag = o.omega !== undefined ? '--omega' : '--rho';
-  const ratios = o.omega !== undefined ? { kind: 'omega' as const, values: parseOmegaList(o.omega, section.basis).omegas } : { kind: 'rhoG' as const, values: parseRhoList(o.rho) };
-  if (ratios.values.length > 20) throw new PmError(ERROR_CODES.outOfRange, ratioFlag, 'gives more than 20 curves', { value: ratios.values.length, allowed: '1–20' });
-  const families = o.families ?? 'design';
-  if (!(FAMILY_CHOICES as readonly string[]).includes(families)) throw new PmError(ERROR_CODES.invalidValue, '--families', 'is not one of the allowed values', { value: families, allowed: FAMILY_CHOICES.join(', ') });
-  const size = o.paper ?? (section.units === 'us' ? 'tabloid' : 'a3');
-  if (!(PAPER_SIZES as readonly string[]).includes(size)) throw new PmError(ERROR_CODES.invalidValue, '--paper', 'is not one of the allowed values', { value: size, allowed: PAPER_SIZES.join(', ') });
-  const date = issueDate(o.date, '--date', process.env.SOURCE_DATE_EPOCH);
-  const ecc = o.eccentricities === undefined ? [0.1, 0.25, 0.5, 1] : parseNumberList(o.eccentricities);
-  if (!ecc) throw new PmError(ERROR_CODES.invalidValue, '--eccentricities', 'is not a comma list of e/h values', { value: o.eccentricities });
-  for (const e of ecc) requireInRange('--eccentricities', e, 0.01, 10);
-  const [pw, ph] = PAPER_POINTS[size as keyof typeof PAPER_POINTS];
-  const shape = section.shape.kind === 'circle' ? ({ kind: 'circle' } as const) : ({ kind: 'rectangle', aspect: sectionWidth(section.shape) / sectionDepth(section.shape) } as const);
-  const partial = {
-    index: 1,
-    origin: 'flags',
-    shape,
-    fc: section.basis.fc,
-    fy: section.basis.fy,
-    gamma: section.gamma,
-    arrangement: section.arrangement,
-    transverse: section.basis.transverse,
-    basisOptions: {},
-    variantOptions: {},
-  };
-  const fam = families === 'both' ? 'nominal and factored' : families;
-  const set: ResolvedChartSet = {
-    name: 'sheet',
-    titleBlock: { office: o.office ?? '', project: o.project ?? '', preparedBy: '', checkedBy: '', revision: '—', date },
-    paper: { size: size as ResolvedChartSet['paper']['size'], orientation: o.portrait ? 'portrait' : 'landscape', widthPt: o.portrait ? pw : ph, heightPt: o.portrait ? ph : pw },
-    units: section.units,
-    code: section.code,
-    basisOptions: {},
-    normalisation: o.dimensionless ? 'dimensionless' : 'stress',
-    families: families as ResolvedChartSet['families'],
-    ratios,
-    referenceLines: { strainStates: true, eccentricities: ecc, axialCap: true },
-    outputs: { pdf: true, svg: false, png: false, pngScale: 2, tables: false },
-    sheets: [{ ...partial, title: (() => { const t = fillPattern(DEFAULT_TITLE_PATTERN, titleFields(partial, section.units, fam, section.basis.symbols)); return t.charAt(0).toUpperCase() + t.slice(1); })(), fileStem: fileStemFor(partial, section.units, 1) }],
-  };
-  return { set, basis: section.basis, capContext: section.capContext };
-}
+import { ERROR_CODES, PmError } from '../errors.js';
+import { addSectionOptions } from '../flags/section-flags.js';
+import { sheetSetFromFlags, type SheetOptions } from '../flags/sheet-flags.js';
+export * from '../flags/sheet-flags.js';
 
 /** Writes the sheet; returns the path written. */
 export async function runSheet(o: SheetOptions): Promise<string> {

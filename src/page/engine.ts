@@ -9,15 +9,15 @@
  * Swap points for the integrator:
  *  - the column check: `loadsView` parses the flags with the CLI's `computeCheck`, which calls the engine's
  *    `checkColumn`; the JSON and the effects text are the report views of that one result;
- *  - input schemas and the browser-safe CSV reader (issue 14): the `../cli/` imports below move to src/input/,
- *    and virtual-fs.ts (pasted CSV offered as a file) goes away.
+ *  - the flag readers are src/flags/ (shared with the CLI, below it); pasted CSV reaches the load reader
+ *    through virtual-fs.ts, offered as a file.
  */
 import { computeFamily, type CurveFamily } from '../analysis/family.js';
 import { buildSheet, type BuiltSheet } from '../chart/sheet-data.js';
-import { computeCheck, type CheckOptions } from '../cli/check.js';
+import { computeCheck, type CheckOptions } from '../flags/check-flags.js';
 import { checkJson, effectsText } from '../report/check-view.js';
-import { sheetSetFromFlags, type SheetOptions } from '../cli/sheet.js';
-import { familyFor, resolveTableOptions, type TableRequest } from '../cli/table.js';
+import { sheetSetFromFlags, type SheetOptions } from '../flags/sheet-flags.js';
+import { familyFor, resolveTableOptions, type TableRequest } from '../flags/table-flags.js';
 import type { ResolvedChartSet } from '../config/types.js';
 import { bracketingGammas, readSheet, type SheetReading } from '../design/chart-reading.js';
 import { isPmError } from '../errors.js';

@@ -1,0 +1,139 @@
+/**
+ * The flags of `pmchart check` read into one `ColumnCheckInput`: section, loads (flags or a CSV file),
+ * reinforcement, bar selection and effects. `computeCheck` then calls the engine; the command and the
+ * page both go through here, so they read input alike.
+ */
+import { readFileSync } from 'node:fs';
+import { extname } from 'node:path';
+import type { Detailing } from '../design/bar-selection.js';
+import type { FactoredLoad } from '../design/check.js';
+import { checkColumn, type ColumnCheck, type ColumnCheckInput } from '../design/column-check.js';
+import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
+import { parseLoadQuantity, parseLoadsCsv as readLoadsCsv } from '../input/loads-csv.js';
+import { barSet } from '../section/bar-tables.js';
+import { barCount } from '../section/arrangements.js';
+import { DISPLAY_UNITS, parseQuantity, systemFactor, type UnitSystem } from '../units/index.js';
+import { reportDate } from './format.js';
+import { resolveSectionFlags, type ResolvedSection, type SectionFlags } from './section-flags.js';
+import { resolveEffects, type EffectsFlags } from './check-effects.js';
+
+export interface CheckOptions extends SectionFlags, EffectsFlags {
+  pu?: string;
+  mu?: string;
+  loads?: string;
+  rho?: string;
+  aggregate?: string;
+  chartGammaStep?: string;
+  proposals?: string;
+  json?: boolean;
+  report?: string;
+  /** title block of a PDF/SVG report */
+  project?: string;
+  office?: string;
+  date?: string;
+}
+
+export const REPORT_FORMATS = ['.txt', '.json', '.pdf', '.svg'] as const;
+/** Report formats drawn by the sheet renderer (imported only when asked for). */
+export const DRAWN_REPORT_FORMATS = ['.pdf', '.svg'] as const;
+export const isDrawn = (file: string): boolean => (DRAWN_REPORT_FORMATS as readonly string[]).includes(extname(file).toLowerCase());
+
+/** Smallest practical longitudinal bar: #5 (US) or 12 mm (SI), common practice. */
+const MIN_PRACTICAL_BAR = { us: 0.625, si: 12 } as const;
+
+export interface ResolvedCheck {
+  section: ResolvedSection;
+  input: ColumnCheckInput;
+  json: boolean;
+  report?: string;
+}
+
+/** Load files are read by src/input/loads-csv.ts (csv-parse; header units, ";" files, duplicates refused). */
+export function parseLoadsCsv(text: string, units: UnitSystem, path = '--loads'): FactoredLoad[] {
+  return readLoadsCsv(text, units, path);
+}
+
+export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
+  if (o.report !== undefined) {
+    const ext = extname(o.report).toLowerCase();
+    if (!(REPORT_FORMATS as readonly string[]).includes(ext)) {
+      throw new PmError(ERROR_CODES.invalidValue, '--report', 'has an unknown extension', { value: o.report, allowed: REPORT_FORMATS.join(', ') });
+    }
+  }
+  if (o.date !== undefined) reportDate(o.date);
+  const section = resolveSectionFlags(o, true);
+  const u = section.units;
+  const { basis } = section;
+
+  let loads: FactoredLoad[];
+  if (o.loads !== undefined) {
+    if (o.pu !== undefined || o.mu !== undefined) throw new PmError(ERROR_CODES.conflict, '--loads', 'and --pu/--mu both give loads; use one of them');
+    let text: string;
+    try {
+      text = readFileSync(o.loads, 'utf8');
+    } catch (e) {
+      throw new PmError(ERROR_CODES.io, '--loads', `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'})`, { value: o.loads });
+    }
+    loads = parseLoadsCsv(text, u);
+  } else {
+    if (o.pu === undefined) throw new PmError(ERROR_CODES.missing, '--pu', `is required, or --loads FILE.csv (a force, default unit ${DISPLAY_UNITS[u].force}; tension negative)`);
+    if (o.mu === undefined) throw new PmError(ERROR_CODES.missing, '--mu', `is required with --pu (a moment, default unit ${DISPLAY_UNITS[u].moment})`);
+    loads = [{ id: 'load', Pu: parseLoadQuantity(o.pu, 'force', u, '--pu'), Mu: parseLoadQuantity(o.mu, 'moment', u, '--mu') }];
+  }
+
+  const input: ColumnCheckInput = {
+    basis,
+    shape: section.shape,
+    arrangement: section.arrangement,
+    gamma: section.gamma,
+    gammaSource: section.gammaSource,
+    capContext: section.capContext,
+    loads,
+  };
+  if (o.chartGammaStep !== undefined) {
+    const step = Number(o.chartGammaStep);
+    input.chartGammaStep = requireInRange('--chart-gamma-step', Number.isFinite(step) ? step : NaN, 0.01, 0.2);
+  }
+  if (o.rho !== undefined) {
+    const lim = basis.rhoLimits;
+    const rho = Number(o.rho);
+    input.rho = requireInRange('--rho', Number.isFinite(rho) ? rho : NaN, lim.min, lim.max);
+  } else if (section.bar && (o.barsPerFace !== undefined || o.bars !== undefined) && section.arrangement.kind !== 'custom') {
+    const count = barCount(section.arrangement);
+    input.layout = {
+      arrangement: section.arrangement,
+      area: count * section.bar.area,
+      gamma: section.gamma,
+      description: /^\d+(\.\d+)?$/.test(section.bar.name) ? `${count} × ${section.bar.name} mm` : `${count} ${section.bar.name}`,
+    };
+  }
+
+  let aggregate: number | undefined;
+  if (o.aggregate !== undefined) {
+    aggregate = requireInRange('--aggregate', parseQuantity(o.aggregate, 'length', u, '--aggregate'), u === 'us' ? 0.25 : 5, u === 'us' ? 3 : 75, DISPLAY_UNITS[u].length);
+  }
+  const proposals = o.proposals === undefined ? 5 : Number(o.proposals);
+  if (!Number.isInteger(proposals)) throw new PmError(ERROR_CODES.invalidValue, '--proposals', 'is not a whole number', { value: o.proposals, allowed: '0–20' });
+  requireInRange('--proposals', proposals, 0, 20);
+  if (proposals > 0) {
+    const set = barSet(basis.barSet);
+    const k = systemFactor('length', set.units, u);
+    const sizes = set.sizes
+      .map((s) => ({ name: s.name, diameter: s.diameter * k, area: s.area * k * k }))
+      .filter((s) => s.diameter >= MIN_PRACTICAL_BAR[u] - 1e-9);
+    const detailing: Detailing =
+      section.cover !== undefined ? { kind: 'cover', cover: section.cover, tieDiameter: section.tieDiameter ?? 0 } : { kind: 'gamma', gamma: section.gamma };
+    input.barSelection = { detailing, sizes, count: proposals, ...(aggregate !== undefined ? { aggregate } : {}) };
+  }
+  const fx = resolveEffects(o, section, input, o.loads === undefined);
+  input.loads = fx.loads;
+  if (fx.slenderness) input.slenderness = fx.slenderness;
+  return { section, input, json: o.json === true, ...(o.report !== undefined ? { report: o.report } : {}) };
+}
+
+/** Resolves the flags and checks every load (no output). */
+export function computeCheck(o: CheckOptions): { rc: ResolvedCheck; check: ColumnCheck } {
+  const rc = resolveCheckOptions(o);
+  return { rc, check: checkColumn(rc.input) };
+}
+
