@@ -28,6 +28,8 @@ export class PmError extends Error {
   readonly path: string;
   readonly facts: ErrorFacts;
   readonly exitCode: number;
+  /** the sentence after the path, as given */
+  readonly detail: string;
 
   constructor(code: ErrorCode, path: string, detail: string, facts: ErrorFacts = {}, exitCode = 2) {
     super(formatError(path, detail, facts));
@@ -36,8 +38,17 @@ export class PmError extends Error {
     this.path = path;
     this.facts = facts;
     this.exitCode = exitCode;
+    this.detail = detail;
+  }
+
+  /** The same problem named at another path (a front end's flag or config field for a core field key). */
+  at(path: string): PmError {
+    return new PmError(this.code, path, this.detail, this.facts, this.exitCode);
   }
 }
+
+/** A core field key (`alphaCc`, `klu`, `fc`): front ends map it to their own flag or path. */
+export const isFieldKey = (path: string): boolean => /^[a-z][A-Za-z0-9]*$/.test(path);
 
 /** One line: "<path>: <value> <detail> (allowed: …)"; `detail` may already name the range. */
 export function formatError(path: string, detail: string, facts: ErrorFacts): string {

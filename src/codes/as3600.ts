@@ -73,7 +73,7 @@ export const AS_3600_2018: DesignCode = {
 function resolveAs3600(input: BasisInput): Basis {
   const { units, fc, fy: fsy, transverse } = input;
   if (units !== 'si') {
-    throw new PmError(ERROR_CODES.invalidValue, '--units', 'is not available for AS 3600-2018, an SI code', { value: units, allowed: 'si' });
+    throw new PmError(ERROR_CODES.invalidValue, 'units', 'is not available for AS 3600-2018, an SI code', { value: units, allowed: 'si' });
   }
   const Es = AS_STEEL_MODULUS;
   const alpha2 = asAlpha2(fc);

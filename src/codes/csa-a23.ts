@@ -81,7 +81,7 @@ export const CSA_A23_3_19: DesignCode = {
 function resolveCsa(input: BasisInput): Basis {
   const { units, fc, fy, transverse } = input;
   if (units !== 'si') {
-    throw new PmError(ERROR_CODES.invalidValue, '--units', 'is not available for CSA A23.3-19, an SI code', { value: units, allowed: 'si' });
+    throw new PmError(ERROR_CODES.invalidValue, 'units', 'is not available for CSA A23.3-19, an SI code', { value: units, allowed: 'si' });
   }
   const Es = CSA_STEEL_MODULUS;
   const alpha1 = csaAlpha1(fc);

@@ -109,7 +109,7 @@ export function ec2Profile(
 export const PIVOT_A_BLEND = 1e-3;
 
 function rejectUnits(units: string): never {
-  throw new PmError(ERROR_CODES.invalidValue, '--units', 'is not available for EN 1992-1-1, an SI code', { value: units, allowed: 'si' });
+  throw new PmError(ERROR_CODES.invalidValue, 'units', 'is not available for EN 1992-1-1, an SI code', { value: units, allowed: 'si' });
 }
 
 /** Symbols of EN 1992-1-1 (1.6): characteristic strengths fck, fyk; ν and μ as customary on European design charts (common practice). */
@@ -171,14 +171,14 @@ function resolveEc2(input: BasisInput): Basis {
   const { units, fc: fck, fy: fyk, transverse } = input;
   if (units !== 'si') rejectUnits(units);
   const o = input.options ?? {};
-  const alphaCc = requireInRange('--alpha-cc', o.alphaCc ?? EC2_RECOMMENDED.alphaCc, 0.8, 1.0); // 3.1.6(1) Note
-  const gammaC = requireInRange('--gamma-c', o.gammaC ?? EC2_RECOMMENDED.gammaC, 1.0, 2.0);
-  const gammaS = requireInRange('--gamma-s', o.gammaS ?? EC2_RECOMMENDED.gammaS, 1.0, 1.5);
+  const alphaCc = requireInRange('alphaCc', o.alphaCc ?? EC2_RECOMMENDED.alphaCc, 0.8, 1.0); // 3.1.6(1) Note
+  const gammaC = requireInRange('gammaC', o.gammaC ?? EC2_RECOMMENDED.gammaC, 1.0, 2.0);
+  const gammaS = requireInRange('gammaS', o.gammaS ?? EC2_RECOMMENDED.gammaS, 1.0, 1.5);
   const lawName = o.concreteLaw ?? 'parabola-rectangle';
   const branch = o.steelBranch ?? 'horizontal';
-  const k = requireInRange('--steel-k', o.steelK ?? EC2_CLASS_B.k, ...STEEL_K_RANGE); // Table C.1 classes A–C
-  const epsUk = requireInRange('--steel-eps-uk', o.steelEpsUk ?? EC2_CLASS_B.epsUk, ...STEEL_EPS_UK_RANGE);
-  const lapMax = o.lapZoneRhoMax === undefined ? undefined : requireInRange('--lap-zone-rho-max', o.lapZoneRhoMax, 0.04, 0.08); // 9.5.2(3)
+  const k = requireInRange('steelK', o.steelK ?? EC2_CLASS_B.k, ...STEEL_K_RANGE); // Table C.1 classes A–C
+  const epsUk = requireInRange('steelEpsUk', o.steelEpsUk ?? EC2_CLASS_B.epsUk, ...STEEL_EPS_UK_RANGE);
+  const lapMax = o.lapZoneRhoMax === undefined ? undefined : requireInRange('lapZoneRhoMax', o.lapZoneRhoMax, 0.04, 0.08); // 9.5.2(3)
   const rhoMax = lapMax ?? 0.04;
   const epsUd = branch === 'inclined' ? EC2_EPS_UD_RATIO * epsUk : Infinity; // 3.2.7(2)b: no limit on the horizontal branch
 

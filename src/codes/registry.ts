@@ -15,7 +15,7 @@ export const DESIGN_CODES: Partial<Record<CodeId, DesignCode>> = {
   'as3600-2018': AS_3600_2018,
 };
 
-export function designCode(id: string, path = '--code'): DesignCode {
+export function designCode(id: string, path = 'code'): DesignCode {
   const code = DESIGN_CODES[id as CodeId];
   if (!code) {
     throw new PmError(ERROR_CODES.invalidValue, path, 'is not a known design basis', {
@@ -30,11 +30,11 @@ export function designCode(id: string, path = '--code'): DesignCode {
 export function resolveBasis(
   id: string,
   input: BasisInput,
-  paths: { code: string; fc: string; fy: string; columnUse?: string } = { code: '--code', fc: '--fc', fy: '--fy', columnUse: '--column-use' },
+  paths: { code: string; fc: string; fy: string; columnUse?: string } = { code: 'code', fc: 'fc', fy: 'fy', columnUse: 'columnUse' },
 ): Basis {
   const code = designCode(id, paths.code);
   if (!code.unitSystems.includes(input.units)) {
-    throw new PmError(ERROR_CODES.invalidValue, '--units', `is not available for ${code.title}`, {
+    throw new PmError(ERROR_CODES.invalidValue, 'units', `is not available for ${code.title}`, {
       value: input.units,
       allowed: code.unitSystems.join(', '),
     });
@@ -46,7 +46,7 @@ export function resolveBasis(
   const use = input.options?.columnUse ?? 'gravity';
   const edition = code.yieldLimit?.(input.units, use);
   if (edition && input.fy > edition.max) {
-    throw new PmError(ERROR_CODES.outOfRange, paths.fy, `exceeds ${edition.rule} (${paths.columnUse ?? '--column-use'} ${use})`, {
+    throw new PmError(ERROR_CODES.outOfRange, paths.fy, `exceeds ${edition.rule} (${paths.columnUse ?? 'columnUse'} ${use})`, {
       value: `${input.fy} ${su}`,
       allowed: `≤ ${edition.max} ${su}`,
     });

@@ -109,7 +109,6 @@ export function checkRules(set: ResolvedChartSet, file: ChartSetFile): RuleRepor
 }
 
 /** "--alpha-cc" → "alphaCc": the basis reports option problems by flag; a set names the config field. */
-const optionField = (flag: string): string => flag.replace(/^--/, '').replace(/-([a-z])/g, (_, c: string) => c.toUpperCase());
 
 /**
  * Rules that need each sheet's basis: the basis options (ranges live in the basis, reported here with
@@ -126,9 +125,10 @@ function basisChecks(set: ResolvedChartSet, file: ChartSetFile, code: DesignCode
       } catch (e) {
         if (!isPmError(e)) throw e;
         seen.set(key, null);
-        const field = optionField(e.path) as keyof BasisOptions;
-        const at = field in s.variantOptions ? `${s.origin}.basisOptions.${field}` : field in (file.basis.options ?? {}) ? `basis.options.${field}` : e.path === '--units' ? 'units' : e.path;
-        errors.push(new PmError(e.code, at, e.message.slice(e.message.indexOf(': ') + 2), {}, e.exitCode));
+        // the basis names the field by its key (alphaCc, units): say where this file set it
+        const field = e.path as keyof BasisOptions;
+        const at = field in s.variantOptions ? `${s.origin}.basisOptions.${field}` : field in (file.basis.options ?? {}) ? `basis.options.${field}` : e.path;
+        errors.push(e.at(at));
         break;
       }
     }

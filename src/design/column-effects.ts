@@ -32,7 +32,7 @@ export interface EndMoments {
 /** One axis's end moments in the internal (opposite-sign) convention, or undefined where not given. */
 function endPair(M1: number | undefined, M2: number | undefined, M01: number | undefined, M02: number | undefined): { M1?: number; M2?: number } {
   if (M01 !== undefined || M02 !== undefined) {
-    if (M02 === undefined) throw new PmError(ERROR_CODES.missing, '--m02', 'is required with --m01 (the larger end moment, with its sign)');
+    if (M02 === undefined) throw new PmError(ERROR_CODES.missing, 'm02', 'is required with M01 (the larger end moment, with its sign)');
     return fromSameSign(M01 ?? M02, M02);
   }
   return { ...(M1 !== undefined ? { M1 } : {}), ...(M2 !== undefined ? { M2 } : {}) };
@@ -95,7 +95,7 @@ export function magnifyLoad(
 
 /** The actual bars of a checked reinforcement, ready for the biaxial surface. */
 export function biaxialSectionFor(basis: Basis, shape: Shape, bars: readonly Bar[], capContext: CapContext = {}): BiaxialSection {
-  if (bars.length === 0) throw new PmError(ERROR_CODES.missing, '--rho', 'or a bar layout is required for the biaxial check');
+  if (bars.length === 0) throw new PmError(ERROR_CODES.missing, 'rho', 'or a bar layout is required for the biaxial check');
   return prepareBiaxial(basis, shape, bars, capContext);
 }
 

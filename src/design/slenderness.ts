@@ -49,6 +49,7 @@ export interface SlendernessInput {
  */
 export interface EndMomentConvention {
   /** flag of the smaller end moment about x, e.g. "--m1" */
+  /** field keys of the end moments (front ends map them to flags: m1 → --m1, m01Y → --m01-y) */
   smallerFlag: string;
   largerFlag: string;
   smallerFlagY: string;
@@ -62,20 +63,20 @@ export interface EndMomentConvention {
 }
 
 export const OPPOSITE_SIGN_END_MOMENTS: EndMomentConvention = {
-  smallerFlag: '--m1',
-  largerFlag: '--m2',
-  smallerFlagY: '--m1-y',
-  largerFlagY: '--m2-y',
+  smallerFlag: 'm1',
+  largerFlag: 'm2',
+  smallerFlagY: 'm1Y',
+  largerFlagY: 'm2Y',
   columns: ['M1', 'M2', 'M1y', 'M2y'],
   singleCurvature: 'opposite-sign',
   rule: 'M1 negative in single curvature (ACI 318-19 6.2.5.1)',
 };
 
 export const SAME_SIGN_END_MOMENTS: EndMomentConvention = {
-  smallerFlag: '--m01',
-  largerFlag: '--m02',
-  smallerFlagY: '--m01-y',
-  largerFlagY: '--m02-y',
+  smallerFlag: 'm01',
+  largerFlag: 'm02',
+  smallerFlagY: 'm01Y',
+  largerFlagY: 'm02Y',
   columns: ['M01', 'M02', 'M01y', 'M02y'],
   singleCurvature: 'same-sign',
   rule: 'M01 and M02 of the same sign in single curvature, rm = M01/M02 > 0 (EN 1992-1-1 5.8.3.1(1))',
@@ -189,16 +190,16 @@ export function slendernessCheck(basis: Basis, section: SlendernessSection, inpu
     case 'moment-magnification-csa-a23':
       return csaMomentMagnification(basis, section, input);
     default:
-      throw new PmError(ERROR_CODES.notPossible, '--klu', `is not supported: ${basis.title} declares no slenderness method in pmchart`);
+      throw new PmError(ERROR_CODES.notPossible, 'klu', `is not supported: ${basis.title} declares no slenderness method in pmchart`);
   }
 }
 
 function validate(i: SlendernessInput, conv: EndMomentConvention): void {
-  if (!(i.effectiveLength > 0)) throw new PmError(ERROR_CODES.outOfRange, '--klu', 'must be greater than 0', { value: i.effectiveLength });
+  if (!(i.effectiveLength > 0)) throw new PmError(ERROR_CODES.outOfRange, 'klu', 'must be greater than 0', { value: i.effectiveLength });
   if (!(i.M2 >= 0)) throw new PmError(ERROR_CODES.outOfRange, conv.largerFlag, 'must be ≥ 0 (the larger end moment, given positive)', { value: i.M2 });
-  if (Math.abs(i.M1) > i.M2 * (1 + 1e-9)) throw new PmError(ERROR_CODES.outOfRange, conv.smallerFlag, `must not exceed ${conv.largerFlag} in magnitude`, { value: i.M1 });
-  if (i.betaDns !== undefined && !(i.betaDns >= 0 && i.betaDns <= 1)) throw new PmError(ERROR_CODES.outOfRange, '--beta-dns', 'is outside 0–1', { value: i.betaDns, allowed: '0–1' });
-  if (i.creepRatio !== undefined && !(i.creepRatio >= 0 && i.creepRatio <= 5)) throw new PmError(ERROR_CODES.outOfRange, '--creep', 'is outside 0–5', { value: i.creepRatio, allowed: '0–5' });
+  if (Math.abs(i.M1) > i.M2 * (1 + 1e-9)) throw new PmError(ERROR_CODES.outOfRange, conv.smallerFlag, `must not exceed ${conv.columns[1]} in magnitude`, { value: i.M1 });
+  if (i.betaDns !== undefined && !(i.betaDns >= 0 && i.betaDns <= 1)) throw new PmError(ERROR_CODES.outOfRange, 'betaDns', 'is outside 0–1', { value: i.betaDns, allowed: '0–1' });
+  if (i.creepRatio !== undefined && !(i.creepRatio >= 0 && i.creepRatio <= 5)) throw new PmError(ERROR_CODES.outOfRange, 'creep', 'is outside 0–5', { value: i.creepRatio, allowed: '0–5' });
 }
 
 const depthOf = (s: Shape): number => (s.kind === 'rectangle' ? s.h : s.diameter);
@@ -560,7 +561,7 @@ export function csaMomentMagnification(basis: Basis, section: SlendernessSection
   const minimumGoverns = M2min > M2;
   const M2c = Math.max(M2, M2min);
   steps.push({ label: 'M2 used = max(M2, M2,min)', value: M2c, unit: 'N·mm' });
-  if (input.eiOption === 'c') throw new PmError(ERROR_CODES.invalidValue, '--ei-option', 'c is ACI 318 only; CSA A23.3-19 10.15.3.1 offers a or b', { value: 'c', allowed: 'a, b' });
+  if (input.eiOption === 'c') throw new PmError(ERROR_CODES.invalidValue, 'eiOption', 'c is ACI 318 only; CSA A23.3-19 10.15.3.1 offers a or b', { value: 'c', allowed: 'a, b' });
   let EI: number;
   if ((input.eiOption ?? 'a') === 'b') {
     const Ist = bars.reduce((s, b) => s + b.area * b.y * b.y, 0);

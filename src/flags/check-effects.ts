@@ -9,6 +9,7 @@ import type { ColumnCheckInput } from '../design/column-check.js';
 import type { AxisMember, SlendernessRequest } from '../design/column-effects.js';
 import { EI_OPTIONS, endMomentConvention, isEiOption } from '../design/slenderness.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
+import { flagOf } from '../input/flags.js';
 import { DISPLAY_UNITS, parseQuantity } from '../units/index.js';
 import type { ResolvedSection } from './section-flags.js';
 
@@ -68,7 +69,7 @@ export function resolveEffects(o: EffectsFlags, section: ResolvedSection, input:
   let slenderness: SlendernessRequest | null = null;
   const endFlags = { '--m1': o.m1, '--m2': o.m2, '--m1-y': o.m1Y, '--m2-y': o.m2Y, '--m01': o.m01, '--m02': o.m02, '--m01-y': o.m01Y, '--m02-y': o.m02Y };
   const conv = endMomentConvention(section.basis);
-  const ownFlags: readonly string[] = [conv.smallerFlag, conv.largerFlag, conv.smallerFlagY, conv.largerFlagY];
+  const ownFlags: readonly string[] = [conv.smallerFlag, conv.largerFlag, conv.smallerFlagY, conv.largerFlagY].map(flagOf);
   for (const [flag, v] of Object.entries(endFlags)) {
     if (v !== undefined && !ownFlags.includes(flag)) {
       throw new PmError(ERROR_CODES.conflict, flag, `is not the end-moment flag of ${section.basis.title}: give ${ownFlags.join(', ')} instead, ${conv.rule}`);
@@ -111,7 +112,7 @@ export function resolveEffects(o: EffectsFlags, section: ResolvedSection, input:
       if (m01y !== undefined) l.M01y = m01y;
       if (m02y !== undefined) l.M02y = m02y;
     } else if (Object.values(endFlags).some((v) => v !== undefined)) {
-      throw new PmError(ERROR_CODES.conflict, `${conv.smallerFlag}/${conv.largerFlag}`, `apply to --pu/--mu; give ${conv.columns.join(', ')} columns in --loads instead`);
+      throw new PmError(ERROR_CODES.conflict, `${flagOf(conv.smallerFlag)}/${flagOf(conv.largerFlag)}`, `apply to --pu/--mu; give ${conv.columns.join(', ')} columns in --loads instead`);
     }
     // a load file's end-moment columns must be the basis's own (signs differ between conventions)
     const own: readonly string[] = conv.columns;

@@ -14,7 +14,7 @@ import { barSet } from '../section/bar-tables.js';
 import { barCount } from '../section/arrangements.js';
 import { DISPLAY_UNITS, parseQuantity, systemFactor, type UnitSystem } from '../units/index.js';
 import { reportDate } from './format.js';
-import { resolveSectionFlags, type ResolvedSection, type SectionFlags } from './section-flags.js';
+import { resolveSectionFlags, withFlagNames, type ResolvedSection, type SectionFlags } from './section-flags.js';
 import { resolveEffects, type EffectsFlags } from './check-effects.js';
 
 export interface CheckOptions extends SectionFlags, EffectsFlags {
@@ -134,6 +134,6 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
 /** Resolves the flags and checks every load (no output). */
 export function computeCheck(o: CheckOptions): { rc: ResolvedCheck; check: ColumnCheck } {
   const rc = resolveCheckOptions(o);
-  return { rc, check: checkColumn(rc.input) };
+  return { rc, check: withFlagNames(() => checkColumn(rc.input)) };
 }
 

@@ -6,9 +6,9 @@ import { readFileSync, statSync } from 'node:fs';
 import type { Command } from 'commander';
 import { designCode, parseStrength, resolveBasis } from '../codes/registry.js';
 import type { Basis, BasisOptions, CapContext, CodeId, ColumnUse } from '../codes/types.js';
-import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
+import { ERROR_CODES, isFieldKey, isPmError, PmError, requireInRange } from '../errors.js';
 import { parseCustomBars } from '../input/custom-bars.js';
-import { parseFlags, SectionFlagsSchema, type CheckedSectionFlags } from '../input/flags.js';
+import { flagOf, parseFlags, SectionFlagsSchema, type CheckedSectionFlags } from '../input/flags.js';
 import { BARS_PER_FACE_RANGE, GAMMA_RANGE, MAX_CUSTOM_BARS_BYTES, RING_BARS_RANGE } from '../input/limits.js';
 import { barSet, findBar, type BarSize } from '../section/bar-tables.js';
 import { gammaFromCover, sectionDepth, sectionWidth } from '../section/geometry.js';
@@ -133,7 +133,7 @@ export function resolveSectionFlags(given: SectionFlags, needSize = false): Reso
   // 1. each flag on its own: the zod schema of src/input/flags.ts (form, enums, unit-free ranges)
   const f = parseFlags(SectionFlagsSchema, given);
   const code = f.code ?? 'aci318-19';
-  const u: UnitSystem = f.units ?? designCode(code).unitSystems[0]!;
+  const u: UnitSystem = f.units ?? withFlagNames(() => designCode(code)).unitSystems[0]!;
   const su = DISPLAY_UNITS[u];
   if (f.fc === undefined) throw new PmError(ERROR_CODES.missing, '--fc', `is required (a stress, default unit ${su.stress})`);
   if (f.fy === undefined) throw new PmError(ERROR_CODES.missing, '--fy', `is required (a stress, default unit ${su.stress})`);
@@ -152,9 +152,9 @@ export function resolveSectionFlags(given: SectionFlags, needSize = false): Reso
     ...(f.columnUse !== undefined ? { columnUse: f.columnUse as ColumnUse } : {}),
   };
   // strengths by class name where the basis has them ("C50/60", "B500B"), else quantities
-  const fc = parseStrength(designCode(code), f.fc, 'concrete', u, '--fc');
-  const fy = parseStrength(designCode(code), f.fy, 'steel', u, '--fy');
-  const basis = resolveBasis(code, { units: u, fc, fy, transverse, options });
+  const fc = withFlagNames(() => parseStrength(designCode(code), f.fc!, 'concrete', u, '--fc'));
+  const fy = withFlagNames(() => parseStrength(designCode(code), f.fy!, 'steel', u, '--fy'));
+  const basis = withFlagNames(() => resolveBasis(code, { units: u, fc, fy, transverse, options }, { code: '--code', fc: '--fc', fy: '--fy', columnUse: '--column-use' }));
 
   // 3. shape and size
   const shapeKind = f.shape ?? 'rectangle';
@@ -242,4 +242,14 @@ export function resolveSectionFlags(given: SectionFlags, needSize = false): Reso
     ...(tieDiameter !== undefined ? { tieDiameter } : {}),
     capContext: sized ? { depth: sectionDepth(shape), leastDimension: Math.min(sectionDepth(shape), sectionWidth(shape)) } : {},
   };
+}
+
+/** Runs core code and names its field keys (`alphaCc`, `klu`) as the command line's flags (`--alpha-cc`, `--klu`). */
+export function withFlagNames<T>(fn: () => T): T {
+  try {
+    return fn();
+  } catch (e) {
+    if (isPmError(e) && isFieldKey(e.path)) throw e.at(flagOf(e.path));
+    throw e;
+  }
 }

@@ -38,8 +38,8 @@ describe('AS 3600-2018 parameters (8.1.3, 10.6.2.2, from memory)', () => {
   });
   it('SI only; f′c outside 20–100 MPa and fsy above 500 MPa are refused', () => {
     expect(() => resolveBasis('as3600-2018', { units: 'us', fc: 4, fy: 60, transverse: 'tied' })).toThrow(PmError);
-    expect(() => as(110)).toThrow(/--fc/);
-    expect(() => as(40, 550)).toThrow(/--fy/);
+    expect(() => as(110)).toThrow(/^fc: /);
+    expect(() => as(40, 550)).toThrow(/^fy: /);
   });
 });
 

@@ -111,8 +111,8 @@ describe('CSA A23.3-19 parameters', () => {
   });
   it('rejects US units and f′c outside 20–80 MPa with one-line errors', () => {
     expect(() => resolveBasis('csa-a23.3-19', { units: 'us', fc: 5, fy: 60, transverse: 'tied' })).toThrowError(PmError);
-    expect(() => resolveBasis('csa-a23.3-19', { units: 'us', fc: 5, fy: 60, transverse: 'tied' })).toThrowError(/^--units: us is not available/);
-    expect(() => csa(90, 400)).toThrowError(/--fc: 90 MPa is outside 20–80 MPa/);
+    expect(() => resolveBasis('csa-a23.3-19', { units: 'us', fc: 5, fy: 60, transverse: 'tied' })).toThrowError(/^units: us is not available/);
+    expect(() => csa(90, 400)).toThrowError(/fc: 90 MPa is outside 20–80 MPa/);
   });
 });
 

@@ -234,14 +234,14 @@ describe('EN 1992-1-1 parameters and input', () => {
     expect(b.notes.join(' ')).toContain('αcc = 0.85');
     expect(ec2(30).notes.join(' ')).toContain('Recommended partial factors');
   });
-  it('rejects US units with a one-line PmError naming --units', () => {
+  it('rejects US units with a one-line PmError naming the field key units (the CLI shows --units)', () => {
     expect(() => resolveBasis('en1992-1-1', { units: 'us', fc: 4, fy: 60, transverse: 'tied' })).toThrowError(PmError);
-    expect(() => resolveBasis('en1992-1-1', { units: 'us', fc: 4, fy: 60, transverse: 'tied' })).toThrowError(/^--units: us is not available for EN 1992-1-1:2004 \(allowed: si\)$/);
-    expect(() => EN_1992_1_1.resolve({ units: 'us', fc: 30, fy: 500, transverse: 'tied' })).toThrowError(/--units/);
+    expect(() => resolveBasis('en1992-1-1', { units: 'us', fc: 4, fy: 60, transverse: 'tied' })).toThrowError(/^units: us is not available for EN 1992-1-1:2004 \(allowed: si\)$/);
+    expect(() => EN_1992_1_1.resolve({ units: 'us', fc: 30, fy: 500, transverse: 'tied' })).toThrowError(/^units: /);
   });
   it('rejects fck outside C12–C90 and αcc outside 0.8–1.0', () => {
-    expect(() => ec2(100)).toThrowError(/--fc: 100 MPa is outside 12–90 MPa/);
-    expect(() => ec2(30, { alphaCc: 0.7 })).toThrowError(/--alpha-cc: 0.7 is outside 0.8–1/);
+    expect(() => ec2(100)).toThrowError(/fc: 100 MPa is outside 12–90 MPa/);
+    expect(() => ec2(30, { alphaCc: 0.7 })).toThrowError(/^alphaCc: 0.7 is outside 0.8–1/);
   });
 });
 
@@ -261,6 +261,6 @@ describe('EN 1992-1-1 class names and lap zones (issue 13)', () => {
     expect(outside.rhoLimits.max).toBe(0.04);
     expect(lap.rhoLimits.max).toBe(0.08);
     expect(lap.steelAreaLimits(0, 160_000).max).toBeCloseTo(12_800, 9);
-    expect(() => resolveBasis('en1992-1-1', { units: 'si', fc: 30, fy: 500, transverse: 'tied', options: { lapZoneRhoMax: 0.1 } })).toThrow(/--lap-zone-rho-max/);
+    expect(() => resolveBasis('en1992-1-1', { units: 'si', fc: 30, fy: 500, transverse: 'tied', options: { lapZoneRhoMax: 0.1 } })).toThrow(/^lapZoneRhoMax: /);
   });
 });
