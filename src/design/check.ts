@@ -6,25 +6,19 @@ import type { Basis } from '../codes/types.js';
 import { grossArea, sectionDepth } from '../section/geometry.js';
 import type { Arrangement, Shape } from '../section/types.js';
 import type { ChartReading } from './chart-reading.js';
+import type { EndMoments } from './column-effects.js';
 import type { NormalisedLoad } from './ray.js';
 
-/** A factored load in internal units (kip, kip·in or N, N·mm); tension negative. */
-export interface FactoredLoad {
+/**
+ * A factored load in internal units (kip, kip·in or N, N·mm); tension negative. End moments for the
+ * slenderness check in either sign convention (`EndMoments`, src/design/column-effects.ts).
+ */
+export interface FactoredLoad extends EndMoments {
   id: string;
   Pu: number;
   Mu: number;
-  /** moment about the y axis for the biaxial check (src/cli/check-effects.ts); absent: uniaxial */
+  /** moment about the y axis for the biaxial check; absent: uniaxial */
   Muy?: number;
-  /** end moments for the slenderness check (src/design/column-effects.ts) */
-  M1?: number;
-  M2?: number;
-  M1y?: number;
-  M2y?: number;
-  /** end moments in the same-sign convention (EN 1992-1-1 5.8.3.1: same sign in single curvature) */
-  M01?: number;
-  M02?: number;
-  M01y?: number;
-  M02y?: number;
 }
 
 /** A given layout to check: discrete bars of total area `area` at `gamma`. */

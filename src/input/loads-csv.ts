@@ -17,24 +17,12 @@ import { parse } from 'csv-parse/sync';
 import { z } from 'zod';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { DISPLAY_UNITS, parseQuantity, splitQuantity, unitSuffixes, type QuantityKind, type UnitSystem } from '../units/index.js';
+import type { FactoredLoad } from '../design/check.js';
 import { parseOrThrow, quantityText, text } from './fields.js';
 import { LOAD_MAX_ABS, MAX_LOAD_ID_CHARS, MAX_LOAD_ROWS, MAX_LOADS_BYTES } from './limits.js';
 
-/** A load in internal units; the same shape as design's FactoredLoad. */
-export interface LoadRow {
-  id: string;
-  Pu: number;
-  Mu: number;
-  Muy?: number;
-  M1?: number;
-  M2?: number;
-  M1y?: number;
-  M2y?: number;
-  M01?: number;
-  M02?: number;
-  M01y?: number;
-  M02y?: number;
-}
+/** A load in internal units: the check engine's own load type. */
+export type LoadRow = FactoredLoad;
 
 const COLUMNS = { id: null, Pu: 'force', Mu: 'moment', Muy: 'moment', M1: 'moment', M2: 'moment', M1y: 'moment', M2y: 'moment', M01: 'moment', M02: 'moment', M01y: 'moment', M02y: 'moment' } as const satisfies Record<string, QuantityKind | null>;
 type Column = keyof typeof COLUMNS;
