@@ -90,9 +90,6 @@ export interface BuiltSheet {
   table: LookupTable;
 }
 
-/** Where a ρg label sits on its curve, as a fraction of the curve's pure-tension force. */
-const LABEL_LEVEL = 0.33;
-
 /** Largest distance, in page points, between a drawn curve and a computed point it leaves out. */
 export const SIMPLIFY_TOLERANCE_PT = 0.08;
 

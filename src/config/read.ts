@@ -6,11 +6,10 @@
  * Every stage reports problems as PmError with the field path, e.g. `sheets[3].gamma: 1.2 is outside 0.3–0.95`.
  * Pure: the caller reads the file; `now` stands in for the clock.
  */
-import type { z } from 'zod';
 import { DESIGN_CODES, parseStrength } from '../codes/registry.js';
 import { CODE_IDS, type CodeId } from '../codes/types.js';
 import { ERROR_CODES, PmError } from '../errors.js';
-import { parseQuantity, type UnitSystem } from '../units/index.js';
+import type { UnitSystem } from '../units/index.js';
 import { formatPath, parseOrThrow } from '../input/fields.js';
 import { issueDate, MAX_SHEETS } from '../input/limits.js';
 import { DEFAULT_TITLE_PATTERN, fileStemFor, fillPattern, titleFields } from './describe.js';

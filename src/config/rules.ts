@@ -6,7 +6,7 @@ import { rhoFromOmega } from '../codes/mechanical-ratio.js';
 import { DESIGN_CODES, parseStrength } from '../codes/registry.js';
 import type { Basis, BasisOptions, DesignCode } from '../codes/types.js';
 import { ERROR_CODES, PmError, isPmError } from '../errors.js';
-import { DISPLAY_UNITS, parseQuantity } from '../units/index.js';
+import { DISPLAY_UNITS } from '../units/index.js';
 import { expandNumbers } from './expand.js';
 import { ASPECT_RANGE, BARS_PER_FACE_RANGE, ECCENTRICITY_RANGE, GAMMA_RANGE, isCalendarDate, MAX_SHEETS, OMEGA_RANGE, PNG_SCALE_RANGE, RHO_RANGE, RING_BARS_RANGE, SET_CURVES_RANGE } from '../input/limits.js';
 import type { ChartSetFile } from './schema.js';

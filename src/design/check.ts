@@ -3,11 +3,9 @@
  * with the chart readings. Pure: no I/O.
  */
 import type { Basis } from '../codes/types.js';
-import { grossArea, sectionDepth } from '../section/geometry.js';
-import type { Arrangement, Shape } from '../section/types.js';
+import type { Arrangement } from '../section/types.js';
 import type { ChartReading } from './chart-reading.js';
 import type { EndMoments } from './column-effects.js';
-import type { NormalisedLoad } from './ray.js';
 
 /**
  * A factored load in internal units (kip, kip·in or N, N·mm); tension negative. End moments for the
@@ -27,14 +25,6 @@ export interface GivenLayout {
   area: number;
   gamma: number;
   description: string;
-}
-
-/** Normalised demand: Pu/Ag and Mu/(Ag·h) (Ag·D for circles); the moment sign is dropped (symmetric sections). */
-export function normaliseLoad(basis: Basis, shape: Shape, load: FactoredLoad): { load: NormalisedLoad; Mdesign: number } {
-  const area = grossArea(shape);
-  const depth = sectionDepth(shape);
-  const Mdesign = Math.max(Math.abs(load.Mu), basis.minimumMoment(load.Pu, depth));
-  return { load: { P: load.Pu / area, M: Mdesign / (area * depth) }, Mdesign };
 }
 
 /** ρg limits for an axial demand (basis.steelAreaLimits over Ag). */

@@ -50,6 +50,18 @@ export function addEffectsOptions(cmd: Command): Command {
     .option('--creep <ratio>', 'EN 1992-1-1 5.8.4 effective creep ratio φef (not given: A = 0.7 by 5.8.3.1(1))');
 }
 
+/** End-moment options and the load column each fills, in both sign conventions (ACI M1/M2; EN and CSA M01/M02). */
+const END_MOMENT_FLAGS = [
+  ['m1', 'M1'],
+  ['m2', 'M2'],
+  ['m1Y', 'M1y'],
+  ['m2Y', 'M2y'],
+  ['m01', 'M01'],
+  ['m02', 'M02'],
+  ['m01Y', 'M01y'],
+  ['m02Y', 'M02y'],
+] as const;
+
 const plain = (path: string, text: string, lo: number, hi: number): number => {
   const v = Number(text);
   if (!Number.isFinite(v)) throw new PmError(ERROR_CODES.invalidValue, path, 'is not a number', { value: text, allowed: `${lo}–${hi}` });
@@ -67,7 +79,7 @@ export function resolveEffects(o: EffectsFlags, section: ResolvedSection, input:
   const lengthRange: [number, number] = u === 'us' ? [12, 1200] : [300, 30000];
   const len = (path: string, text: string) => requireInRange(path, parseQuantity(text, 'length', u, path), lengthRange[0], lengthRange[1], DISPLAY_UNITS[u].length);
   let slenderness: SlendernessRequest | null = null;
-  const endFlags = { '--m1': o.m1, '--m2': o.m2, '--m1-y': o.m1Y, '--m2-y': o.m2Y, '--m01': o.m01, '--m02': o.m02, '--m01-y': o.m01Y, '--m02-y': o.m02Y };
+  const endFlags = Object.fromEntries(END_MOMENT_FLAGS.map(([key]) => [flagOf(key), o[key]]));
   const conv = endMomentConvention(section.basis);
   const ownFlags: readonly string[] = [conv.smallerFlag, conv.largerFlag, conv.smallerFlagY, conv.largerFlagY].map(flagOf);
   for (const [flag, v] of Object.entries(endFlags)) {
@@ -95,22 +107,10 @@ export function resolveEffects(o: EffectsFlags, section: ResolvedSection, input:
     const moment = (path: string, t: string | undefined) => (t === undefined ? undefined : parseQuantity(t, 'moment', u, path));
     if (single) {
       const l = loads[0]!;
-      const m1 = moment('--m1', o.m1);
-      const m2 = moment('--m2', o.m2);
-      const m1y = moment('--m1-y', o.m1Y);
-      const m2y = moment('--m2-y', o.m2Y);
-      if (m1 !== undefined) l.M1 = m1;
-      if (m2 !== undefined) l.M2 = m2;
-      if (m1y !== undefined) l.M1y = m1y;
-      if (m2y !== undefined) l.M2y = m2y;
-      const m01 = moment('--m01', o.m01);
-      const m02 = moment('--m02', o.m02);
-      const m01y = moment('--m01-y', o.m01Y);
-      const m02y = moment('--m02-y', o.m02Y);
-      if (m01 !== undefined) l.M01 = m01;
-      if (m02 !== undefined) l.M02 = m02;
-      if (m01y !== undefined) l.M01y = m01y;
-      if (m02y !== undefined) l.M02y = m02y;
+      for (const [key, column] of END_MOMENT_FLAGS) {
+        const m = moment(flagOf(key), o[key]);
+        if (m !== undefined) l[column] = m;
+      }
     } else if (Object.values(endFlags).some((v) => v !== undefined)) {
       throw new PmError(ERROR_CODES.conflict, `${flagOf(conv.smallerFlag)}/${flagOf(conv.largerFlag)}`, `apply to --pu/--mu; give ${conv.columns.join(', ')} columns in --loads instead`);
     }
