@@ -478,20 +478,17 @@ function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measur
   const axes = x.magnified ? ([['x', x.magnified.x], ['y', x.magnified.y]] as const) : [];
   for (const [axis, s] of axes) {
     if (s && !s.ok && !(s.delta < Infinity)) {
-      return { status: 'unstable', statusReason: `about ${axis}: ${s.warnings[0] ?? 'the axial load reaches the critical load of the magnifier'}`, statusClause: stabilityClause(s.method) };
+      return { status: 'unstable', statusReason: `about ${axis}: ${s.warnings[0] ?? 'the axial load reaches the critical load of the magnifier'}`, statusClause: s.limitClause ?? s.method };
     }
   }
   for (const [axis, s] of axes) {
-    if (s && !s.ok) return { status: 'outside-scope', statusReason: `about ${axis}: ${s.warnings[0] ?? "second-order moment beyond the method's limit"}`, statusClause: scopeClause(s.method) };
+    if (s && !s.ok) return { status: 'outside-scope', statusReason: `about ${axis}: ${s.warnings[0] ?? "second-order moment beyond the method's limit"}`, statusClause: s.limitClause ?? s.method };
   }
   if (!x.finite || x.notPossible) return { status: 'not-possible', statusReason: `needs more than the maximum ρg = ${fmtRho(x.limitsMax)}: enlarge the section`, statusClause: null };
   if (x.checked && !(x.measureValue <= 1 + 1e-9)) return { status: 'fails', statusReason: `utilisation ${x.measureValue.toFixed(3)} > 1`, statusClause: null };
   return { status: 'ok', statusReason: '', statusClause: null };
 }
 
-/** The clause a slenderness method names for instability: read from the method's own words. */
-const stabilityClause = (method: string): string | null => (/6\.6\.4/.test(method) ? 'ACI 318-19 6.6.4.5.2 (Pu ≥ 0.75·Pc)' : method);
-const scopeClause = (method: string): string | null => (/6\.6\.4/.test(method) ? 'ACI 318-19 6.2.5.3 (second-order moment ≤ 1.4 × first-order)' : method);
 
 // ───────────────────────────── all loads ─────────────────────────────
 

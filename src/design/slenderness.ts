@@ -155,6 +155,8 @@ export interface SlendernessResult {
   firstOrderMoment: number;
   /** false where the column is unstable (Pu ≥ 0.75·Pc) or beyond the 1.4 × first-order limit */
   ok: boolean;
+  /** where `ok` is false: the clause of the limit that failed (stability, or the method's own scope) */
+  limitClause?: string;
   warnings: string[];
   steps: SlendernessStep[];
 }
@@ -319,6 +321,7 @@ export function aciMomentMagnification(basis: Basis, section: SlendernessSection
     magnifiedMoment: magnified,
     firstOrderMoment: M2c,
     ok: stable && within,
+    ...(!stable ? { limitClause: 'ACI 318-19 6.6.4.5.2 (Pu ≥ 0.75·Pc)' } : !within ? { limitClause: 'ACI 318-19 6.2.5.3 (second-order moment ≤ 1.4 × first-order)' } : {}),
     warnings,
     steps,
   };
@@ -517,7 +520,7 @@ export function as3600MomentMagnification(basis: Basis, section: SlendernessSect
   if (!stable) warnings.push('N* ≥ Nc: the column is unstable by AS 3600-2018 10.4.2; enlarge the section or brace it');
   const magnified = delta * M2c;
   steps.push({ label: 'M* = δb·M2* (10.4.2)', value: magnified, unit: 'N·mm' });
-  return { method, neglected: false, delta, magnifiedMoment: magnified, firstOrderMoment: M2c, ok: stable, warnings, steps };
+  return { method, neglected: false, delta, magnifiedMoment: magnified, firstOrderMoment: M2c, ok: stable, ...(stable ? {} : { limitClause: 'AS 3600-2018 10.4.2 (N* ≥ Nc)' }), warnings, steps };
 }
 
 /** CSA A23.3-19 8.6.2.3 (from memory): Ec = 4500·√f′c MPa for normal-density concrete. */
@@ -592,5 +595,5 @@ export function csaMomentMagnification(basis: Basis, section: SlendernessSection
   if (!stable) warnings.push('Pf ≥ 0.75·Pc: the column is unstable by CSA A23.3-19 10.15.3.1; enlarge the section or brace it');
   const magnified = delta * M2c;
   steps.push({ label: 'Mc = δ·M2 (10.15.3.1)', value: magnified, unit: 'N·mm' });
-  return { method, neglected: false, delta, magnifiedMoment: magnified, firstOrderMoment: M2c, ok: stable, warnings, steps };
+  return { method, neglected: false, delta, magnifiedMoment: magnified, firstOrderMoment: M2c, ok: stable, ...(stable ? {} : { limitClause: 'CSA A23.3-19 10.15.3.1 (Pf ≥ 0.75·Pc)' }), warnings, steps };
 }
