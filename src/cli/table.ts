@@ -12,7 +12,8 @@ import { familyBatches, resolveTableOptions, type TableOptions, type TableReques
 export * from '../flags/table-flags.js';
 
 import { TABLE_COLUMNS } from '../chart/lookup-table.js';
-export { TABLE_COLUMNS };
+import { CAUTION } from '../report/caution.js';
+export { CAUTION, TABLE_COLUMNS };
 
 /** Runs the command and returns the text it prints (tests call this without the parser). */
 export function runTable(o: TableOptions): string {
@@ -144,8 +145,6 @@ function* tableJsonPieces(batches: Iterable<{ family: CurveFamily; first: number
   yield ` ]${tail}`;
 }
 
-import { CAUTION } from '../report/caution.js';
-export { CAUTION };
 
 export function registerTable(program: Command, run: (fn: () => Promise<void> | void) => Promise<void>): void {
   const cmd = program.command('table').description('normalised interaction-curve family as CSV or JSON (no section size needed)');
