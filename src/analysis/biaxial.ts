@@ -384,22 +384,28 @@ export function uniaxialAxialAt(sec: BiaxialSection, axis: 'x' | 'y', Pu: number
 }
 
 /**
- * Moment utilisation at fixed axial load: |Mu| ÷ the capacity moment in the load's direction on the
- * contour at P = Pu (the measure the load-contour method approximates). NaN when Pu is out of reach.
+ * The point of the contour at axial load P whose moment vector points at ψ = atan2(My, Mx): the same
+ * angle search as the ray capacity (solveAngle), with the depth held to the axial load. Null when P is
+ * out of reach at the angle found.
  */
-export function momentUtilisationAtAxial(sec: BiaxialSection, Pu: number, Mux: number, Muy: number, kind: ModelKind = 'design'): number {
-  const Mu = Math.hypot(Mux, Muy);
-  if (Pu > sec.cap[kind]) return NaN;
-  const psi = Math.atan2(Muy, Mux);
+export function contourPointAtAngle(sec: BiaxialSection, P: number, psi: number, kind: ModelKind = 'design'): SurfacePoint | null {
+  if (P > sec.cap[kind]) return null;
   const resid = (theta: number): { r: number } => {
-    const c = depthForAxial(sec, theta, Pu, kind);
+    const c = depthForAxial(sec, theta, P, kind);
     if (!Number.isFinite(c)) return { r: NaN };
     const q = surfacePoint(sec, theta, c, kind);
     return { r: wrap(Math.atan2(q.My, q.Mx) - psi) };
   };
   const theta = solveAngle(resid, psi);
-  const c = depthForAxial(sec, theta, Pu, kind);
-  if (!Number.isFinite(c)) return NaN;
-  const q = surfacePoint(sec, theta, c, kind);
-  return Mu / Math.hypot(q.Mx, q.My);
+  const c = depthForAxial(sec, theta, P, kind);
+  return Number.isFinite(c) ? surfacePoint(sec, theta, c, kind) : null;
+}
+
+/**
+ * Moment utilisation at fixed axial load: |Mu| ÷ the capacity moment in the load's direction on the
+ * contour at P = Pu (the measure the load-contour method approximates). NaN when Pu is out of reach.
+ */
+export function momentUtilisationAtAxial(sec: BiaxialSection, Pu: number, Mux: number, Muy: number, kind: ModelKind = 'design'): number {
+  const q = contourPointAtAngle(sec, Pu, Math.atan2(Muy, Mux), kind);
+  return q === null ? NaN : Math.hypot(Mux, Muy) / Math.hypot(q.Mx, q.My);
 }

@@ -3,3 +3,4 @@ export * from './prepared-section.js';
 export * from './family.js';
 export * from './solve.js';
 export { gaussLegendre } from './gauss.js';
+export * from './biaxial-family.js';
