@@ -81,6 +81,22 @@ export function titleFields(s: Omit<ResolvedSheet, 'title' | 'fileStem'>, units:
   };
 }
 
+/** The axial level's name on biaxial sheets: ν where the basis names it (EN 1992-1-1), else P/(f′c·Ag). */
+export const levelSymbol = (symbols: Pick<BasisSymbols, 'normalisingStress' | 'dimensionlessAxial'>): string => symbols.dimensionlessAxial ?? `P/(${symbols.normalisingStress}·Ag)`;
+
+/** Appended to a biaxial sheet's title: " — Mx–My contours at P/(f′c·Ag) 0–0.3". */
+export function biaxialTitlePart(s: Pick<ResolvedSheet, 'axialLevels'>, symbols: Pick<BasisSymbols, 'normalisingStress' | 'dimensionlessAxial'>): string {
+  const lv = s.axialLevels ?? [];
+  const range = lv.length > 1 ? `${fmt(lv[0]!)}–${fmt(lv[lv.length - 1]!)}` : fmt(lv[0] ?? 0);
+  return ` — Mx–My contours at ${levelSymbol(symbols)} ${range}`;
+}
+
+/** Appended to a biaxial sheet's file stem: "-biaxial-levels-0-0.3". */
+export function biaxialStemPart(s: Pick<ResolvedSheet, 'axialLevels'>): string {
+  const lv = s.axialLevels ?? [];
+  return `-biaxial-levels-${fmt(lv[0] ?? 0)}${lv.length > 1 ? `-to-${fmt(lv[lv.length - 1]!)}` : ''}`;
+}
+
 export const DEFAULT_TITLE_PATTERN = '{shape} column, {fcSymbol} {fc}, {fySymbol} {fy}, γ {gamma}, {arrangement}, {transverse}';
 
 /** Fills {field} placeholders; a non-empty {options} the pattern leaves out is appended, so variant sheets always say so. */

@@ -11,11 +11,11 @@ import { CODE_IDS, type CodeId } from '../codes/types.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import type { UnitSystem } from '../units/index.js';
 import { formatPath, parseOrThrow } from '../input/fields.js';
-import { issueDate, MAX_SHEETS } from '../input/limits.js';
-import { DEFAULT_TITLE_PATTERN, fileStemFor, fillPattern, titleFields } from './describe.js';
+import { issueDate, MAX_AXIAL_LEVELS, MAX_LEVELS_PER_SHEET, MAX_SHEETS } from '../input/limits.js';
+import { biaxialStemPart, biaxialTitlePart, DEFAULT_TITLE_PATTERN, fileStemFor, fillPattern, titleFields } from './describe.js';
 import { expandNumbers } from './expand.js';
 import { checkRules } from './rules.js';
-import { ChartSetFileSchema, type ChartSetFile, type ShapeFile } from './schema.js';
+import { ChartSetFileSchema, type ChartSetFile, type SheetGroupFile, type ShapeFile } from './schema.js';
 import { PAPER_POINTS, type ResolvedChartSet, type ResolvedShape, type ResolvedSheet } from './types.js';
 
 export interface ReadOptions {
@@ -68,11 +68,39 @@ function countOf(v: unknown): number {
   return 1;
 }
 
+/**
+ * Sheets needed for `levels` axial levels: at most MAX_LEVELS_PER_SHEET panels a sheet, the levels shared
+ * evenly (7 levels: 4 + 3), earlier sheets taking the extra one.
+ */
+export function levelSheets(levels: number): number[] {
+  const k = Math.max(1, Math.ceil(levels / MAX_LEVELS_PER_SHEET));
+  return Array.from({ length: k }, (_, i) => Math.floor(levels / k) + (i < levels % k ? 1 : 0));
+}
+
+/**
+ * A group's chart kind, checked before anything is expanded: `axialLevels` belongs to biaxial groups
+ * and biaxial groups need it; returns the kind and the count of levels (1 for uniaxial groups).
+ */
+export function groupChart(g: SheetGroupFile, at: string): { chart: 'uniaxial' | 'biaxial'; levels: number } {
+  const chart = g.chart ?? 'uniaxial';
+  if (chart === 'uniaxial') {
+    if (g.axialLevels !== undefined) throw new PmError(ERROR_CODES.conflict, `${at}.axialLevels`, 'is only for biaxial groups; add "chart": "biaxial" or remove it');
+    return { chart, levels: 1 };
+  }
+  if (g.axialLevels === undefined) throw new PmError(ERROR_CODES.missing, `${at}.axialLevels`, 'is required for a biaxial group (e.g. {"from": 0, "to": 0.6, "step": 0.1})');
+  if (g.axes !== undefined) throw new PmError(ERROR_CODES.conflict, `${at}.axes`, 'is for P–M sheets; biaxial sheets fit their scales to the group’s contours');
+  const levels = countOf(g.axialLevels);
+  if (levels > MAX_AXIAL_LEVELS) throw new PmError(ERROR_CODES.outOfRange, `${at}.axialLevels`, `gives ${levels} levels, beyond ${MAX_AXIAL_LEVELS}`, { allowed: `1–${MAX_AXIAL_LEVELS} levels` });
+  return { chart, levels };
+}
+
 /** Sheets the groups describe, from list lengths only: refused before anything is expanded. */
 export function countSheets(file: ChartSetFile): number {
   let total = 0;
   file.sheets.forEach((g, gi) => {
-    const n = [g.shape, g.fc, g.fy, g.gamma, g.arrangement, g.transverse].reduce<number>((p, v) => p * countOf(v), 1);
+    const { chart, levels } = groupChart(g, `sheets[${gi}]`);
+    const perSection = chart === 'biaxial' ? levelSheets(levels).length : 1;
+    const n = [g.shape, g.fc, g.fy, g.gamma, g.arrangement, g.transverse].reduce<number>((p, v) => p * countOf(v), perSection);
     total += n;
     if (total > MAX_SHEETS) {
       throw new PmError(ERROR_CODES.outOfRange, gi === 0 ? 'sheets' : `sheets[${gi}]`, `describe ${total > 1e6 ? 'more than a million' : total} sheets, beyond ${MAX_SHEETS}`, { allowed: `1–${MAX_SHEETS} sheets` });
@@ -96,7 +124,7 @@ export function resolveChartSet(file: ChartSetFile, opts: ReadOptions = {}): Res
   const families = file.families ?? 'design';
   const familyText = families === 'both' ? 'nominal and factored' : families === 'nominal' ? 'nominal' : 'factored';
   const pattern = file.sheetTitle ?? DEFAULT_TITLE_PATTERN;
-  const symbols = DESIGN_CODES[code]?.symbols ?? { concreteStrength: 'f′c', steelStrength: 'fy' };
+  const symbols = DESIGN_CODES[code]?.symbols ?? { concreteStrength: 'f′c', steelStrength: 'fy', normalisingStress: 'f′c' };
   if (file.rhoG !== undefined && file.omega !== undefined) {
     throw new PmError(ERROR_CODES.conflict, 'omega', 'and rhoG both set the curves; give one of them');
   }
@@ -115,17 +143,30 @@ export function resolveChartSet(file: ChartSetFile, opts: ReadOptions = {}): Res
     const variantOptions = { ...(g.basisOptions ?? {}) };
     const basisOptions = { ...setOptions, ...variantOptions };
     const axes = g.axes ? { ...(g.axes.P ? { P: axisLimits(g.axes.P, `${at}.axes.P`) } : {}), ...(g.axes.M ? { M: axisLimits(g.axes.M, `${at}.axes.M`) } : {}) } : undefined;
+    // biaxial groups: one sheet per run of levels (levelSheets), for every section of the cross product
+    const levelRuns: (Pick<ResolvedSheet, 'chart' | 'axialLevels' | 'levelPart'> | undefined)[] = [undefined];
+    if (g.chart === 'biaxial' && g.axialLevels !== undefined) {
+      const levels = expandNumbers(g.axialLevels, `${at}.axialLevels`);
+      const runs = levelSheets(levels.length);
+      levelRuns.length = 0;
+      let start = 0;
+      runs.forEach((n, k) => {
+        levelRuns.push({ chart: 'biaxial', axialLevels: levels.slice(start, start + n), levelPart: [k + 1, runs.length] });
+        start += n;
+      });
+    }
     for (const shape of shapes)
       for (const fc of fcs)
         for (const fy of fys)
           for (const gamma of gammas)
             for (const arrangement of arrangements)
-              for (const transverse of transverses) partial.push({ index: partial.length + 1, origin: at, shape, fc, fy, gamma, arrangement, transverse, basisOptions, variantOptions, ...(axes ? { axes } : {}) });
+              for (const transverse of transverses)
+                for (const run of levelRuns) partial.push({ index: partial.length + 1, origin: at, shape, fc, fy, gamma, arrangement, transverse, basisOptions, variantOptions, ...(axes ? { axes } : {}), ...(run ?? {}) });
   });
   const sheets: ResolvedSheet[] = partial.map((s) => ({
     ...s,
-    title: capitalise(fillPattern(pattern, titleFields(s, units, familyText, symbols))),
-    fileStem: fileStemFor(s, units, partial.length),
+    title: capitalise(fillPattern(pattern, titleFields(s, units, familyText, symbols))) + (s.chart === 'biaxial' ? biaxialTitlePart(s, symbols) : ''),
+    fileStem: fileStemFor(s, units, partial.length) + (s.chart === 'biaxial' ? biaxialStemPart(s) : ''),
   }));
 
   return {

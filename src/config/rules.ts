@@ -8,7 +8,7 @@ import type { Basis, BasisOptions, DesignCode } from '../codes/types.js';
 import { ERROR_CODES, PmError, isPmError } from '../errors.js';
 import { DISPLAY_UNITS } from '../units/index.js';
 import { expandNumbers } from './expand.js';
-import { ASPECT_RANGE, BARS_PER_FACE_RANGE, ECCENTRICITY_RANGE, GAMMA_RANGE, isCalendarDate, MAX_SHEETS, OMEGA_RANGE, PNG_SCALE_RANGE, RHO_RANGE, RING_BARS_RANGE, SET_CURVES_RANGE } from '../input/limits.js';
+import { ASPECT_RANGE, AXIAL_LEVEL_RANGE, BARS_PER_FACE_RANGE, ECCENTRICITY_RANGE, GAMMA_RANGE, isCalendarDate, MAX_SHEETS, OMEGA_RANGE, PNG_SCALE_RANGE, RHO_RANGE, RING_BARS_RANGE, SET_CURVES_RANGE } from '../input/limits.js';
 import type { ChartSetFile } from './schema.js';
 import type { ResolvedChartSet } from './types.js';
 
@@ -87,6 +87,20 @@ export function checkRules(set: ResolvedChartSet, file: ChartSetFile): RuleRepor
     each(g.shape ?? 'rectangle', 'shape', (s, path) => {
       if (typeof s === 'object' && s.kind === 'rectangle' && s.aspect !== undefined && !inRange(s.aspect, ASPECT_RANGE)) errors.push(outside(`${path}.aspect`, s.aspect, ASPECT_RANGE));
     });
+    if (g.chart === 'biaxial') {
+      // a round section has the same capacity in every direction but for its bars' orientation: no Mx–My family to chart
+      each(g.shape ?? 'rectangle', 'shape', (s, path) => {
+        if (s === 'circle' || (typeof s === 'object' && s.kind === 'circle')) errors.push(new PmError(ERROR_CODES.conflict, path, 'cannot be circular on a biaxial group; biaxial sheets are for rectangular sections', { value: 'circle' }));
+      });
+      if (g.axialLevels !== undefined) {
+        const levels = expandNumbers(g.axialLevels, `${at}.axialLevels`);
+        levels.forEach((v, k) => {
+          const path = Array.isArray(g.axialLevels) ? `${at}.axialLevels[${k}]` : `${at}.axialLevels`;
+          if (!inRange(v, AXIAL_LEVEL_RANGE)) errors.push(outside(path, v, AXIAL_LEVEL_RANGE));
+          else if (k > 0 && !(v > levels[k - 1]!)) errors.push(new PmError(ERROR_CODES.invalidValue, path, 'must be larger than the level before it', { value: v }));
+        });
+      }
+    }
     each(g.arrangement, 'arrangement', (a, path) => {
       if (a.kind === 'ring') {
         if (!inRange(a.bars, RING_BARS_RANGE)) errors.push(outside(`${path}.bars`, a.bars, RING_BARS_RANGE));

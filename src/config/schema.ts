@@ -9,12 +9,14 @@ import { calendarDate, list, quantity, ranged, rangedInt, text } from '../input/
 import {
   ALPHA_CC_RANGE,
   ASPECT_RANGE,
+  AXIAL_LEVEL_RANGE,
   BARS_PER_FACE_RANGE,
   CONCRETE_LAWS,
   ECCENTRICITY_RANGE,
   GAMMA_C_RANGE,
   GAMMA_RANGE,
   GAMMA_S_RANGE,
+  MAX_AXIAL_LEVELS,
   MAX_LIST,
   MAX_NAME_CHARS,
   MAX_TEXT_CHARS,
@@ -71,6 +73,8 @@ export type PaperSize = (typeof PAPER_SIZES)[number];
 export const ORIENTATIONS = ['landscape', 'portrait'] as const;
 export const NORMALISATIONS = ['stress', 'dimensionless'] as const;
 export type Normalisation = (typeof NORMALISATIONS)[number];
+export const CHART_KINDS = ['uniaxial', 'biaxial'] as const;
+export type ChartKind = (typeof CHART_KINDS)[number];
 export const FAMILY_CHOICES = ['design', 'nominal', 'both'] as const;
 export type FamilyChoice = (typeof FAMILY_CHOICES)[number];
 
@@ -102,6 +106,14 @@ const SheetGroup = z
     gamma: z.union([ranged(GAMMA_RANGE), list(ranged(GAMMA_RANGE)), NumberRange(GAMMA_RANGE)]).describe('γ: centre-to-centre distance of the outer bar rows over h'),
     arrangement: oneOrMany(Arrangement).describe('bar arrangement(s)'),
     transverse: oneOrMany(z.enum(['tied', 'spiral'])).describe('transverse reinforcement; default "tied"').optional(),
+    chart: z
+      .enum(CHART_KINDS)
+      .describe('"uniaxial": P–M interaction sheets (default); "biaxial": Mx–My contour sheets of the factored ρg family at each of `axialLevels` (rectangles only)')
+      .optional(),
+    axialLevels: z
+      .union([ranged(AXIAL_LEVEL_RANGE), list(ranged(AXIAL_LEVEL_RANGE), MAX_AXIAL_LEVELS), NumberRange(AXIAL_LEVEL_RANGE)])
+      .describe(`biaxial groups only (and required there): factored axial load over (normalising stress · Ag), P/(f′c·Ag) or ν for EN 1992-1-1; a list or {from, to, step}, at most ${MAX_AXIAL_LEVELS} levels; up to six levels per sheet, more continue on further sheets`)
+      .optional(),
     basisOptions: BasisOptions.describe('basis options for these sheets only, over the set’s basis.options (e.g. a National Annex variant); the sheet titles name them').optional(),
     axes: z
       .object({

@@ -49,6 +49,15 @@ export interface ResolvedSheet {
   variantOptions: BasisOptions;
   /** the sheet group's fixed axis limits, in the sheet's normalised units (absent: fitted to the group's curves) */
   axes?: { P?: [number, number]; M?: [number, number] };
+  /**
+   * 'biaxial': a sheet of Mx–My contour panels, one per axial level of `axialLevels` (absent: a P–M
+   * interaction sheet, as before)
+   */
+  chart?: 'biaxial';
+  /** biaxial sheets: this sheet's axial levels, P/(normalising stress·Ag) (a run of its group's levels) */
+  axialLevels?: number[];
+  /** biaxial sheets: which part of the group's levels this sheet holds, [k, of] (1-based) */
+  levelPart?: [number, number];
   title: string;
   /** file name without extension for sheets/ and tables/ */
   fileStem: string;

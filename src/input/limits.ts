@@ -37,6 +37,15 @@ export const TABLE_CURVES_MAX = 2000;
 export const TABLE_POINTS_RANGE = [400, 20000] as const;
 export const TABLE_ROWS_MAX = 1_000_000;
 
+/**
+ * Axial levels of biaxial sheets: factored P over (normalising stress · Ag), i.e. P/(f′c·Ag) or ν. From
+ * well into tension to beyond any column's axial cap (levels past a ρg's cap simply draw no contour).
+ */
+export const AXIAL_LEVEL_RANGE = [-0.5, 1.2] as const;
+/** Axial levels in one biaxial sheet group, and panels (levels) on one biaxial sheet. */
+export const MAX_AXIAL_LEVELS = 24;
+export const MAX_LEVELS_PER_SHEET = 6;
+
 /** Sheets in one chart set; computed from list lengths before anything is expanded. */
 export const MAX_SHEETS = 5000;
 /** Entries in any list of a chart-set file, and values a {from, to, step} range may give. */
