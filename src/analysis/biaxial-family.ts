@@ -66,6 +66,8 @@ export interface BiaxialFamily {
   gamma: number;
   gammaX: number | undefined;
   model: ModelKind;
+  /** the layout's bars on the unit-depth shape, areas adding to Ag (ρg = 1): scale by ρg for a section's bars */
+  bars: readonly Bar[];
   /** 'first' for layouts symmetric about both axes (one quadrant tells all), else 'all' */
   quadrants: 'first' | 'all';
   levels: readonly number[];
@@ -183,5 +185,5 @@ export function computeBiaxialFamily(req: BiaxialFamilyRequest): BiaxialFamily {
   const sections = req.rhos.map((rho) => prepareBiaxial(req.basis, req.shape, layout(rho), req.capContext ?? {}));
   const stress = req.basis.normalisingStress;
   const contours = req.levels.map((level) => sections.map((sec, k) => biaxialContour(sec, level * stress * ag, angles, model, req.rhos[k]!, level)));
-  return { basis: req.basis, shape: req.shape, arrangement: req.arrangement, gamma: req.gamma, gammaX: req.gammaX, model, quadrants, levels: req.levels, rhos: req.rhos, contours };
+  return { basis: req.basis, shape: req.shape, arrangement: req.arrangement, gamma: req.gamma, gammaX: req.gammaX, model, bars: layout(1), quadrants, levels: req.levels, rhos: req.rhos, contours };
 }

@@ -82,6 +82,11 @@ export interface TemplateParams {
   overlay?: { domainM: [number, number]; domainP: [number, number]; loadRays?: boolean };
   /** Chart sheets: the axes, each ending at a round value beyond the data (src/chart/axes.ts). */
   axes?: SheetAxes;
+  /**
+   * Biaxial sheets: small-multiple panels drawn in page points (src/chart/panel-spec.ts); `layout.plot` is
+   * the panels area and curve rows hold points from its origin. Absent on P–M sheets.
+   */
+  panels?: boolean;
 }
 
 export interface BuiltSheet {
@@ -550,7 +555,8 @@ export function wrap(text: string, w: number, fs: number, measure?: (s: string, 
   return lines;
 }
 
-function header(ctx: SheetContext, g: Deco): void {
+/** The sheet's head: accent bar, title (shrunk or wrapped before any cut) and "sheet n of N". */
+export function header(ctx: Pick<SheetContext, 'sheet' | 'sheetNumber' | 'sheetCount'>, g: Deco): void {
   const { header: b, u } = g.L;
   g.rect({ x: b.x, y: b.y, w: 0.7 * u, h: b.h }, COLOURS.accent);
   const right = `sheet ${ctx.sheetNumber} of ${ctx.sheetCount}`;
@@ -634,6 +640,10 @@ function lookupPanel(ctx: SheetContext, table: LookupTable, primary: FamilyKind,
   g.rule(b.x, y + 0.1 * u, b.x + b.w, y + 0.1 * u, COLOURS.faint, 0.6);
   g.rule(b.x, top, b.x + b.w, top, COLOURS.faint, 0.6);
 }
+
+/** The caution at the foot of every chart sheet's side column. */
+export const SHEET_CAUTION =
+  'For use by qualified engineers only. Check every value against the governing code edition, the project specification and local practice; this sheet does not replace the judgement of the engineer of record.';
 
 /** Side-column variants, largest first: the first whose notes and caution fit the column is drawn. */
 const SIDE_FITS: { picture: number; notes: TextStyle }[] = [
@@ -734,8 +744,7 @@ function sideColumn(ctx: SheetContext, g: Deco, fit: { picture: number; notes: T
     y = g.paragraph(fit.notes, b.x + 1.0 * u, y, b.w - 1.0 * u, note) + 0.3 * u;
   }
   // caution, pinned to the bottom of the column
-  const caution =
-    'For use by qualified engineers only. Check every value against the governing code edition, the project specification and local practice; this sheet does not replace the judgement of the engineer of record.';
+  const caution = SHEET_CAUTION;
   const lines = wrap(caution, b.w - 2 * u, g.size('caution'), (t, f) => g.measure(t, f, true));
   const ch = lines.length * g.size('caution') * 1.35 + 1.4 * u;
   const cTop = Math.max(y + 0.5 * u, b.y + b.h - ch);
@@ -783,6 +792,12 @@ function titleBlock(ctx: SheetContext, g: Deco): void {
   // narrow pages: the crowded rows split in two, so no value is cut
   const rows: [string, string, number][][] =
     (g.L.titleRows ?? 3) >= 5 ? [[sheetRow[0]!, sheetRow[1]!, people[2]!, people[3]!, sheetRow[3]!], [sheetRow[2]!], section, [people[0]!, people[1]!, people[4]!, norm[1]!], [...factors, norm[0]!]] : [sheetRow, [...section, ...people], [...factors, ...norm]];
+  drawTitleBlock(g, rows);
+}
+
+/** Title-block cells [caption, value, width weight] row by row, in the sheet layout's title-block box. */
+export function drawTitleBlock(g: Deco, rows: [string, string, number][][]): void {
+  const { titleBlock: b, u } = g.L;
   g.rect(b, COLOURS.paper, COLOURS.ink, 0.9);
   const rowH = b.h / rows.length;
   rows.forEach((cells, r) => {

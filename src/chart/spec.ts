@@ -7,6 +7,7 @@
 import type { SheetData, TemplateParams } from './sheet-data.js';
 import { tickFormat, tickValues } from './axes.js';
 import { chartConfig, COLOURS, round2, TEXT_STYLES, type TextStyle } from './style.js';
+import { panelTemplate } from './panel-spec.js';
 
 export type VlSpec = Record<string, unknown>;
 export const DATASET_NAMES = ['curves', 'curveLabels', 'refs', 'refLabels', 'frame', 'texts', 'rects', 'rules', 'dots', 'rings'] as const satisfies readonly (keyof SheetData)[];
@@ -25,6 +26,7 @@ const lit = (field: string) => ({ field, type: 'nominal' as const, scale: null }
 const z = { field: 'z', type: 'quantitative' as const };
 
 export function sheetTemplate(t: TemplateParams): VlSpec {
+  if (t.panels) return panelTemplate(t);
   const { layout: L } = t;
   const u = L.u;
   const o = t.overlay;

@@ -1,5 +1,7 @@
 /** Stage "resolved set → curves": the core's family for one sheet (pure). */
+import { computeBiaxialFamily, type BiaxialFamily } from '../analysis/biaxial-family.js';
 import { computeFamily, type CurveFamily } from '../analysis/family.js';
+import { biaxialExtent } from '../chart/biaxial-sheet.js';
 import { rhoFromOmega } from '../codes/mechanical-ratio.js';
 import { resolveBasis } from '../codes/registry.js';
 import type { Basis } from '../codes/types.js';
@@ -40,6 +42,12 @@ export function familyForSheet(set: ResolvedChartSet, sheet: ResolvedSheet): Cur
   return computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: sheetRhos(set, basis), basePoints: SHEET_BASE_POINTS });
 }
 
+/** The Mx–My contour family of a biaxial sheet: the sheet's axial levels × the set's ρg (or ω) family, factored. */
+export function biaxialFamilyForSheet(set: ResolvedChartSet, sheet: ResolvedSheet, rhos?: readonly number[]): BiaxialFamily {
+  const basis = basisForSheet(set, sheet);
+  return computeBiaxialFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: rhos ?? sheetRhos(set, basis), levels: sheet.axialLevels ?? [], model: 'design' });
+}
+
 /**
  * One extent per sheet group (keyed by ResolvedSheet.origin): the envelope of its sheets' outermost
  * curves (the largest ratio), so every sheet of a group is drawn to the same scale.
@@ -51,8 +59,15 @@ export function groupExtents(set: ResolvedChartSet): Record<string, AxisExtent> 
     const basis = basisForSheet(set, sheet);
     const rhos = sheetRhos(set, basis);
     const outer = Math.max(...rhos);
-    const f = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: [outer], basePoints: SHEET_BASE_POINTS });
     const d = set.normalisation === 'dimensionless' ? basis.normalisingStress : 1;
+    if (sheet.chart === 'biaxial') {
+      // the largest ratio's contour encloses the others at every level
+      const list = byGroup.get(sheet.origin) ?? [];
+      list.push(biaxialExtent(biaxialFamilyForSheet(set, sheet, [outer]), d));
+      byGroup.set(sheet.origin, list);
+      continue;
+    }
+    const f = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: [outer], basePoints: SHEET_BASE_POINTS });
     const list = byGroup.get(sheet.origin) ?? [];
     list.push(familyExtent(f, families, d));
     byGroup.set(sheet.origin, list);

@@ -5,13 +5,15 @@
  */
 import { join } from 'node:path';
 import { tableCsv } from '../chart/lookup-table.js';
-import { buildSheet, primaryFamily } from '../chart/sheet-data.js';
+import { buildSheet, primaryFamily, type SheetData, type TemplateParams } from '../chart/sheet-data.js';
 import type { ResolvedChartSet } from '../config/types.js';
 import type { AxisExtent } from '../chart/axes.js';
 import type { SheetRenderer } from '../render/renderer.js';
-import { familyForSheet } from './curves.js';
+import { biaxialTableCsv } from '../chart/biaxial-table.js';
+import { buildBiaxialSheet } from '../chart/biaxial-sheet.js';
+import { biaxialFamilyForSheet, familyForSheet } from './curves.js';
 import { writeFileAtomic } from './files.js';
-import { tableJson } from './tables.js';
+import { biaxialTableJson, tableJson } from './tables.js';
 
 /** Sheets per chunk PDF. */
 export const CHUNK_SIZE = 50;
@@ -52,12 +54,25 @@ export async function renderChunk(task: ChunkTask, renderer: SheetRenderer, onSh
     // a render process whose parent has gone stops between sheets (worker.ts exits on disconnect)
     if (process.send !== undefined && !process.connected) throw new Error('the parent process has gone');
     const sheet = set.sheets[i]!;
-    const family = familyForSheet(set, sheet);
     const extent = task.extents?.[sheet.origin];
-    const built = buildSheet({ set, sheet, family, sheetNumber: i + 1, sheetCount: set.sheets.length, generator, measureText: renderer.measureText, ...(extent ? { extent } : {}) });
-    if (out.tables) {
-      writeFileAtomic(join(staging, 'tables', `${sheet.fileStem}.csv`), tableCsv(built.table));
-      writeFileAtomic(join(staging, 'tables', `${sheet.fileStem}.json`), tableJson(set, sheet, family.basis, built.table, primaryFamily(set), generator));
+    const common = { set, sheet, sheetNumber: i + 1, sheetCount: set.sheets.length, generator, measureText: renderer.measureText, ...(extent ? { extent } : {}) };
+    let built: { template: TemplateParams; data: SheetData };
+    if (sheet.chart === 'biaxial') {
+      const family = biaxialFamilyForSheet(set, sheet);
+      const b = buildBiaxialSheet({ ...common, family });
+      if (out.tables) {
+        writeFileAtomic(join(staging, 'tables', `${sheet.fileStem}.csv`), biaxialTableCsv(b.table));
+        writeFileAtomic(join(staging, 'tables', `${sheet.fileStem}.json`), biaxialTableJson(set, sheet, family, b.table, generator));
+      }
+      built = b;
+    } else {
+      const family = familyForSheet(set, sheet);
+      const b = buildSheet({ ...common, family });
+      if (out.tables) {
+        writeFileAtomic(join(staging, 'tables', `${sheet.fileStem}.csv`), tableCsv(b.table));
+        writeFileAtomic(join(staging, 'tables', `${sheet.fileStem}.json`), tableJson(set, sheet, family.basis, b.table, primaryFamily(set), generator));
+      }
+      built = b;
     }
     const page = { template: built.template, data: built.data };
     if (out.svg) writeFileAtomic(join(staging, 'sheets', `${sheet.fileStem}.svg`), await renderer.svg(page));

@@ -7,6 +7,10 @@ import type { ResolvedChartSet, ResolvedSheet } from '../config/types.js';
 import type { Basis } from '../codes/types.js';
 import { keyPointRecord, type FamilyKind, type LookupTable } from '../chart/lookup-table.js';
 import { DISPLAY_UNITS } from '../units/index.js';
+import type { BiaxialFamily } from '../analysis/biaxial-family.js';
+import { BIAXIAL_TABLE_COLUMNS, biaxialCellRecord, type BiaxialTable } from '../chart/biaxial-table.js';
+import { levelSymbol } from '../config/describe.js';
+import { sig } from '../chart/lookup-table.js';
 
 export function tableJson(set: ResolvedChartSet, sheet: ResolvedSheet, basis: Basis, table: LookupTable, primary: FamilyKind, generator: string): string {
   const dimless = set.normalisation === 'dimensionless';
@@ -37,6 +41,53 @@ export function tableJson(set: ResolvedChartSet, sheet: ResolvedSheet, basis: Ba
       rho_g: Number(r.rhoG.toPrecision(6)),
       ...(r.omega !== undefined ? { omega: r.omega } : {}),
       key_points: r.points.map(keyPointRecord),
+    })),
+  };
+  return `${JSON.stringify(doc, null, 2)}\n`;
+}
+
+/**
+ * tables/*.json of a biaxial sheet: its parameters, and per ρg and axial level the uniaxial capacities
+ * Mxo, Myo and the fitted load-contour exponent α with its worst radial misfit (null where the level is
+ * beyond the ρg's reach). The contour points are in the CSV beside it (`csvColumns`).
+ */
+export function biaxialTableJson(set: ResolvedChartSet, sheet: ResolvedSheet, family: BiaxialFamily, table: BiaxialTable, generator: string): string {
+  const basis = family.basis;
+  const sy = basis.symbols;
+  const dimless = set.normalisation === 'dimensionless';
+  const ns = sy.normalisingStress;
+  const doc = {
+    generator,
+    set: set.name,
+    sheet: {
+      index: sheet.index,
+      title: sheet.title,
+      chart: 'biaxial',
+      shape: describeShape(sheet.shape),
+      fc: sheet.fc,
+      fy: sheet.fy,
+      basisOptions: sheet.basisOptions,
+      gamma: sheet.gamma,
+      ...(family.gammaX !== undefined ? { gammaB: family.gammaX } : {}),
+      arrangement: { ...sheet.arrangement, text: describeArrangement(sheet.arrangement) },
+      transverse: sheet.transverse,
+      axial_levels: table.levels.map((v) => sig(v) + 0),
+    },
+    basis: { code: basis.code, title: basis.title, factors: basis.factorSummary, symbols: sy },
+    units: set.units,
+    normalisation: set.normalisation,
+    valueUnit: dimless ? 'dimensionless' : DISPLAY_UNITS[set.units].stress,
+    values: dimless ? `${sy.designMoment}x/(${ns}·Ag·h) and ${sy.designMoment}y/(${ns}·Ag·b)` : `${sy.designMoment}x/(Ag·h) and ${sy.designMoment}y/(Ag·b)`,
+    axialLevel: `${levelSymbol(sy)}: factored axial load over ${ns}·Ag, compression positive`,
+    sheetShows: 'design',
+    quadrants: family.quadrants,
+    loadContour: '(Mx/Mxo)^alpha + (My/Myo)^alpha = 1, alpha by least squares on the contour radius (Bresler 1960); misfit: worst |r/r_fit - 1|',
+    csvColumns: [...BIAXIAL_TABLE_COLUMNS],
+    curvesBy: set.ratios.kind,
+    curves: table.rhos.map((rho, k) => ({
+      rho_g: Number(rho.toPrecision(6)),
+      ...(table.omegas ? { omega: table.omegas[k] } : {}),
+      levels: table.cells[k]!.map(biaxialCellRecord),
     })),
   };
   return `${JSON.stringify(doc, null, 2)}\n`;
