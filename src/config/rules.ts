@@ -90,7 +90,7 @@ export function checkRules(set: ResolvedChartSet, file: ChartSetFile): RuleRepor
     if (g.chart === 'biaxial') {
       // a round section has the same capacity in every direction but for its bars' orientation: no Mx–My family to chart
       each(g.shape ?? 'rectangle', 'shape', (s, path) => {
-        if (s === 'circle' || (typeof s === 'object' && s.kind === 'circle')) errors.push(new PmError(ERROR_CODES.conflict, path, 'cannot be circular on a biaxial group; biaxial sheets are for rectangular sections', { value: 'circle' }));
+        if (s === 'circle' || (typeof s === 'object' && s.kind === 'circle')) errors.push(new PmError(ERROR_CODES.conflict, path, 'has no biaxial sheets; they are for rectangular sections', { value: 'circle' }));
       });
       if (g.axialLevels !== undefined) {
         const levels = expandNumbers(g.axialLevels, `${at}.axialLevels`);
