@@ -61,7 +61,7 @@ interface PanelGrid {
 /** Room around a panel's plot, in type units: tick labels left and below, the axis name above. */
 const PAD = { left: 3.6, right: 1.4, top: 2.6, bottom: 3.4 } as const;
 /** A panel's plot is at most this much wider than tall, or taller than wide (contours keep their shape near enough). */
-const MAX_PANEL_ASPECT = 1.5;
+const MAX_PANEL_ASPECT = 1.3;
 
 /** The grid of `n` panels in a w × h area whose plots are largest (ties: fewer rows). */
 export function panelGrid(n: number, w: number, h: number, u: number): PanelGrid {
@@ -128,15 +128,20 @@ function panels(ctx: BiaxialSheetContext, g: Deco, d: number): void {
   const { plot: area, u } = g.L;
   const n = family.levels.length;
   const sy = family.basis.symbols;
-  // the colour key of the ρg family across the top
+  // the colour key of the ρg family across the top (the heading left out where the key needs the room)
   const keyH = 2.0 * u;
+  const head = `${sy.designFamily.charAt(0).toUpperCase()}${sy.designFamily.slice(1)} Mx–My contours`;
+  const sym = `${RATIO_SYMBOL[set.ratios.kind]}:`;
+  const values = family.rhos.map((rho, k) => curveKeyText(set, rho, k).replace(/^\S+ /, ''));
+  const keyW = g.width('body', sym) + 0.8 * u + values.reduce((w, t) => w + 3.4 * u + g.width('body', t), 0);
   let kx = area.x;
-  g.text('heading', kx, area.y + 1.1 * u, `${sy.designFamily} Mx–My contours`);
-  kx += g.width('heading', `${sy.designFamily} Mx–My contours`) + 2.0 * u;
-  g.text('body', kx, area.y + 1.1 * u, `${RATIO_SYMBOL[set.ratios.kind]}:`);
-  kx += g.width('body', `${RATIO_SYMBOL[set.ratios.kind]}:`) + 0.8 * u;
-  family.rhos.forEach((rho, k) => {
-    const text = curveKeyText(set, rho, k).replace(/^\S+ /, '');
+  if (g.width('heading', head) + 2.0 * u + keyW <= area.w) {
+    g.text('heading', kx, area.y + 1.1 * u, head);
+    kx += g.width('heading', head) + 2.0 * u;
+  }
+  g.text('body', kx, area.y + 1.1 * u, sym);
+  kx += g.width('body', sym) + 0.8 * u;
+  values.forEach((text, k) => {
     g.rule(kx, area.y + 0.8 * u, kx + 1.8 * u, area.y + 0.8 * u, curveColour(k, family.rhos.length), 2.2);
     g.text('body', kx + 2.2 * u, area.y + 1.1 * u, text);
     kx += 2.2 * u + g.width('body', text) + 1.2 * u;
@@ -145,44 +150,84 @@ function panels(ctx: BiaxialSheetContext, g: Deco, d: number): void {
   // one scale for every panel: the group's extent, to the next round value
   const own = biaxialExtent(family, d);
   const ext = ctx.extent ?? own;
-  const hi = Math.max(ext.M[1], ext.P[1], own.M[1], own.P[1]);
-  const lo = family.quadrants === 'first' ? 0 : Math.min(ext.M[0], ext.P[0], own.M[0], own.P[0], -hi);
-  const top = family.quadrants === 'first' ? hi : Math.max(hi, -lo);
+  // each axis to its own round end (mx and my are normalised by different sizes on rectangles)
   const ticks = Math.max(3, Math.min(8, Math.floor(Math.min(grid.w, grid.h) / (3.4 * u))));
-  const step = roundStep(top - (family.quadrants === 'first' ? 0 : -top), ticks);
-  const dom: [number, number] = family.quadrants === 'first' ? [0, Math.ceil(top / step - 1e-9) * step] : [-Math.ceil(top / step - 1e-9) * step, Math.ceil(top / step - 1e-9) * step];
-  const scale: AxisScale = { domain: dom, step };
+  const axis = (lo: number, hi: number): AxisScale => {
+    const top = family.quadrants === 'first' ? hi : Math.max(hi, -lo);
+    const step = roundStep(family.quadrants === 'first' ? top : 2 * top, ticks);
+    const end = Math.max(step, Math.ceil(top / step - 1e-9) * step);
+    return { domain: family.quadrants === 'first' ? [0, end] : [-end, end], step };
+  };
+  const scale = { x: axis(Math.min(ext.M[0], own.M[0]), Math.max(ext.M[1], own.M[1])), y: axis(Math.min(ext.P[0], own.P[0]), Math.max(ext.P[1], own.P[1])) };
   const names = axisNames(set, family);
+  // panels packed from the top left; room left below them takes the reading notes
+  const cellH = grid.h + (PAD.top + PAD.bottom) * u;
   family.levels.forEach((level, i) => {
     const col = i % grid.cols;
     const row = Math.floor(i / grid.cols);
     const x0 = area.x + col * grid.cellW + PAD.left * u;
-    const y0 = area.y + keyH + row * grid.cellH + PAD.top * u;
+    const y0 = area.y + keyH + row * cellH + PAD.top * u;
     panel(ctx, g, { x: x0, y: y0, w: grid.w, h: grid.h }, scale, level, i, family.contours[i]!, names, d);
+  });
+  readingNotes(ctx, g, area.y + keyH + grid.rows * cellH + 0.6 * u, area.y + area.h);
+}
+
+/** How to read a load off the sheet, where the panels leave room below them (dropped when they do not). */
+function readingNotes(ctx: BiaxialSheetContext, g: Deco, top: number, bottom: number): void {
+  const { set, family } = ctx;
+  const { plot: area, u } = g.L;
+  const sy = family.basis.symbols;
+  const P = sy.actionAxial ?? 'Pu';
+  const M = sy.actionMoment ?? 'Mu';
+  const ns = sy.normalisingStress;
+  const dimless = set.normalisation === 'dimensionless';
+  const by = (x: string) => (dimless ? `(${ns}·${x})` : `(${x})`);
+  const key = RATIO_SYMBOL[set.ratios.kind];
+  const steps = [
+    `1. Normalise the factored load: level ${P}/(${ns}·Ag); mx = ${M}x/${by('Ag·h')} and my = ${M}y/${by('Ag·b')}, with h along y and b along x.`,
+    `2. Take the panels whose levels bracket the load's. In each, the point (|mx|, |my|) lies inside the contour of every ${key} that carries the load; interpolate between contours, then linearly between the two levels.`,
+    `3. No contour of a ${key} at a level: the level is above that ${key}'s axial cap, which cannot carry the load.`,
+    '4. The fitted α is a least-squares average: the exact contour lies up to the misfit inside or outside the fitted curve, so a check with α is only as close as its misfit; read final values off the drawn contours.',
+  ];
+  const fs = g.size('bodySmall');
+  const colW = (area.w - 2.0 * u) / 2;
+  const cols = [steps.slice(0, 2), steps.slice(2)];
+  const need = 1.6 * u + Math.max(...cols.map((c) => c.reduce((n, t) => n + wrap(t, colW, fs, (s, f) => g.measure(s, f, false)).length * fs * 1.38 + 0.3 * u, 0)));
+  if (bottom - top < need) return;
+  g.rule(area.x, top, area.x + area.w, top, COLOURS.rule, 0.6);
+  g.text('heading', area.x, top + 1.3 * u, 'Reading a load off this sheet');
+  cols.forEach((c, k) => {
+    let y = top + 2.7 * u;
+    for (const t of c) y = g.paragraph('bodySmall', area.x + k * (colW + 2.0 * u), y, colW, t) + 0.3 * u;
   });
 }
 
 /** Decimals of a tick format ".2f" → 2. */
 const decimals = (s: AxisScale): number => Number(tickFormat(s).slice(1, -1));
 
-function panel(ctx: BiaxialSheetContext, g: Deco, b: Box, s: AxisScale, level: number, levelIndex: number, contours: readonly BiaxialContour[], names: { x: string; y: string; unit: string }, d: number): void {
+function panel(ctx: BiaxialSheetContext, g: Deco, b: Box, s: { x: AxisScale; y: AxisScale }, level: number, levelIndex: number, contours: readonly BiaxialContour[], names: { x: string; y: string; unit: string }, d: number): void {
   const { family, set } = ctx;
   const u = g.L.u;
-  const [lo, hi] = s.domain;
-  const X = (v: number) => b.x + ((v - lo) / (hi - lo)) * b.w;
-  const Y = (v: number) => b.y + b.h - ((v - lo) / (hi - lo)) * b.h;
-
+  const [x0, x1] = s.x.domain;
+  const [y0, y1] = s.y.domain;
+  const X = (v: number) => b.x + ((v - x0) / (x1 - x0)) * b.w;
+  const Y = (v: number) => b.y + b.h - ((v - y0) / (y1 - y0)) * b.h;
   // grid, axes through the origin, frame
-  const dec = decimals(s);
-  for (let k = Math.ceil(lo / s.step - 1e-9); k * s.step <= hi + 1e-9 * s.step; k++) {
-    const v = Number((k * s.step).toFixed(10)) + 0;
-    const zero = Math.abs(v) < 1e-12;
+  const ticks = (a: AxisScale, draw: (v: number, text: string, zero: boolean) => void) => {
+    const dec = decimals(a);
+    for (let k = Math.ceil(a.domain[0] / a.step - 1e-9); k * a.step <= a.domain[1] + 1e-9 * a.step; k++) {
+      const v = Number((k * a.step).toFixed(10)) + 0;
+      draw(v, v.toFixed(dec), Math.abs(v) < 1e-12);
+    }
+  };
+  ticks(s.x, (v, t, zero) => {
     g.rule(X(v), b.y, X(v), b.y + b.h, zero ? COLOURS.muted : '#e4e9ed', zero ? 0.7 : 0.5);
-    g.rule(b.x, Y(v), b.x + b.w, Y(v), zero ? COLOURS.muted : '#e4e9ed', zero ? 0.7 : 0.5);
-    const t = v.toFixed(dec);
     g.text('dim', X(v), b.y + b.h + 1.1 * u, t);
+  });
+  ticks(s.y, (v, t, zero) => {
+    g.rule(b.x, Y(v), b.x + b.w, Y(v), zero ? COLOURS.muted : '#e4e9ed', zero ? 0.7 : 0.5);
     g.text('dim', b.x - 0.5 * u - g.width('dim', t) / 2, Y(v) + 0.3 * u, t);
-  }
+  });
   g.rect(b, 'transparent', COLOURS.faint, 0.7);
   g.text('dimLeft', b.x + b.w - g.width('dimLeft', `${names.x} →`), b.y + b.h + 2.3 * u, `${names.x} →`);
   g.text('dimLeft', b.x - 3.2 * u, b.y - 1.1 * u, `↑ ${names.y}`);
