@@ -152,6 +152,7 @@ function drawCover(page: PDFPage, input: BookInput, regular: PDFFont, bold: PDFF
     ['γ', gammas],
     [`${RATIO_SYMBOL[set.ratios.kind]} family`, set.ratios.values.map((r) => fmt(r, 4)).join(', ') + (set.ratios.kind === 'omega' ? '  (ω = As·fyd/(Ac·fcd); ρg per sheet)' : '')],
     ['Curves', set.families === 'both' ? `${input.symbols.nominalFamily} and ${input.symbols.designFamily}` : set.families === 'design' ? input.symbols.designFamily : input.symbols.nominalFamily],
+    ...biaxialCoverLine(set, input.symbols),
     ...input.factorGroups.map((g, k): [string, string] => [
       k === 0 ? 'Factors' : '',
       input.factorGroups.length === 1 ? g.summary : `${g.summary}: sheet${g.sheets.length === 1 ? '' : 's'} ${sheetRanges(g.sheets)}`,
@@ -269,4 +270,10 @@ export async function fixPdfMetadata(bytes: Uint8Array, m: { title: string; subj
   doc.setCreationDate(date);
   doc.setModificationDate(date);
   return doc.save({ useObjectStreams: true });
+}
+
+/** The cover's line about biaxial sheets, where the set has any: how many, and that they show factored Mx–My contours. */
+function biaxialCoverLine(set: BookInput['set'], symbols: BookInput['symbols']): [string, string][] {
+  const n = set.sheets.filter((s) => s.chart === 'biaxial').length;
+  return n === 0 ? [] : [['Biaxial sheets', `${n} of ${set.sheets.length}: ${symbols.designFamily} Mx–My contours per axial level`]];
 }

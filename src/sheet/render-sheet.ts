@@ -7,7 +7,8 @@ import { buildSheet } from '../chart/sheet-data.js';
 import type { CapContext } from '../codes/types.js';
 import type { ResolvedChartSet } from '../config/types.js';
 import { generatorLabel } from '../version.js';
-import { basisForSheet, SHEET_BASE_POINTS, sheetRhos, sheetShape } from './curves.js';
+import { buildBiaxialSheet } from '../chart/biaxial-sheet.js';
+import { basisForSheet, biaxialFamilyForSheet, SHEET_BASE_POINTS, sheetRhos, sheetShape } from './curves.js';
 
 export type SheetFormat = 'svg' | 'png' | 'pdf';
 
@@ -16,11 +17,14 @@ export async function renderSheet(set: ResolvedChartSet, index = 0, format: Shee
   const sheet = set.sheets[index];
   if (!sheet) throw new RangeError(`sheet ${index} is not in the set (it has ${set.sheets.length})`);
   const basis = basisForSheet(set, sheet);
-  const family = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: sheetRhos(set, basis), capContext: opts.capContext ?? {}, basePoints: SHEET_BASE_POINTS });
   const { SheetRenderer } = await import('../render/renderer.js');
   const renderer = await SheetRenderer.create();
   try {
-    const built = buildSheet({ set, sheet, family, sheetNumber: index + 1, sheetCount: set.sheets.length, generator: generatorLabel(), measureText: renderer.measureText });
+    const common = { set, sheet, sheetNumber: index + 1, sheetCount: set.sheets.length, generator: generatorLabel(), measureText: renderer.measureText };
+    const built =
+      sheet.chart === 'biaxial'
+        ? buildBiaxialSheet({ ...common, family: biaxialFamilyForSheet(set, sheet) })
+        : buildSheet({ ...common, family: computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: sheetRhos(set, basis), capContext: opts.capContext ?? {}, basePoints: SHEET_BASE_POINTS }) });
     const page = { template: built.template, data: built.data };
     if (format === 'svg') return await renderer.svg(page);
     if (format === 'png') return await renderer.png(page, 2);
