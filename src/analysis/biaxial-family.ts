@@ -95,6 +95,10 @@ export function contourAngles(quadrants: 'first' | 'all', stepDeg: number): numb
 export const loadContourRadius = (phi: number, alpha: number): number =>
   (Math.abs(Math.cos(phi)) ** alpha + Math.abs(Math.sin(phi)) ** alpha) ** (-1 / alpha);
 
+/** Ends of the search for α (a fit at the upper end means "at least this": a near-rectangular contour). */
+export const ALPHA_SEARCH_MIN = 0.5;
+export const ALPHA_SEARCH_MAX = 6;
+
 /**
  * Least-squares α of (Mx/Mxo)^α + (My/Myo)^α = 1 over the points (u, v) = (Mx/Mxo, My/Myo), each quadrant
  * scaled by its own axis capacities: minimises Σ (r/rα − 1)² on the radius (golden section on α in
@@ -105,8 +109,8 @@ export function fitLoadContour(points: readonly { u: number; v: number }[]): { a
   if (pts.length === 0) return { alpha: NaN, misfit: NaN };
   const polar = pts.map((p) => ({ r: Math.hypot(p.u, p.v), phi: Math.atan2(Math.abs(p.v), Math.abs(p.u)) }));
   const sse = (a: number) => polar.reduce((s, q) => s + (q.r / loadContourRadius(q.phi, a) - 1) ** 2, 0);
-  let lo = 0.5;
-  let hi = 6;
+  let lo = ALPHA_SEARCH_MIN;
+  let hi = ALPHA_SEARCH_MAX;
   const g = (Math.sqrt(5) - 1) / 2;
   let x1 = hi - g * (hi - lo);
   let x2 = lo + g * (hi - lo);

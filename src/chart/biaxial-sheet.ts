@@ -5,7 +5,7 @@
  * area's origin; the vega-lite template is src/chart/panel-spec.ts. Pure: formats the family, computes
  * no capacity.
  */
-import type { BiaxialContour, BiaxialFamily } from '../analysis/biaxial-family.js';
+import { ALPHA_SEARCH_MAX, type BiaxialContour, type BiaxialFamily } from '../analysis/biaxial-family.js';
 import { describeArrangement, describeShape, describeTransverse, fmt, levelSymbol, stressText } from '../config/describe.js';
 import type { ResolvedChartSet, ResolvedSheet } from '../config/types.js';
 import { RATIO_SYMBOL } from '../config/types.js';
@@ -328,7 +328,9 @@ function lookupPanel(ctx: BiaxialSheetContext, t: BiaxialTable, g: Deco): void {
     g.text('cellRho', b.x + 0.6 * u, base, t.omegas ? fmt(t.omegas[k]!, 4) : fmt(rho, 4));
     t.cells[k]!.forEach((c, i) => {
       let cx = b.x + rhoW + i * groupW;
-      const vals = c.reachable ? [c.mxo.toFixed(3), c.myo.toFixed(3), `${c.alpha.toFixed(2)} (${(100 * c.misfit).toFixed(1)}%)`] : ['—', '—', '—'];
+      // α at the fit's upper search end (6) says "at least": a near-rectangular contour (small ρg in tension)
+      const alpha = c.alpha >= ALPHA_SEARCH_MAX - 0.01 ? `≥${ALPHA_SEARCH_MAX}` : c.alpha.toFixed(2);
+      const vals = c.reachable ? [c.mxo.toFixed(3), c.myo.toFixed(3), `${alpha} (${(100 * c.misfit).toFixed(1)}%)`] : ['—', '—', '—'];
       vals.forEach((v, j) => {
         g.text('cellRight', cx + colW[j]! - 0.5 * u, base, v);
         cx += colW[j]!;

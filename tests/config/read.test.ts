@@ -24,7 +24,7 @@ const minimal = {
 describe('readChartSet', () => {
   it('resolves the demo set (snapshot of the resolved set)', () => {
     const set = readChartSet(demoText);
-    expect(set.sheets).toHaveLength(12);
+    expect(set.sheets).toHaveLength(14);
     expect(set).toMatchSnapshot();
   });
 
