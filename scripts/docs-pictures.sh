@@ -17,3 +17,12 @@ node bin/pmchart.js check --fc 5 --fy 60 --b 18 --h 22 --arrangement four-faces 
 pdftoppm -png -r 110 -singlefile "$tmp/c14.pdf" docs/check-report-sample
 pdftoppm -png -r 110 -singlefile "$tmp/c7.pdf" docs/check-report-biaxial-sample
 echo "docs/check-report-sample.png docs/check-report-biaxial-sample.png"
+# The README's biaxial sheet picture: the first biaxial sheet of the demo set (sheet 13), from its book at 60 dpi.
+node bin/pmchart.js set charts-config/demo.json --out "$tmp" --no-progress >/dev/null
+book="$tmp/quarry-lane-market-hall/book.pdf"
+pages=$(pdfinfo "$book" | awk '/^Pages:/ {print $2}')
+# sheets follow the cover and index pages: page = pages − sheets + the sheet's position
+sheets=$(ls "$tmp/quarry-lane-market-hall/tables" | grep -c '\.json$')
+first=$(ls "$tmp/quarry-lane-market-hall/tables" | grep '\.json$' | grep -n biaxial | head -1 | cut -d: -f1)
+pdftoppm -png -r 60 -singlefile -f $((pages - sheets + first)) -l $((pages - sheets + first)) "$book" docs/sheet-biaxial-sample
+echo "docs/sheet-biaxial-sample.png"

@@ -151,12 +151,17 @@ function panels(ctx: BiaxialSheetContext, g: Deco, d: number): void {
   const own = biaxialExtent(family, d);
   const ext = ctx.extent ?? own;
   // each axis to its own round end (mx and my are normalised by different sizes on rectangles)
-  const ticks = Math.max(3, Math.min(8, Math.floor(Math.min(grid.w, grid.h) / (3.4 * u))));
+  // the round step (1, 2, 2.5, 5 × 10^k) whose axis end overshoots the data least, ticks at least 2.6 type units apart
+  const most = Math.max(3, Math.min(10, Math.floor(Math.min(grid.w, grid.h) / (2.6 * u))));
   const axis = (lo: number, hi: number): AxisScale => {
     const top = family.quadrants === 'first' ? hi : Math.max(hi, -lo);
-    const step = roundStep(family.quadrants === 'first' ? top : 2 * top, ticks);
-    const end = Math.max(step, Math.ceil(top / step - 1e-9) * step);
-    return { domain: family.quadrants === 'first' ? [0, end] : [-end, end], step };
+    let best: AxisScale | undefined;
+    for (let k = 3; k <= most; k++) {
+      const step = roundStep(family.quadrants === 'first' ? top : 2 * top, k);
+      const end = Math.max(step, Math.ceil(top / step - 1e-9) * step);
+      if (!best || end < best.domain[1] - 1e-12) best = { domain: family.quadrants === 'first' ? [0, end] : [-end, end], step };
+    }
+    return best!;
   };
   const scale = { x: axis(Math.min(ext.M[0], own.M[0]), Math.max(ext.M[1], own.M[1])), y: axis(Math.min(ext.P[0], own.P[0]), Math.max(ext.P[1], own.P[1])) };
   const names = axisNames(set, family);
