@@ -151,7 +151,7 @@ function panels(ctx: BiaxialSheetContext, g: Deco, d: number): void {
   const own = biaxialExtent(family, d);
   const ext = ctx.extent ?? own;
   // each axis to its own round end (mx and my are normalised by different sizes on rectangles)
-  // the round step (1, 2, 2.5, 5 × 10^k) whose axis end overshoots the data least, ticks at least 2.6 type units apart
+  // the round step (1, 2, 2.5, 5 × 10^k) whose axis end overshoots the data least (the finer on a tie), ticks at least 2.6 type units apart
   const most = Math.max(3, Math.min(10, Math.floor(Math.min(grid.w, grid.h) / (2.6 * u))));
   const axis = (lo: number, hi: number): AxisScale => {
     const top = family.quadrants === 'first' ? hi : Math.max(hi, -lo);
@@ -159,7 +159,7 @@ function panels(ctx: BiaxialSheetContext, g: Deco, d: number): void {
     for (let k = 3; k <= most; k++) {
       const step = roundStep(family.quadrants === 'first' ? top : 2 * top, k);
       const end = Math.max(step, Math.ceil(top / step - 1e-9) * step);
-      if (!best || end < best.domain[1] - 1e-12) best = { domain: family.quadrants === 'first' ? [0, end] : [-end, end], step };
+      if (!best || end <= best.domain[1] + 1e-12) best = { domain: family.quadrants === 'first' ? [0, end] : [-end, end], step };
     }
     return best!;
   };

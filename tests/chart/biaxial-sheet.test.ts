@@ -122,3 +122,35 @@ describe('panelGrid', () => {
     expect(panelGrid(2, 400, 800, 8)).toMatchObject({ cols: 1, rows: 2 });
   });
 });
+
+describe('layouts not symmetric about both axes: all four quadrants', () => {
+  it('draws closed contours through all four quadrants, axes through the origin, with the level named at the top left', async () => {
+    const { biaxialContour, contourAngles } = await import('../../src/analysis/biaxial-family.js');
+    const { prepareBiaxial } = await import('../../src/analysis/biaxial.js');
+    const set = setOf();
+    const sheet = set.sheets[0]!;
+    const base = biaxialFamilyForSheet(set, sheet);
+    // the square's bars with the top row doubled: symmetric about y only (an invented custom layout)
+    const shape = { kind: 'rectangle' as const, b: 1, h: 1 };
+    const contours = base.levels.map((level) =>
+      base.rhos.map((rho) => {
+        const bars = base.bars.map((b) => ({ ...b, area: b.area * rho * (b.y > 0.3 ? 2 : 1) }));
+        return biaxialContour(prepareBiaxial(base.basis, shape, bars), level * base.basis.normalisingStress, contourAngles('all', 5), 'design', rho, level);
+      }),
+    );
+    const family = { ...base, quadrants: 'all' as const, contours };
+    const built = buildBiaxialSheet({ set, sheet, family, sheetNumber: 1, sheetCount: 1, generator: 'pmchart 0.1.0' });
+    const first = built.data.curves.filter((r) => r.curve === 'level-0-rho-2');
+    expect(first).toHaveLength(72 + 1);
+    expect(first[0]!.M).toBe(first[72]!.M);
+    expect(first[0]!.P).toBe(first[72]!.P);
+    // the unequal faces show: Mx toward +y (compressing the doubled row) differs from Mx toward −y
+    const c = family.contours[0]![2]!;
+    const up = c.mx[0]!;
+    const down = c.mx[36]!;
+    expect(Math.abs(up + down)).toBeGreaterThan(0.01 * Math.abs(up));
+    expect(built.data.texts.some((t) => t.text === 'P/(f′c·Ag) = 0.00')).toBe(true);
+    const csv = biaxialTableCsv(biaxialTable(family, 1)).trimEnd().split('\n');
+    expect(csv.slice(1).some((l) => Number(l.split(',')[3]) < 0 && Number(l.split(',')[4]) < 0)).toBe(true);
+  });
+});
