@@ -404,9 +404,10 @@ function sideColumn(ctx: BiaxialSheetContext, g: Deco, fit: { picture: number; n
   const box: Box = { x: b.x, y: b.y + 2.0 * u, w: b.w, h: picH };
   g.rect(box, COLOURS.panel);
   const aspect = sheet.shape.kind === 'rectangle' ? sheet.shape.aspect : 1;
-  const scale = Math.min(box.h - 10.5 * u, (box.w * 0.5) / aspect);
+  // room in the box: the y label above (2.8 type units), the b dimension and its label below (3.6)
+  const scale = Math.min(box.h - 6.4 * u, (box.w * 0.5) / aspect);
   const cx = box.x + box.w * 0.45;
-  const cy = box.y + 3.4 * u + scale / 2;
+  const cy = box.y + 2.8 * u + scale / 2;
   const hw = (aspect * scale) / 2;
   const hh = scale / 2;
   g.rect({ x: cx - hw, y: cy - hh, w: 2 * hw, h: 2 * hh }, COLOURS.paper, COLOURS.ink, 1.1);
@@ -420,7 +421,7 @@ function sideColumn(ctx: BiaxialSheetContext, g: Deco, fit: { picture: number; n
   g.rule(cx - hw - 1.2 * u, cy, cx + hw + 1.6 * u, cy, COLOURS.accent, 0.6);
   g.rule(cx, cy + hh + 1.2 * u, cx, cy - hh - 1.6 * u, COLOURS.accent, 0.6);
   g.text('dimLeft', cx + hw + 1.9 * u, cy + 0.3 * u, 'x');
-  g.text('dim', cx, cy - hh - 2.0 * u, 'y');
+  g.text('dim', cx, cy - hh - 1.9 * u, 'y');
   // dimensions: h on the left, b below, γ·h between the outer rows on the right
   const tick = 0.6 * u;
   const xl = cx - hw - 2.6 * u;
@@ -428,11 +429,11 @@ function sideColumn(ctx: BiaxialSheetContext, g: Deco, fit: { picture: number; n
   g.rule(xl - tick, cy - hh, xl + tick, cy - hh, COLOURS.muted, 0.6);
   g.rule(xl - tick, cy + hh, xl + tick, cy + hh, COLOURS.muted, 0.6);
   g.text('dim', xl - 1.0 * u, cy + 0.3 * u, 'h');
-  const yb = cy + hh + 2.4 * u;
+  const yb = cy + hh + 1.6 * u;
   g.rule(cx - hw, yb, cx + hw, yb, COLOURS.muted, 0.6);
   g.rule(cx - hw, yb - tick, cx - hw, yb + tick, COLOURS.muted, 0.6);
   g.rule(cx + hw, yb - tick, cx + hw, yb + tick, COLOURS.muted, 0.6);
-  g.text('dim', cx - hw / 2, yb + 1.1 * u, 'b');
+  g.text('dim', cx, yb + 1.5 * u, 'b');
   const ys = family.bars.map((z) => z.y);
   const xr = cx + hw + 4.2 * u;
   const yTop = cy - Math.max(...ys) * scale;
@@ -442,10 +443,9 @@ function sideColumn(ctx: BiaxialSheetContext, g: Deco, fit: { picture: number; n
   g.rule(xr - tick, yBot, xr + tick, yBot, COLOURS.muted, 0.6);
   g.text('dimLeft', xr + 0.8 * u, cy - 1.2 * u, `γh = ${sheet.gamma.toFixed(2)} h`);
   if (family.gammaX !== undefined) g.text('dimLeft', xr + 0.8 * u, cy + 0.2 * u, `γB·b = ${family.gammaX.toFixed(2)} b`);
-  g.text('caption', box.x + 0.8 * u, box.y + box.h - 2.0 * u, `${family.bars.length} bars, drawn at ${RATIO_SYMBOL.rhoG} = ${fmt(rhoShown, 4)}. Mx bends about x (compresses the +y face),`, box.w - 1.6 * u);
-  g.text('caption', box.x + 0.8 * u, box.y + box.h - 0.9 * u, 'My about y (compresses the +x face).', box.w - 1.6 * u);
-
-  let y = box.y + box.h + 2.4 * u;
+  // under the box: what is drawn and which way each moment bends
+  let y = g.paragraph('caption', box.x, box.y + box.h + 1.1 * u, box.w, `${family.bars.length} bars, drawn at ${RATIO_SYMBOL.rhoG} = ${fmt(rhoShown, 4)}. Mx bends about x (compresses the +y face), My about y (compresses the +x face).`, 1.3);
+  y += 1.6 * u;
   g.text('heading', b.x, y, `Basis: ${basis.title}`);
   y += 1.5 * u;
   const params = Object.entries(basis.parameters).map(([k, v]) => `${k} ${typeof v === 'number' ? fmt(v, 6) : v}`);
