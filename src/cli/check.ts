@@ -89,6 +89,7 @@ export function registerCheck(program: Command, run: (fn: () => Promise<void> | 
     .option('--rho <ratio>', 'given ρg to check (utilisation)')
     .option('--aggregate <length>', 'maximum aggregate size, for the clear-spacing rule')
     .option('--chart-gamma-step <step>', 'γ step of the emulated chart sheets', '0.05')
+    .option('--chart-axial-step <step>', 'axial-level step (P/(f′c·Ag), ν for EN) of the emulated biaxial sheets read for loads with Muy', '0.1')
     .option('--proposals <n>', 'how many bar layouts to propose (0 for none)', '5')
     .option('--json', 'print JSON instead of the table')
     .option('--report <file>', 'also write a report: .txt, .json, or a one-page calculation sheet as .pdf or .svg')

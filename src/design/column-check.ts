@@ -12,6 +12,7 @@
  * `checkColumnLoads` yields the per-load results in input order (for streaming views);
  * `checkColumn` collects them and adds the ranking, proposals and summary. No I/O, no CLI names.
  */
+import { DEFAULT_ANGLE_STEP_DEG } from '../analysis/biaxial-family.js';
 import { capacityAlongRay as biaxialRay, prepareBiaxial, type BiaxialSection } from '../analysis/biaxial.js';
 import { prepareSection } from '../analysis/prepared-section.js';
 import type { Basis, CapContext, StrainClass } from '../codes/types.js';
@@ -22,6 +23,7 @@ import type { Arrangement, Bar, Shape } from '../section/types.js';
 import type { UnitSystem } from '../units/index.js';
 import { isSelectableKind, proposeBars, type BarProposal, type Detailing } from './bar-selection.js';
 import { checkBiaxial, type BiaxialResult } from './biaxial.js';
+import { BiaxialCharts, type BiaxialLevelReading } from './biaxial-chart-reading.js';
 import { rhoLimitsFor, withMinimum, type FactoredLoad, type GivenLayout } from './check.js';
 import { buildChartSet, readCharts, type ChartSet, type SheetReading } from './chart-reading.js';
 import { magnifyLoad, type EndMoments, type MagnifiedLoad, type SlendernessRequest } from './column-effects.js';
@@ -49,6 +51,8 @@ export interface ColumnCheckInput {
   slenderness?: SlendernessRequest | null;
   /** chart sheet γ step (default 0.05) */
   chartGammaStep?: number;
+  /** axial-level step of the biaxial sheets read for loads with Muy (default 0.1) */
+  chartAxialStep?: number;
   /** bar selection; omitted → none */
   barSelection?: { detailing: Detailing; sizes: readonly BarSize[]; aggregate?: number; count?: number };
 }
@@ -117,7 +121,7 @@ export interface ColumnLoadResult {
   readonly variantsChecked: number;
   readonly slenderness: MagnifiedLoad | null;
   /** biaxial results for a load with Muy: exact and approximate utilisations (given reinforcement), and the exact ρg required (none given) */
-  readonly biaxial: (Partial<BiaxialResult> & { readonly rhoRequired: number | null; readonly rhoStatus: RhoStatus | null }) | null;
+  readonly biaxial: (Partial<BiaxialResult> & { readonly rhoRequired: number | null; readonly rhoStatus: RhoStatus | null } & BiaxialChartFields) | null;
   readonly status: LoadStatus;
   /** why, in words, with the clause where there is one */
   readonly statusReason: string;
@@ -126,6 +130,15 @@ export interface ColumnLoadResult {
   readonly measureValue: number | null;
   readonly governing: boolean;
   readonly notes: readonly string[];
+}
+
+/** The reading off biaxial sheets (src/design/biaxial-chart-reading.ts); null where readings are off or the load is off the sheets. */
+export interface BiaxialChartFields {
+  readonly rhoFromChart: number | null;
+  /** the sheets read: level, reading and where the point sat */
+  readonly chartLevels: readonly BiaxialLevelReading[];
+  /** rhoFromChart − rhoRequired (both biaxial); null when either is null */
+  readonly chartMinusExact: number | null;
 }
 
 export interface ColumnCheck {
@@ -151,6 +164,8 @@ export interface ColumnCheck {
   readonly barsSkipped: string | null;
   readonly limits: { readonly min: number; readonly max: number };
   readonly chart: { readonly gammaStep: number; readonly lower: number; readonly upper: number | null; readonly rhos: readonly number[] };
+  /** the biaxial sheets read for loads with Muy (axial-level step, moment-direction step of the drawn contours); null when none are read */
+  readonly biaxialChart: { readonly axialStep: number; readonly angleStepDeg: number; readonly rhos: readonly number[] } | null;
   readonly checked: { readonly kind: 'rho' | 'layout'; readonly rho: number; readonly description: string; readonly bars: readonly Bar[] } | null;
   readonly slenderness: SlendernessRequest | null;
   /** how proposals placed their bars, and the aggregate size for the spacing rule (null: no proposals asked) */
@@ -219,6 +234,8 @@ export interface ColumnCheckContext {
   readonly variants: readonly PreparedVariant[];
   /** chart sheets for the readings; null when readings are not wanted (proposal verification) */
   readonly charts: ChartSet | null;
+  /** biaxial sheets for the readings of loads with Muy; null when readings are off or no load has Muy */
+  readonly biaxialCharts: BiaxialCharts | null;
   readonly checkedRho: number | null;
   /** the checked bars, actual areas and positions (as drawn) */
   readonly checkedBars: Bar[] | null;
@@ -254,7 +271,11 @@ export function prepareColumnCheck(input: ColumnCheckInput, opts: { readings?: b
   const biaxial = input.loads.some((l) => l.Muy !== undefined);
   const checkedBiaxial = checkedBars && biaxial ? prepareBiaxial(basis, shape, checkedBars, capContext) : null;
   const positionBars = layoutBars(shape, input.arrangement, area, { gamma: input.gamma });
-  return { input, basis, area, depth, capContext, variants, charts, checkedRho, checkedBars, positionBars, checkedBiaxial, biaxial };
+  const biaxialCharts =
+    readings && biaxial && input.arrangement.kind !== 'custom'
+      ? new BiaxialCharts({ basis, shape, arrangement: input.arrangement, gamma: input.gamma, capContext, rhoLimits: basis.rhoLimits, ...(input.chartAxialStep !== undefined ? { axialStep: input.chartAxialStep } : {}) })
+      : null;
+  return { input, basis, area, depth, capContext, variants, charts, biaxialCharts, checkedRho, checkedBars, positionBars, checkedBiaxial, biaxial };
 }
 
 // ───────────────────────────── one load ─────────────────────────────
@@ -410,13 +431,15 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
   let biaxial: ColumnLoadResult['biaxial'] = null;
   if (Muy !== undefined && finiteMoments) {
     const bl = { Pu: load.Pu, Mux, Muy };
+    const chart = biaxialChartFields(ctx, bl, limits.min);
+    const withChart = (rhoRequired: number | null) => ({ ...chart, chartMinusExact: rhoRequired === null || chart.rhoFromChart === null ? null : chart.rhoFromChart - rhoRequired });
     if (ctx.checkedBiaxial) {
-      biaxial = { ...checkBiaxial(ctx.checkedBiaxial, bl), rhoRequired: null, rhoStatus: null };
+      biaxial = { ...checkBiaxial(ctx.checkedBiaxial, bl), rhoRequired: null, rhoStatus: null, ...withChart(null) };
     } else if (input.shape.kind === 'circle') {
-      biaxial = { rhoRequired: g.req.rho, rhoStatus: g.req.status };
+      biaxial = { rhoRequired: g.req.rho, rhoStatus: g.req.status, ...withChart(g.req.rho) };
     } else {
       const r = biaxialRhoRequired(basis, input.shape, input.arrangement, input.gamma, ctx.capContext, bl, limits);
-      biaxial = { rhoRequired: r.rho, rhoStatus: r.status };
+      biaxial = { rhoRequired: r.rho, rhoStatus: r.status, ...withChart(r.rho) };
     }
   }
 
@@ -463,6 +486,13 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
     governing: false,
     notes,
   };
+}
+
+/** The biaxial sheet reading of a load (minimum ρg applied as on the uniaxial readings), or nulls where there are no sheets. */
+function biaxialChartFields(ctx: ColumnCheckContext, load: { Pu: number; Mux: number; Muy: number }, rhoMin: number): Omit<BiaxialChartFields, 'chartMinusExact'> {
+  if (!ctx.biaxialCharts) return { rhoFromChart: null, chartLevels: [] };
+  const r = ctx.biaxialCharts.read(load.Pu, load.Mux, load.Muy);
+  return { rhoFromChart: r.rhoFromChart === null ? null : Math.max(r.rhoFromChart, rhoMin), chartLevels: r.levels };
 }
 
 /** End moments in either sign convention (ACI M1/M2; EN and CSA M01/M02), as given. */
@@ -614,6 +644,7 @@ export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadRe
     chart: ctx.charts
       ? { gammaStep: ctx.charts.gammaStep, lower: ctx.charts.lower.gamma, upper: ctx.charts.upper?.gamma ?? null, rhos: ctx.charts.rhos }
       : { gammaStep: 0, lower: 0, upper: null, rhos: [] },
+    biaxialChart: ctx.biaxialCharts ? { axialStep: ctx.biaxialCharts.step, angleStepDeg: DEFAULT_ANGLE_STEP_DEG, rhos: ctx.biaxialCharts.rhos } : null,
     checked,
     slenderness: input.slenderness ?? null,
     barSelection: input.barSelection ? { detailing: input.barSelection.detailing.kind, aggregate: input.barSelection.aggregate ?? null } : null,

@@ -10,6 +10,7 @@ import type { FactoredLoad } from '../design/check.js';
 import { checkColumn, type ColumnCheck, type ColumnCheckInput } from '../design/column-check.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { parseLoadQuantity, parseLoadsCsv as readLoadsCsv } from '../input/loads-csv.js';
+import { CHART_AXIAL_STEP_RANGE, CHART_GAMMA_STEP_RANGE } from '../input/limits.js';
 import { barSet } from '../section/bar-tables.js';
 import { barCount } from '../section/arrangements.js';
 import { DISPLAY_UNITS, parseQuantity, systemFactor, type UnitSystem } from '../units/index.js';
@@ -24,6 +25,7 @@ export interface CheckOptions extends SectionFlags, EffectsFlags {
   rho?: string;
   aggregate?: string;
   chartGammaStep?: string;
+  chartAxialStep?: string;
   proposals?: string;
   json?: boolean;
   report?: string;
@@ -92,7 +94,11 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
   };
   if (o.chartGammaStep !== undefined) {
     const step = Number(o.chartGammaStep);
-    input.chartGammaStep = requireInRange('--chart-gamma-step', Number.isFinite(step) ? step : NaN, 0.01, 0.2);
+    input.chartGammaStep = requireInRange('--chart-gamma-step', Number.isFinite(step) ? step : NaN, ...CHART_GAMMA_STEP_RANGE);
+  }
+  if (o.chartAxialStep !== undefined) {
+    const step = Number(o.chartAxialStep);
+    input.chartAxialStep = requireInRange('--chart-axial-step', Number.isFinite(step) ? step : NaN, ...CHART_AXIAL_STEP_RANGE);
   }
   if (o.rho !== undefined) {
     const lim = basis.rhoLimits;

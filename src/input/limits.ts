@@ -29,6 +29,10 @@ export const CUSTOM_BAR_SHARE_MAX = 1e6;
 /** Bar coordinates are fractions of b (or D) and h from the centroid. */
 export const CUSTOM_BAR_COORD_MAX = 0.5;
 
+/** `check --chart-gamma-step` and `--chart-axial-step` (P/(f′c·Ag), ν for EN 1992-1-1): the grids of the emulated sheets. */
+export const CHART_GAMMA_STEP_RANGE = [0.01, 0.2] as const;
+export const CHART_AXIAL_STEP_RANGE = [0.02, 0.25] as const;
+
 /** Curves in a chart set's family (a sheet stays legible). */
 export const SET_CURVES_RANGE = [1, 20] as const;
 /** Curves `table` may compute in one run. */

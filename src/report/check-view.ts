@@ -88,6 +88,7 @@ export function resultsView(c: ColumnCheck): TableView {
     'ρg req',
     ...(biax && !withUtil ? ['ρg req biax'] : []),
     'ρg chart',
+    ...(biax ? ['ρg chart biax'] : []),
     'ρg rounded',
     `extra ${un.area}`,
     'εt',
@@ -110,6 +111,7 @@ export function resultsView(c: ColumnCheck): TableView {
     f(r.rhoRequired),
     ...(biax && !withUtil ? [f(r.biaxial?.rhoRequired ?? null)] : []),
     f(r.rhoFromChart),
+    ...(biax ? [f(r.biaxial?.rhoFromChart ?? null)] : []),
     f(r.rhoRoundedDown, 3),
     f(r.extraSteelRoundedDown, 3),
     f(r.strain.epsT, 3),
@@ -135,8 +137,19 @@ export function resultsFootnotes(c: ColumnCheck): string[] {
   if (gov && gov.extraSteelRoundedDown !== null && gov.extraSteelRoundedDown > 0) {
     out.push(`Reading the next lower sheet and rounding up would cost ${f(gov.extraSteelRoundedDown, 3)} ${un.area} more steel than the exact ρg for ${gov.id}.`);
   }
+  const bc = c.biaxialChart;
+  if (bc) {
+    const diff = gov?.biaxial?.chartMinusExact ?? null;
+    out.push(
+      `ρg chart biax: read off biaxial sheets at γ = ${fmt(c.gamma, 4)} with contours at ρg ${bc.rhos.map((r) => fmt(r, 3)).join(', ')}, one sheet per ${axialLevelWords(c)} step of ${bc.axialStep}; linear between contours along the moment direction and linear between levels.` +
+        (diff !== null && gov ? ` For ${gov.id} it differs from the exact ρg req biax by ${diff >= 0 ? '+' : ''}${f(diff)}.` : ''),
+    );
+  }
   return out;
 }
+
+/** The axial level of the biaxial sheets in the basis's words: ν for EN 1992-1-1, P/(f′c·Ag) otherwise. */
+const axialLevelWords = (c: ColumnCheck): string => c.basis.symbols.dimensionlessAxial ?? `${symbolsOf(c).P}/(${c.basis.symbols.normalisingStress}·Ag)`;
 
 /** Slenderness per load and axis; null without slenderness input. */
 export function slendernessView(c: ColumnCheck): { method: string; table: TableView } | null {
@@ -443,6 +456,9 @@ export function resultJson(r: ColumnLoadResult, c: ColumnCheck) {
                 loadContour: orNull(b.loadContour?.utilisation),
                 rhoRequired: orNull(b.rhoRequired),
                 rhoStatus: b.rhoStatus,
+                rhoFromChart: orNull(b.rhoFromChart),
+                chartMinusExact: orNull(b.chartMinusExact),
+                chartLevels: b.chartLevels.map((l) => ({ level: num(l.level), rho: orNull(l.rho), position: l.position })),
                 details:
                   b.exact && b.reciprocalLoad && b.loadContour
                     ? {
@@ -505,6 +521,7 @@ export function checkJson(c: ColumnCheck, generator: string): string {
       fy: num(c.basis.fy),
     },
     chart: { gammaStep: c.chart.gammaStep, sheets: [c.chart.lower, ...(c.chart.upper !== null ? [c.chart.upper] : [])], rhos: c.chart.rhos },
+    ...(c.biaxialChart ? { biaxialChart: { axialStep: c.biaxialChart.axialStep, angleStepDeg: c.biaxialChart.angleStepDeg, rhos: c.biaxialChart.rhos } } : {}),
     rhoLimits: { min: num(c.limits.min), max: num(c.limits.max) },
     checked: c.checked ? { kind: c.checked.kind, rho: num(c.checked.rho), description: c.checked.description } : null,
     governing: c.governingId,
