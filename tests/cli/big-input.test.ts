@@ -4,11 +4,12 @@
  * 2,000-curve table built one string of every row (and a c/h sweep of 6,374 rows per curve) and
  * the 200k-row load file went through a hand-written splitter and spread arguments.
  */
-import { closeSync, mkdtempSync, openSync, readFileSync, statSync, writeFileSync } from 'node:fs';
+import { closeSync, existsSync, mkdtempSync, openSync, readFileSync, statSync, writeFileSync } from 'node:fs';
 import { spawnSync } from 'node:child_process';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { MAX_DRAWN_REPORT_LOADS } from '../../src/input/limits.js';
 
 const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
 const dist = new URL('../../dist/input/loads-csv.js', import.meta.url).pathname;
@@ -47,6 +48,19 @@ describe('big inputs within the caps', () => {
     expect(r.stderr).toBe('');
     expect(r.stdout).toBe('200000 true');
   }, 300_000);
+
+  it('a drawn report above its load cap is refused in one line, exit 2, before any check', () => {
+    const rows = ['id,Pu,Mu'];
+    for (let i = 0; i <= MAX_DRAWN_REPORT_LOADS; i++) rows.push(`L${i},100,50`);
+    const file = join(dir, 'drawn.csv');
+    writeFileSync(file, `${rows.join('\n')}\n`);
+    const report = join(dir, 'drawn.pdf');
+    const r = spawnSync(process.execPath, [bin, 'check', '--fc', '4', '--fy', '60', '--b', '20', '--h', '20', '--gamma', '0.8', '--loads', file, '--report', report], { encoding: 'utf8' });
+    expect(r.stderr).toBe(`pmchart: --report: draws at most ${MAX_DRAWN_REPORT_LOADS} loads and --loads has ${MAX_DRAWN_REPORT_LOADS + 1}; write a .txt or .json report for every load\n`);
+    expect(r.status).toBe(2);
+    expect(r.stdout).toBe('');
+    expect(existsSync(report)).toBe(false);
+  }, 120_000);
 
   it('one row beyond the cap is refused before any check', () => {
     const rows = ['id,Pu,Mu'];
