@@ -7,7 +7,7 @@
  * own code against each other; the figures themselves are checked against published sources in
  * tests/design and tests/cli/check*.test.ts.
  */
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Writable } from 'node:stream';
@@ -36,6 +36,7 @@ async function streamed(o: CheckOptions): Promise<string> {
 
 afterEach(() => {
   process.exitCode = 0;
+  delete process.env.PMCHART_INJECT_FAULT;
 });
 
 // Invented load sets: repeated rows (ties broken by input order), tension, a zero load, and loads beyond the section.
@@ -77,6 +78,23 @@ describe('writeCheck streams the very bytes of the held check', () => {
       }
     });
   }
+
+  it('a streamed report whose write fails (injected ENOSPC): one line naming --report, exit 3, the previous report intact, no temporary file', async () => {
+    const o = cases[0]![1];
+    const sub = mkdtempSync(join(dir, 'fault-'));
+    const report = join(sub, 'streamed-fault.json');
+    await streamed({ ...o, report });
+    const before = readFileSync(report, 'utf8');
+    process.env.PMCHART_INJECT_FAULT = 'write:streamed-fault';
+    const e = await streamed({ ...o, report }).then(
+      () => ({ message: 'no error', exitCode: 0 }),
+      (x: unknown) => x as { message: string; exitCode: number },
+    );
+    expect(e.message).toBe(`--report: ${report} cannot be written (ENOSPC)`);
+    expect(e.exitCode).toBe(3);
+    expect(readFileSync(report, 'utf8')).toBe(before);
+    expect(readdirSync(sub)).toEqual(['streamed-fault.json']);
+  });
 
   it('the first streamed row is the governing load, marked, and the JSON ranks as the held result', async () => {
     const o = cases[0]![1];
