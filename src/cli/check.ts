@@ -3,6 +3,8 @@
  * flags into a `ColumnCheckInput`, calls `checkColumn`, prints a view of the one result
  * (src/report/check-view.ts) and sets the exit status: 0 when every load passes, 1 when any load fails,
  * is not possible, unstable or outside the method's scope (2 bad input, 3 internal or I/O error).
+ * A load file of more than STREAM_ABOVE_LOADS loads goes through `rankColumnCheck` instead and is
+ * printed load by load (`writeCheck`), with the same bytes and flat memory.
  */
 import { extname } from 'node:path';
 import type { Command } from 'commander';
