@@ -10,7 +10,9 @@
  *             ─▶ 7. summary and exit status
  *
  * `checkColumnLoads` yields the per-load results in input order (for streaming views);
- * `checkColumn` collects them and adds the ranking, proposals and summary. No I/O, no CLI names.
+ * `checkColumn` collects them and adds the ranking, proposals and summary. `rankColumnCheck` makes
+ * the same check for load files too big to hold every result: it keeps a few numbers per load to
+ * rank them and computes each result again, in ranked order, when a view reads it. No I/O, no CLI names.
  */
 import { DEFAULT_ANGLE_STEP_DEG } from '../analysis/biaxial-family.js';
 import { capacityAlongRay as biaxialRay, prepareBiaxial, type BiaxialSection } from '../analysis/biaxial.js';
@@ -529,14 +531,20 @@ export function* checkColumnLoads(ctxOrInput: ColumnCheckContext | ColumnCheckIn
   for (const l of ctx.input.loads) yield checkOneLoad(ctx, l, i++);
 }
 
+/** What ranks a load: its status, its measure, its demand ratio, its input order. */
+export type RankKey = Pick<ColumnLoadResult, 'status' | 'measureValue' | 'demandRatio' | 'index'>;
+
 /** Governing first: status (worst first), then the measure, then input order. */
-export function governingOrder(a: ColumnLoadResult, b: ColumnLoadResult): number {
-  const s = STATUS_RANK[a.status] - STATUS_RANK[b.status];
+export function governingOrder(a: RankKey, b: RankKey): number {
+  return compareRank(STATUS_RANK[a.status], a.measureValue ?? Infinity, a.demandRatio, a.index, STATUS_RANK[b.status], b.measureValue ?? Infinity, b.demandRatio, b.index);
+}
+
+/** The ranking on plain numbers (status rank, measure with ∞ for none, demand ratio, index), shared by both orderings. */
+function compareRank(sa: number, ma: number, da: number, ia: number, sb: number, mb: number, db: number, ib: number): number {
+  const s = sa - sb;
   if (s !== 0) return s;
-  const ma = a.measureValue ?? Infinity;
-  const mb = b.measureValue ?? Infinity;
   if (ma !== mb) return mb > ma ? 1 : -1;
-  return b.demandRatio - a.demandRatio || a.index - b.index;
+  return db - da || ia - ib;
 }
 
 /**
@@ -549,66 +557,15 @@ export function checkColumn(input: ColumnCheckInput): ColumnCheck {
   return summarise(ctx, results);
 }
 
-/** Ranking, bar proposals, summary and exit status for the results of every load. */
-export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadResult[]): ColumnCheck {
+/** The fields of a check that no load's result changes: what a view needs to format one load's row. */
+export type ColumnCheckFrame = Omit<ColumnCheck, 'results' | 'governingId' | 'governingWhy' | 'summary' | 'exitCode' | 'bars' | 'barsSkipped'>;
+/** The check without its per-load results: what views print around the rows. */
+export type ColumnCheckHead = Omit<ColumnCheck, 'results'>;
+
+/** The frame of a check, from its prepared context alone. */
+export function describeCheck(ctx: ColumnCheckContext): ColumnCheckFrame {
   const { input, basis } = ctx;
   const measure: GoverningMeasure = ctx.checkedRho !== null ? 'utilisation' : 'rhoRequired';
-  const counts = Object.fromEntries(LOAD_STATUSES.map((s) => [s, 0])) as Record<LoadStatus, number>;
-  for (const r of sorted) counts[r.status]++;
-  const gov = sorted[0];
-  const bad = sorted.length - counts.ok;
-  const governingWhy = !gov
-    ? 'no loads'
-    : gov.status !== 'ok' && gov.status !== 'fails'
-      ? `${gov.status} ${gov.statusReason}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`
-      : measure === 'utilisation'
-        ? `highest utilisation ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(3)} (the larger of the uniaxial and exact biaxial figures)`
-        : `largest ρg required ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(4)}${ctx.biaxial ? ' (the larger of the uniaxial and exact biaxial figures)' : ''}`;
-  const summaryText =
-    sorted.length === 0
-      ? 'no loads'
-      : bad === 0
-        ? `all ${sorted.length} load${sorted.length === 1 ? '' : 's'} pass; governing ${gov!.id}`
-        : `${bad} of ${sorted.length} load${sorted.length === 1 ? '' : 's'} ${bad === 1 ? 'does' : 'do'} not pass (${LOAD_STATUSES.filter((s) => s !== 'ok' && counts[s] > 0)
-            .map((s) => `${counts[s]} ${s}`)
-            .join(', ')}); governing ${gov!.id}`;
-
-  // 6. bar proposals, each re-verified against every load with every effect
-  let bars: BarProposal[] = [];
-  let barsSkipped: string | null = null;
-  const kind = input.arrangement.kind;
-  if (!input.barSelection) barsSkipped = 'bar selection not requested';
-  else if (!isSelectableKind(kind)) barsSkipped = 'bar selection needs a regular arrangement (two-faces, four-faces, side-faces or ring)';
-  else if (sorted.length === 0) barsSkipped = 'no loads';
-  else if (sorted.some((r) => r.status === 'unstable' || r.status === 'outside-scope')) barsSkipped = 'a load is unstable or outside the slenderness method: change the section or the bracing';
-  else if (sorted.some((r) => (r.rhoRequired === null || (r.biaxial?.rhoStatus === 'not-possible')) && ctx.checkedRho === null)) barsSkipped = 'a load needs more than the maximum ρg: enlarge the section';
-  else {
-    const limits = input.loads.reduce(
-      (acc, l) => {
-        const x = basis.steelAreaLimits(l.Pu, ctx.area);
-        return { min: Math.max(acc.min, x.min), max: Math.min(acc.max, x.max) };
-      },
-      { min: 0, max: Infinity },
-    );
-    // a loop, not Math.max(...list): 200k loads overflow the call stack as spread arguments
-    const requiredArea = sorted.reduce((m, r) => Math.max(m, r.steelRequired ?? 0, (r.biaxial?.rhoRequired ?? 0) * ctx.area), 0);
-    const sel = input.barSelection;
-    bars = proposeBars({
-      basis,
-      shape: input.shape,
-      kind,
-      detailing: sel.detailing,
-      sizes: sel.sizes,
-      requiredArea,
-      areaLimits: limits,
-      verify: layoutVerifier(input, sorted.map((r) => r.index)),
-      ...(sel.aggregate !== undefined ? { aggregate: sel.aggregate } : {}),
-      ...(input.capContext ? { capContext: input.capContext } : {}),
-      ...(sel.count !== undefined ? { count: sel.count } : {}),
-    });
-    if (bars.length === 0) barsSkipped = 'no single-size layout satisfies the spacing, steel and capacity limits';
-  }
-
   const checked =
     ctx.checkedBars === null
       ? null
@@ -622,7 +579,7 @@ export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadRe
   if (ctx.variants.some((v) => v.info.turnDeg !== 0)) {
     notes.push(`Ring of bars in a circle: every uniaxial check takes the weakest of ${ctx.variants.length} orientations over half a bar pitch (0° = a bar at the compression extreme).`);
   }
-  const result: ColumnCheck = {
+  return {
     basis,
     units: basis.units,
     shape: input.shape,
@@ -632,14 +589,7 @@ export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadRe
     capContext: ctx.capContext,
     area: ctx.area,
     depth: ctx.depth,
-    results: sorted,
-    governingId: gov?.id ?? null,
     measure,
-    governingWhy,
-    summary: { total: sorted.length, counts, text: summaryText },
-    exitCode: bad === 0 ? 0 : 1,
-    bars,
-    barsSkipped,
     limits: rhoLimitsFor(basis, 0, ctx.area),
     chart: ctx.charts
       ? { gammaStep: ctx.charts.gammaStep, lower: ctx.charts.lower.gamma, upper: ctx.charts.upper?.gamma ?? null, rhos: ctx.charts.rhos }
@@ -652,7 +602,176 @@ export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadRe
     variants: ctx.variants.map((v) => ({ label: v.info.label, sign: v.info.sign, turnDeg: v.info.turnDeg })),
     notes,
   };
-  return deepFreeze(result);
+}
+
+/** What the summary and the bar proposals read of every load, gathered one load at a time. */
+interface LoadDigest {
+  counts: Record<LoadStatus, number>;
+  /** a load is unstable or outside the slenderness method */
+  blocked: boolean;
+  /** a load needs more than the maximum ρg (uniaxial or exact biaxial) */
+  beyondMax: boolean;
+  /** the largest steel area any load requires */
+  requiredArea: number;
+}
+
+const newDigest = (): LoadDigest => ({ counts: Object.fromEntries(LOAD_STATUSES.map((s) => [s, 0])) as Record<LoadStatus, number>, blocked: false, beyondMax: false, requiredArea: 0 });
+
+function addToDigest(d: LoadDigest, r: ColumnLoadResult, area: number): void {
+  d.counts[r.status]++;
+  if (r.status === 'unstable' || r.status === 'outside-scope') d.blocked = true;
+  if (r.rhoRequired === null || r.biaxial?.rhoStatus === 'not-possible') d.beyondMax = true;
+  d.requiredArea = Math.max(d.requiredArea, r.steelRequired ?? 0, (r.biaxial?.rhoRequired ?? 0) * area);
+}
+
+/** Ranking, bar proposals, summary and exit status for the results of every load. */
+export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadResult[]): ColumnCheck {
+  const d = newDigest();
+  for (const r of sorted) addToDigest(d, r, ctx.area);
+  return deepFreeze(assemble(ctx, d, sorted[0], sorted.length, sorted.map((r) => r.index), sorted));
+}
+
+/** The check from the digest of every load; `results` is what the caller holds (every result, or none when streamed). */
+function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult | undefined, total: number, order: ArrayLike<number>, results: readonly ColumnLoadResult[]): ColumnCheck {
+  const { input, basis } = ctx;
+  const frame = describeCheck(ctx);
+  const { measure } = frame;
+  const counts = d.counts;
+  const bad = total - counts.ok;
+  const governingWhy = !gov
+    ? 'no loads'
+    : gov.status !== 'ok' && gov.status !== 'fails'
+      ? `${gov.status} ${gov.statusReason}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`
+      : measure === 'utilisation'
+        ? `highest utilisation ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(3)} (the larger of the uniaxial and exact biaxial figures)`
+        : `largest ρg required ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(4)}${ctx.biaxial ? ' (the larger of the uniaxial and exact biaxial figures)' : ''}`;
+  const summaryText =
+    total === 0
+      ? 'no loads'
+      : bad === 0
+        ? `all ${total} load${total === 1 ? '' : 's'} pass; governing ${gov!.id}`
+        : `${bad} of ${total} load${total === 1 ? '' : 's'} ${bad === 1 ? 'does' : 'do'} not pass (${LOAD_STATUSES.filter((s) => s !== 'ok' && counts[s] > 0)
+            .map((s) => `${counts[s]} ${s}`)
+            .join(', ')}); governing ${gov!.id}`;
+
+  // 6. bar proposals, each re-verified against every load with every effect
+  let bars: BarProposal[] = [];
+  let barsSkipped: string | null = null;
+  const kind = input.arrangement.kind;
+  if (!input.barSelection) barsSkipped = 'bar selection not requested';
+  else if (!isSelectableKind(kind)) barsSkipped = 'bar selection needs a regular arrangement (two-faces, four-faces, side-faces or ring)';
+  else if (total === 0) barsSkipped = 'no loads';
+  else if (d.blocked) barsSkipped = 'a load is unstable or outside the slenderness method: change the section or the bracing';
+  else if (d.beyondMax && ctx.checkedRho === null) barsSkipped = 'a load needs more than the maximum ρg: enlarge the section';
+  else {
+    const limits = input.loads.reduce(
+      (acc, l) => {
+        const x = basis.steelAreaLimits(l.Pu, ctx.area);
+        return { min: Math.max(acc.min, x.min), max: Math.min(acc.max, x.max) };
+      },
+      { min: 0, max: Infinity },
+    );
+    const sel = input.barSelection;
+    bars = proposeBars({
+      basis,
+      shape: input.shape,
+      kind,
+      detailing: sel.detailing,
+      sizes: sel.sizes,
+      requiredArea: d.requiredArea,
+      areaLimits: limits,
+      verify: layoutVerifier(input, order),
+      ...(sel.aggregate !== undefined ? { aggregate: sel.aggregate } : {}),
+      ...(input.capContext ? { capContext: input.capContext } : {}),
+      ...(sel.count !== undefined ? { count: sel.count } : {}),
+    });
+    if (bars.length === 0) barsSkipped = 'no single-size layout satisfies the spacing, steel and capacity limits';
+  }
+
+  const f = frame;
+  // the fields in the order of the ColumnCheck interface
+  return {
+    basis: f.basis,
+    units: f.units,
+    shape: f.shape,
+    arrangement: f.arrangement,
+    gamma: f.gamma,
+    gammaSource: f.gammaSource,
+    capContext: f.capContext,
+    area: f.area,
+    depth: f.depth,
+    results,
+    governingId: gov?.id ?? null,
+    measure,
+    governingWhy,
+    summary: { total, counts, text: summaryText },
+    exitCode: bad === 0 ? 0 : 1,
+    bars,
+    barsSkipped,
+    limits: f.limits,
+    chart: f.chart,
+    checked: f.checked,
+    slenderness: f.slenderness,
+    barSelection: f.barSelection,
+    biaxial: f.biaxial,
+    variants: f.variants,
+    notes: f.notes,
+  };
+}
+
+/**
+ * A check held as a ranking instead of as results, for load files too big to hold every result:
+ * the same check as `checkColumn` (same ranking, summary and proposals), whose results are computed
+ * again, one at a time, in ranked order when a view reads them (the engine is deterministic).
+ */
+export interface RankedColumnCheck {
+  /** the check without its results */
+  readonly check: ColumnCheckHead;
+  /** the governing load's result (undefined: no loads) */
+  readonly governing: ColumnLoadResult | undefined;
+  /** every result, governing first, computed again on each call */
+  results(): Generator<ColumnLoadResult, void, undefined>;
+  /** the id of a load by input index */
+  loadId(index: number): string | undefined;
+}
+
+/**
+ * Checks every load once, keeping per load only its rank keys (numbers in typed arrays), and ranks
+ * them: memory stays flat in the number of loads. `visit` sees every result in input order as it is
+ * made (views size their columns there). Loads, proposals and summary as in `checkColumn`.
+ */
+export function rankColumnCheck(ctx: ColumnCheckContext, visit?: (r: ColumnLoadResult) => void): RankedColumnCheck {
+  const loads = ctx.input.loads;
+  const n = loads.length;
+  const status = new Uint8Array(n);
+  const measure = new Float64Array(n);
+  const demand = new Float64Array(n);
+  const d = newDigest();
+  for (const r of checkColumnLoads(ctx)) {
+    status[r.index] = STATUS_RANK[r.status];
+    measure[r.index] = r.measureValue ?? Infinity;
+    demand[r.index] = r.demandRatio;
+    addToDigest(d, r, ctx.area);
+    visit?.(r);
+  }
+  const order = new Uint32Array(n);
+  for (let i = 0; i < n; i++) order[i] = i;
+  order.sort((a, b) => compareRank(status[a]!, measure[a]!, demand[a]!, a, status[b]!, measure[b]!, demand[b]!, b));
+  const at = (k: number): ColumnLoadResult => {
+    const i = order[k]!;
+    const r = checkOneLoad(ctx, loads[i]!, i);
+    return k === 0 ? { ...r, governing: true } : r;
+  };
+  const governing = n > 0 ? at(0) : undefined;
+  const { results: _none, ...check } = assemble(ctx, d, governing, n, order, []);
+  return {
+    check: deepFreeze(check),
+    governing,
+    *results() {
+      for (let k = 0; k < n; k++) yield k === 0 ? governing! : at(k);
+    },
+    loadId: (index) => loads[index]?.id,
+  };
 }
 
 /**
@@ -661,9 +780,9 @@ export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadRe
  * variant, the exact biaxial capacity where Muy is given). Loads are tried in `order` (worst first) and the
  * search stops at the first failure. Unstable or out-of-scope loads count as failing.
  */
-export function layoutVerifier(input: ColumnCheckInput, order?: readonly number[]): (arrangement: Arrangement, area: number, gamma: number) => { utilisation: number; index: number } {
+export function layoutVerifier(input: ColumnCheckInput, order?: ArrayLike<number>): (arrangement: Arrangement, area: number, gamma: number) => { utilisation: number; index: number } {
   const { barSelection: _sel, rho: _rho, layout: _layout, ...rest } = input;
-  const indices = order ?? input.loads.map((_, i) => i);
+  const indices = order ? Array.from(order) : input.loads.map((_, i) => i);
   return (arrangement, area, gamma) => {
     const check = prepareColumnCheck({ ...rest, arrangement, gamma, layout: { arrangement, area, gamma, description: '' } }, { readings: false });
     // screen every load on the ray tables (interpolated, biaxial left out), then settle exactly every load

@@ -9,6 +9,7 @@ import type { Detailing } from '../design/bar-selection.js';
 import type { FactoredLoad } from '../design/check.js';
 import { checkColumn, type ColumnCheck, type ColumnCheckInput } from '../design/column-check.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
+import { MAX_DRAWN_REPORT_LOADS } from '../input/limits.js';
 import { parseLoadQuantity, parseLoadsCsv as readLoadsCsv } from '../input/loads-csv.js';
 import { CHART_AXIAL_STEP_RANGE, CHART_GAMMA_STEP_RANGE } from '../input/limits.js';
 import { barSet } from '../section/bar-tables.js';
@@ -77,6 +78,9 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
       throw new PmError(ERROR_CODES.io, '--loads', `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'})`, { value: o.loads });
     }
     loads = parseLoadsCsv(text, u);
+    if (o.report !== undefined && isDrawn(o.report) && loads.length > MAX_DRAWN_REPORT_LOADS) {
+      throw new PmError(ERROR_CODES.outOfRange, '--report', `draws at most ${MAX_DRAWN_REPORT_LOADS} loads and --loads has ${loads.length}; write a .txt or .json report for every load`);
+    }
   } else {
     if (o.pu === undefined) throw new PmError(ERROR_CODES.missing, '--pu', `is required, or --loads FILE.csv (a force, default unit ${DISPLAY_UNITS[u].force}; tension negative)`);
     if (o.mu === undefined) throw new PmError(ERROR_CODES.missing, '--mu', `is required with --pu (a moment, default unit ${DISPLAY_UNITS[u].moment})`);

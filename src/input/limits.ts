@@ -61,6 +61,11 @@ export const MAX_CUSTOM_BARS_BYTES = 1 << 20;
 export const MAX_LOADS_BYTES = 32 << 20;
 /** Load rows in one CSV file. */
 export const MAX_LOAD_ROWS = 200_000;
+/**
+ * Loads a drawn check report (.pdf, .svg) may plot: one page cannot show more, and the renderer's
+ * memory grows with every mark. Text and JSON reports, and the printed table, take every load.
+ */
+export const MAX_DRAWN_REPORT_LOADS = 20_000;
 /** Characters of a load id. */
 export const MAX_LOAD_ID_CHARS = 64;
 
