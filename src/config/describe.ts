@@ -1,5 +1,7 @@
 /** Spelled-out text for sheet parameters (titles, index page, file names). */
 import type { BasisOptions, BasisSymbols, Transverse } from '../codes/types.js';
+import { barCount } from '../section/arrangements.js';
+import { faceCounts } from '../section/types.js';
 import { DISPLAY_UNITS, type UnitSystem } from '../units/index.js';
 import type { ResolvedShape, ResolvedSheet } from './types.js';
 
@@ -15,8 +17,12 @@ export function describeArrangement(a: ResolvedSheet['arrangement']): string {
   switch (a.kind) {
     case 'two-faces':
       return `${a.barsPerFace} bars on each of two faces`;
-    case 'four-faces':
-      return `${a.barsPerFace} bars per face on four faces (${4 * (a.barsPerFace - 1)} bars)`;
+    case 'four-faces': {
+      const [nb, nh] = faceCounts(a.barsPerFace);
+      return nb === nh
+        ? `${nb} bars per face on four faces (${barCount(a)} bars)`
+        : `${nb} bars on each b face, ${nh} on each h face (${barCount(a)} bars)`;
+    }
     case 'side-faces':
       return `${a.barsPerFace} bars on each side face`;
     case 'ring':
@@ -24,9 +30,14 @@ export function describeArrangement(a: ResolvedSheet['arrangement']): string {
   }
 }
 
-/** Short kebab form for file names: "two-faces-4-per-face". */
+/** Short kebab form for file names: "two-faces-4-per-face"; unequal four-faces counts "four-faces-3-on-b-5-on-h". */
 export function arrangementSlug(a: ResolvedSheet['arrangement']): string {
-  return a.kind === 'ring' ? `ring-${a.bars}-bars` : `${a.kind}-${a.barsPerFace}-per-face`;
+  if (a.kind === 'ring') return `ring-${a.bars}-bars`;
+  if (a.kind === 'four-faces') {
+    const [nb, nh] = faceCounts(a.barsPerFace);
+    return nb === nh ? `${a.kind}-${nb}-per-face` : `${a.kind}-${nb}-on-b-${nh}-on-h`;
+  }
+  return `${a.kind}-${a.barsPerFace}-per-face`;
 }
 
 export const describeTransverse = (t: Transverse): string => (t === 'spiral' ? 'spiral' : 'tied');
