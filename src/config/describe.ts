@@ -85,7 +85,9 @@ export function titleFields(s: Omit<ResolvedSheet, 'title' | 'fileStem'>, units:
     options: describeBasisOptions(s.variantOptions),
     fc: stressText(s.fc, units),
     fy: stressText(s.fy, units),
-    gamma: s.gamma.toFixed(2),
+    // γB, when given, travels with γ so that every title pattern states it
+    gamma: s.gammaB === undefined ? s.gamma.toFixed(2) : `${s.gamma.toFixed(2)} (γB ${s.gammaB.toFixed(2)})`,
+    gammaB: s.gammaB === undefined ? '' : s.gammaB.toFixed(2),
     arrangement: describeArrangement(s.arrangement),
     transverse: describeTransverse(s.transverse),
     family,
@@ -106,5 +108,5 @@ export function fileStemFor(s: Omit<ResolvedSheet, 'title' | 'fileStem'>, units:
   const shape = s.shape.kind === 'circle' ? 'circular' : s.shape.aspect === 1 ? 'square' : `rectangular-aspect-${fmt(s.shape.aspect)}`;
   const idx = String(s.index).padStart(String(total).length, '0');
   const variant = basisOptionsSlug(s.variantOptions);
-  return [idx, shape, `fc-${fmt(s.fc)}${su}`, `fy-${fmt(s.fy)}${su}`, `gamma-${s.gamma.toFixed(2)}`, arrangementSlug(s.arrangement), s.transverse, ...(variant ? [variant] : [])].join('-');
+  return [idx, shape, `fc-${fmt(s.fc)}${su}`, `fy-${fmt(s.fy)}${su}`, `gamma-${s.gamma.toFixed(2)}`, ...(s.gammaB !== undefined ? [`gammab-${s.gammaB.toFixed(2)}`] : []), arrangementSlug(s.arrangement), s.transverse, ...(variant ? [variant] : [])].join('-');
 }

@@ -230,7 +230,7 @@ function drawIndex(page: PDFPage, input: BookInput, regular: PDFFont, bold: PDFF
     const s = set.sheets[i]!;
     if ((i - from) % 2 === 1) page.drawRectangle({ x: m, y: y - 0.45 * u, width: W - 2 * m, height: 15, color: hex('#f3f5f7') });
     row(
-      [String(s.index), describeShape(s.shape), stressText(s.fc, set.units), stressText(s.fy, set.units), s.gamma.toFixed(2), describeArrangement(s.arrangement), describeTransverse(s.transverse), s.fileStem, String(front + i + 1)],
+      [String(s.index), describeShape(s.shape), stressText(s.fc, set.units), stressText(s.fy, set.units), s.gammaB === undefined ? s.gamma.toFixed(2) : `${s.gamma.toFixed(2)} (γB ${s.gammaB.toFixed(2)})`, describeArrangement(s.arrangement), describeTransverse(s.transverse), s.fileStem, String(front + i + 1)],
       regular,
       COLOURS.ink,
     );
