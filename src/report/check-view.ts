@@ -229,7 +229,7 @@ export function sectionLine(c: ColumnCheck): string {
   const un = unitsOf(c.units);
   const b = c.basis;
   const dims = c.shape.kind === 'rectangle' ? `${fmt(c.shape.b)} × ${fmt(c.shape.h)} ${un.length}` : `D = ${fmt(c.shape.diameter)} ${un.length}`;
-  return `${b.title}, ${dims} ${b.transverse}, ${c.arrangement.kind}, ${b.symbols.concreteStrength} = ${fmt(b.fc)} ${un.stress}, ${b.symbols.steelStrength} = ${fmt(b.fy)} ${un.stress}, γ = ${fmt(c.gamma, 4)} (${c.gammaSource})`;
+  return `${b.title}, ${dims} ${b.transverse}, ${c.arrangement.kind}, ${b.symbols.concreteStrength} = ${fmt(b.fc)} ${un.stress}, ${b.symbols.steelStrength} = ${fmt(b.fy)} ${un.stress}, γ = ${fmt(c.gamma, 4)} (${c.gammaSource})${c.gammaB !== null ? `, γB = ${fmt(c.gammaB, 4)} (given)` : ''}`;
 }
 
 /** Assumptions of the check itself, beside the basis notes. */
@@ -498,6 +498,7 @@ export function checkJson(c: ColumnCheck, generator: string): string {
       shape: c.shape,
       area: num(c.area),
       gamma: num(c.gamma),
+      ...(c.gammaB !== null ? { gammaB: num(c.gammaB) } : {}),
       gammaSource: c.gammaSource,
       arrangement: c.arrangement,
       transverse: c.basis.transverse,
