@@ -91,3 +91,20 @@ describe('four-faces [3, 5] about y (θ = π/2, compression on the +x face): the
     expectClose(point!.c, 8, 1e-6);
   });
 });
+
+describe('four-faces [3, 5] with γB = 0.5 (h faces at x = ±4 in)', () => {
+  const narrow = layoutBars(shape, { kind: 'four-faces', barsPerFace: [3, 5] }, ast, { gamma: 0.75, gammaX: 0.5 });
+  it('about y at c = 8 in: Pn = 541.45 kips, My = 3873.328 in·kips (hand calculation, strain compatibility per ACI 318-19 22.2)', () => {
+    // columns at d = 4 (5 bars), 8 (2), 12 (5) from the +x face; a = 6.8 in, Cc = 554.88 kips → 2552.448 in·kips
+    //   d = 4:  εs = 0.0015 → 43.5 − 3.4 = 40.1 ksi, F = 3.95·40.1 = 158.395, M = ·4 = 633.58
+    //   d = 12: εs = −0.0015 → −43.5 ksi,          F = −171.825,         M = ·(−4) = 687.3
+    const r = biaxialResultant(prepareBiaxial(basis, shape, narrow), Math.PI / 2, 8, 'nominal');
+    expectClose(r.P, 541.45, 1e-6);
+    expectClose(r.My, 3873.328, 1e-6);
+  });
+  it('about x γB moves no bar row: Pn and Mn at c = 12 in stay 541.45 kips and 6755.5035 in·kips (the hand sum above)', () => {
+    const [p, m] = nominalAt(prepareSection(basis, shape, narrow).respond(12 / 24), ast / ag);
+    expectClose(p * ag, 541.45, 1e-6);
+    expectClose(m * ag * 24, 6755.5035, 1e-6);
+  });
+});
