@@ -39,8 +39,9 @@ export interface BarSelectionRequest {
    * Re-verifies a candidate with its discrete bars against every load with every effect applied
    * (the check engine supplies it: slenderness, minimum moment, sign and orientation, biaxial);
    * returns the largest utilisation and the load that gives it. A candidate above 1 is never proposed.
+   * With `stopAbove` it may stop at the first load above that utilisation (the figure is then only a bound).
    */
-  verify: (arrangement: Arrangement, area: number, gamma: number) => { utilisation: number; index: number };
+  verify: (arrangement: Arrangement, area: number, gamma: number, stopAbove?: number) => { utilisation: number; index: number };
   /** maximum aggregate size, internal length units (0 when not given) */
   aggregate?: number;
   capContext?: CapContext;
@@ -210,7 +211,9 @@ export function proposeBars(req: BarSelectionRequest): BarProposal[] {
         const clear = clearSpacing(shape, kind, perFace, gamma, size.diameter, gammaB);
         if (clear < clearRequired - 1e-9) continue;
         fits = true;
-        const worst = req.verify(arrangementOf(kind, perFace), area, gamma);
+        // a candidate need only be followed while it can still beat the best of this total
+        const worst: { utilisation: number; index: number } =
+          best === null ? req.verify(arrangementOf(kind, perFace), area, gamma) : req.verify(arrangementOf(kind, perFace), area, gamma, best.utilisation);
         // of the layouts with this many bars, the lowest utilisation (the first on a tie)
         if (worst.utilisation <= 1 + 1e-9 && (best === null || worst.utilisation < best.utilisation)) {
           best = {

@@ -638,12 +638,16 @@ export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadRe
  * Re-verifies candidate layouts: the largest utilisation of the discrete bars over every load, with every
  * effect (slenderness re-run with the candidate's bars, the minimum moment, every sign and orientation
  * variant, the exact biaxial capacity where Muy is given). Loads are tried in `order` (worst first) and the
- * search stops at the first failure. Unstable or out-of-scope loads count as failing.
+ * search stops at the first failure, or at the first utilisation above `stopAbove` (default just above 1: a
+ * caller comparing candidates passes the best utilisation so far). Unstable or out-of-scope loads count as failing.
  */
-export function layoutVerifier(input: ColumnCheckInput, order?: readonly number[]): (arrangement: Arrangement, area: number, gamma: number) => { utilisation: number; index: number } {
+export function layoutVerifier(
+  input: ColumnCheckInput,
+  order?: readonly number[],
+): (arrangement: Arrangement, area: number, gamma: number, stopAbove?: number) => { utilisation: number; index: number } {
   const { barSelection: _sel, rho: _rho, layout: _layout, ...rest } = input;
   const indices = order ?? input.loads.map((_, i) => i);
-  return (arrangement, area, gamma) => {
+  return (arrangement, area, gamma, stopAbove = 1 + 1e-9) => {
     const check = prepareColumnCheck({ ...rest, arrangement, gamma, layout: { arrangement, area, gamma, description: '' } }, { readings: false });
     // screen every load on the ray tables (interpolated, biaxial left out), then settle exactly every load
     // within the screening margin of failing, worst first; stop at the first exact failure
@@ -655,7 +659,7 @@ export function layoutVerifier(input: ColumnCheckInput, order?: readonly number[
       if (su < SCREEN_MARGIN * worst.utilisation && su < SCREEN_MARGIN && !biaxial(i)) continue;
       const u = checkedUtilisation(check, input.loads[i]!, true);
       if (u > worst.utilisation) worst = { utilisation: u, index: i };
-      if (u > 1 + 1e-9) break;
+      if (u > stopAbove) break;
     }
     return worst;
   };
