@@ -72,4 +72,14 @@ describe('--gamma-b reaches the exact biaxial analysis (contour)', () => {
     expectClose(row[cols.indexOf('na_depth')]!, 8, 1e-6);
     expectClose(row[cols.indexOf('My')]!, (0.65 * 3873.328) / 12, 1e-6);
   });
+  it('check with --gamma-b: a load on that hand-summed point has exact biaxial utilisation 1', async () => {
+    const muy = (0.65 * 3873.328) / 12; // kip·ft
+    const r = await runCli(['check', ...section, '--gamma-b', '0.5', '--bars-per-face', '3,5', '--bar', '#8', '--pu', String(0.65 * 541.45), '--mu', '0', '--muy', String(muy), '--proposals', '0', '--json']);
+    const out = JSON.parse(r.stdout);
+    expect(out.section.gammaB).toBe(0.5);
+    const b = out.results[0].biaxial;
+    expectClose(b.exact, 1, 1e-6);
+    expectClose(b.details.exact.neutralAxisAngleDeg, 90, 1e-6);
+    expectClose(b.details.exact.neutralAxisDepth, 8, 1e-6);
+  });
 });
