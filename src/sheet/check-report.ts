@@ -22,7 +22,7 @@ import { COLOURS, TEXT_STYLES, type TextStyle } from '../chart/style.js';
 import { contourPlot } from '../chart/contour-plot.js';
 import { strainClassWord } from '../codes/types.js';
 import type { ColumnCheck, ColumnLoadResult } from '../design/column-check.js';
-import { barsView, biaxialView, noteText, resultsFootnotes, resultsView, slendernessView, STATUS_WORDS, symbolsOf, type TableView } from '../report/check-view.js';
+import { arrangementName, barsView, biaxialView, noteText, resultsFootnotes, resultsView, slendernessView, STATUS_WORDS, symbolsOf, type TableView } from '../report/check-view.js';
 import { cell as f, fmt } from '../report/format.js';
 import { prepareBiaxial } from '../analysis/biaxial.js';
 import type { CapContext } from '../codes/types.js';
@@ -181,7 +181,7 @@ function sectionText(c: ColumnCheck): string {
   const un = DISPLAY_UNITS[c.units];
   const sy = c.basis.symbols;
   const dims = c.shape.kind === 'rectangle' ? `${fmt(c.shape.b)} × ${fmt(c.shape.h)} ${un.length}` : `D = ${fmt(c.shape.diameter)} ${un.length}`;
-  return `${dims} ${c.basis.transverse}, ${c.arrangement.kind}, ${sy.concreteStrength} ${fmt(c.basis.fc)} ${un.stress}, ${sy.steelStrength} ${fmt(c.basis.fy)} ${un.stress}, γ ${fmt(c.gamma, 3)}${c.gammaB !== null ? `, γB ${fmt(c.gammaB, 3)}` : ''}`;
+  return `${dims} ${c.basis.transverse}, ${arrangementName(c.arrangement)}, ${sy.concreteStrength} ${fmt(c.basis.fc)} ${un.stress}, ${sy.steelStrength} ${fmt(c.basis.fy)} ${un.stress}, γ ${fmt(c.gamma, 3)}${c.gammaB !== null ? `, γB ${fmt(c.gammaB, 3)}` : ''}`;
 }
 
 /** Columns of a shared table view for the drawn table: text columns left, figures right. */
@@ -308,7 +308,7 @@ function inputsPanel(g: Deco, L: ReportLayout, c: ColumnCheck): number {
     ['design basis', c.basis.title],
     ['section', c.shape.kind === 'rectangle' ? `b × h = ${fmt(c.shape.b)} × ${fmt(c.shape.h)} ${un.length}, ${c.basis.transverse}` : `D = ${fmt(c.shape.diameter)} ${un.length}, ${c.basis.transverse}`],
     ['materials', `${sy.concreteStrength} = ${fmt(c.basis.fc)} ${un.stress}, ${sy.steelStrength} = ${fmt(c.basis.fy)} ${un.stress}`],
-    ['bars', `${c.arrangement.kind}, γ = ${fmt(c.gamma, 4)} (${c.gammaSource === 'given' ? 'given' : 'from cover, tie and bar'})${c.gammaB !== null ? `, γB = ${fmt(c.gammaB, 4)} (given)` : ''}`],
+    ['bars', `${arrangementName(c.arrangement)}, γ = ${fmt(c.gamma, 4)} (${c.gammaSource === 'given' ? 'given' : 'from cover, tie and bar'})${c.gammaB !== null ? `, γB = ${fmt(c.gammaB, 4)} (given)` : ''}`],
     ['checked steel', c.checked ? `${c.checked.description} (ρg = ${f(c.checked.rho)})` : 'none given: ρg required only'],
     ['loads', `${c.results.length} factored combination${c.results.length === 1 ? '' : 's'}, governing ${c.governingId ?? '—'}`],
     ['status', c.summary.text],

@@ -20,6 +20,10 @@ describe('--bars-per-face 3,5', () => {
     // 12 × 0.79 in² (ASTM A615 Table 1) over 16 × 24 in
     expectClose(out.checked.rho, 9.48 / 384, 1e-6);
   });
+  it('the text view names the counts in the section line', async () => {
+    const r = await runCli(['check', ...section, '--bars-per-face', '3,5', '--bar', '#8', '--pu', '300', '--mu', '200', '--proposals', '0']);
+    expect(r.stdout).toContain('four-faces (3 on each b face, 5 on each h face)');
+  });
   it('a single count keeps today’s meaning: 3 on every face, 8 bars', async () => {
     const r = await runCli(['check', ...section, '--bars-per-face', '3', '--bar', '#8', '--pu', '300', '--mu', '200', '--proposals', '0', '--json']);
     const out = JSON.parse(r.stdout);

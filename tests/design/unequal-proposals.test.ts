@@ -67,3 +67,12 @@ describe('proposals for a corner column with Mux and Muy', () => {
     }
   });
 });
+
+describe('clearSpacing of a four-faces pair', () => {
+  it('16 × 24 in, γ 0.75, γB 0.5, [3, 5], 1 in bars: min(0.5·16/2, 0.75·24/4) − 1 = 3 in (hand calculation)', () => {
+    // b faces: 3 bars over γB·b = 8 in → 4 in centres; h faces: 5 bars over γ·h = 18 in → 4.5 in centres
+    expectClose(clearSpacing(shape, 'four-faces', [3, 5], 0.75, 1, 0.5), 3, 1e-12);
+    // equal cover: across b = 16 − (1 − 0.75)·24 = 10 in → 5 in centres; the h faces govern, 4.5 − 1
+    expectClose(clearSpacing(shape, 'four-faces', [3, 5], 0.75, 1), 3.5, 1e-12);
+  });
+});
