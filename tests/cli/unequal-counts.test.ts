@@ -24,6 +24,17 @@ describe('--bars-per-face 3,5', () => {
     const r = await runCli(['check', ...section, '--bars-per-face', '3,5', '--bar', '#8', '--pu', '300', '--mu', '200', '--proposals', '0']);
     expect(r.stdout).toContain('four-faces (3 on each b face, 5 on each h face)');
   });
+  it('check --json proposals for Mux with Muy carry an unequal pair as perFace [nb, nh], as barsPerFace', async () => {
+    const r = await runCli(['check', '--fc', '5', '--fy', '60', '--b', '16', '--h', '24', '--cover', '1.5', '--tie', '#4', '--bar', '#8', '--arrangement', 'four-faces', '--pu', '400', '--mu', '300', '--muy', '150', '--json']);
+    expect(r.code).toBe(0);
+    const pairs = JSON.parse(r.stdout).bars.filter((p: { perFace: unknown }) => Array.isArray(p.perFace));
+    expect(pairs.length).toBeGreaterThan(0);
+    for (const p of pairs) {
+      const [nb, nh] = p.perFace as [number, number];
+      expect(p.count).toBe(2 * nb + 2 * nh - 4);
+      expect(p.layout).toContain(`(${nb} on each b face, ${nh} on each h face, corners on both)`);
+    }
+  });
   it('a single count keeps today’s meaning: 3 on every face, 8 bars', async () => {
     const r = await runCli(['check', ...section, '--bars-per-face', '3', '--bar', '#8', '--pu', '300', '--mu', '200', '--proposals', '0', '--json']);
     const out = JSON.parse(r.stdout);

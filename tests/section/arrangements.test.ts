@@ -34,6 +34,19 @@ describe('layoutBars', () => {
     const bars = layoutBars(r, { kind: 'four-faces', barsPerFace: [3, 5] }, 12, { gamma: 0.75, gammaX: 0.5 });
     expect([...new Set(bars.map((b) => Math.abs(b.x)))].sort()).toEqual([0, 4]);
   });
+  it('four-faces [nb, nh] for every pair 2–8: 2·nb + 2·nh − 4 distinct bars, all on the perimeter at γ and γB', () => {
+    const r: Shape = { kind: 'rectangle', b: 16, h: 24 };
+    for (let nb = 2; nb <= 8; nb++) {
+      for (let nh = 2; nh <= 8; nh++) {
+        const bars = layoutBars(r, { kind: 'four-faces', barsPerFace: [nb, nh] }, 1, { gamma: 0.75, gammaX: 0.6 });
+        expect(bars).toHaveLength(2 * nb + 2 * nh - 4);
+        expect(new Set(bars.map((b) => `${b.x.toFixed(9)},${b.y.toFixed(9)}`)).size).toBe(bars.length);
+        for (const b of bars) expect(Math.abs(Math.abs(b.x) - 4.8) < 1e-9 || Math.abs(Math.abs(b.y) - 9) < 1e-9).toBe(true);
+        expect(bars.filter((b) => Math.abs(b.y - 9) < 1e-9)).toHaveLength(nb);
+        expect(bars.filter((b) => Math.abs(b.x - 4.8) < 1e-9)).toHaveLength(nh);
+      }
+    }
+  });
   it('four-faces [4, 4] is the same layout as a single count 4', () => {
     expect(layoutBars(sq, { kind: 'four-faces', barsPerFace: [4, 4] }, 12, { gamma: 0.75 })).toEqual(layoutBars(sq, { kind: 'four-faces', barsPerFace: 4 }, 12, { gamma: 0.75 }));
   });
