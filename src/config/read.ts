@@ -120,7 +120,8 @@ export function resolveChartSet(file: ChartSetFile, opts: ReadOptions = {}): Res
         for (const fy of fys)
           for (const gamma of gammas)
             for (const arrangement of arrangements)
-              for (const transverse of transverses) partial.push({ index: partial.length + 1, origin: at, shape, fc, fy, gamma, arrangement, transverse, basisOptions, variantOptions, ...(axes ? { axes } : {}) });
+              for (const transverse of transverses)
+                partial.push({ index: partial.length + 1, origin: at, shape, fc, fy, gamma, ...(g.gammaB !== undefined ? { gammaB: g.gammaB } : {}), arrangement, transverse, basisOptions, variantOptions, ...(axes ? { axes } : {}) });
   });
   const sheets: ResolvedSheet[] = partial.map((s) => ({
     ...s,

@@ -18,7 +18,7 @@ import { DEFAULT_ANGLE_STEP_DEG } from '../analysis/biaxial-family.js';
 import { capacityAlongRay as biaxialRay, prepareBiaxial, type BiaxialSection } from '../analysis/biaxial.js';
 import { prepareSection } from '../analysis/prepared-section.js';
 import type { Basis, CapContext, StrainClass } from '../codes/types.js';
-import { layoutBars, mirroredBars, symmetricAboutBendingAxis } from '../section/arrangements.js';
+import { layoutBars, mirroredBars, symmetricAboutBendingAxis, type LayoutOptions } from '../section/arrangements.js';
 import type { BarSize } from '../section/bar-tables.js';
 import { grossArea, sectionDepth } from '../section/geometry.js';
 import type { Arrangement, Bar, Shape } from '../section/types.js';
@@ -41,6 +41,8 @@ export interface ColumnCheckInput {
   arrangement: Arrangement;
   /** bar-spacing ratio of the arrangement */
   gamma: number;
+  /** γB: outer-column spacing ÷ b (rectangles); absent: the same cover as γ gives on h */
+  gammaB?: number;
   /** where γ came from, for the views (default 'given') */
   gammaSource?: 'given' | 'detailing';
   capContext?: CapContext;
@@ -149,6 +151,8 @@ export interface ColumnCheck {
   readonly shape: Shape;
   readonly arrangement: Arrangement;
   readonly gamma: number;
+  /** γB, outer-column spacing ÷ b, when given (null: the same cover as γ gives on h) */
+  readonly gammaB: number | null;
   readonly gammaSource: 'given' | 'detailing';
   readonly capContext: CapContext;
   readonly area: number;
@@ -199,7 +203,7 @@ const RING_TURNS = 4;
  * orientations over half a pitch, the weakest governs. Any other layout not symmetric about the bending
  * axis meets a negative moment as its mirror image. Symmetric layouts have one variant.
  */
-export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: number): Variant[] {
+export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: number, gammaB?: number): Variant[] {
   if (shape.kind === 'circle' && arrangement.kind === 'ring') {
     const pitch = 360 / arrangement.bars;
     return Array.from({ length: RING_TURNS + 1 }, (_, k) => {
@@ -207,7 +211,7 @@ export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: n
       return { label: k === 0 ? 'ring with a bar at the compression extreme' : `ring turned ${fmtDeg(deg)}° from a bar at the compression extreme`, sign: 0 as const, turnDeg: deg, map: turn(deg) };
     });
   }
-  const bars = layoutBars(shape, arrangement, 1, { gamma });
+  const bars = layoutBars(shape, arrangement, 1, layoutOptions(gamma, gammaB));
   if (symmetricAboutBendingAxis(bars, sectionDepth(shape))) return [{ label: 'as drawn', sign: 0, turnDeg: 0, map: (b) => [...b] }];
   return [
     { label: 'branch with compression on the +y face', sign: 1, turnDeg: 0, map: (b) => [...b] },
@@ -216,6 +220,9 @@ export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: n
 }
 
 const fmtDeg = (d: number): string => String(Number(d.toFixed(2)));
+
+/** Layout options of γ and, when given, γB (layoutBars' gammaX). */
+const layoutOptions = (gamma: number, gammaB: number | undefined): LayoutOptions => (gammaB === undefined ? { gamma } : { gamma, gammaX: gammaB });
 
 // ───────────────────────────── prepared context ─────────────────────────────
 
@@ -255,27 +262,37 @@ export function prepareColumnCheck(input: ColumnCheckInput, opts: { readings?: b
   const area = grossArea(shape);
   const depth = sectionDepth(shape);
   const capContext = input.capContext ?? {};
-  const unit = layoutBars(shape, input.arrangement, 1, { gamma: input.gamma });
+  const at = layoutOptions(input.gamma, input.gammaB);
+  const unit = layoutBars(shape, input.arrangement, 1, at);
   const checkedBars = input.layout
-    ? layoutBars(shape, input.layout.arrangement, input.layout.area, { gamma: input.layout.gamma })
+    ? layoutBars(shape, input.layout.arrangement, input.layout.area, layoutOptions(input.layout.gamma, input.gammaB))
     : input.rho !== undefined
-      ? layoutBars(shape, input.arrangement, input.rho * area, { gamma: input.gamma })
+      ? layoutBars(shape, input.arrangement, input.rho * area, at)
       : null;
   const checkedRho = input.layout ? input.layout.area / area : (input.rho ?? null);
   const chartReq = (arrangement: Arrangement) =>
-    buildChartSet({ basis, shape, arrangement, gamma: input.gamma, capContext, rhoLimits: basis.rhoLimits, ...(input.chartGammaStep !== undefined ? { gammaStep: input.chartGammaStep } : {}) });
+    buildChartSet({ basis, shape, arrangement, gamma: input.gamma, ...(input.gammaB !== undefined ? { gammaB: input.gammaB } : {}), capContext, rhoLimits: basis.rhoLimits, ...(input.chartGammaStep !== undefined ? { gammaStep: input.chartGammaStep } : {}) });
   const charts = readings ? chartReq(input.arrangement) : null;
-  const variants = sectionVariants(shape, input.arrangement, input.gamma).map((info): PreparedVariant => {
+  const variants = sectionVariants(shape, input.arrangement, input.gamma, input.gammaB).map((info): PreparedVariant => {
     const table = tabulate(prepareSection(basis, shape, info.map(unit), capContext), 128);
     const checked = checkedBars ? tabulate(prepareSection(basis, shape, info.map(checkedBars), capContext), 128) : null;
     return { info, table, checked };
   });
   const biaxial = input.loads.some((l) => l.Muy !== undefined);
   const checkedBiaxial = checkedBars && biaxial ? prepareBiaxial(basis, shape, checkedBars, capContext) : null;
-  const positionBars = layoutBars(shape, input.arrangement, area, { gamma: input.gamma });
+  const positionBars = layoutBars(shape, input.arrangement, area, at);
   const biaxialCharts =
     readings && biaxial && input.arrangement.kind !== 'custom'
-      ? new BiaxialCharts({ basis, shape, arrangement: input.arrangement, gamma: input.gamma, capContext, rhoLimits: basis.rhoLimits, ...(input.chartAxialStep !== undefined ? { axialStep: input.chartAxialStep } : {}) })
+      ? new BiaxialCharts({
+          basis,
+          shape,
+          arrangement: input.arrangement,
+          gamma: input.gamma,
+          ...(at.gammaX !== undefined ? { gammaX: at.gammaX } : {}),
+          capContext,
+          rhoLimits: basis.rhoLimits,
+          ...(input.chartAxialStep !== undefined ? { axialStep: input.chartAxialStep } : {}),
+        })
       : null;
   return { input, basis, area, depth, capContext, variants, charts, biaxialCharts, checkedRho, checkedBars, positionBars, checkedBiaxial, biaxial };
 }
@@ -311,9 +328,10 @@ export function biaxialRhoRequired(
   capContext: CapContext,
   load: { Pu: number; Mux: number; Muy: number },
   limits: { min: number; max: number },
+  gammaB?: number,
 ): { rho: number | null; status: RhoStatus } {
   const area = grossArea(shape);
-  const util = (rho: number) => biaxialRay(prepareBiaxial(basis, shape, layoutBars(shape, arrangement, rho * area, { gamma }), capContext), load.Pu, load.Mux, load.Muy).utilisation;
+  const util = (rho: number) => biaxialRay(prepareBiaxial(basis, shape, layoutBars(shape, arrangement, rho * area, layoutOptions(gamma, gammaB)), capContext), load.Pu, load.Mux, load.Muy).utilisation;
   if (util(limits.min) <= 1) return { rho: limits.min, status: 'minimum-governs' };
   if (!(util(limits.max) <= 1)) return { rho: null, status: 'not-possible' };
   let lo = limits.min;
@@ -440,7 +458,7 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
     } else if (input.shape.kind === 'circle') {
       biaxial = { rhoRequired: g.req.rho, rhoStatus: g.req.status, ...withChart(g.req.rho) };
     } else {
-      const r = biaxialRhoRequired(basis, input.shape, input.arrangement, input.gamma, ctx.capContext, bl, limits);
+      const r = biaxialRhoRequired(basis, input.shape, input.arrangement, input.gamma, ctx.capContext, bl, limits, input.gammaB);
       biaxial = { rhoRequired: r.rho, rhoStatus: r.status, ...withChart(r.rho) };
     }
   }
@@ -585,6 +603,7 @@ export function describeCheck(ctx: ColumnCheckContext): ColumnCheckFrame {
     shape: input.shape,
     arrangement: input.arrangement,
     gamma: input.gamma,
+    gammaB: input.gammaB ?? null,
     gammaSource: input.gammaSource ?? 'given',
     capContext: ctx.capContext,
     area: ctx.area,
@@ -696,6 +715,7 @@ function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult 
     shape: f.shape,
     arrangement: f.arrangement,
     gamma: f.gamma,
+    gammaB: f.gammaB,
     gammaSource: f.gammaSource,
     capContext: f.capContext,
     area: f.area,
@@ -710,6 +730,7 @@ function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult 
     barsSkipped,
     limits: f.limits,
     chart: f.chart,
+    biaxialChart: f.biaxialChart,
     checked: f.checked,
     slenderness: f.slenderness,
     barSelection: f.barSelection,
@@ -778,12 +799,16 @@ export function rankColumnCheck(ctx: ColumnCheckContext, visit?: (r: ColumnLoadR
  * Re-verifies candidate layouts: the largest utilisation of the discrete bars over every load, with every
  * effect (slenderness re-run with the candidate's bars, the minimum moment, every sign and orientation
  * variant, the exact biaxial capacity where Muy is given). Loads are tried in `order` (worst first) and the
- * search stops at the first failure. Unstable or out-of-scope loads count as failing.
+ * search stops at the first failure, or at the first utilisation above `stopAbove` (default just above 1: a
+ * caller comparing candidates passes the best utilisation so far). Unstable or out-of-scope loads count as failing.
  */
-export function layoutVerifier(input: ColumnCheckInput, order?: ArrayLike<number>): (arrangement: Arrangement, area: number, gamma: number) => { utilisation: number; index: number } {
+export function layoutVerifier(
+  input: ColumnCheckInput,
+  order?: ArrayLike<number>,
+): (arrangement: Arrangement, area: number, gamma: number, stopAbove?: number) => { utilisation: number; index: number } {
   const { barSelection: _sel, rho: _rho, layout: _layout, ...rest } = input;
   const indices = order ? Array.from(order) : input.loads.map((_, i) => i);
-  return (arrangement, area, gamma) => {
+  return (arrangement, area, gamma, stopAbove = 1 + 1e-9) => {
     const check = prepareColumnCheck({ ...rest, arrangement, gamma, layout: { arrangement, area, gamma, description: '' } }, { readings: false });
     // screen every load on the ray tables (interpolated, biaxial left out), then settle exactly every load
     // within the screening margin of failing, worst first; stop at the first exact failure
@@ -795,7 +820,7 @@ export function layoutVerifier(input: ColumnCheckInput, order?: ArrayLike<number
       if (su < SCREEN_MARGIN * worst.utilisation && su < SCREEN_MARGIN && !biaxial(i)) continue;
       const u = checkedUtilisation(check, input.loads[i]!, true);
       if (u > worst.utilisation) worst = { utilisation: u, index: i };
-      if (u > 1 + 1e-9) break;
+      if (u > stopAbove) break;
     }
     return worst;
   };

@@ -14,6 +14,7 @@ import { parseLoadQuantity, parseLoadsCsv as readLoadsCsv } from '../input/loads
 import { CHART_AXIAL_STEP_RANGE, CHART_GAMMA_STEP_RANGE } from '../input/limits.js';
 import { barSet } from '../section/bar-tables.js';
 import { barCount } from '../section/arrangements.js';
+import { faceCounts, type Arrangement } from '../section/types.js';
 import { DISPLAY_UNITS, parseQuantity, systemFactor, type UnitSystem } from '../units/index.js';
 import { reportDate } from './format.js';
 import { resolveSectionFlags, withFlagNames, type ResolvedSection, type SectionFlags } from './section-flags.js';
@@ -92,6 +93,7 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
     shape: section.shape,
     arrangement: section.arrangement,
     gamma: section.gamma,
+    ...(section.gammaB !== undefined ? { gammaB: section.gammaB } : {}),
     gammaSource: section.gammaSource,
     capContext: section.capContext,
     loads,
@@ -114,7 +116,7 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
       arrangement: section.arrangement,
       area: count * section.bar.area,
       gamma: section.gamma,
-      description: /^\d+(\.\d+)?$/.test(section.bar.name) ? `${count} × ${section.bar.name} mm` : `${count} ${section.bar.name}`,
+      description: `${/^\d+(\.\d+)?$/.test(section.bar.name) ? `${count} × ${section.bar.name} mm` : `${count} ${section.bar.name}`}${faceText(section.arrangement)}`,
     };
   }
 
@@ -132,13 +134,22 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
       .map((s) => ({ name: s.name, diameter: s.diameter * k, area: s.area * k * k }))
       .filter((s) => s.diameter >= MIN_PRACTICAL_BAR[u] - 1e-9);
     const detailing: Detailing =
-      section.cover !== undefined ? { kind: 'cover', cover: section.cover, tieDiameter: section.tieDiameter ?? 0 } : { kind: 'gamma', gamma: section.gamma };
+      section.cover !== undefined
+        ? { kind: 'cover', cover: section.cover, tieDiameter: section.tieDiameter ?? 0 }
+        : { kind: 'gamma', gamma: section.gamma, ...(section.gammaB !== undefined ? { gammaB: section.gammaB } : {}) };
     input.barSelection = { detailing, sizes, count: proposals, ...(aggregate !== undefined ? { aggregate } : {}) };
   }
   const fx = resolveEffects(o, section, input, o.loads === undefined);
   input.loads = fx.loads;
   if (fx.slenderness) input.slenderness = fx.slenderness;
   return { section, input, json: o.json === true, ...(o.report !== undefined ? { report: o.report } : {}) };
+}
+
+/** " (3 on each b face, 5 on each h face)" for unequal four-faces counts; "" otherwise. */
+function faceText(a: Arrangement): string {
+  if (a.kind !== 'four-faces') return '';
+  const [nb, nh] = faceCounts(a.barsPerFace);
+  return nb === nh ? '' : ` (${nb} on each b face, ${nh} on each h face)`;
 }
 
 /** Resolves the flags and checks every load (no output). */

@@ -11,6 +11,8 @@ import { MAX_QUANTITY_CHARS, unitSuffixes, type QuantityKind } from '../units/in
 
 /** γ a sheet or a section may use (common practice: outer rows closer than 0.3·h or beyond 0.95·h are not buildable). */
 export const GAMMA_RANGE = [0.3, 0.95] as const;
+/** γB (outer-column spacing ÷ b, beside γ): the same buildable range as γ (common practice). */
+export const GAMMA_B_RANGE = GAMMA_RANGE;
 /** ρg values a family may hold; the basis's own column limits are printed on the sheet. */
 export const RHO_RANGE = [0.001, 0.1] as const;
 /** ω values a family may hold before each sheet's conversion to ρg is checked against RHO_RANGE. */
@@ -19,7 +21,10 @@ export const ECCENTRICITY_RANGE = [0.01, 10] as const;
 export const ASPECT_RANGE = [0.2, 5] as const;
 export const PNG_SCALE_RANGE = [0.5, 8] as const;
 
-/** Bars per face: two-faces may have one bar per face; the others count corners on both faces. */
+/**
+ * Bars per face: two-faces may have one bar per face; the others count corners on both faces.
+ * A four-faces pair [nb, nh] holds each count to the same range.
+ */
 export const BARS_PER_FACE_RANGE = { 'two-faces': [1, 20], 'four-faces': [2, 20], 'side-faces': [2, 20] } as const;
 /** Bars on a ring (circles). */
 export const RING_BARS_RANGE = [4, 48] as const;

@@ -11,6 +11,7 @@ import { strainClassWord } from '../codes/types.js';
 import type { ColumnCheck, ColumnCheckFrame, ColumnCheckHead, ColumnLoadResult, LoadStatus } from '../design/column-check.js';
 import type { SlendernessResult } from '../design/slenderness.js';
 import { barSet } from '../section/bar-tables.js';
+import { faceCounts, type Arrangement } from '../section/types.js';
 import { DISPLAY_UNITS, toDisplay, type UnitSystem } from '../units/index.js';
 import { CAUTION } from './caution.js';
 import { cell as f, fmt, num } from './format.js';
@@ -167,7 +168,7 @@ function footnotesFor(c: ColumnCheckHead, gov: ColumnLoadResult | undefined): st
 }
 
 /** The axial level of the biaxial sheets in the basis's words: ν for EN 1992-1-1, P/(f′c·Ag) otherwise. */
-const axialLevelWords = (c: ColumnCheck): string => c.basis.symbols.dimensionlessAxial ?? `${symbolsOf(c).P}/(${c.basis.symbols.normalisingStress}·Ag)`;
+const axialLevelWords = (c: ColumnCheckFrame): string => c.basis.symbols.dimensionlessAxial ?? `${symbolsOf(c).P}/(${c.basis.symbols.normalisingStress}·Ag)`;
 
 /** Slenderness per load and axis; null without slenderness input. */
 export function slendernessView(c: ColumnCheck): { method: string; table: TableView } | null {
@@ -277,12 +278,19 @@ function barsViewFor(c: ColumnCheckHead, loadId: (index: number) => string | und
   return { headers: ['bars', `As ${un.area}`, 'ρg', 'γ', `clear ${un.length}`, 'util (all effects)', 'by load'], rows, marked: rows.map(() => false) };
 }
 
+/** An arrangement's name in section lines: its kind, and for unequal four-faces counts the two counts in words. */
+export function arrangementName(a: Arrangement): string {
+  if (a.kind !== 'four-faces') return a.kind;
+  const [nb, nh] = faceCounts(a.barsPerFace);
+  return nb === nh ? a.kind : `${a.kind} (${nb} on each b face, ${nh} on each h face)`;
+}
+
 /** The section in one line. */
 export function sectionLine(c: ColumnCheckFrame): string {
   const un = unitsOf(c.units);
   const b = c.basis;
   const dims = c.shape.kind === 'rectangle' ? `${fmt(c.shape.b)} × ${fmt(c.shape.h)} ${un.length}` : `D = ${fmt(c.shape.diameter)} ${un.length}`;
-  return `${b.title}, ${dims} ${b.transverse}, ${c.arrangement.kind}, ${b.symbols.concreteStrength} = ${fmt(b.fc)} ${un.stress}, ${b.symbols.steelStrength} = ${fmt(b.fy)} ${un.stress}, γ = ${fmt(c.gamma, 4)} (${c.gammaSource})`;
+  return `${b.title}, ${dims} ${b.transverse}, ${arrangementName(c.arrangement)}, ${b.symbols.concreteStrength} = ${fmt(b.fc)} ${un.stress}, ${b.symbols.steelStrength} = ${fmt(b.fy)} ${un.stress}, γ = ${fmt(c.gamma, 4)} (${c.gammaSource})${c.gammaB !== null ? `, γB = ${fmt(c.gammaB, 4)} (given)` : ''}`;
 }
 
 /** Assumptions of the check itself, beside the basis notes. */
@@ -691,6 +699,7 @@ export function* checkJsonPieces(src: CheckRows, generator: string): Generator<s
       shape: c.shape,
       area: num(c.area),
       gamma: num(c.gamma),
+      ...(c.gammaB !== null ? { gammaB: num(c.gammaB) } : {}),
       gammaSource: c.gammaSource,
       arrangement: c.arrangement,
       transverse: c.basis.transverse,

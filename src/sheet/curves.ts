@@ -37,7 +37,7 @@ export function sheetRhos(set: ResolvedChartSet, basis: Basis): number[] {
 
 export function familyForSheet(set: ResolvedChartSet, sheet: ResolvedSheet): CurveFamily {
   const basis = basisForSheet(set, sheet);
-  return computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: sheetRhos(set, basis), basePoints: SHEET_BASE_POINTS });
+  return computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, ...(sheet.gammaB !== undefined ? { gammaX: sheet.gammaB } : {}), rhos: sheetRhos(set, basis), basePoints: SHEET_BASE_POINTS });
 }
 
 /**
@@ -51,7 +51,7 @@ export function groupExtents(set: ResolvedChartSet): Record<string, AxisExtent> 
     const basis = basisForSheet(set, sheet);
     const rhos = sheetRhos(set, basis);
     const outer = Math.max(...rhos);
-    const f = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: [outer], basePoints: SHEET_BASE_POINTS });
+    const f = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, ...(sheet.gammaB !== undefined ? { gammaX: sheet.gammaB } : {}), rhos: [outer], basePoints: SHEET_BASE_POINTS });
     const d = set.normalisation === 'dimensionless' ? basis.normalisingStress : 1;
     const list = byGroup.get(sheet.origin) ?? [];
     list.push(familyExtent(f, families, d));

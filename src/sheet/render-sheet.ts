@@ -16,7 +16,7 @@ export async function renderSheet(set: ResolvedChartSet, index = 0, format: Shee
   const sheet = set.sheets[index];
   if (!sheet) throw new RangeError(`sheet ${index} is not in the set (it has ${set.sheets.length})`);
   const basis = basisForSheet(set, sheet);
-  const family = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: sheetRhos(set, basis), capContext: opts.capContext ?? {}, basePoints: SHEET_BASE_POINTS });
+  const family = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, ...(sheet.gammaB !== undefined ? { gammaX: sheet.gammaB } : {}), rhos: sheetRhos(set, basis), capContext: opts.capContext ?? {}, basePoints: SHEET_BASE_POINTS });
   const { SheetRenderer } = await import('../render/renderer.js');
   const renderer = await SheetRenderer.create();
   try {
