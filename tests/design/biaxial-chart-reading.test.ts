@@ -2,6 +2,7 @@
  * Reading a biaxial load off emulated biaxial sheets (src/design/biaxial-chart-reading.ts) and its place in
  * the check engine (`results[].biaxial.rhoFromChart`).
  */
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { contourPointAtAngle, prepareBiaxial } from '../../src/analysis/biaxial.js';
 import type { BiaxialContour } from '../../src/analysis/biaxial-family.js';
@@ -127,5 +128,25 @@ describe('pmchart check --muy', () => {
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/--chart-axial-step/);
     expect(r.stderr.trim().split('\n')).toHaveLength(1);
+  });
+});
+
+describe('generated biaxial loads (property test, fixed seed in CI)', () => {
+  const charts = new BiaxialCharts({ basis, shape, arrangement: { kind: 'four-faces', barsPerFace: [3, 5] }, gamma, rhoLimits: basis.rhoLimits });
+  const rhos = charts.rhos;
+  it('every reading is null or a finite ρg within the drawn family, and its levels bracket ν', () => {
+    fc.assert(
+      fc.property(fc.double({ min: -0.3, max: 1.1, noNaN: true }), fc.double({ min: 0, max: 2, noNaN: true }), fc.double({ min: -Math.PI, max: Math.PI, noNaN: true }), (nu, m, psi) => {
+        const r = charts.read(nu * basis.normalisingStress * Ag, m * Ag * 24 * Math.cos(psi), m * Ag * 20 * Math.sin(psi));
+        if (r.rhoFromChart !== null) {
+          expect(Number.isFinite(r.rhoFromChart)).toBe(true);
+          expect(r.rhoFromChart).toBeGreaterThanOrEqual(rhos[0]! - 1e-12);
+          expect(r.rhoFromChart).toBeLessThanOrEqual(rhos[rhos.length - 1]! + 1e-12);
+        }
+        expect(r.levels[0]!.level).toBeLessThanOrEqual(nu + 1e-9);
+        expect(r.levels[r.levels.length - 1]!.level).toBeGreaterThanOrEqual(nu - 1e-9);
+      }),
+      { numRuns: 300 },
+    );
   });
 });
