@@ -20,10 +20,14 @@ export {
   checkColumn,
   checkColumnLoads,
   prepareColumnCheck,
+  rankColumnCheck,
+  describeCheck,
   layoutVerifier,
   LOAD_STATUSES,
   isLoadStatus,
   type ColumnCheck,
+  type ColumnCheckHead,
+  type RankedColumnCheck,
   type ColumnCheckInput,
   type ColumnLoadResult,
   type LoadStatus,
@@ -33,7 +37,7 @@ export {
 export type { FactoredLoad, GivenLayout } from './design/check.js';
 export type { SlendernessRequest, AxisMember } from './design/column-effects.js';
 export type { BarProposal, Detailing } from './design/bar-selection.js';
-export { checkJson, checkText, checkReportText } from './report/check-view.js';
+export { checkJson, checkText, checkReportText, checkJsonPieces, checkTextPieces, checkReportPieces, textSizer } from './report/check-view.js';
 export { CAUTION } from './report/caution.js';
 export { readChartSet, readChartSetReport } from './config/read.js';
 export type { ResolvedChartSet } from './config/types.js';

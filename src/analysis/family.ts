@@ -21,6 +21,7 @@ export interface FamilyRequest {
   arrangement: Arrangement;
   /** outer-row spacing over depth */
   gamma: number;
+  /** γB: outer-column spacing over width b (LayoutOptions.gammaX); absent: the same cover as γ gives on h */
   gammaX?: number;
   rhos: readonly number[];
   capContext?: CapContext;

@@ -19,6 +19,8 @@ export interface ContourPageInput {
   shape: Shape;
   arrangement: Arrangement;
   gamma: number;
+  /** γB when given (outer-column spacing ÷ b) */
+  gammaB?: number;
   /** design axial load, internal units */
   Pu: number;
   /** "ρg = 0.02" or "8 × #9" */
@@ -75,7 +77,7 @@ function contourPageTexts(
   };
   const s = section.shape;
   heading('Section');
-  para('body', `${s.kind === 'rectangle' ? `${fmtNum(s.b)} × ${fmtNum(s.h)} ${un.length}` : `D = ${fmtNum(s.diameter)} ${un.length}`} ${b.transverse}, ${section.arrangement.kind}, γ = ${fmtNum(section.gamma)}`);
+  para('body', `${s.kind === 'rectangle' ? `${fmtNum(s.b)} × ${fmtNum(s.h)} ${un.length}` : `D = ${fmtNum(s.diameter)} ${un.length}`} ${b.transverse}, ${section.arrangement.kind}, γ = ${fmtNum(section.gamma)}${section.gammaB !== undefined ? `, γB = ${fmtNum(section.gammaB)}` : ''}`);
   para('body', `f′c = ${fmtNum(b.fc)} ${un.stress}, fy = ${fmtNum(b.fy)} ${un.stress}; steel ${steel} (Ast = ${fmtNum(sec.steelArea)} ${section.units === 'us' ? 'in²' : 'mm²'})`);
   heading('Load');
   if (loads.length === 0) para('body', `Pu = ${P}; no moments given (--mu, --muy mark a load point).`);

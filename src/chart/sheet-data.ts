@@ -724,6 +724,11 @@ function sideColumn(ctx: SheetContext, g: Deco, fit: { picture: number; notes: T
     'Short column: slenderness, creep and second-order effects are not included.',
   ];
   const arr = family.arrangement;
+  if (sheet.gammaB !== undefined) {
+    extra.push(`Bar columns: the outer bar columns are γB·b = ${sheet.gammaB.toFixed(2)}·b apart (centres), set apart from γ; the cover across b differs from the cover across h.`);
+  } else if (arr.kind === 'four-faces' && typeof arr.barsPerFace !== 'number' && arr.barsPerFace[0] !== arr.barsPerFace[1]) {
+    extra.push('Bar columns: the outer bar columns have the same cover across b as the outer rows have across h.');
+  }
   if (arr.kind === 'ring') {
     extra.push(
       `Orientation: the ${arr.bars} bars are drawn with one bar at the compression extreme. Turned half a bar pitch (${fmt(180 / arr.bars, 3)}°) the curves differ slightly; pmchart check takes the weaker orientation for every load.`,
@@ -774,7 +779,7 @@ function titleBlock(ctx: SheetContext, g: Deco): void {
   const section: [string, string, number][] = [
     ['design basis', basis.title, 1.3],
     ['materials', `${sy.concreteStrength} ${stressText(sheet.fc, set.units)} · ${sy.steelStrength} ${stressText(sheet.fy, set.units)}`, 1.9],
-    ['γ', sheet.gamma.toFixed(2), 0.6],
+    sheet.gammaB === undefined ? ['γ', sheet.gamma.toFixed(2), 0.6] : ['γ · γB', `${sheet.gamma.toFixed(2)} · ${sheet.gammaB.toFixed(2)}`, 0.8],
     ['shape · bars', `${describeShape(sheet.shape)} · ${describeArrangement(sheet.arrangement)}`, 3.7],
   ];
   const people: [string, string, number][] = [

@@ -20,7 +20,7 @@ export interface ActualBars {
 export function actualBars(section: ResolvedSection, rhoText: string | undefined, path = '--rho'): ActualBars {
   if (!section.sized) throw new PmError(ERROR_CODES.missing, '--b/--h', 'is required (actual section size)');
   const ag = grossArea(section.shape);
-  const opts = { gamma: section.gamma };
+  const opts = { gamma: section.gamma, ...(section.gammaB !== undefined ? { gammaX: section.gammaB } : {}) };
   if (rhoText !== undefined) {
     const rho = Number(rhoText);
     if (!Number.isFinite(rho)) throw new PmError(ERROR_CODES.invalidValue, path, 'is not a number', { value: rhoText, allowed: '0.001–0.1' });

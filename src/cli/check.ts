@@ -3,20 +3,30 @@
  * flags into a `ColumnCheckInput`, calls `checkColumn`, prints a view of the one result
  * (src/report/check-view.ts) and sets the exit status: 0 when every load passes, 1 when any load fails,
  * is not possible, unstable or outside the method's scope (2 bad input, 3 internal or I/O error).
+ * A load file of more than STREAM_ABOVE_LOADS loads goes through `rankColumnCheck` instead and is
+ * printed load by load (`writeCheck`), with the same bytes and flat memory.
  */
 import { extname } from 'node:path';
 import type { Command } from 'commander';
-import type { ColumnCheck } from '../design/column-check.js';
+import { checkColumn, describeCheck, prepareColumnCheck, rankColumnCheck, type ColumnCheck } from '../design/column-check.js';
 import { ERROR_CODES, PmError } from '../errors.js';
-import { ioError, writeFileAtomic } from '../io/files.js';
+import { ioError, writeFileAtomic, writePieces, writePiecesAtomic } from '../io/files.js';
 import { CAUTION } from '../report/caution.js';
-import { checkAssumptions, checkJson, checkReportText, checkText } from '../report/check-view.js';
+import { checkAssumptions, checkJson, checkJsonPieces, checkReportPieces, checkReportText, checkText, checkTextPieces, textSizer } from '../report/check-view.js';
 import { generatorLabel } from '../version.js';
 import { reportDate } from '../flags/format.js';
-import { addSectionOptions } from '../flags/section-flags.js';
+import { addSectionOptions, withFlagNames } from '../flags/section-flags.js';
 import { addEffectsOptions } from '../flags/check-effects.js';
-import { computeCheck, isDrawn, type CheckOptions, type ResolvedCheck } from '../flags/check-flags.js';
+import { isDrawn, resolveCheckOptions, type CheckOptions, type ResolvedCheck } from '../flags/check-flags.js';
 export * from '../flags/check-flags.js';
+
+/**
+ * Above this many loads the command ranks the loads first and then prints (and writes .txt and .json
+ * reports) one result at a time, each computed again: memory stays flat for the largest load file.
+ * At or below it the whole result is held and printed at once (one pass of the engine). The bytes are
+ * the same either way.
+ */
+export const STREAM_ABOVE_LOADS = 5000;
 
 /** Prints the chosen view and sets the exit status from the result. */
 function finish(rc: ResolvedCheck, check: ColumnCheck): string {
@@ -24,29 +34,39 @@ function finish(rc: ResolvedCheck, check: ColumnCheck): string {
   return rc.json ? checkJson(check, generatorLabel()) : checkText(check);
 }
 
+const isJsonReport = (file: string): boolean => extname(file).toLowerCase() === '.json';
+
 /**
  * Runs the command and returns what it prints; writes a .txt or .json report when asked. PDF and SVG
- * reports are drawn, which is asynchronous: `runCheckAsync` (what the CLI calls) writes every format.
+ * reports are drawn, which is asynchronous: `runCheckAsync` writes every format.
  */
 export function runCheck(o: CheckOptions): string {
   if (o.report !== undefined && isDrawn(o.report)) {
     throw new PmError(ERROR_CODES.invalidValue, '--report', 'is a drawn report; write PDF and SVG reports with runCheckAsync', { value: o.report });
   }
-  const { rc, check } = computeCheck(o);
+  return runResolved(resolveCheckOptions(o));
+}
+
+function runResolved(rc: ResolvedCheck): string {
+  const check = withFlagNames(() => checkColumn(rc.input));
   if (rc.report !== undefined) {
-    const body = extname(rc.report).toLowerCase() === '.json' ? checkJson(check, generatorLabel()) : checkReportText(check, generatorLabel());
+    const body = isJsonReport(rc.report) ? checkJson(check, generatorLabel()) : checkReportText(check, generatorLabel());
     writeAtomic(rc.report, body);
   }
   return finish(rc, check);
 }
 
-/** The command as the CLI runs it: every report format, the drawn ones through the lazily imported renderer. */
+/** The command with every report format, the drawn ones through the lazily imported renderer; returns what it prints. */
 export async function runCheckAsync(o: CheckOptions): Promise<string> {
-  if (o.report === undefined || !isDrawn(o.report)) return runCheck(o);
-  const { rc, check } = computeCheck(o);
+  return runResolvedAsync(o, resolveCheckOptions(o));
+}
+
+async function runResolvedAsync(o: CheckOptions, rc: ResolvedCheck): Promise<string> {
+  if (rc.report === undefined || !isDrawn(rc.report)) return runResolved(rc);
+  const check = withFlagNames(() => checkColumn(rc.input));
   const date = reportDate(o.date);
   const { writeCheckReport } = await import('../sheet/check-report-file.js');
-  await writeCheckReport(rc.report!, {
+  await writeCheckReport(rc.report, {
     check,
     assumptions: checkAssumptions(check),
     caution: CAUTION,
@@ -58,12 +78,42 @@ export async function runCheckAsync(o: CheckOptions): Promise<string> {
   return finish(rc, check);
 }
 
+/**
+ * The command as the CLI runs it: prints to `out`. A load file above `streamAbove` loads is checked
+ * once to rank the loads (keeping a few numbers per load), then printed in ranked order with each
+ * result computed again, in chunks that wait for the reader; drawn reports (at most
+ * MAX_DRAWN_REPORT_LOADS loads, src/input/limits.ts) need the whole result and take the held path.
+ */
+export async function writeCheck(o: CheckOptions, out: NodeJS.WritableStream = process.stdout, streamAbove = STREAM_ABOVE_LOADS): Promise<void> {
+  const rc = resolveCheckOptions(o);
+  if (rc.input.loads.length <= streamAbove || (rc.report !== undefined && isDrawn(rc.report))) {
+    await writePieces(out, [await runResolvedAsync(o, rc)]);
+    return;
+  }
+  const ctx = withFlagNames(() => prepareColumnCheck(rc.input));
+  const text = !rc.json || (rc.report !== undefined && !isJsonReport(rc.report));
+  const sizer = text ? textSizer(describeCheck(ctx)) : undefined;
+  const ranked = withFlagNames(() => rankColumnCheck(ctx, sizer?.visit));
+  const sizes = sizer?.finish(ranked.governing);
+  if (rc.report !== undefined) {
+    const file = rc.report;
+    const pieces = isJsonReport(file) ? checkJsonPieces(ranked, generatorLabel()) : checkReportPieces(ranked, generatorLabel(), sizes);
+    reportError(file, () => writePiecesAtomic(file, pieces));
+  }
+  if (ranked.check.exitCode !== 0) process.exitCode = ranked.check.exitCode;
+  await writePieces(out, rc.json ? checkJsonPieces(ranked, generatorLabel()) : checkTextPieces(ranked, sizes));
+}
+
 /** Writes through a temporary file and a rename, so a failed run leaves no half-written file. */
 export function writeAtomic(file: string, body: string): void {
+  reportError(file, () => writeFileAtomic(file, body));
+}
+
+/** A report's file error as one line naming --report: 2 for a place the user can change, 3 for a fault (the file module classes it). */
+function reportError(file: string, write: () => void): void {
   try {
-    writeFileAtomic(file, body);
+    write();
   } catch (e) {
-    // the file module names the place and classes the error: 2 for a place the user can change, 3 for a fault
     const err = ioError(file, e);
     throw new PmError(err.code, '--report', err.message.replace(/^[^:]*: /, ''), { value: file }, err.exitCode);
   }
@@ -89,11 +139,12 @@ export function registerCheck(program: Command, run: (fn: () => Promise<void> | 
     .option('--rho <ratio>', 'given ρg to check (utilisation)')
     .option('--aggregate <length>', 'maximum aggregate size, for the clear-spacing rule')
     .option('--chart-gamma-step <step>', 'γ step of the emulated chart sheets', '0.05')
+    .option('--chart-axial-step <step>', 'axial-level step (P/(f′c·Ag), ν for EN) of the emulated biaxial sheets read for loads with Muy', '0.1')
     .option('--proposals <n>', 'how many bar layouts to propose (0 for none)', '5')
     .option('--json', 'print JSON instead of the table')
     .option('--report <file>', 'also write a report: .txt, .json, or a one-page calculation sheet as .pdf or .svg')
     .option('--project <text>', 'project name for the title block of a PDF/SVG report')
     .option('--office <text>', 'office name for the title block of a PDF/SVG report')
     .option('--date <yyyy-mm-dd>', 'date of a PDF/SVG report and its PDF metadata (default SOURCE_DATE_EPOCH, else today)')
-    .action((opts: CheckOptions) => run(async () => void process.stdout.write(await runCheckAsync(opts))));
+    .action((opts: CheckOptions) => run(() => writeCheck(opts)));
 }

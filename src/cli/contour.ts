@@ -66,7 +66,7 @@ export function runContour(o: ContourOptions): string {
   const format = o.format ?? 'csv';
   if (format !== 'csv' && format !== 'json') throw new PmError(ERROR_CODES.invalidValue, '--format', 'is not one of the allowed values', { value: format, allowed: 'csv, json' });
   const { section, Pu, count, bars, sec } = resolveContour(o);
-  const text = contourText(format, { sec, Pu, count, units: section.units, shape: section.shape, arrangement: section.arrangement, gamma: section.gamma, steel: bars.source, steelArea: bars.steelArea, rhoG: bars.rhoG }, generatorLabel());
+  const text = contourText(format, { sec, Pu, count, units: section.units, shape: section.shape, arrangement: section.arrangement, gamma: section.gamma, ...(section.gammaB !== undefined ? { gammaB: section.gammaB } : {}), steel: bars.source, steelArea: bars.steelArea, rhoG: bars.rhoG }, generatorLabel());
   if (o.out) {
     const tmp = `${o.out}.tmp-${process.pid}`;
     try {
@@ -97,7 +97,7 @@ export async function runContourPlot(o: ContourOptions): Promise<string> {
   const Muy = o.muy === undefined ? undefined : parseQuantity(o.muy, 'moment', u, '--muy');
   const loads = Mux !== undefined || Muy !== undefined ? [{ id: 'load', Mux: Mux ?? 0, Muy: Muy ?? 0, governing: true }] : [];
   const { contourPage } = await import('../chart/contour-page.js');
-  const { spec, W, H, title } = contourPage({ sec, units: u, shape: section.shape, arrangement: section.arrangement, gamma: section.gamma, Pu, steel: bars.source, loads, date, ...(o.project !== undefined ? { project: o.project } : {}) });
+  const { spec, W, H, title } = contourPage({ sec, units: u, shape: section.shape, arrangement: section.arrangement, gamma: section.gamma, ...(section.gammaB !== undefined ? { gammaB: section.gammaB } : {}), Pu, steel: bars.source, loads, date, ...(o.project !== undefined ? { project: o.project } : {}) });
   const { SheetRenderer } = await import('../render/renderer.js');
   const { writeFileAtomic } = await import('../sheet/files.js');
   const renderer = await SheetRenderer.create();

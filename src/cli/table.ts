@@ -112,6 +112,7 @@ function* tableJsonPieces(batches: Iterable<{ family: CurveFamily; first: number
       stressUnit: su,
       shape: family.shape.kind,
       gamma: num(family.gamma),
+      ...(s.gammaB !== undefined ? { gammaB: num(s.gammaB) } : {}),
       gammaSource: s.gammaSource,
       arrangement: family.arrangement,
       transverse: b.transverse,

@@ -1,5 +1,7 @@
 /** Spelled-out text for sheet parameters (titles, index page, file names). */
 import type { BasisOptions, BasisSymbols, Transverse } from '../codes/types.js';
+import { barCount } from '../section/arrangements.js';
+import { faceCounts } from '../section/types.js';
 import { DISPLAY_UNITS, type UnitSystem } from '../units/index.js';
 import type { ResolvedShape, ResolvedSheet } from './types.js';
 
@@ -15,8 +17,12 @@ export function describeArrangement(a: ResolvedSheet['arrangement']): string {
   switch (a.kind) {
     case 'two-faces':
       return `${a.barsPerFace} bars on each of two faces`;
-    case 'four-faces':
-      return `${a.barsPerFace} bars per face on four faces (${4 * (a.barsPerFace - 1)} bars)`;
+    case 'four-faces': {
+      const [nb, nh] = faceCounts(a.barsPerFace);
+      return nb === nh
+        ? `${nb} bars per face on four faces (${barCount(a)} bars)`
+        : `${nb} bars on each b face, ${nh} on each h face (${barCount(a)} bars)`;
+    }
     case 'side-faces':
       return `${a.barsPerFace} bars on each side face`;
     case 'ring':
@@ -24,9 +30,14 @@ export function describeArrangement(a: ResolvedSheet['arrangement']): string {
   }
 }
 
-/** Short kebab form for file names: "two-faces-4-per-face". */
+/** Short kebab form for file names: "two-faces-4-per-face"; unequal four-faces counts "four-faces-3-on-b-5-on-h". */
 export function arrangementSlug(a: ResolvedSheet['arrangement']): string {
-  return a.kind === 'ring' ? `ring-${a.bars}-bars` : `${a.kind}-${a.barsPerFace}-per-face`;
+  if (a.kind === 'ring') return `ring-${a.bars}-bars`;
+  if (a.kind === 'four-faces') {
+    const [nb, nh] = faceCounts(a.barsPerFace);
+    return nb === nh ? `${a.kind}-${nb}-per-face` : `${a.kind}-${nb}-on-b-${nh}-on-h`;
+  }
+  return `${a.kind}-${a.barsPerFace}-per-face`;
 }
 
 export const describeTransverse = (t: Transverse): string => (t === 'spiral' ? 'spiral' : 'tied');
@@ -74,7 +85,9 @@ export function titleFields(s: Omit<ResolvedSheet, 'title' | 'fileStem'>, units:
     options: describeBasisOptions(s.variantOptions),
     fc: stressText(s.fc, units),
     fy: stressText(s.fy, units),
-    gamma: s.gamma.toFixed(2),
+    // γB, when given, travels with γ so that every title pattern states it
+    gamma: s.gammaB === undefined ? s.gamma.toFixed(2) : `${s.gamma.toFixed(2)} (γB ${s.gammaB.toFixed(2)})`,
+    gammaB: s.gammaB === undefined ? '' : s.gammaB.toFixed(2),
     arrangement: describeArrangement(s.arrangement),
     transverse: describeTransverse(s.transverse),
     family,
@@ -111,5 +124,5 @@ export function fileStemFor(s: Omit<ResolvedSheet, 'title' | 'fileStem'>, units:
   const shape = s.shape.kind === 'circle' ? 'circular' : s.shape.aspect === 1 ? 'square' : `rectangular-aspect-${fmt(s.shape.aspect)}`;
   const idx = String(s.index).padStart(String(total).length, '0');
   const variant = basisOptionsSlug(s.variantOptions);
-  return [idx, shape, `fc-${fmt(s.fc)}${su}`, `fy-${fmt(s.fy)}${su}`, `gamma-${s.gamma.toFixed(2)}`, arrangementSlug(s.arrangement), s.transverse, ...(variant ? [variant] : [])].join('-');
+  return [idx, shape, `fc-${fmt(s.fc)}${su}`, `fy-${fmt(s.fy)}${su}`, `gamma-${s.gamma.toFixed(2)}`, ...(s.gammaB !== undefined ? [`gammab-${s.gammaB.toFixed(2)}`] : []), arrangementSlug(s.arrangement), s.transverse, ...(variant ? [variant] : [])].join('-');
 }

@@ -161,7 +161,7 @@ export function resolveChartSet(file: ChartSetFile, opts: ReadOptions = {}): Res
           for (const gamma of gammas)
             for (const arrangement of arrangements)
               for (const transverse of transverses)
-                for (const run of levelRuns) partial.push({ index: partial.length + 1, origin: at, shape, fc, fy, gamma, arrangement, transverse, basisOptions, variantOptions, ...(axes ? { axes } : {}), ...(run ?? {}) });
+                for (const run of levelRuns) partial.push({ index: partial.length + 1, origin: at, shape, fc, fy, gamma, ...(g.gammaB !== undefined ? { gammaB: g.gammaB } : {}), arrangement, transverse, basisOptions, variantOptions, ...(axes ? { axes } : {}), ...(run ?? {}) });
   });
   const sheets: ResolvedSheet[] = partial.map((s) => ({
     ...s,

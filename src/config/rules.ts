@@ -8,7 +8,7 @@ import type { Basis, BasisOptions, DesignCode } from '../codes/types.js';
 import { ERROR_CODES, PmError, isPmError } from '../errors.js';
 import { DISPLAY_UNITS } from '../units/index.js';
 import { expandNumbers } from './expand.js';
-import { ASPECT_RANGE, AXIAL_LEVEL_RANGE, BARS_PER_FACE_RANGE, ECCENTRICITY_RANGE, GAMMA_RANGE, isCalendarDate, MAX_SHEETS, OMEGA_RANGE, PNG_SCALE_RANGE, RHO_RANGE, RING_BARS_RANGE, SET_CURVES_RANGE } from '../input/limits.js';
+import { ASPECT_RANGE, AXIAL_LEVEL_RANGE, BARS_PER_FACE_RANGE, ECCENTRICITY_RANGE, GAMMA_B_RANGE, GAMMA_RANGE, isCalendarDate, MAX_SHEETS, OMEGA_RANGE, PNG_SCALE_RANGE, RHO_RANGE, RING_BARS_RANGE, SET_CURVES_RANGE } from '../input/limits.js';
 import type { ChartSetFile } from './schema.js';
 import type { ResolvedChartSet } from './types.js';
 
@@ -84,6 +84,10 @@ export function checkRules(set: ResolvedChartSet, file: ChartSetFile): RuleRepor
     }
     const shapes = Array.isArray(g.shape) ? g.shape : [g.shape ?? 'rectangle'];
     const hasCircle = shapes.some((s) => s === 'circle' || (typeof s === 'object' && s.kind === 'circle'));
+    if (g.gammaB !== undefined) {
+      if (!inRange(g.gammaB, GAMMA_B_RANGE)) errors.push(outside(`${at}.gammaB`, g.gammaB, GAMMA_B_RANGE));
+      if (hasCircle) errors.push(new PmError(ERROR_CODES.conflict, `${at}.gammaB`, 'applies to rectangles only (a ring takes its diameter from γ)', { value: g.gammaB }));
+    }
     each(g.shape ?? 'rectangle', 'shape', (s, path) => {
       if (typeof s === 'object' && s.kind === 'rectangle' && s.aspect !== undefined && !inRange(s.aspect, ASPECT_RANGE)) errors.push(outside(`${path}.aspect`, s.aspect, ASPECT_RANGE));
     });
@@ -106,7 +110,10 @@ export function checkRules(set: ResolvedChartSet, file: ChartSetFile): RuleRepor
         if (!inRange(a.bars, RING_BARS_RANGE)) errors.push(outside(`${path}.bars`, a.bars, RING_BARS_RANGE));
       } else {
         const range = BARS_PER_FACE_RANGE[a.kind];
-        if (!inRange(a.barsPerFace, range)) errors.push(outside(`${path}.barsPerFace`, a.barsPerFace, range));
+        const counts = typeof a.barsPerFace === 'number' ? [a.barsPerFace] : a.barsPerFace;
+        counts.forEach((n, k) => {
+          if (!inRange(n, range)) errors.push(outside(typeof a.barsPerFace === 'number' ? `${path}.barsPerFace` : `${path}.barsPerFace[${k}]`, n, range));
+        });
         if (hasCircle) errors.push(new PmError(ERROR_CODES.conflict, `${path}.kind`, 'cannot be used with a circular shape; use "ring"', { value: a.kind }));
       }
     });

@@ -13,6 +13,7 @@ import {
   BARS_PER_FACE_RANGE,
   CONCRETE_LAWS,
   ECCENTRICITY_RANGE,
+  GAMMA_B_RANGE,
   GAMMA_C_RANGE,
   GAMMA_RANGE,
   GAMMA_S_RANGE,
@@ -92,7 +93,22 @@ const Shape = z.union([
 
 const Arrangement = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('two-faces'), barsPerFace: rangedInt(BARS_PER_FACE_RANGE['two-faces']).describe('bars in each of the two faces parallel to the bending axis') }).strict(),
-  z.object({ kind: z.literal('four-faces'), barsPerFace: rangedInt(BARS_PER_FACE_RANGE['four-faces']).describe('bars along each of the four faces, corners counted on both') }).strict(),
+  z
+    .object({
+      kind: z.literal('four-faces'),
+      barsPerFace: z
+        .xor(
+          [
+          rangedInt(BARS_PER_FACE_RANGE['four-faces']).describe('bars along each of the four faces, corners counted on both'),
+          z
+            .tuple([rangedInt(BARS_PER_FACE_RANGE['four-faces']), rangedInt(BARS_PER_FACE_RANGE['four-faces'])], { message: 'must be one count, or two counts [nb, nh]' })
+            .describe('[nb, nh]: nb bars on each face of width b (perpendicular to the bending plane), nh on each face of depth h; corners counted on both'),
+          ],
+          { message: 'must be one count, or two counts [nb, nh]' },
+        )
+        .describe('bars per face: one count for all four faces, or [nb, nh]'),
+    })
+    .strict(),
   z.object({ kind: z.literal('side-faces'), barsPerFace: rangedInt(BARS_PER_FACE_RANGE['side-faces']).describe('bars along each of the two faces perpendicular to the bending axis') }).strict(),
   z.object({ kind: z.literal('ring'), bars: rangedInt(RING_BARS_RANGE).describe('bars equally spaced on a circle of diameter γ·h') }).strict(),
 ]);
@@ -104,6 +120,7 @@ const SheetGroup = z
     fc: oneOrMany(ConcreteStrength).describe('specified concrete strength(s): f′c, or fck for EN 1992-1-1; e.g. "7ksi" or 48 (set units)'),
     fy: oneOrMany(SteelStrength).describe('specified yield strength(s) of the bars: fy, or fyk for EN 1992-1-1; e.g. "80ksi"'),
     gamma: z.union([ranged(GAMMA_RANGE), list(ranged(GAMMA_RANGE)), NumberRange(GAMMA_RANGE)]).describe('γ: centre-to-centre distance of the outer bar rows over h'),
+    gammaB: ranged(GAMMA_B_RANGE).describe('γB: centre-to-centre distance of the outer bar columns over b (rectangles); default: the same cover as γ gives on h').optional(),
     arrangement: oneOrMany(Arrangement).describe('bar arrangement(s)'),
     transverse: oneOrMany(z.enum(['tied', 'spiral'])).describe('transverse reinforcement; default "tied"').optional(),
     chart: z
@@ -178,7 +195,7 @@ export const ChartSetFileSchema = z
       .strict()
       .optional(),
     sheetTitle: text(MAX_TITLE_PATTERN_CHARS)
-      .describe('office pattern for sheet titles with {shape} {fcSymbol} {fc} {fySymbol} {fy} {gamma} {arrangement} {transverse} {family} {options} {index} ({fcSymbol}, {fySymbol}: the basis’s symbols, f′c/fy or fck/fyk; {options}: a sheet group’s own basisOptions, appended when the pattern leaves it out); default spells the parameters out')
+      .describe('office pattern for sheet titles with {shape} {fcSymbol} {fc} {fySymbol} {fy} {gamma} {gammaB} {arrangement} {transverse} {family} {options} {index} ({gamma} includes γB when given; {fcSymbol}, {fySymbol}: the basis’s symbols, f′c/fy or fck/fyk; {options}: a sheet group’s own basisOptions, appended when the pattern leaves it out); default spells the parameters out')
       .optional(),
     outputs: z
       .object({

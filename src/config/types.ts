@@ -41,6 +41,8 @@ export interface ResolvedSheet {
   /** fy in the set's stress unit */
   fy: number;
   gamma: number;
+  /** γB: outer-column spacing ÷ b (rectangles); absent: the same cover as γ gives on h */
+  gammaB?: number;
   arrangement: Exclude<Arrangement, { kind: 'custom' }>;
   transverse: Transverse;
   /** the set's basis.options with the sheet group's own basisOptions over them */

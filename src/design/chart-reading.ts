@@ -32,6 +32,8 @@ export interface ChartSetRequest {
   shape: Shape;
   arrangement: Arrangement;
   gamma: number;
+  /** γB of the sheets (outer-column spacing ÷ b), when the section has one; sheets are drawn at the actual γB */
+  gammaB?: number;
   gammaStep?: number;
   capContext?: CapContext;
   rhoLimits: { min: number; max: number };
@@ -61,7 +63,7 @@ export function buildChartSet(req: ChartSetRequest): ChartSet {
   const { lower, upper } = bracketingGammas(req.gamma, gammaStep);
   const sheet = (gamma: number): ChartSheet => ({
     gamma,
-    family: computeFamily({ basis: req.basis, shape: req.shape, arrangement: req.arrangement, gamma, rhos, capContext: req.capContext ?? {} }),
+    family: computeFamily({ basis: req.basis, shape: req.shape, arrangement: req.arrangement, gamma, ...(req.gammaB !== undefined ? { gammaX: req.gammaB } : {}), rhos, capContext: req.capContext ?? {} }),
   });
   return { lower: sheet(lower), upper: upper === null ? null : sheet(upper), gamma: req.gamma, gammaStep, rhos };
 }

@@ -10,18 +10,22 @@
  *             ─▶ 7. summary and exit status
  *
  * `checkColumnLoads` yields the per-load results in input order (for streaming views);
- * `checkColumn` collects them and adds the ranking, proposals and summary. No I/O, no CLI names.
+ * `checkColumn` collects them and adds the ranking, proposals and summary. `rankColumnCheck` makes
+ * the same check for load files too big to hold every result: it keeps a few numbers per load to
+ * rank them and computes each result again, in ranked order, when a view reads it. No I/O, no CLI names.
  */
+import { DEFAULT_ANGLE_STEP_DEG } from '../analysis/biaxial-family.js';
 import { capacityAlongRay as biaxialRay, prepareBiaxial, type BiaxialSection } from '../analysis/biaxial.js';
 import { prepareSection } from '../analysis/prepared-section.js';
 import type { Basis, CapContext, StrainClass } from '../codes/types.js';
-import { layoutBars, mirroredBars, symmetricAboutBendingAxis } from '../section/arrangements.js';
+import { layoutBars, mirroredBars, symmetricAboutBendingAxis, type LayoutOptions } from '../section/arrangements.js';
 import type { BarSize } from '../section/bar-tables.js';
 import { grossArea, sectionDepth } from '../section/geometry.js';
 import type { Arrangement, Bar, Shape } from '../section/types.js';
 import type { UnitSystem } from '../units/index.js';
 import { isSelectableKind, proposeBars, type BarProposal, type Detailing } from './bar-selection.js';
 import { checkBiaxial, type BiaxialResult } from './biaxial.js';
+import { BiaxialCharts, type BiaxialLevelReading } from './biaxial-chart-reading.js';
 import { rhoLimitsFor, withMinimum, type FactoredLoad, type GivenLayout } from './check.js';
 import { buildChartSet, readCharts, type ChartSet, type SheetReading } from './chart-reading.js';
 import { magnifyLoad, type EndMoments, type MagnifiedLoad, type SlendernessRequest } from './column-effects.js';
@@ -37,6 +41,8 @@ export interface ColumnCheckInput {
   arrangement: Arrangement;
   /** bar-spacing ratio of the arrangement */
   gamma: number;
+  /** γB: outer-column spacing ÷ b (rectangles); absent: the same cover as γ gives on h */
+  gammaB?: number;
   /** where γ came from, for the views (default 'given') */
   gammaSource?: 'given' | 'detailing';
   capContext?: CapContext;
@@ -49,6 +55,8 @@ export interface ColumnCheckInput {
   slenderness?: SlendernessRequest | null;
   /** chart sheet γ step (default 0.05) */
   chartGammaStep?: number;
+  /** axial-level step of the biaxial sheets read for loads with Muy (default 0.1) */
+  chartAxialStep?: number;
   /** bar selection; omitted → none */
   barSelection?: { detailing: Detailing; sizes: readonly BarSize[]; aggregate?: number; count?: number };
 }
@@ -117,7 +125,7 @@ export interface ColumnLoadResult {
   readonly variantsChecked: number;
   readonly slenderness: MagnifiedLoad | null;
   /** biaxial results for a load with Muy: exact and approximate utilisations (given reinforcement), and the exact ρg required (none given) */
-  readonly biaxial: (Partial<BiaxialResult> & { readonly rhoRequired: number | null; readonly rhoStatus: RhoStatus | null }) | null;
+  readonly biaxial: (Partial<BiaxialResult> & { readonly rhoRequired: number | null; readonly rhoStatus: RhoStatus | null } & BiaxialChartFields) | null;
   readonly status: LoadStatus;
   /** why, in words, with the clause where there is one */
   readonly statusReason: string;
@@ -128,12 +136,23 @@ export interface ColumnLoadResult {
   readonly notes: readonly string[];
 }
 
+/** The reading off biaxial sheets (src/design/biaxial-chart-reading.ts); null where readings are off or the load is off the sheets. */
+export interface BiaxialChartFields {
+  readonly rhoFromChart: number | null;
+  /** the sheets read: level, reading and where the point sat */
+  readonly chartLevels: readonly BiaxialLevelReading[];
+  /** rhoFromChart − rhoRequired (both biaxial); null when either is null */
+  readonly chartMinusExact: number | null;
+}
+
 export interface ColumnCheck {
   readonly basis: Basis;
   readonly units: UnitSystem;
   readonly shape: Shape;
   readonly arrangement: Arrangement;
   readonly gamma: number;
+  /** γB, outer-column spacing ÷ b, when given (null: the same cover as γ gives on h) */
+  readonly gammaB: number | null;
   readonly gammaSource: 'given' | 'detailing';
   readonly capContext: CapContext;
   readonly area: number;
@@ -151,6 +170,8 @@ export interface ColumnCheck {
   readonly barsSkipped: string | null;
   readonly limits: { readonly min: number; readonly max: number };
   readonly chart: { readonly gammaStep: number; readonly lower: number; readonly upper: number | null; readonly rhos: readonly number[] };
+  /** the biaxial sheets read for loads with Muy (axial-level step, moment-direction step of the drawn contours); null when none are read */
+  readonly biaxialChart: { readonly axialStep: number; readonly angleStepDeg: number; readonly rhos: readonly number[] } | null;
   readonly checked: { readonly kind: 'rho' | 'layout'; readonly rho: number; readonly description: string; readonly bars: readonly Bar[] } | null;
   readonly slenderness: SlendernessRequest | null;
   /** how proposals placed their bars, and the aggregate size for the spacing rule (null: no proposals asked) */
@@ -182,7 +203,7 @@ const RING_TURNS = 4;
  * orientations over half a pitch, the weakest governs. Any other layout not symmetric about the bending
  * axis meets a negative moment as its mirror image. Symmetric layouts have one variant.
  */
-export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: number): Variant[] {
+export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: number, gammaB?: number): Variant[] {
   if (shape.kind === 'circle' && arrangement.kind === 'ring') {
     const pitch = 360 / arrangement.bars;
     return Array.from({ length: RING_TURNS + 1 }, (_, k) => {
@@ -190,7 +211,7 @@ export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: n
       return { label: k === 0 ? 'ring with a bar at the compression extreme' : `ring turned ${fmtDeg(deg)}° from a bar at the compression extreme`, sign: 0 as const, turnDeg: deg, map: turn(deg) };
     });
   }
-  const bars = layoutBars(shape, arrangement, 1, { gamma });
+  const bars = layoutBars(shape, arrangement, 1, layoutOptions(gamma, gammaB));
   if (symmetricAboutBendingAxis(bars, sectionDepth(shape))) return [{ label: 'as drawn', sign: 0, turnDeg: 0, map: (b) => [...b] }];
   return [
     { label: 'branch with compression on the +y face', sign: 1, turnDeg: 0, map: (b) => [...b] },
@@ -199,6 +220,9 @@ export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: n
 }
 
 const fmtDeg = (d: number): string => String(Number(d.toFixed(2)));
+
+/** Layout options of γ and, when given, γB (layoutBars' gammaX). */
+const layoutOptions = (gamma: number, gammaB: number | undefined): LayoutOptions => (gammaB === undefined ? { gamma } : { gamma, gammaX: gammaB });
 
 // ───────────────────────────── prepared context ─────────────────────────────
 
@@ -219,6 +243,8 @@ export interface ColumnCheckContext {
   readonly variants: readonly PreparedVariant[];
   /** chart sheets for the readings; null when readings are not wanted (proposal verification) */
   readonly charts: ChartSet | null;
+  /** biaxial sheets for the readings of loads with Muy; null when readings are off or no load has Muy */
+  readonly biaxialCharts: BiaxialCharts | null;
   readonly checkedRho: number | null;
   /** the checked bars, actual areas and positions (as drawn) */
   readonly checkedBars: Bar[] | null;
@@ -236,25 +262,39 @@ export function prepareColumnCheck(input: ColumnCheckInput, opts: { readings?: b
   const area = grossArea(shape);
   const depth = sectionDepth(shape);
   const capContext = input.capContext ?? {};
-  const unit = layoutBars(shape, input.arrangement, 1, { gamma: input.gamma });
+  const at = layoutOptions(input.gamma, input.gammaB);
+  const unit = layoutBars(shape, input.arrangement, 1, at);
   const checkedBars = input.layout
-    ? layoutBars(shape, input.layout.arrangement, input.layout.area, { gamma: input.layout.gamma })
+    ? layoutBars(shape, input.layout.arrangement, input.layout.area, layoutOptions(input.layout.gamma, input.gammaB))
     : input.rho !== undefined
-      ? layoutBars(shape, input.arrangement, input.rho * area, { gamma: input.gamma })
+      ? layoutBars(shape, input.arrangement, input.rho * area, at)
       : null;
   const checkedRho = input.layout ? input.layout.area / area : (input.rho ?? null);
   const chartReq = (arrangement: Arrangement) =>
-    buildChartSet({ basis, shape, arrangement, gamma: input.gamma, capContext, rhoLimits: basis.rhoLimits, ...(input.chartGammaStep !== undefined ? { gammaStep: input.chartGammaStep } : {}) });
+    buildChartSet({ basis, shape, arrangement, gamma: input.gamma, ...(input.gammaB !== undefined ? { gammaB: input.gammaB } : {}), capContext, rhoLimits: basis.rhoLimits, ...(input.chartGammaStep !== undefined ? { gammaStep: input.chartGammaStep } : {}) });
   const charts = readings ? chartReq(input.arrangement) : null;
-  const variants = sectionVariants(shape, input.arrangement, input.gamma).map((info): PreparedVariant => {
+  const variants = sectionVariants(shape, input.arrangement, input.gamma, input.gammaB).map((info): PreparedVariant => {
     const table = tabulate(prepareSection(basis, shape, info.map(unit), capContext), 128);
     const checked = checkedBars ? tabulate(prepareSection(basis, shape, info.map(checkedBars), capContext), 128) : null;
     return { info, table, checked };
   });
   const biaxial = input.loads.some((l) => l.Muy !== undefined);
   const checkedBiaxial = checkedBars && biaxial ? prepareBiaxial(basis, shape, checkedBars, capContext) : null;
-  const positionBars = layoutBars(shape, input.arrangement, area, { gamma: input.gamma });
-  return { input, basis, area, depth, capContext, variants, charts, checkedRho, checkedBars, positionBars, checkedBiaxial, biaxial };
+  const positionBars = layoutBars(shape, input.arrangement, area, at);
+  const biaxialCharts =
+    readings && biaxial && input.arrangement.kind !== 'custom'
+      ? new BiaxialCharts({
+          basis,
+          shape,
+          arrangement: input.arrangement,
+          gamma: input.gamma,
+          ...(at.gammaX !== undefined ? { gammaX: at.gammaX } : {}),
+          capContext,
+          rhoLimits: basis.rhoLimits,
+          ...(input.chartAxialStep !== undefined ? { axialStep: input.chartAxialStep } : {}),
+        })
+      : null;
+  return { input, basis, area, depth, capContext, variants, charts, biaxialCharts, checkedRho, checkedBars, positionBars, checkedBiaxial, biaxial };
 }
 
 // ───────────────────────────── one load ─────────────────────────────
@@ -288,9 +328,10 @@ export function biaxialRhoRequired(
   capContext: CapContext,
   load: { Pu: number; Mux: number; Muy: number },
   limits: { min: number; max: number },
+  gammaB?: number,
 ): { rho: number | null; status: RhoStatus } {
   const area = grossArea(shape);
-  const util = (rho: number) => biaxialRay(prepareBiaxial(basis, shape, layoutBars(shape, arrangement, rho * area, { gamma }), capContext), load.Pu, load.Mux, load.Muy).utilisation;
+  const util = (rho: number) => biaxialRay(prepareBiaxial(basis, shape, layoutBars(shape, arrangement, rho * area, layoutOptions(gamma, gammaB)), capContext), load.Pu, load.Mux, load.Muy).utilisation;
   if (util(limits.min) <= 1) return { rho: limits.min, status: 'minimum-governs' };
   if (!(util(limits.max) <= 1)) return { rho: null, status: 'not-possible' };
   let lo = limits.min;
@@ -410,13 +451,15 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
   let biaxial: ColumnLoadResult['biaxial'] = null;
   if (Muy !== undefined && finiteMoments) {
     const bl = { Pu: load.Pu, Mux, Muy };
+    const chart = biaxialChartFields(ctx, bl, limits.min);
+    const withChart = (rhoRequired: number | null) => ({ ...chart, chartMinusExact: rhoRequired === null || chart.rhoFromChart === null ? null : chart.rhoFromChart - rhoRequired });
     if (ctx.checkedBiaxial) {
-      biaxial = { ...checkBiaxial(ctx.checkedBiaxial, bl), rhoRequired: null, rhoStatus: null };
+      biaxial = { ...checkBiaxial(ctx.checkedBiaxial, bl), rhoRequired: null, rhoStatus: null, ...withChart(null) };
     } else if (input.shape.kind === 'circle') {
-      biaxial = { rhoRequired: g.req.rho, rhoStatus: g.req.status };
+      biaxial = { rhoRequired: g.req.rho, rhoStatus: g.req.status, ...withChart(g.req.rho) };
     } else {
-      const r = biaxialRhoRequired(basis, input.shape, input.arrangement, input.gamma, ctx.capContext, bl, limits);
-      biaxial = { rhoRequired: r.rho, rhoStatus: r.status };
+      const r = biaxialRhoRequired(basis, input.shape, input.arrangement, input.gamma, ctx.capContext, bl, limits, input.gammaB);
+      biaxial = { rhoRequired: r.rho, rhoStatus: r.status, ...withChart(r.rho) };
     }
   }
 
@@ -465,6 +508,13 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
   };
 }
 
+/** The biaxial sheet reading of a load (minimum ρg applied as on the uniaxial readings), or nulls where there are no sheets. */
+function biaxialChartFields(ctx: ColumnCheckContext, load: { Pu: number; Mux: number; Muy: number }, rhoMin: number): Omit<BiaxialChartFields, 'chartMinusExact'> {
+  if (!ctx.biaxialCharts) return { rhoFromChart: null, chartLevels: [] };
+  const r = ctx.biaxialCharts.read(load.Pu, load.Mux, load.Muy);
+  return { rhoFromChart: r.rhoFromChart === null ? null : Math.max(r.rhoFromChart, rhoMin), chartLevels: r.levels };
+}
+
 /** End moments in either sign convention (ACI M1/M2; EN and CSA M01/M02), as given. */
 const END_KEYS = ['M1', 'M2', 'M1y', 'M2y', 'M01', 'M02', 'M01y', 'M02y'] as const;
 const endMoments = (l: FactoredLoad): EndMoments => Object.fromEntries(END_KEYS.filter((k) => l[k] !== undefined).map((k) => [k, l[k]!])) as EndMoments;
@@ -499,14 +549,20 @@ export function* checkColumnLoads(ctxOrInput: ColumnCheckContext | ColumnCheckIn
   for (const l of ctx.input.loads) yield checkOneLoad(ctx, l, i++);
 }
 
+/** What ranks a load: its status, its measure, its demand ratio, its input order. */
+export type RankKey = Pick<ColumnLoadResult, 'status' | 'measureValue' | 'demandRatio' | 'index'>;
+
 /** Governing first: status (worst first), then the measure, then input order. */
-export function governingOrder(a: ColumnLoadResult, b: ColumnLoadResult): number {
-  const s = STATUS_RANK[a.status] - STATUS_RANK[b.status];
+export function governingOrder(a: RankKey, b: RankKey): number {
+  return compareRank(STATUS_RANK[a.status], a.measureValue ?? Infinity, a.demandRatio, a.index, STATUS_RANK[b.status], b.measureValue ?? Infinity, b.demandRatio, b.index);
+}
+
+/** The ranking on plain numbers (status rank, measure with ∞ for none, demand ratio, index), shared by both orderings. */
+function compareRank(sa: number, ma: number, da: number, ia: number, sb: number, mb: number, db: number, ib: number): number {
+  const s = sa - sb;
   if (s !== 0) return s;
-  const ma = a.measureValue ?? Infinity;
-  const mb = b.measureValue ?? Infinity;
   if (ma !== mb) return mb > ma ? 1 : -1;
-  return b.demandRatio - a.demandRatio || a.index - b.index;
+  return db - da || ia - ib;
 }
 
 /**
@@ -519,66 +575,15 @@ export function checkColumn(input: ColumnCheckInput): ColumnCheck {
   return summarise(ctx, results);
 }
 
-/** Ranking, bar proposals, summary and exit status for the results of every load. */
-export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadResult[]): ColumnCheck {
+/** The fields of a check that no load's result changes: what a view needs to format one load's row. */
+export type ColumnCheckFrame = Omit<ColumnCheck, 'results' | 'governingId' | 'governingWhy' | 'summary' | 'exitCode' | 'bars' | 'barsSkipped'>;
+/** The check without its per-load results: what views print around the rows. */
+export type ColumnCheckHead = Omit<ColumnCheck, 'results'>;
+
+/** The frame of a check, from its prepared context alone. */
+export function describeCheck(ctx: ColumnCheckContext): ColumnCheckFrame {
   const { input, basis } = ctx;
   const measure: GoverningMeasure = ctx.checkedRho !== null ? 'utilisation' : 'rhoRequired';
-  const counts = Object.fromEntries(LOAD_STATUSES.map((s) => [s, 0])) as Record<LoadStatus, number>;
-  for (const r of sorted) counts[r.status]++;
-  const gov = sorted[0];
-  const bad = sorted.length - counts.ok;
-  const governingWhy = !gov
-    ? 'no loads'
-    : gov.status !== 'ok' && gov.status !== 'fails'
-      ? `${gov.status} ${gov.statusReason}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`
-      : measure === 'utilisation'
-        ? `highest utilisation ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(3)} (the larger of the uniaxial and exact biaxial figures)`
-        : `largest ρg required ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(4)}${ctx.biaxial ? ' (the larger of the uniaxial and exact biaxial figures)' : ''}`;
-  const summaryText =
-    sorted.length === 0
-      ? 'no loads'
-      : bad === 0
-        ? `all ${sorted.length} load${sorted.length === 1 ? '' : 's'} pass; governing ${gov!.id}`
-        : `${bad} of ${sorted.length} load${sorted.length === 1 ? '' : 's'} ${bad === 1 ? 'does' : 'do'} not pass (${LOAD_STATUSES.filter((s) => s !== 'ok' && counts[s] > 0)
-            .map((s) => `${counts[s]} ${s}`)
-            .join(', ')}); governing ${gov!.id}`;
-
-  // 6. bar proposals, each re-verified against every load with every effect
-  let bars: BarProposal[] = [];
-  let barsSkipped: string | null = null;
-  const kind = input.arrangement.kind;
-  if (!input.barSelection) barsSkipped = 'bar selection not requested';
-  else if (!isSelectableKind(kind)) barsSkipped = 'bar selection needs a regular arrangement (two-faces, four-faces, side-faces or ring)';
-  else if (sorted.length === 0) barsSkipped = 'no loads';
-  else if (sorted.some((r) => r.status === 'unstable' || r.status === 'outside-scope')) barsSkipped = 'a load is unstable or outside the slenderness method: change the section or the bracing';
-  else if (sorted.some((r) => (r.rhoRequired === null || (r.biaxial?.rhoStatus === 'not-possible')) && ctx.checkedRho === null)) barsSkipped = 'a load needs more than the maximum ρg: enlarge the section';
-  else {
-    const limits = input.loads.reduce(
-      (acc, l) => {
-        const x = basis.steelAreaLimits(l.Pu, ctx.area);
-        return { min: Math.max(acc.min, x.min), max: Math.min(acc.max, x.max) };
-      },
-      { min: 0, max: Infinity },
-    );
-    // a loop, not Math.max(...list): 200k loads overflow the call stack as spread arguments
-    const requiredArea = sorted.reduce((m, r) => Math.max(m, r.steelRequired ?? 0, (r.biaxial?.rhoRequired ?? 0) * ctx.area), 0);
-    const sel = input.barSelection;
-    bars = proposeBars({
-      basis,
-      shape: input.shape,
-      kind,
-      detailing: sel.detailing,
-      sizes: sel.sizes,
-      requiredArea,
-      areaLimits: limits,
-      verify: layoutVerifier(input, sorted.map((r) => r.index)),
-      ...(sel.aggregate !== undefined ? { aggregate: sel.aggregate } : {}),
-      ...(input.capContext ? { capContext: input.capContext } : {}),
-      ...(sel.count !== undefined ? { count: sel.count } : {}),
-    });
-    if (bars.length === 0) barsSkipped = 'no single-size layout satisfies the spacing, steel and capacity limits';
-  }
-
   const checked =
     ctx.checkedBars === null
       ? null
@@ -592,28 +597,23 @@ export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadRe
   if (ctx.variants.some((v) => v.info.turnDeg !== 0)) {
     notes.push(`Ring of bars in a circle: every uniaxial check takes the weakest of ${ctx.variants.length} orientations over half a bar pitch (0° = a bar at the compression extreme).`);
   }
-  const result: ColumnCheck = {
+  return {
     basis,
     units: basis.units,
     shape: input.shape,
     arrangement: input.arrangement,
     gamma: input.gamma,
+    gammaB: input.gammaB ?? null,
     gammaSource: input.gammaSource ?? 'given',
     capContext: ctx.capContext,
     area: ctx.area,
     depth: ctx.depth,
-    results: sorted,
-    governingId: gov?.id ?? null,
     measure,
-    governingWhy,
-    summary: { total: sorted.length, counts, text: summaryText },
-    exitCode: bad === 0 ? 0 : 1,
-    bars,
-    barsSkipped,
     limits: rhoLimitsFor(basis, 0, ctx.area),
     chart: ctx.charts
       ? { gammaStep: ctx.charts.gammaStep, lower: ctx.charts.lower.gamma, upper: ctx.charts.upper?.gamma ?? null, rhos: ctx.charts.rhos }
       : { gammaStep: 0, lower: 0, upper: null, rhos: [] },
+    biaxialChart: ctx.biaxialCharts ? { axialStep: ctx.biaxialCharts.step, angleStepDeg: DEFAULT_ANGLE_STEP_DEG, rhos: ctx.biaxialCharts.rhos } : null,
     checked,
     slenderness: input.slenderness ?? null,
     barSelection: input.barSelection ? { detailing: input.barSelection.detailing.kind, aggregate: input.barSelection.aggregate ?? null } : null,
@@ -621,19 +621,194 @@ export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadRe
     variants: ctx.variants.map((v) => ({ label: v.info.label, sign: v.info.sign, turnDeg: v.info.turnDeg })),
     notes,
   };
-  return deepFreeze(result);
+}
+
+/** What the summary and the bar proposals read of every load, gathered one load at a time. */
+interface LoadDigest {
+  counts: Record<LoadStatus, number>;
+  /** a load is unstable or outside the slenderness method */
+  blocked: boolean;
+  /** a load needs more than the maximum ρg (uniaxial or exact biaxial) */
+  beyondMax: boolean;
+  /** the largest steel area any load requires */
+  requiredArea: number;
+}
+
+const newDigest = (): LoadDigest => ({ counts: Object.fromEntries(LOAD_STATUSES.map((s) => [s, 0])) as Record<LoadStatus, number>, blocked: false, beyondMax: false, requiredArea: 0 });
+
+function addToDigest(d: LoadDigest, r: ColumnLoadResult, area: number): void {
+  d.counts[r.status]++;
+  if (r.status === 'unstable' || r.status === 'outside-scope') d.blocked = true;
+  if (r.rhoRequired === null || r.biaxial?.rhoStatus === 'not-possible') d.beyondMax = true;
+  d.requiredArea = Math.max(d.requiredArea, r.steelRequired ?? 0, (r.biaxial?.rhoRequired ?? 0) * area);
+}
+
+/** Ranking, bar proposals, summary and exit status for the results of every load. */
+export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadResult[]): ColumnCheck {
+  const d = newDigest();
+  for (const r of sorted) addToDigest(d, r, ctx.area);
+  return deepFreeze(assemble(ctx, d, sorted[0], sorted.length, sorted.map((r) => r.index), sorted));
+}
+
+/** The check from the digest of every load; `results` is what the caller holds (every result, or none when streamed). */
+function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult | undefined, total: number, order: ArrayLike<number>, results: readonly ColumnLoadResult[]): ColumnCheck {
+  const { input, basis } = ctx;
+  const frame = describeCheck(ctx);
+  const { measure } = frame;
+  const counts = d.counts;
+  const bad = total - counts.ok;
+  const governingWhy = !gov
+    ? 'no loads'
+    : gov.status !== 'ok' && gov.status !== 'fails'
+      ? `${gov.status} ${gov.statusReason}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`
+      : measure === 'utilisation'
+        ? `highest utilisation ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(3)} (the larger of the uniaxial and exact biaxial figures)`
+        : `largest ρg required ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(4)}${ctx.biaxial ? ' (the larger of the uniaxial and exact biaxial figures)' : ''}`;
+  const summaryText =
+    total === 0
+      ? 'no loads'
+      : bad === 0
+        ? `all ${total} load${total === 1 ? '' : 's'} pass; governing ${gov!.id}`
+        : `${bad} of ${total} load${total === 1 ? '' : 's'} ${bad === 1 ? 'does' : 'do'} not pass (${LOAD_STATUSES.filter((s) => s !== 'ok' && counts[s] > 0)
+            .map((s) => `${counts[s]} ${s}`)
+            .join(', ')}); governing ${gov!.id}`;
+
+  // 6. bar proposals, each re-verified against every load with every effect
+  let bars: BarProposal[] = [];
+  let barsSkipped: string | null = null;
+  const kind = input.arrangement.kind;
+  if (!input.barSelection) barsSkipped = 'bar selection not requested';
+  else if (!isSelectableKind(kind)) barsSkipped = 'bar selection needs a regular arrangement (two-faces, four-faces, side-faces or ring)';
+  else if (total === 0) barsSkipped = 'no loads';
+  else if (d.blocked) barsSkipped = 'a load is unstable or outside the slenderness method: change the section or the bracing';
+  else if (d.beyondMax && ctx.checkedRho === null) barsSkipped = 'a load needs more than the maximum ρg: enlarge the section';
+  else {
+    const limits = input.loads.reduce(
+      (acc, l) => {
+        const x = basis.steelAreaLimits(l.Pu, ctx.area);
+        return { min: Math.max(acc.min, x.min), max: Math.min(acc.max, x.max) };
+      },
+      { min: 0, max: Infinity },
+    );
+    const sel = input.barSelection;
+    bars = proposeBars({
+      basis,
+      shape: input.shape,
+      kind,
+      detailing: sel.detailing,
+      sizes: sel.sizes,
+      requiredArea: d.requiredArea,
+      areaLimits: limits,
+      verify: layoutVerifier(input, order),
+      ...(sel.aggregate !== undefined ? { aggregate: sel.aggregate } : {}),
+      ...(input.capContext ? { capContext: input.capContext } : {}),
+      ...(sel.count !== undefined ? { count: sel.count } : {}),
+    });
+    if (bars.length === 0) barsSkipped = 'no single-size layout satisfies the spacing, steel and capacity limits';
+  }
+
+  const f = frame;
+  // the fields in the order of the ColumnCheck interface
+  return {
+    basis: f.basis,
+    units: f.units,
+    shape: f.shape,
+    arrangement: f.arrangement,
+    gamma: f.gamma,
+    gammaB: f.gammaB,
+    gammaSource: f.gammaSource,
+    capContext: f.capContext,
+    area: f.area,
+    depth: f.depth,
+    results,
+    governingId: gov?.id ?? null,
+    measure,
+    governingWhy,
+    summary: { total, counts, text: summaryText },
+    exitCode: bad === 0 ? 0 : 1,
+    bars,
+    barsSkipped,
+    limits: f.limits,
+    chart: f.chart,
+    biaxialChart: f.biaxialChart,
+    checked: f.checked,
+    slenderness: f.slenderness,
+    barSelection: f.barSelection,
+    biaxial: f.biaxial,
+    variants: f.variants,
+    notes: f.notes,
+  };
+}
+
+/**
+ * A check held as a ranking instead of as results, for load files too big to hold every result:
+ * the same check as `checkColumn` (same ranking, summary and proposals), whose results are computed
+ * again, one at a time, in ranked order when a view reads them (the engine is deterministic).
+ */
+export interface RankedColumnCheck {
+  /** the check without its results */
+  readonly check: ColumnCheckHead;
+  /** the governing load's result (undefined: no loads) */
+  readonly governing: ColumnLoadResult | undefined;
+  /** every result, governing first, computed again on each call */
+  results(): Generator<ColumnLoadResult, void, undefined>;
+  /** the id of a load by input index */
+  loadId(index: number): string | undefined;
+}
+
+/**
+ * Checks every load once, keeping per load only its rank keys (numbers in typed arrays), and ranks
+ * them: memory stays flat in the number of loads. `visit` sees every result in input order as it is
+ * made (views size their columns there). Loads, proposals and summary as in `checkColumn`.
+ */
+export function rankColumnCheck(ctx: ColumnCheckContext, visit?: (r: ColumnLoadResult) => void): RankedColumnCheck {
+  const loads = ctx.input.loads;
+  const n = loads.length;
+  const status = new Uint8Array(n);
+  const measure = new Float64Array(n);
+  const demand = new Float64Array(n);
+  const d = newDigest();
+  for (const r of checkColumnLoads(ctx)) {
+    status[r.index] = STATUS_RANK[r.status];
+    measure[r.index] = r.measureValue ?? Infinity;
+    demand[r.index] = r.demandRatio;
+    addToDigest(d, r, ctx.area);
+    visit?.(r);
+  }
+  const order = new Uint32Array(n);
+  for (let i = 0; i < n; i++) order[i] = i;
+  order.sort((a, b) => compareRank(status[a]!, measure[a]!, demand[a]!, a, status[b]!, measure[b]!, demand[b]!, b));
+  const at = (k: number): ColumnLoadResult => {
+    const i = order[k]!;
+    const r = checkOneLoad(ctx, loads[i]!, i);
+    return k === 0 ? { ...r, governing: true } : r;
+  };
+  const governing = n > 0 ? at(0) : undefined;
+  const { results: _none, ...check } = assemble(ctx, d, governing, n, order, []);
+  return {
+    check: deepFreeze(check),
+    governing,
+    *results() {
+      for (let k = 0; k < n; k++) yield k === 0 ? governing! : at(k);
+    },
+    loadId: (index) => loads[index]?.id,
+  };
 }
 
 /**
  * Re-verifies candidate layouts: the largest utilisation of the discrete bars over every load, with every
  * effect (slenderness re-run with the candidate's bars, the minimum moment, every sign and orientation
  * variant, the exact biaxial capacity where Muy is given). Loads are tried in `order` (worst first) and the
- * search stops at the first failure. Unstable or out-of-scope loads count as failing.
+ * search stops at the first failure, or at the first utilisation above `stopAbove` (default just above 1: a
+ * caller comparing candidates passes the best utilisation so far). Unstable or out-of-scope loads count as failing.
  */
-export function layoutVerifier(input: ColumnCheckInput, order?: readonly number[]): (arrangement: Arrangement, area: number, gamma: number) => { utilisation: number; index: number } {
+export function layoutVerifier(
+  input: ColumnCheckInput,
+  order?: ArrayLike<number>,
+): (arrangement: Arrangement, area: number, gamma: number, stopAbove?: number) => { utilisation: number; index: number } {
   const { barSelection: _sel, rho: _rho, layout: _layout, ...rest } = input;
-  const indices = order ?? input.loads.map((_, i) => i);
-  return (arrangement, area, gamma) => {
+  const indices = order ? Array.from(order) : input.loads.map((_, i) => i);
+  return (arrangement, area, gamma, stopAbove = 1 + 1e-9) => {
     const check = prepareColumnCheck({ ...rest, arrangement, gamma, layout: { arrangement, area, gamma, description: '' } }, { readings: false });
     // screen every load on the ray tables (interpolated, biaxial left out), then settle exactly every load
     // within the screening margin of failing, worst first; stop at the first exact failure
@@ -645,7 +820,7 @@ export function layoutVerifier(input: ColumnCheckInput, order?: readonly number[
       if (su < SCREEN_MARGIN * worst.utilisation && su < SCREEN_MARGIN && !biaxial(i)) continue;
       const u = checkedUtilisation(check, input.loads[i]!, true);
       if (u > worst.utilisation) worst = { utilisation: u, index: i };
-      if (u > 1 + 1e-9) break;
+      if (u > stopAbove) break;
     }
     return worst;
   };

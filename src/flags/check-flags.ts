@@ -9,9 +9,12 @@ import type { Detailing } from '../design/bar-selection.js';
 import type { FactoredLoad } from '../design/check.js';
 import { checkColumn, type ColumnCheck, type ColumnCheckInput } from '../design/column-check.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
+import { MAX_DRAWN_REPORT_LOADS } from '../input/limits.js';
 import { parseLoadQuantity, parseLoadsCsv as readLoadsCsv } from '../input/loads-csv.js';
+import { CHART_AXIAL_STEP_RANGE, CHART_GAMMA_STEP_RANGE } from '../input/limits.js';
 import { barSet } from '../section/bar-tables.js';
 import { barCount } from '../section/arrangements.js';
+import { faceCounts, type Arrangement } from '../section/types.js';
 import { DISPLAY_UNITS, parseQuantity, systemFactor, type UnitSystem } from '../units/index.js';
 import { reportDate } from './format.js';
 import { resolveSectionFlags, withFlagNames, type ResolvedSection, type SectionFlags } from './section-flags.js';
@@ -24,6 +27,7 @@ export interface CheckOptions extends SectionFlags, EffectsFlags {
   rho?: string;
   aggregate?: string;
   chartGammaStep?: string;
+  chartAxialStep?: string;
   proposals?: string;
   json?: boolean;
   report?: string;
@@ -75,6 +79,9 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
       throw new PmError(ERROR_CODES.io, '--loads', `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'})`, { value: o.loads });
     }
     loads = parseLoadsCsv(text, u);
+    if (o.report !== undefined && isDrawn(o.report) && loads.length > MAX_DRAWN_REPORT_LOADS) {
+      throw new PmError(ERROR_CODES.outOfRange, '--report', `draws at most ${MAX_DRAWN_REPORT_LOADS} loads and --loads has ${loads.length}; write a .txt or .json report for every load`);
+    }
   } else {
     if (o.pu === undefined) throw new PmError(ERROR_CODES.missing, '--pu', `is required, or --loads FILE.csv (a force, default unit ${DISPLAY_UNITS[u].force}; tension negative)`);
     if (o.mu === undefined) throw new PmError(ERROR_CODES.missing, '--mu', `is required with --pu (a moment, default unit ${DISPLAY_UNITS[u].moment})`);
@@ -86,13 +93,18 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
     shape: section.shape,
     arrangement: section.arrangement,
     gamma: section.gamma,
+    ...(section.gammaB !== undefined ? { gammaB: section.gammaB } : {}),
     gammaSource: section.gammaSource,
     capContext: section.capContext,
     loads,
   };
   if (o.chartGammaStep !== undefined) {
     const step = Number(o.chartGammaStep);
-    input.chartGammaStep = requireInRange('--chart-gamma-step', Number.isFinite(step) ? step : NaN, 0.01, 0.2);
+    input.chartGammaStep = requireInRange('--chart-gamma-step', Number.isFinite(step) ? step : NaN, ...CHART_GAMMA_STEP_RANGE);
+  }
+  if (o.chartAxialStep !== undefined) {
+    const step = Number(o.chartAxialStep);
+    input.chartAxialStep = requireInRange('--chart-axial-step', Number.isFinite(step) ? step : NaN, ...CHART_AXIAL_STEP_RANGE);
   }
   if (o.rho !== undefined) {
     const lim = basis.rhoLimits;
@@ -104,7 +116,7 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
       arrangement: section.arrangement,
       area: count * section.bar.area,
       gamma: section.gamma,
-      description: /^\d+(\.\d+)?$/.test(section.bar.name) ? `${count} × ${section.bar.name} mm` : `${count} ${section.bar.name}`,
+      description: `${/^\d+(\.\d+)?$/.test(section.bar.name) ? `${count} × ${section.bar.name} mm` : `${count} ${section.bar.name}`}${faceText(section.arrangement)}`,
     };
   }
 
@@ -122,13 +134,22 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
       .map((s) => ({ name: s.name, diameter: s.diameter * k, area: s.area * k * k }))
       .filter((s) => s.diameter >= MIN_PRACTICAL_BAR[u] - 1e-9);
     const detailing: Detailing =
-      section.cover !== undefined ? { kind: 'cover', cover: section.cover, tieDiameter: section.tieDiameter ?? 0 } : { kind: 'gamma', gamma: section.gamma };
+      section.cover !== undefined
+        ? { kind: 'cover', cover: section.cover, tieDiameter: section.tieDiameter ?? 0 }
+        : { kind: 'gamma', gamma: section.gamma, ...(section.gammaB !== undefined ? { gammaB: section.gammaB } : {}) };
     input.barSelection = { detailing, sizes, count: proposals, ...(aggregate !== undefined ? { aggregate } : {}) };
   }
   const fx = resolveEffects(o, section, input, o.loads === undefined);
   input.loads = fx.loads;
   if (fx.slenderness) input.slenderness = fx.slenderness;
   return { section, input, json: o.json === true, ...(o.report !== undefined ? { report: o.report } : {}) };
+}
+
+/** " (3 on each b face, 5 on each h face)" for unequal four-faces counts; "" otherwise. */
+function faceText(a: Arrangement): string {
+  if (a.kind !== 'four-faces') return '';
+  const [nb, nh] = faceCounts(a.barsPerFace);
+  return nb === nh ? '' : ` (${nb} on each b face, ${nh} on each h face)`;
 }
 
 /** Resolves the flags and checks every load (no output). */

@@ -25,6 +25,7 @@ export interface SectionFlags {
   h?: string;
   diameter?: string;
   gamma?: string;
+  gammaB?: string;
   cover?: string;
   tie?: string;
   bar?: string;
@@ -53,6 +54,8 @@ export interface ResolvedSection {
   sized: boolean;
   arrangement: Arrangement;
   gamma: number;
+  /** γB: outer-column spacing ÷ b, when given (rectangles); absent: the same cover as γ gives on h */
+  gammaB?: number;
   /** how γ was obtained */
   gammaSource: 'given' | 'detailing';
   /** longitudinal bar, when named */
@@ -78,11 +81,12 @@ export function addSectionOptions(cmd: Command): Command {
     .option('--h <length>', 'rectangle depth in the bending plane')
     .option('--diameter <length>', 'circle diameter D')
     .option('--gamma <ratio>', 'outer-row centre spacing ÷ depth, 0.3–0.95')
+    .option('--gamma-b <ratio>', 'outer-column centre spacing ÷ width b, 0.3–0.95 (rectangles; default: the same cover as --gamma gives on h)')
     .option('--cover <length>', 'clear cover to the tie or spiral (γ from detailing)')
     .option('--tie <size>', 'tie or spiral size, a bar name (#4, 10) or a diameter (γ from detailing)')
     .option('--bar <size>', 'longitudinal bar size, e.g. #9, 25 (γ from detailing)')
     .option('--arrangement <kind>', 'two-faces, four-faces, side-faces, ring or custom', 'two-faces')
-    .option('--bars-per-face <n>', 'bars per face (two-faces, four-faces counting corners, side-faces)')
+    .option('--bars-per-face <n>', 'bars per face (two-faces, four-faces counting corners, side-faces); four-faces also nb,nh: nb on each b face, nh on each h face')
     .option('--bars <n>', 'bar count for ring')
     .option('--custom-bars <file>', 'JSON list of {x, y, share}: centroidal position ÷ b (or D) and ÷ h, share of Ast')
     .option('--transverse <type>', 'tied or spiral', 'tied')
@@ -125,7 +129,12 @@ function readCustomBars(path: string, file: string): CustomBar[] {
 function barCount(kind: Exclude<ArrangementKind, 'custom'>, f: CheckedSectionFlags): Arrangement {
   if (kind === 'ring') return { kind, bars: requireInRange('--bars', f.bars ?? 8, ...RING_BARS_RANGE) };
   const range = BARS_PER_FACE_RANGE[kind];
-  return { kind, barsPerFace: requireInRange('--bars-per-face', f.barsPerFace ?? (kind === 'two-faces' ? 2 : 3), range[0], range[1]) };
+  const given = f.barsPerFace ?? (kind === 'two-faces' ? 2 : 3);
+  if (typeof given !== 'number') {
+    if (kind !== 'four-faces') throw new PmError(ERROR_CODES.conflict, '--bars-per-face', `takes two counts nb,nh only with --arrangement four-faces; ${kind} takes one`, { value: given.join(',') });
+    return { kind, barsPerFace: [requireInRange('--bars-per-face', given[0], range[0], range[1]), requireInRange('--bars-per-face', given[1], range[0], range[1])] };
+  }
+  return { kind, barsPerFace: requireInRange('--bars-per-face', given, range[0], range[1]) };
 }
 
 /** Resolves the shared flags; `needSize` makes b/h or D mandatory (checks). */
@@ -227,6 +236,11 @@ export function resolveSectionFlags(given: SectionFlags, needSize = false): Reso
   } else {
     throw new PmError(ERROR_CODES.missing, '--gamma', `is required, or --cover with --bar and --h (allowed: ${GAMMA_RANGE[0]}–${GAMMA_RANGE[1]})`);
   }
+  // γB: the columns' spacing across b, beside γ (the layout's gammaX); cover detailing keeps one cover on every face
+  if (f.gammaB !== undefined) {
+    if (shapeKind === 'circle' || kind === 'ring' || kind === 'custom') throw new PmError(ERROR_CODES.conflict, '--gamma-b', `applies to rectangles with two-faces, four-faces or side-faces bars, not ${shapeKind === 'circle' ? 'a circle' : kind}`);
+    if (gammaSource === 'detailing') throw new PmError(ERROR_CODES.conflict, '--gamma-b', 'needs --gamma; with --cover every face has the same cover');
+  }
 
   return {
     code: basis.code,
@@ -236,6 +250,7 @@ export function resolveSectionFlags(given: SectionFlags, needSize = false): Reso
     sized,
     arrangement,
     gamma,
+    ...(f.gammaB !== undefined ? { gammaB: f.gammaB } : {}),
     gammaSource,
     ...(bar ? { bar } : {}),
     ...(cover !== undefined ? { cover } : {}),

@@ -54,6 +54,7 @@ export async function sheetSetFromFlags(o: SheetOptions): Promise<{ set: Resolve
     fc: section.basis.fc,
     fy: section.basis.fy,
     gamma: section.gamma,
+    ...(section.gammaB !== undefined ? { gammaB: section.gammaB } : {}),
     arrangement: section.arrangement,
     transverse: section.basis.transverse,
     basisOptions: {},

@@ -99,6 +99,7 @@ export function familyFor(req: TableRequest, rhos: number[] = req.rhos): CurveFa
     shape: s.shape,
     arrangement: s.arrangement,
     gamma: s.gamma,
+    ...(s.gammaB !== undefined ? { gammaX: s.gammaB } : {}),
     rhos,
     capContext: s.capContext,
     basePoints: req.basePoints,

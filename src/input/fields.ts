@@ -77,6 +77,7 @@ export function describeIssue(i: Issue): string {
       if (!i.message.startsWith('Invalid')) return i.message;
       return `must be one of ${i.values.map((v) => JSON.stringify(v)).join(', ')}`;
     case 'invalid_union':
+      if (!i.message.startsWith('Invalid')) return i.message;
       return 'has the wrong form (see charts-config/chart-set.schema.json)';
     default:
       return i.message;

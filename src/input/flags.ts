@@ -13,6 +13,7 @@ import { parseOrThrow, quantityText, ranged, rangedInt } from './fields.js';
 import {
   ALPHA_CC_RANGE,
   CONCRETE_LAWS,
+  GAMMA_B_RANGE,
   GAMMA_C_RANGE,
   GAMMA_RANGE,
   GAMMA_S_RANGE,
@@ -52,6 +53,17 @@ export const wholeFlag = (range: readonly [number, number]) =>
     })
     .pipe(rangedInt(range));
 
+/** A flag holding one whole number, or two separated by a comma ("3,5": a four-faces pair [nb, nh]); ranges are checked per arrangement. */
+export const countsFlag = () =>
+  z.string().transform((t, ctx) => {
+    const m = /^\s*(\d{1,9})\s*(?:,\s*(\d{1,9})\s*)?$/.exec(t);
+    if (!m) {
+      ctx.addIssue({ code: 'custom', message: 'is not a whole number or two whole numbers "nb,nh"', input: t });
+      return z.NEVER;
+    }
+    return m[2] === undefined ? Number(m[1]) : ([Number(m[1]), Number(m[2])] as [number, number]);
+  });
+
 /** A flag naming one of `values`. */
 export const enumFlag = <const T extends readonly [string, ...string[]]>(values: T) =>
   z.enum(values, { message: `is not one of the allowed values (allowed: ${values.join(', ')})` });
@@ -71,12 +83,13 @@ export const SectionFlagsSchema = z.object({
   h: quantityFlag('length').optional(),
   diameter: quantityFlag('length').optional(),
   gamma: decimalFlag(ranged(GAMMA_RANGE)).optional(),
+  gammaB: decimalFlag(ranged(GAMMA_B_RANGE)).optional(),
   cover: quantityFlag('length').optional(),
   tie: textFlag().optional(),
   bar: textFlag().optional(),
   arrangement: enumFlag(ARRANGEMENTS).optional(),
-  /** ranges per arrangement are checked in `barsPerFaceFor` */
-  barsPerFace: wholeFlag([1, 1e9]).optional(),
+  /** one count, or "nb,nh" for four-faces; ranges per arrangement are checked in src/flags/section-flags.ts */
+  barsPerFace: countsFlag().optional(),
   bars: wholeFlag([1, 1e9]).optional(),
   customBars: textFlag().optional(),
   transverse: enumFlag(TRANSVERSE_TYPES).optional(),

@@ -11,6 +11,8 @@ import { MAX_QUANTITY_CHARS, unitSuffixes, type QuantityKind } from '../units/in
 
 /** γ a sheet or a section may use (common practice: outer rows closer than 0.3·h or beyond 0.95·h are not buildable). */
 export const GAMMA_RANGE = [0.3, 0.95] as const;
+/** γB (outer-column spacing ÷ b, beside γ): the same buildable range as γ (common practice). */
+export const GAMMA_B_RANGE = GAMMA_RANGE;
 /** ρg values a family may hold; the basis's own column limits are printed on the sheet. */
 export const RHO_RANGE = [0.001, 0.1] as const;
 /** ω values a family may hold before each sheet's conversion to ρg is checked against RHO_RANGE. */
@@ -19,7 +21,10 @@ export const ECCENTRICITY_RANGE = [0.01, 10] as const;
 export const ASPECT_RANGE = [0.2, 5] as const;
 export const PNG_SCALE_RANGE = [0.5, 8] as const;
 
-/** Bars per face: two-faces may have one bar per face; the others count corners on both faces. */
+/**
+ * Bars per face: two-faces may have one bar per face; the others count corners on both faces.
+ * A four-faces pair [nb, nh] holds each count to the same range.
+ */
 export const BARS_PER_FACE_RANGE = { 'two-faces': [1, 20], 'four-faces': [2, 20], 'side-faces': [2, 20] } as const;
 /** Bars on a ring (circles). */
 export const RING_BARS_RANGE = [4, 48] as const;
@@ -28,6 +33,10 @@ export const CUSTOM_BARS_RANGE = [2, 1000] as const;
 export const CUSTOM_BAR_SHARE_MAX = 1e6;
 /** Bar coordinates are fractions of b (or D) and h from the centroid. */
 export const CUSTOM_BAR_COORD_MAX = 0.5;
+
+/** `check --chart-gamma-step` and `--chart-axial-step` (P/(f′c·Ag), ν for EN 1992-1-1): the grids of the emulated sheets. */
+export const CHART_GAMMA_STEP_RANGE = [0.01, 0.2] as const;
+export const CHART_AXIAL_STEP_RANGE = [0.02, 0.25] as const;
 
 /** Curves in a chart set's family (a sheet stays legible). */
 export const SET_CURVES_RANGE = [1, 20] as const;
@@ -66,6 +75,11 @@ export const MAX_CUSTOM_BARS_BYTES = 1 << 20;
 export const MAX_LOADS_BYTES = 32 << 20;
 /** Load rows in one CSV file. */
 export const MAX_LOAD_ROWS = 200_000;
+/**
+ * Loads a drawn check report (.pdf, .svg) may plot: one page cannot show more, and the renderer's
+ * memory grows with every mark. Text and JSON reports, and the printed table, take every load.
+ */
+export const MAX_DRAWN_REPORT_LOADS = 20_000;
 /** Characters of a load id. */
 export const MAX_LOAD_ID_CHARS = 64;
 

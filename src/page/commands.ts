@@ -51,6 +51,7 @@ export function chartSetSnippet(view: ChartView, fields: PageFields): string {
         fc: `${Number(s.basis.fc.toPrecision(6))}${unit}`,
         fy: `${Number(s.basis.fy.toPrecision(6))}${unit}`,
         gamma: gammas,
+        ...(sheet.gammaB !== undefined ? { gammaB: sheet.gammaB } : {}),
         arrangement: sheet.arrangement,
         transverse: sheet.transverse,
       },

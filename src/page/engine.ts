@@ -74,7 +74,7 @@ export function chartView(fields: PageFields, grid: number, date: string): Promi
     const { lower, upper } = bracketingGammas(s.gamma, grid);
     const sheets = [lower, ...(upper === null ? [] : [upper])].map((gamma) => ({
       gamma,
-      family: computeFamily({ basis: s.basis, shape: s.shape, arrangement: s.arrangement, gamma, rhos: request.rhos, capContext: s.capContext, basePoints: SHEET_BASE_POINTS }),
+      family: computeFamily({ basis: s.basis, shape: s.shape, arrangement: s.arrangement, gamma, ...(s.gammaB !== undefined ? { gammaX: s.gammaB } : {}), rhos: request.rhos, capContext: s.capContext, basePoints: SHEET_BASE_POINTS }),
     }));
     return { request, set, family, built, sheets, divisor: set.normalisation === 'dimensionless' ? s.basis.normalisingStress : 1 };
   });

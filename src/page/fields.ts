@@ -46,8 +46,9 @@ export const FIELD_GROUPS: readonly FieldGroup[] = [
     fields: [
       f('shape', 'Shape', 'select', { options: [['rectangle', 'rectangle'], ['circle', 'circle']] }),
       f('gamma', 'γ', 'text', { hint: 'outer-row centre spacing ÷ depth, 0.3–0.95' }),
+      f('gammaB', 'γB', 'text', { placeholder: 'same cover', hint: 'outer-column centre spacing ÷ width b, 0.3–0.95 (rectangles)' }),
       f('arrangement', 'Arrangement', 'select', { options: [['two-faces', 'two faces'], ['four-faces', 'four faces'], ['side-faces', 'side faces'], ['ring', 'ring']] }),
-      f('barsPerFace', 'Bars per face', 'int', { placeholder: 'default' }),
+      f('barsPerFace', 'Bars per face', 'text', { placeholder: 'default', hint: 'four faces: one count, or nb,nh (on each b face, on each h face)' }),
       f('bars', 'Bars (ring)', 'int', { placeholder: 'default 8' }),
       f('transverse', 'Transverse', 'select', { options: [['tied', 'tied'], ['spiral', 'spiral']] }),
     ],

@@ -2,11 +2,16 @@
  * Views of one `ColumnCheck` (src/design/column-check.ts): the tables every output shares, the text
  * table, the text report and the JSON. Every figure, rounding and label is made here once; the drawn
  * report (src/sheet/check-report.ts) lays out these same tables. Pure: no I/O.
+ *
+ * Each table row is made by one function (`resultRow`, `slendernessRows`, `biaxialRow`, `resultJson`),
+ * so the text and the JSON can also be produced load by load (`checkTextPieces`, `checkJsonPieces`) from
+ * a check held as a ranking (`rankColumnCheck`), with the same bytes as from a whole `ColumnCheck`.
  */
 import { strainClassWord } from '../codes/types.js';
-import type { ColumnCheck, ColumnLoadResult, LoadStatus } from '../design/column-check.js';
+import type { ColumnCheck, ColumnCheckFrame, ColumnCheckHead, ColumnLoadResult, LoadStatus } from '../design/column-check.js';
 import type { SlendernessResult } from '../design/slenderness.js';
 import { barSet } from '../section/bar-tables.js';
+import { faceCounts, type Arrangement } from '../section/types.js';
 import { DISPLAY_UNITS, toDisplay, type UnitSystem } from '../units/index.js';
 import { CAUTION } from './caution.js';
 import { cell as f, fmt, num } from './format.js';
@@ -39,7 +44,7 @@ export const STATUS_WORDS: Record<LoadStatus, string> = {
 };
 
 /** Symbols of the actions and the normalised axes for this check's basis and shape. */
-export function symbolsOf(c: ColumnCheck) {
+export function symbolsOf(c: Pick<ColumnCheck, 'basis' | 'shape'>) {
   const sy = c.basis.symbols;
   const circle = c.shape.kind === 'circle';
   return {
@@ -56,7 +61,7 @@ export function symbolsOf(c: ColumnCheck) {
 }
 
 /** The note column of a load's row. */
-export function noteText(r: ColumnLoadResult, c: ColumnCheck): string {
+export function noteText(r: ColumnLoadResult, c: Pick<ColumnCheck, 'basis' | 'shape'>): string {
   return [
     r.status !== 'ok' && r.status !== 'fails' ? `${r.statusReason}${r.statusClause ? ` [${r.statusClause}]` : ''}` : '',
     r.rhoStatus === 'minimum-governs' && r.status === 'ok' ? 'minimum ρg' : '',
@@ -71,12 +76,16 @@ export function noteText(r: ColumnLoadResult, c: ColumnCheck): string {
 
 /** The results table: one row per load, governing first. */
 export function resultsView(c: ColumnCheck): TableView {
-  const u = c.units;
-  const un = unitsOf(u);
+  return { headers: resultsHeaders(c), rows: c.results.map((r) => resultRow(r, c)), marked: c.results.map((r) => r.governing) };
+}
+
+/** Headers of the results table. */
+export function resultsHeaders(c: ColumnCheckFrame): string[] {
+  const un = unitsOf(c.units);
   const s = symbolsOf(c);
   const withUtil = c.checked !== null;
   const biax = c.biaxial;
-  const headers = [
+  return [
     'id',
     `${s.P} ${un.force}`,
     `${s.M} ${un.moment}`,
@@ -88,6 +97,7 @@ export function resultsView(c: ColumnCheck): TableView {
     'ρg req',
     ...(biax && !withUtil ? ['ρg req biax'] : []),
     'ρg chart',
+    ...(biax ? ['ρg chart biax'] : []),
     'ρg rounded',
     `extra ${un.area}`,
     'εt',
@@ -98,7 +108,15 @@ export function resultsView(c: ColumnCheck): TableView {
     'status',
     'note',
   ];
-  const rows = c.results.map((r) => [
+}
+
+/** One load's row of the results table. */
+export function resultRow(r: ColumnLoadResult, c: ColumnCheckFrame): string[] {
+  const u = c.units;
+  const s = symbolsOf(c);
+  const withUtil = c.checked !== null;
+  const biax = c.biaxial;
+  return [
     r.id,
     f(toDisplay(r.Pu, 'force', u), 5),
     Number.isFinite(r.Mu) ? (r.momentRaised ? '↑' : '') + f(toDisplay(Math.sign(r.Mu || 1) * r.Mdesign, 'moment', u), 5) : '∞',
@@ -110,6 +128,7 @@ export function resultsView(c: ColumnCheck): TableView {
     f(r.rhoRequired),
     ...(biax && !withUtil ? [f(r.biaxial?.rhoRequired ?? null)] : []),
     f(r.rhoFromChart),
+    ...(biax ? [f(r.biaxial?.rhoFromChart ?? null)] : []),
     f(r.rhoRoundedDown, 3),
     f(r.extraSteelRoundedDown, 3),
     f(r.strain.epsT, 3),
@@ -119,43 +138,73 @@ export function resultsView(c: ColumnCheck): TableView {
     ...(withUtil && biax ? [f(r.biaxial?.exact?.utilisation ?? null, 3)] : []),
     STATUS_WORDS[r.status],
     noteText(r, c),
-  ]);
-  return { headers, rows, marked: c.results.map((r) => r.governing) };
+  ];
 }
 
 /** Lines under the results table: the governing mark, the measure, the moments, the rounding cost. */
 export function resultsFootnotes(c: ColumnCheck): string[] {
+  return footnotesFor(c, c.results[0]);
+}
+
+function footnotesFor(c: ColumnCheckHead, gov: ColumnLoadResult | undefined): string[] {
   const un = unitsOf(c.units);
   const s = symbolsOf(c);
   const out = [
     `* governing load: ${c.governingWhy}. Loads are ranked by status (unstable, outside scope, not possible, fails, ok), then by ${c.measure === 'utilisation' ? 'utilisation' : 'ρg required'}.`,
     `${s.M} is the moment checked: after slenderness where asked, ↑ where raised to the basis minimum; signed. Normalised values in ${un.stress}; εt and φ at capacity along the load ray (${c.checked ? 'checked reinforcement' : 'at ρg required'}).`,
   ];
-  const gov = c.results[0];
   if (gov && gov.extraSteelRoundedDown !== null && gov.extraSteelRoundedDown > 0) {
     out.push(`Reading the next lower sheet and rounding up would cost ${f(gov.extraSteelRoundedDown, 3)} ${un.area} more steel than the exact ρg for ${gov.id}.`);
+  }
+  const bc = c.biaxialChart;
+  if (bc) {
+    const diff = gov?.biaxial?.chartMinusExact ?? null;
+    out.push(
+      `ρg chart biax: read off biaxial sheets at γ = ${fmt(c.gamma, 4)} with contours at ρg ${bc.rhos.map((r) => fmt(r, 3)).join(', ')}, one sheet per ${axialLevelWords(c)} step of ${bc.axialStep}; linear between contours along the moment direction and linear between levels.` +
+        (diff !== null && gov ? ` For ${gov.id} it differs from the exact ρg req biax by ${diff >= 0 ? '+' : ''}${f(diff)}.` : ''),
+    );
   }
   return out;
 }
 
+/** The axial level of the biaxial sheets in the basis's words: ν for EN 1992-1-1, P/(f′c·Ag) otherwise. */
+const axialLevelWords = (c: ColumnCheckFrame): string => c.basis.symbols.dimensionlessAxial ?? `${symbolsOf(c).P}/(${c.basis.symbols.normalisingStress}·Ag)`;
+
 /** Slenderness per load and axis; null without slenderness input. */
 export function slendernessView(c: ColumnCheck): { method: string; table: TableView } | null {
   if (!c.slenderness) return null;
-  const u = c.units;
-  const un = unitsOf(u);
-  const s = symbolsOf(c);
-  const M = (x: number) => f(toDisplay(x, 'moment', u), 5);
   const rows: string[][] = [];
   const marked: boolean[] = [];
   let method = '';
   for (const r of c.results) {
-    const e = r.slenderness;
-    if (!e) continue;
-    for (const [axis, sl] of [['x', e.x], ['y', e.y]] as const) {
-      if (!sl) continue;
-      method ||= sl.method;
-      const st = (p: string) => sl.steps.find((x) => x.label.startsWith(p))?.value;
-      rows.push([
+    for (const row of slendernessRows(r, c)) {
+      method ||= row.method;
+      rows.push(row.cells);
+      marked.push(r.governing);
+    }
+  }
+  return { method, table: { headers: slendernessHeaders(c), rows, marked } };
+}
+
+export function slendernessHeaders(c: ColumnCheckFrame): string[] {
+  const un = unitsOf(c.units);
+  const s = symbolsOf(c);
+  return ['id', 'axis', 'slenderness', 'limit', 'neglected', 'δ', `${s.firstOrder} ${un.moment}`, `${s.secondOrder} ${un.moment}`, 'note'];
+}
+
+/** One load's rows of the slenderness table: one per axis magnified, with the method of each. */
+export function slendernessRows(r: ColumnLoadResult, c: ColumnCheckFrame): { method: string; cells: string[] }[] {
+  const e = r.slenderness;
+  if (!e) return [];
+  const u = c.units;
+  const M = (x: number) => f(toDisplay(x, 'moment', u), 5);
+  const out: { method: string; cells: string[] }[] = [];
+  for (const [axis, sl] of [['x', e.x], ['y', e.y]] as const) {
+    if (!sl) continue;
+    const st = (p: string) => sl.steps.find((x) => x.label.startsWith(p))?.value;
+    out.push({
+      method: sl.method,
+      cells: [
         r.id,
         axis,
         f(((st('kℓu/r') ?? st('λ = l0/i') ?? st('Le/r')) as number | undefined) ?? null, 3),
@@ -165,14 +214,10 @@ export function slendernessView(c: ColumnCheck): { method: string; table: TableV
         M(sl.firstOrderMoment),
         M(sl.magnifiedMoment),
         sl.ok ? '' : shortWarning(sl),
-      ]);
-      marked.push(r.governing);
-    }
+      ],
+    });
   }
-  return {
-    method,
-    table: { headers: ['id', 'axis', 'slenderness', 'limit', 'neglected', 'δ', `${s.firstOrder} ${un.moment}`, `${s.secondOrder} ${un.moment}`, 'note'], rows, marked },
-  };
+  return out;
 }
 
 const shortWarning = (s: SlendernessResult): string => (s.ok ? '' : s.delta === Infinity ? 'unstable' : (s.warnings[0] ?? 'outside the method'));
@@ -180,36 +225,45 @@ const shortWarning = (s: SlendernessResult): string => (s.ok ? '' : s.delta === 
 /** Biaxial methods side by side, with the checked reinforcement; null when no load has Muy or no reinforcement is given. */
 export function biaxialView(c: ColumnCheck): TableView | null {
   if (!c.biaxial || !c.checked) return null;
-  const u = c.units;
-  const un = unitsOf(u);
+  return { headers: biaxialHeaders(c), rows: c.results.map((r) => biaxialRow(r, c)), marked: c.results.map((r) => r.governing) };
+}
+
+export function biaxialHeaders(c: ColumnCheckFrame): string[] {
+  const un = unitsOf(c.units);
   const s = symbolsOf(c);
+  return ['id', `${s.P} ${un.force}`, `${s.M}x ${un.moment}`, `${s.M}y ${un.moment}`, 'exact', 'NA angle°', 'reciprocal', 'method', 'contour', 'α', 'exact M@P', 'contour M@P'];
+}
+
+/** One load's row of the biaxial table. */
+export function biaxialRow(r: ColumnLoadResult, c: ColumnCheckFrame): string[] {
+  const u = c.units;
   const M = (x: number | null) => f(x === null ? null : toDisplay(x, 'moment', u), 5);
-  const rows = c.results.map((r) => {
-    const b = r.biaxial;
-    return [
-      r.id,
-      f(toDisplay(r.Pu, 'force', u), 5),
-      M(r.Mu),
-      M(r.Muy),
-      f(b?.exact?.utilisation ?? null, 3),
-      f(b?.exact?.neutralAxisAngleDeg ?? null, 3),
-      f(b?.reciprocalLoad?.utilisation ?? null, 3),
-      b?.reciprocalLoad?.method ?? '—',
-      f(b?.loadContour?.utilisation ?? null, 3),
-      f(b?.loadContour?.alpha ?? null, 3),
-      f(b?.exact?.momentUtilisation ?? null, 3),
-      f(b?.loadContour?.momentScale ?? null, 3),
-    ];
-  });
-  return {
-    headers: ['id', `${s.P} ${un.force}`, `${s.M}x ${un.moment}`, `${s.M}y ${un.moment}`, 'exact', 'NA angle°', 'reciprocal', 'method', 'contour', 'α', 'exact M@P', 'contour M@P'],
-    rows,
-    marked: c.results.map((r) => r.governing),
-  };
+  const b = r.biaxial;
+  return [
+    r.id,
+    f(toDisplay(r.Pu, 'force', u), 5),
+    M(r.Mu),
+    M(r.Muy),
+    f(b?.exact?.utilisation ?? null, 3),
+    f(b?.exact?.neutralAxisAngleDeg ?? null, 3),
+    f(b?.reciprocalLoad?.utilisation ?? null, 3),
+    b?.reciprocalLoad?.method ?? '—',
+    f(b?.loadContour?.utilisation ?? null, 3),
+    f(b?.loadContour?.alpha ?? null, 3),
+    f(b?.exact?.momentUtilisation ?? null, 3),
+    f(b?.loadContour?.momentScale ?? null, 3),
+  ];
 }
 
 /** Bar proposals; a sentence when there are none. */
 export function barsView(c: ColumnCheck): TableView | string {
+  return barsViewFor(c, loadIdIn(c));
+}
+
+/** The id of a load by input index, in a whole check. */
+const loadIdIn = (c: ColumnCheck) => (index: number) => c.results.find((r) => r.index === index)?.id;
+
+function barsViewFor(c: ColumnCheckHead, loadId: (index: number) => string | undefined): TableView | string {
   const un = unitsOf(c.units);
   if (c.bars.length === 0) return `Bar proposals: none (${c.barsSkipped ?? 'none found'}).`;
   const rows = c.bars.map((p) => [
@@ -219,21 +273,28 @@ export function barsView(c: ColumnCheck): TableView | string {
     f(p.gamma, 4),
     `${f(p.clearSpacing, 3)} ≥ ${f(p.clearSpacingRequired, 3)}`,
     f(p.utilisation, 3),
-    c.results.find((r) => r.index === p.governingLoad)?.id ?? '',
+    loadId(p.governingLoad) ?? '',
   ]);
   return { headers: ['bars', `As ${un.area}`, 'ρg', 'γ', `clear ${un.length}`, 'util (all effects)', 'by load'], rows, marked: rows.map(() => false) };
 }
 
+/** An arrangement's name in section lines: its kind, and for unequal four-faces counts the two counts in words. */
+export function arrangementName(a: Arrangement): string {
+  if (a.kind !== 'four-faces') return a.kind;
+  const [nb, nh] = faceCounts(a.barsPerFace);
+  return nb === nh ? a.kind : `${a.kind} (${nb} on each b face, ${nh} on each h face)`;
+}
+
 /** The section in one line. */
-export function sectionLine(c: ColumnCheck): string {
+export function sectionLine(c: ColumnCheckFrame): string {
   const un = unitsOf(c.units);
   const b = c.basis;
   const dims = c.shape.kind === 'rectangle' ? `${fmt(c.shape.b)} × ${fmt(c.shape.h)} ${un.length}` : `D = ${fmt(c.shape.diameter)} ${un.length}`;
-  return `${b.title}, ${dims} ${b.transverse}, ${c.arrangement.kind}, ${b.symbols.concreteStrength} = ${fmt(b.fc)} ${un.stress}, ${b.symbols.steelStrength} = ${fmt(b.fy)} ${un.stress}, γ = ${fmt(c.gamma, 4)} (${c.gammaSource})`;
+  return `${b.title}, ${dims} ${b.transverse}, ${arrangementName(c.arrangement)}, ${b.symbols.concreteStrength} = ${fmt(b.fc)} ${un.stress}, ${b.symbols.steelStrength} = ${fmt(b.fy)} ${un.stress}, γ = ${fmt(c.gamma, 4)} (${c.gammaSource})${c.gammaB !== null ? `, γB = ${fmt(c.gammaB, 4)} (given)` : ''}`;
 }
 
 /** Assumptions of the check itself, beside the basis notes. */
-export function checkAssumptions(c: ColumnCheck): string[] {
+export function checkAssumptions(c: ColumnCheckFrame): string[] {
   const b = c.basis;
   const lim = c.limits;
   const s = symbolsOf(c);
@@ -268,62 +329,179 @@ export function checkAssumptions(c: ColumnCheck): string[] {
   return [...out, ...c.notes];
 }
 
+/** Column widths of a text table, grown one row at a time; a marked row counts with its "* ". */
+export class ColumnWidths {
+  readonly w: number[];
+  constructor(headers: readonly string[]) {
+    this.w = headers.map((h) => h.length);
+  }
+  add(cells: readonly string[], marked = false): void {
+    const w = this.w;
+    // a loop, not Math.max(...rows): 200k rows overflow the call stack as spread arguments
+    for (let i = 0; i < w.length; i++) w[i] = Math.max(w[i]!, (i === 0 && marked ? 2 : 0) + (cells[i] ?? '').length);
+  }
+}
+
+/** The lines of a text table: headers, rule, rows (the marked ones with "* "). */
+export function* tableLines(headers: readonly string[], widths: ColumnWidths, rows: Iterable<{ cells: readonly string[]; marked: boolean }>): Generator<string> {
+  const w = widths.w;
+  const line = (cells: readonly string[]) => cells.map((x, i) => (i === 0 ? x.padEnd(w[i]!) : x.padStart(w[i]!))).join('  ').trimEnd();
+  yield line(headers);
+  yield line(w.map((n) => '-'.repeat(n)));
+  for (const { cells, marked } of rows) yield line(marked ? [`* ${cells[0]}`, ...cells.slice(1)] : cells);
+}
+
 /** Renders a table as aligned text, the governing row marked with "* ". */
 export function textTable(t: TableView): string {
-  const rows = t.rows.map((r, i) => [(t.marked[i] ? '* ' : '') + r[0], ...r.slice(1)]);
-  // a loop, not Math.max(...rows): 200k rows overflow the call stack as spread arguments
-  const w = t.headers.map((h, i) => rows.reduce((m, r) => Math.max(m, (r[i] ?? '').length), h.length));
-  const line = (cells: string[]) => cells.map((x, i) => (i === 0 ? x.padEnd(w[i]!) : x.padStart(w[i]!))).join('  ').trimEnd();
-  return [line(t.headers), line(w.map((n) => '-'.repeat(n))), ...rows.map(line)].join('\n');
+  const widths = new ColumnWidths(t.headers);
+  t.rows.forEach((r, i) => widths.add(r, t.marked[i]));
+  return [...tableLines(t.headers, widths, t.rows.map((cells, i) => ({ cells, marked: t.marked[i] === true })))].join('\n');
+}
+
+/**
+ * What the text and JSON views read: a whole check, or a check held as a ranking whose results are
+ * computed again, in ranked order, each time they are read (`RankedColumnCheck` fits as it is).
+ */
+export interface CheckRows {
+  readonly check: ColumnCheckHead;
+  readonly governing: ColumnLoadResult | undefined;
+  results(): Iterable<ColumnLoadResult>;
+  loadId(index: number): string | undefined;
+}
+
+/** A whole check as rows. */
+export const rowsOf = (c: ColumnCheck): CheckRows => ({ check: c, governing: c.results[0], results: () => c.results, loadId: loadIdIn(c) });
+
+/** Column widths of the per-load tables of the text view. */
+export interface TextSizes {
+  results: ColumnWidths;
+  slenderness: ColumnWidths | null;
+  biaxial: ColumnWidths | null;
+}
+
+/**
+ * Sizes the per-load tables of the text view one result at a time, in any order (`visit`, e.g. as
+ * the engine ranks the loads); `finish` counts the governing load's rows with their mark.
+ */
+export function textSizer(c: ColumnCheckFrame): { visit(r: ColumnLoadResult): void; finish(governing: ColumnLoadResult | undefined): TextSizes } {
+  const sizes: TextSizes = {
+    results: new ColumnWidths(resultsHeaders(c)),
+    slenderness: c.slenderness ? new ColumnWidths(slendernessHeaders(c)) : null,
+    biaxial: c.biaxial && c.checked ? new ColumnWidths(biaxialHeaders(c)) : null,
+  };
+  const add = (r: ColumnLoadResult, marked: boolean) => {
+    sizes.results.add(resultRow(r, c), marked);
+    if (sizes.slenderness) for (const row of slendernessRows(r, c)) sizes.slenderness.add(row.cells, marked);
+    if (sizes.biaxial) sizes.biaxial.add(biaxialRow(r, c), marked);
+  };
+  return {
+    visit: (r) => add(r, false),
+    finish: (gov) => {
+      if (gov) add(gov, true);
+      return sizes;
+    },
+  };
+}
+
+/** Sizes the text tables of a whole check. */
+function sizeText(src: CheckRows): TextSizes {
+  const sizer = textSizer(src.check);
+  for (const r of src.results()) sizer.visit(r);
+  return sizer.finish(src.governing);
 }
 
 /** The readable table the CLI prints. */
 export function checkText(c: ColumnCheck): string {
-  return [...checkTextBody(c), '', CAUTION, ''].join('\n');
+  return [...checkTextPieces(rowsOf(c))].join('');
 }
 
-function checkTextBody(c: ColumnCheck): string[] {
-  const lines = [sectionLine(c)];
-  if (c.checked) lines.push(`Checked reinforcement: ${c.checked.description} (ρg = ${f(c.checked.rho)})`);
-  lines.push(`Chart sheets read: γ = ${c.chart.lower}${c.chart.upper !== null ? ` and ${c.chart.upper}` : ''}`, '');
-  lines.push(textTable(resultsView(c)), ...resultsFootnotes(c));
-  lines.push('', `Summary: ${c.summary.text}.`);
-  const fx = effectsText(c);
-  if (fx) lines.push('', fx);
-  const bars = barsView(c);
-  lines.push('', typeof bars === 'string' ? bars : textTable(bars));
-  return lines;
+/** The text table in pieces, each ending with a newline: a ranked check is printed load by load. */
+export function* checkTextPieces(src: CheckRows, sizes: TextSizes = sizeText(src)): Generator<string> {
+  for (const b of textBlocks(src, sizes)) {
+    if (typeof b === 'string') yield `${b}\n`;
+    else for (const l of b.lines) yield `${l}\n`;
+  }
+  yield '\n';
+  yield `${CAUTION}\n`;
+}
+
+/** An element of the text body: a string (may hold several lines), or lines made one at a time. */
+type TextBlock = string | { lines: Iterable<string> };
+
+function* textBlocks(src: CheckRows, sizes: TextSizes): Generator<TextBlock> {
+  const c = src.check;
+  yield sectionLine(c);
+  if (c.checked) yield `Checked reinforcement: ${c.checked.description} (ρg = ${f(c.checked.rho)})`;
+  yield `Chart sheets read: γ = ${c.chart.lower}${c.chart.upper !== null ? ` and ${c.chart.upper}` : ''}`;
+  yield '';
+  yield { lines: resultsTableLines(src, sizes.results) };
+  yield* footnotesFor(c, src.governing);
+  yield '';
+  yield `Summary: ${c.summary.text}.`;
+  if (c.slenderness || c.biaxial) {
+    yield '';
+    yield { lines: effectLines(src, sizes) };
+  }
+  const bars = barsViewFor(c, (i) => src.loadId(i));
+  yield '';
+  yield typeof bars === 'string' ? bars : textTable(bars);
+}
+
+function resultsTableLines(src: CheckRows, widths: ColumnWidths): Generator<string> {
+  const c = src.check;
+  return tableLines(resultsHeaders(c), widths, mapRows(src.results(), (r) => [{ cells: resultRow(r, c), marked: r.governing }]));
+}
+
+function* mapRows<T>(results: Iterable<ColumnLoadResult>, rows: (r: ColumnLoadResult) => T[]): Generator<T> {
+  for (const r of results) yield* rows(r);
 }
 
 /** The slenderness and biaxial sections of the text table (empty for a short uniaxial check). */
 export function effectsText(c: ColumnCheck): string {
-  const parts: string[] = [];
-  const sl = slendernessView(c);
-  if (sl) parts.push(`Slenderness (${sl.method}):`, textTable(sl.table));
-  const bx = biaxialView(c);
-  if (bx) {
-    parts.push(
-      ...(parts.length ? [''] : []),
-      'Biaxial (checked reinforcement, actual bars; > 1 fails). exact: along the load ray in (P, Mx, My); reciprocal: Pu/Pn (or the linear moment sum);',
-      'contour: left-hand side (Mux/Mxo)^α + (Muy/Myo)^α. The M@P columns compare moments at fixed P: exact, and the contour value^(1/α).',
-      textTable(bx),
-    );
-  } else if (c.biaxial) {
-    parts.push(...(parts.length ? [''] : []), 'Biaxial: no reinforcement given, so ρg req biax is the exact biaxial ρg required (Mux and Muy together; ρg req is for Mux alone); give --rho or a bar layout for the three methods side by side.');
+  const src = rowsOf(c);
+  return [...effectLines(src, sizeText(src))].join('\n');
+}
+
+function* effectLines(src: CheckRows, sizes: TextSizes): Generator<string> {
+  const c = src.check;
+  let any = false;
+  if (c.slenderness && sizes.slenderness) {
+    // the method of the first load (in ranked order) that has slenderness rows
+    let method = '';
+    for (const r of src.results()) {
+      method = slendernessRows(r, c)[0]?.method ?? '';
+      if (method) break;
+    }
+    yield `Slenderness (${method}):`;
+    yield* tableLines(slendernessHeaders(c), sizes.slenderness, mapRows(src.results(), (r) => slendernessRows(r, c).map((row) => ({ cells: row.cells, marked: r.governing }))));
+    any = true;
   }
-  return parts.join('\n');
+  if (sizes.biaxial) {
+    if (any) yield '';
+    yield 'Biaxial (checked reinforcement, actual bars; > 1 fails). exact: along the load ray in (P, Mx, My); reciprocal: Pu/Pn (or the linear moment sum);';
+    yield 'contour: left-hand side (Mux/Mxo)^α + (Muy/Myo)^α. The M@P columns compare moments at fixed P: exact, and the contour value^(1/α).';
+    yield* tableLines(biaxialHeaders(c), sizes.biaxial, mapRows(src.results(), (r) => [{ cells: biaxialRow(r, c), marked: r.governing }]));
+  } else if (c.biaxial) {
+    if (any) yield '';
+    yield 'Biaxial: no reinforcement given, so ρg req biax is the exact biaxial ρg required (Mux and Muy together; ρg req is for Mux alone); give --rho or a bar layout for the three methods side by side.';
+  }
 }
 
 /** Text report: inputs, assumptions and clauses, results, slenderness steps, biaxial details, caution. */
 export function checkReportText(c: ColumnCheck, generator: string): string {
+  return [...checkReportPieces(rowsOf(c), generator)].join('');
+}
+
+/** The text report in pieces, each ending with a newline: a ranked check is written load by load. */
+export function* checkReportPieces(src: CheckRows, generator: string, sizes: TextSizes = sizeText(src)): Generator<string> {
+  const c = src.check;
   const b = c.basis;
-  const body = checkTextBody(c).slice(1);
-  const lines = [
+  const head = [
     `pmchart column check — ${generator}`,
     '',
     'INPUTS',
     `  ${sectionLine(c)}`,
-    `  loads: ${c.results.length} factored combination(s)`,
+    `  loads: ${c.summary.total} factored combination(s)`,
     ...Object.entries(b.parameters).map(([k, v]) => `  ${k} = ${v}`),
     '',
     'ASSUMPTIONS AND CODE CLAUSES',
@@ -331,48 +509,56 @@ export function checkReportText(c: ColumnCheck, generator: string): string {
     ...checkAssumptions(c).map((n) => `  - ${n}`),
     '',
     'RESULTS (governing first)',
-    ...body.map((l) => (l ? `  ${l}` : l)),
-    '',
-    ...detailLines(c),
-    'CAUTION',
-    `  ${CAUTION}`,
-    '',
   ];
-  return lines.join('\n');
+  for (const l of head) yield `${l}\n`;
+  // the body of the text table without its section line; each element indented on its first line
+  let first = true;
+  for (const block of textBlocks(src, sizes)) {
+    if (first) {
+      first = false;
+      continue;
+    }
+    if (typeof block === 'string') yield `${block ? `  ${block}` : block}\n`;
+    else {
+      let k = 0;
+      for (const l of block.lines) yield `${k++ === 0 && l ? `  ${l}` : l}\n`;
+    }
+  }
+  yield '\n';
+  for (const l of detailLines(src)) yield `${l}\n`;
+  yield 'CAUTION\n';
+  yield `  ${CAUTION}\n`;
 }
 
 /** Every slenderness step and the biaxial method details, for the text report. */
-function detailLines(c: ColumnCheck): string[] {
+function* detailLines(src: CheckRows): Generator<string> {
+  const c = src.check;
   const u = c.units;
-  const lines: string[] = [];
   if (c.slenderness) {
-    lines.push('SLENDERNESS STEPS (internal units as labelled)');
-    for (const r of c.results) {
+    yield 'SLENDERNESS STEPS (internal units as labelled)';
+    for (const r of src.results()) {
       for (const [axis, s] of [['x', r.slenderness?.x], ['y', r.slenderness?.y]] as const) {
         if (!s) continue;
-        lines.push(`  ${r.id}, bending about ${axis}: ${s.method}`);
-        for (const st of s.steps) lines.push(`    ${st.label} = ${typeof st.value === 'number' ? f(st.value, 5) : String(st.value)}${st.unit ? ` ${st.unit}` : ''}`);
-        for (const w of s.warnings) lines.push(`    WARNING: ${w}`);
+        yield `  ${r.id}, bending about ${axis}: ${s.method}`;
+        for (const st of s.steps) yield `    ${st.label} = ${typeof st.value === 'number' ? f(st.value, 5) : String(st.value)}${st.unit ? ` ${st.unit}` : ''}`;
+        for (const w of s.warnings) yield `    WARNING: ${w}`;
       }
     }
-    lines.push('');
+    yield '';
   }
   if (c.biaxial && c.checked) {
-    lines.push('BIAXIAL METHODS');
+    yield 'BIAXIAL METHODS';
     const F = (x: number) => f(toDisplay(x, 'force', u), 5);
     const M = (x: number) => f(toDisplay(x, 'moment', u), 5);
-    for (const r of c.results) {
+    for (const r of src.results()) {
       const b = r.biaxial;
       if (!b?.exact || !b.reciprocalLoad || !b.loadContour) continue;
-      lines.push(
-        `  ${r.id}: exact ${f(b.exact.utilisation, 4)} (neutral axis ${f(b.exact.neutralAxisAngleDeg, 4)}°, depth ${f(b.exact.neutralAxisDepth, 4)}, εt = ${f(b.exact.epsT, 3)}, φ = ${f(b.exact.phi, 3)}${b.exact.capGoverns ? ', axial cap governs' : ''})`,
-        `    reciprocal load: Pnx = ${F(b.reciprocalLoad.Pnx)}, Pny = ${F(b.reciprocalLoad.Pny)}, Po = ${F(b.reciprocalLoad.Po)}, Pn = ${F(b.reciprocalLoad.Pn)} (0.1·f′c·Ag = ${F(b.reciprocalLoad.validityLimit)}) → ${b.reciprocalLoad.method} ${f(b.reciprocalLoad.utilisation, 4)}; ${b.reciprocalLoad.note}`,
-        `    load contour: Mnox = ${M(b.loadContour.Mnox)}, Mnoy = ${M(b.loadContour.Mnoy)} at Pu, α = ${f(b.loadContour.alpha, 3)} (${b.loadContour.alphaSource}) → ${f(b.loadContour.utilisation, 4)}; moments may scale by 1/${f(b.loadContour.momentScale, 4)} at fixed Pu (exact: 1/${f(b.exact.momentUtilisation, 4)})`,
-      );
+      yield `  ${r.id}: exact ${f(b.exact.utilisation, 4)} (neutral axis ${f(b.exact.neutralAxisAngleDeg, 4)}°, depth ${f(b.exact.neutralAxisDepth, 4)}, εt = ${f(b.exact.epsT, 3)}, φ = ${f(b.exact.phi, 3)}${b.exact.capGoverns ? ', axial cap governs' : ''})`;
+      yield `    reciprocal load: Pnx = ${F(b.reciprocalLoad.Pnx)}, Pny = ${F(b.reciprocalLoad.Pny)}, Po = ${F(b.reciprocalLoad.Po)}, Pn = ${F(b.reciprocalLoad.Pn)} (0.1·f′c·Ag = ${F(b.reciprocalLoad.validityLimit)}) → ${b.reciprocalLoad.method} ${f(b.reciprocalLoad.utilisation, 4)}; ${b.reciprocalLoad.note}`;
+      yield `    load contour: Mnox = ${M(b.loadContour.Mnox)}, Mnoy = ${M(b.loadContour.Mnoy)} at Pu, α = ${f(b.loadContour.alpha, 3)} (${b.loadContour.alphaSource}) → ${f(b.loadContour.utilisation, 4)}; moments may scale by 1/${f(b.loadContour.momentScale, 4)} at fixed Pu (exact: 1/${f(b.exact.momentUtilisation, 4)})`;
     }
-    lines.push('');
+    yield '';
   }
-  return lines;
 }
 
 // ───────────────────────────── JSON ─────────────────────────────
@@ -394,7 +580,7 @@ function slenderJson(s: SlendernessResult, u: UnitSystem) {
 }
 
 /** One result as JSON: the stable fields (id, rhoRequired, rhoFromChart, rhoRoundedDown …) and the engine's additions. */
-export function resultJson(r: ColumnLoadResult, c: ColumnCheck) {
+export function resultJson(r: ColumnLoadResult, c: ColumnCheckFrame) {
   const u = c.units;
   const b = r.biaxial;
   return {
@@ -443,6 +629,9 @@ export function resultJson(r: ColumnLoadResult, c: ColumnCheck) {
                 loadContour: orNull(b.loadContour?.utilisation),
                 rhoRequired: orNull(b.rhoRequired),
                 rhoStatus: b.rhoStatus,
+                rhoFromChart: orNull(b.rhoFromChart),
+                chartMinusExact: orNull(b.chartMinusExact),
+                chartLevels: b.chartLevels.map((l) => ({ level: num(l.level), rho: orNull(l.rho), position: l.position })),
                 details:
                   b.exact && b.reciprocalLoad && b.loadContour
                     ? {
@@ -487,6 +676,18 @@ export function resultJson(r: ColumnLoadResult, c: ColumnCheck) {
 
 /** The whole check as JSON (stable fields documented in the README). */
 export function checkJson(c: ColumnCheck, generator: string): string {
+  return [...checkJsonPieces(rowsOf(c), generator)].join('');
+}
+
+/** Placeholder for the results while the rest of the document is written (the results follow one by one). */
+const RESULTS_SLOT = '\u0000results\u0000';
+
+/**
+ * The JSON document in pieces with exactly the bytes of JSON.stringify(document, null, 1): the head
+ * with a placeholder for the results, then each result indented to its depth, then the tail.
+ */
+export function* checkJsonPieces(src: CheckRows, generator: string): Generator<string> {
+  const c = src.check;
   const u = c.units;
   const un = unitsOf(u);
   const out = {
@@ -498,6 +699,7 @@ export function checkJson(c: ColumnCheck, generator: string): string {
       shape: c.shape,
       area: num(c.area),
       gamma: num(c.gamma),
+      ...(c.gammaB !== null ? { gammaB: num(c.gammaB) } : {}),
       gammaSource: c.gammaSource,
       arrangement: c.arrangement,
       transverse: c.basis.transverse,
@@ -505,6 +707,7 @@ export function checkJson(c: ColumnCheck, generator: string): string {
       fy: num(c.basis.fy),
     },
     chart: { gammaStep: c.chart.gammaStep, sheets: [c.chart.lower, ...(c.chart.upper !== null ? [c.chart.upper] : [])], rhos: c.chart.rhos },
+    ...(c.biaxialChart ? { biaxialChart: { axialStep: c.biaxialChart.axialStep, angleStepDeg: c.biaxialChart.angleStepDeg, rhos: c.biaxialChart.rhos } } : {}),
     rhoLimits: { min: num(c.limits.min), max: num(c.limits.max) },
     checked: c.checked ? { kind: c.checked.kind, rho: num(c.checked.rho), description: c.checked.description } : null,
     governing: c.governingId,
@@ -512,7 +715,7 @@ export function checkJson(c: ColumnCheck, generator: string): string {
     governingWhy: c.governingWhy,
     summary: { total: c.summary.total, ...c.summary.counts, text: c.summary.text },
     exitCode: c.exitCode,
-    results: c.results.map((r) => resultJson(r, c)),
+    results: RESULTS_SLOT,
     bars: c.bars.map((p) => ({
       layout: p.layout,
       size: p.size,
@@ -524,12 +727,24 @@ export function checkJson(c: ColumnCheck, generator: string): string {
       clearSpacing: num(p.clearSpacing),
       clearSpacingRequired: num(p.clearSpacingRequired),
       utilisation: num(p.utilisation),
-      governingLoad: c.results.find((r) => r.index === p.governingLoad)?.id ?? null,
+      governingLoad: src.loadId(p.governingLoad) ?? null,
     })),
     barsNote: c.barsSkipped,
     basis: { parameters: c.basis.parameters, notes: c.basis.notes },
     assumptions: checkAssumptions(c),
     caution: CAUTION,
   };
-  return JSON.stringify(out, null, 1) + '\n';
+  const [head, tail] = (JSON.stringify(out, null, 1) + '\n').split(JSON.stringify(RESULTS_SLOT)) as [string, string];
+  const total = c.summary.total;
+  if (total === 0) {
+    yield `${head}[]${tail}`;
+    return;
+  }
+  yield `${head}[\n`;
+  let k = 0;
+  for (const r of src.results()) {
+    const text = JSON.stringify(resultJson(r, c), null, 1).replace(/\n/g, '\n  ');
+    yield `  ${text}${++k < total ? ',' : ''}\n`;
+  }
+  yield ` ]${tail}`;
 }

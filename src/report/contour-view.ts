@@ -20,6 +20,8 @@ export interface ContourViewInput {
   shape: Shape;
   arrangement: Arrangement;
   gamma: number;
+  /** γB when given (outer-column spacing ÷ b) */
+  gammaB?: number;
   steel: string;
   steelArea: number;
   rhoG: number;
@@ -49,6 +51,7 @@ export function contourText(format: 'csv' | 'json', v: ContourViewInput, generat
           shape: v.shape,
           arrangement: v.arrangement,
           gamma: num(v.gamma),
+          ...(v.gammaB !== undefined ? { gammaB: num(v.gammaB) } : {}),
           transverse: b.transverse,
           steel: v.steel,
           steelArea: num(v.steelArea),

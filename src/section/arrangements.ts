@@ -1,11 +1,11 @@
 import { ERROR_CODES, PmError } from '../errors.js';
 import { sectionDepth, sectionWidth } from './geometry.js';
-import type { Arrangement, Bar, Shape } from './types.js';
+import { faceCounts, type Arrangement, type Bar, type Shape } from './types.js';
 
 export interface LayoutOptions {
   /** outer-row spacing over depth in the bending plane */
   gamma: number;
-  /** outer-column spacing over width; defaults to the cover implied by gamma on the depth */
+  /** γB: outer-column spacing over width b; defaults to the cover implied by gamma on the depth (equal cover) */
   gammaX?: number;
 }
 
@@ -14,8 +14,10 @@ export function barCount(a: Arrangement): number {
   switch (a.kind) {
     case 'two-faces':
       return 2 * a.barsPerFace;
-    case 'four-faces':
-      return 4 * (a.barsPerFace - 1);
+    case 'four-faces': {
+      const [nb, nh] = faceCounts(a.barsPerFace);
+      return 2 * nb + 2 * nh - 4;
+    }
     case 'side-faces':
       return 2 * a.barsPerFace;
     case 'ring':
@@ -47,9 +49,11 @@ export function layoutBars(shape: Shape, arrangement: Arrangement, totalArea: nu
       break;
     }
     case 'four-faces': {
-      const rows = spread(arrangement.barsPerFace, halfY).reverse();
+      // nh rows down the h faces; the first and last are the b faces with nb bars each
+      const [nb, nh] = faceCounts(arrangement.barsPerFace);
+      const rows = spread(nh, halfY).reverse();
       rows.forEach((y, i) => {
-        const xs = i === 0 || i === rows.length - 1 ? spread(arrangement.barsPerFace, halfX) : [-halfX, halfX];
+        const xs = i === 0 || i === rows.length - 1 ? spread(nb, halfX) : [-halfX, halfX];
         for (const x of xs) bars.push({ x, y, area: each });
       });
       break;

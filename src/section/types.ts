@@ -32,9 +32,19 @@ export interface CustomBar {
   share: number;
 }
 
+/**
+ * Bars per face of a four-faces layout: one count for all four faces, or `[nb, nh]`: nb bars across each
+ * face of width b (the two faces perpendicular to the bending plane, at y = ±γ·h/2) and nh bars along each
+ * face of depth h (at x = ±γB·b/2). Corners count on both faces: 2·nb + 2·nh − 4 bars in all.
+ */
+export type FaceCounts = number | readonly [nb: number, nh: number];
+
+/** [nb, nh] of a four-faces count: a single count is the same on every face. */
+export const faceCounts = (c: FaceCounts): [nb: number, nh: number] => (typeof c === 'number' ? [c, c] : [c[0], c[1]]);
+
 export type Arrangement =
   | { kind: 'two-faces'; barsPerFace: number }
-  | { kind: 'four-faces'; barsPerFace: number }
+  | { kind: 'four-faces'; barsPerFace: FaceCounts }
   | { kind: 'side-faces'; barsPerFace: number }
   | { kind: 'ring'; bars: number }
   | { kind: 'custom'; bars: readonly CustomBar[] };

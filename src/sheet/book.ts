@@ -197,12 +197,14 @@ function drawIndex(page: PDFPage, input: BookInput, regular: PDFFont, bold: PDFF
     font: regular,
     color: hex(COLOURS.muted),
   });
+  const withGammaB = set.sheets.some((s) => s.gammaB !== undefined);
   const cols: [string, number, 'l' | 'r'][] = [
     ['sheet', 4, 'r'],
     ['shape', 9, 'l'],
     [input.symbols.concreteStrength, 6, 'r'],
     [input.symbols.steelStrength, 6, 'r'],
-    ['γ', 4.5, 'r'],
+    // γB, where a sheet has one, gets its own place beside γ
+    withGammaB ? ['γ · γB', 7, 'r'] : ['γ', 4.5, 'r'],
     ['bars', 26, 'l'],
     ['transverse', 7, 'l'],
     ['file', 34, 'l'],
@@ -231,7 +233,7 @@ function drawIndex(page: PDFPage, input: BookInput, regular: PDFFont, bold: PDFF
     const s = set.sheets[i]!;
     if ((i - from) % 2 === 1) page.drawRectangle({ x: m, y: y - 0.45 * u, width: W - 2 * m, height: 15, color: hex('#f3f5f7') });
     row(
-      [String(s.index), describeShape(s.shape), stressText(s.fc, set.units), stressText(s.fy, set.units), s.gamma.toFixed(2), describeArrangement(s.arrangement), describeTransverse(s.transverse), s.fileStem, String(front + i + 1)],
+      [String(s.index), describeShape(s.shape), stressText(s.fc, set.units), stressText(s.fy, set.units), withGammaB ? `${s.gamma.toFixed(2)} · ${s.gammaB === undefined ? '—' : s.gammaB.toFixed(2)}` : s.gamma.toFixed(2), describeArrangement(s.arrangement), describeTransverse(s.transverse), s.fileStem, String(front + i + 1)],
       regular,
       COLOURS.ink,
     );

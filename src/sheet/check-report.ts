@@ -22,7 +22,7 @@ import { COLOURS, TEXT_STYLES, type TextStyle } from '../chart/style.js';
 import { contourPlot } from '../chart/contour-plot.js';
 import { strainClassWord } from '../codes/types.js';
 import type { ColumnCheck, ColumnLoadResult } from '../design/column-check.js';
-import { barsView, biaxialView, noteText, resultsFootnotes, resultsView, slendernessView, STATUS_WORDS, symbolsOf, type TableView } from '../report/check-view.js';
+import { arrangementName, barsView, biaxialView, noteText, resultsFootnotes, resultsView, slendernessView, STATUS_WORDS, symbolsOf, type TableView } from '../report/check-view.js';
 import { cell as f, fmt } from '../report/format.js';
 import { prepareBiaxial } from '../analysis/biaxial.js';
 import type { CapContext } from '../codes/types.js';
@@ -104,7 +104,7 @@ export function buildCheckReport(input: CheckReportInput): CheckReportPage {
   const g = new Deco(L, data);
 
   // 1. the family at the actual γ, the governing curve, the loads
-  const family = computeFamily({ basis: b, shape: c.shape, arrangement: c.arrangement, gamma: c.gamma, rhos: c.chart.rhos, capContext: c.capContext, basePoints: SHEET_BASE_POINTS });
+  const family = computeFamily({ basis: b, shape: c.shape, arrangement: c.arrangement, gamma: c.gamma, ...(c.gammaB !== null ? { gammaX: c.gammaB } : {}), rhos: c.chart.rhos, capContext: c.capContext, basePoints: SHEET_BASE_POINTS });
   plotLayers(
     { family, set: { referenceLines: { strainStates: true, eccentricities: [0.1, 0.25, 0.5, 1], axialCap: true }, ratios: { kind: 'rhoG', values: [...c.chart.rhos] } } },
     L,
@@ -116,9 +116,9 @@ export function buildCheckReport(input: CheckReportInput): CheckReportPage {
   const gov = c.results[0];
   const req = gov?.rhoRequired ?? null;
   const onStep = (rho: number) => c.chart.rhos.some((r) => Math.abs(r - rho) < 5e-4);
-  if (gov && req !== null && !onStep(req)) extraCurve(family, req, `ρg req ${fmt(req, 4)}`, c.capContext, data);
+  if (gov && req !== null && !onStep(req)) extraCurve(family, req, `ρg req ${fmt(req, 4)}`, c.capContext, data, c.gammaB);
   const checked = c.checked?.rho;
-  if (checked !== undefined && !onStep(checked) && (req === null || Math.abs(checked - req) >= 5e-4)) extraCurve(family, checked, `checked ρg ${fmt(checked, 4)}`, c.capContext, data);
+  if (checked !== undefined && !onStep(checked) && (req === null || Math.abs(checked - req) >= 5e-4)) extraCurve(family, checked, `checked ρg ${fmt(checked, 4)}`, c.capContext, data, c.gammaB);
   const domain = plotDomain(data, c.results);
   placeLoads(L, domain, c.results, data);
 
@@ -181,7 +181,7 @@ function sectionText(c: ColumnCheck): string {
   const un = DISPLAY_UNITS[c.units];
   const sy = c.basis.symbols;
   const dims = c.shape.kind === 'rectangle' ? `${fmt(c.shape.b)} × ${fmt(c.shape.h)} ${un.length}` : `D = ${fmt(c.shape.diameter)} ${un.length}`;
-  return `${dims} ${c.basis.transverse}, ${c.arrangement.kind}, ${sy.concreteStrength} ${fmt(c.basis.fc)} ${un.stress}, ${sy.steelStrength} ${fmt(c.basis.fy)} ${un.stress}, γ ${fmt(c.gamma, 3)}`;
+  return `${dims} ${c.basis.transverse}, ${arrangementName(c.arrangement)}, ${sy.concreteStrength} ${fmt(c.basis.fc)} ${un.stress}, ${sy.steelStrength} ${fmt(c.basis.fy)} ${un.stress}, γ ${fmt(c.gamma, 3)}${c.gammaB !== null ? `, γB ${fmt(c.gammaB, 3)}` : ''}`;
 }
 
 /** Columns of a shared table view for the drawn table: text columns left, figures right. */
@@ -196,8 +196,8 @@ function columns(t: TableView): { head: string; unit?: string; align: 'l' | 'r' 
 
 // ── plot ────────────────────────────────────────────────────────────────────────────────────────
 
-function extraCurve(family: CurveFamily, rho: number, label: string, capContext: CapContext, data: SheetData): void {
-  const one = computeFamily({ basis: family.basis, shape: family.shape, arrangement: family.arrangement, gamma: family.gamma, rhos: [rho], capContext, basePoints: SHEET_BASE_POINTS });
+function extraCurve(family: CurveFamily, rho: number, label: string, capContext: CapContext, data: SheetData, gammaB: number | null): void {
+  const one = computeFamily({ basis: family.basis, shape: family.shape, arrangement: family.arrangement, gamma: family.gamma, ...(gammaB !== null ? { gammaX: gammaB } : {}), rhos: [rho], capContext, basePoints: SHEET_BASE_POINTS });
   const c = one.curves[0]!;
   const rows = Array.from(c.phiPn, (P, i) => ({ curve: label, i, M: r5(c.phiMn[i]!), P: r5(P) }));
   data.extraCurves!.push(...rows);
@@ -308,7 +308,7 @@ function inputsPanel(g: Deco, L: ReportLayout, c: ColumnCheck): number {
     ['design basis', c.basis.title],
     ['section', c.shape.kind === 'rectangle' ? `b × h = ${fmt(c.shape.b)} × ${fmt(c.shape.h)} ${un.length}, ${c.basis.transverse}` : `D = ${fmt(c.shape.diameter)} ${un.length}, ${c.basis.transverse}`],
     ['materials', `${sy.concreteStrength} = ${fmt(c.basis.fc)} ${un.stress}, ${sy.steelStrength} = ${fmt(c.basis.fy)} ${un.stress}`],
-    ['bars', `${c.arrangement.kind}, γ = ${fmt(c.gamma, 4)} (${c.gammaSource === 'given' ? 'given' : 'from cover, tie and bar'})`],
+    ['bars', `${arrangementName(c.arrangement)}, γ = ${fmt(c.gamma, 4)} (${c.gammaSource === 'given' ? 'given' : 'from cover, tie and bar'})${c.gammaB !== null ? `, γB = ${fmt(c.gammaB, 4)} (given)` : ''}`],
     ['checked steel', c.checked ? `${c.checked.description} (ρg = ${f(c.checked.rho)})` : 'none given: ρg required only'],
     ['loads', `${c.results.length} factored combination${c.results.length === 1 ? '' : 's'}, governing ${c.governingId ?? '—'}`],
     ['status', c.summary.text],
@@ -368,6 +368,10 @@ function summaryPanel(g: Deco, L: ReportLayout, c: ColumnCheck, y: number): void
   }
   if (gov.biaxial?.rhoStatus) lines.push(['valueBold', `ρg required, exact biaxial = ${f(gov.biaxial.rhoRequired)}`]);
   lines.push(['body', `Chart reading ${f(gov.rhoFromChart)}; next lower sheet, next curve out: ${f(gov.rhoRoundedDown, 3)}${gov.extraSteelRoundedDown != null && gov.extraSteelRoundedDown > 0 ? `, ${f(gov.extraSteelRoundedDown, 4)} ${area} more steel than exact` : ''}.`]);
+  if (gov.biaxial && gov.biaxial.rhoFromChart !== null && c.biaxialChart) {
+    const d = gov.biaxial.chartMinusExact;
+    lines.push(['body', `Biaxial sheets (level step ${c.biaxialChart.axialStep}): ρg ${f(gov.biaxial.rhoFromChart)}${d !== null ? `, ${d >= 0 ? '+' : ''}${f(d)} against the exact biaxial` : ''}.`]);
+  }
   lines.push(['body', `At capacity along the load ray: εt = ${f(gov.strain.epsT, 3)}, φ = ${f(gov.strain.phi, 3)}, ${strainClassWord(c.basis.symbols, gov.strain.class)}.`]);
   if (gov.utilisation !== null) lines.push(['valueBold', `Utilisation of the checked steel: ${f(gov.utilisation, 3)}`]);
   for (const [style, text] of lines) y = g.paragraph(style, b.x, y, b.w, text, 1.35) + 0.3 * u;

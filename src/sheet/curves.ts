@@ -39,13 +39,22 @@ export function sheetRhos(set: ResolvedChartSet, basis: Basis): number[] {
 
 export function familyForSheet(set: ResolvedChartSet, sheet: ResolvedSheet): CurveFamily {
   const basis = basisForSheet(set, sheet);
-  return computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: sheetRhos(set, basis), basePoints: SHEET_BASE_POINTS });
+  return computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, ...(sheet.gammaB !== undefined ? { gammaX: sheet.gammaB } : {}), rhos: sheetRhos(set, basis), basePoints: SHEET_BASE_POINTS });
 }
 
 /** The Mx–My contour family of a biaxial sheet: the sheet's axial levels × the set's ρg (or ω) family, factored. */
 export function biaxialFamilyForSheet(set: ResolvedChartSet, sheet: ResolvedSheet, rhos?: readonly number[]): BiaxialFamily {
   const basis = basisForSheet(set, sheet);
-  return computeBiaxialFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: rhos ?? sheetRhos(set, basis), levels: sheet.axialLevels ?? [], model: 'design' });
+  return computeBiaxialFamily({
+    basis,
+    shape: sheetShape(sheet),
+    arrangement: sheet.arrangement,
+    gamma: sheet.gamma,
+    ...(sheet.gammaB !== undefined ? { gammaX: sheet.gammaB } : {}),
+    rhos: rhos ?? sheetRhos(set, basis),
+    levels: sheet.axialLevels ?? [],
+    model: 'design',
+  });
 }
 
 /**
@@ -67,7 +76,7 @@ export function groupExtents(set: ResolvedChartSet): Record<string, AxisExtent> 
       byGroup.set(sheet.origin, list);
       continue;
     }
-    const f = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: [outer], basePoints: SHEET_BASE_POINTS });
+    const f = computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, ...(sheet.gammaB !== undefined ? { gammaX: sheet.gammaB } : {}), rhos: [outer], basePoints: SHEET_BASE_POINTS });
     const list = byGroup.get(sheet.origin) ?? [];
     list.push(familyExtent(f, families, d));
     byGroup.set(sheet.origin, list);

@@ -24,7 +24,10 @@ export async function renderSheet(set: ResolvedChartSet, index = 0, format: Shee
     const built =
       sheet.chart === 'biaxial'
         ? buildBiaxialSheet({ ...common, family: biaxialFamilyForSheet(set, sheet) })
-        : buildSheet({ ...common, family: computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, rhos: sheetRhos(set, basis), capContext: opts.capContext ?? {}, basePoints: SHEET_BASE_POINTS }) });
+        : buildSheet({
+            ...common,
+            family: computeFamily({ basis, shape: sheetShape(sheet), arrangement: sheet.arrangement, gamma: sheet.gamma, ...(sheet.gammaB !== undefined ? { gammaX: sheet.gammaB } : {}), rhos: sheetRhos(set, basis), capContext: opts.capContext ?? {}, basePoints: SHEET_BASE_POINTS }),
+          });
     const page = { template: built.template, data: built.data };
     if (format === 'svg') return await renderer.svg(page);
     if (format === 'png') return await renderer.png(page, 2);

@@ -25,6 +25,7 @@ export function tableJson(set: ResolvedChartSet, sheet: ResolvedSheet, basis: Ba
       fy: sheet.fy,
       basisOptions: sheet.basisOptions,
       gamma: sheet.gamma,
+      ...(sheet.gammaB !== undefined ? { gammaB: sheet.gammaB } : {}),
       arrangement: { ...sheet.arrangement, text: describeArrangement(sheet.arrangement) },
       transverse: sheet.transverse,
     },

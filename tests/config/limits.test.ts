@@ -103,6 +103,15 @@ describe('charts-config/chart-set.schema.json with a standard validator (ajv)', 
     return parts.map((p, i) => (/^\d+$/.test(p) ? `[${p}]` : i === 0 ? p : `.${p}`)).join('');
   };
 
+  it('takes a four-faces pair [3, 5] and γB 0.7, as pmchart does', () => {
+    const doc = variant((d) => {
+      d.sheets[0].arrangement = { kind: 'four-faces', barsPerFace: [3, 5] };
+      d.sheets[0].gammaB = 0.7;
+    });
+    expect(validate(doc), JSON.stringify(validate.errors)).toBe(true);
+    expect(pmPath(doc)).toBe('accepted');
+  });
+
   it('passes the demo sets', () => {
     for (const text of demos) {
       const doc = JSON.parse(text);
@@ -118,6 +127,12 @@ describe('charts-config/chart-set.schema.json with a standard validator (ajv)', 
     ['ω', (d) => (d.omega = [0.1, 9])],
     ['bars per face', (d) => (d.sheets[0].arrangement.barsPerFace = 25)],
     ['four-faces one bar', (d) => (d.sheets[0].arrangement = { kind: 'four-faces', barsPerFace: 1 })],
+    ['four-faces pair with nb 1', (d) => (d.sheets[0].arrangement = { kind: 'four-faces', barsPerFace: [1, 5] })],
+    ['four-faces pair with nh 21', (d) => (d.sheets[0].arrangement = { kind: 'four-faces', barsPerFace: [3, 21] })],
+    ['four-faces list of one', (d) => (d.sheets[0].arrangement = { kind: 'four-faces', barsPerFace: [3] })],
+    ['four-faces list of three', (d) => (d.sheets[0].arrangement = { kind: 'four-faces', barsPerFace: [3, 5, 7] })],
+    ['two-faces pair', (d) => (d.sheets[0].arrangement = { kind: 'two-faces', barsPerFace: [3, 5] })],
+    ['γB', (d) => (d.sheets[0].gammaB = 1.2)],
     ['PNG scale', (d) => (d.outputs = { pngScale: 20 })],
     ['aspect', (d) => (d.sheets[0].shape = { kind: 'rectangle', aspect: 9 })],
     ['γc', (d) => (d.basis.options = { gammaC: 3 })],

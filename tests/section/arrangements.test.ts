@@ -17,6 +17,39 @@ describe('layoutBars', () => {
     for (const b of bars) expect(Math.max(Math.abs(b.x), Math.abs(b.y))).toBeCloseTo(9, 12);
     expect(realisedGamma(sq, bars)).toBeCloseTo(0.75, 12);
   });
+  it('four-faces [3, 5] on 16 × 24 in, γ 0.75: 3 bars on each b face, 5 on each h face, 12 bars (hand count: 2·3 + 2·5 − 4)', () => {
+    // hand calculation: halfY = 0.75·24/2 = 9 in; equal cover 3 in, so halfX = 16/2 − 3 = 5 in
+    const r: Shape = { kind: 'rectangle', b: 16, h: 24 };
+    const a = { kind: 'four-faces', barsPerFace: [3, 5] } as const;
+    const bars = layoutBars(r, a, 12 * 0.79, { gamma: 0.75 });
+    expect(barCount(a)).toBe(12);
+    expect(bars).toHaveLength(12);
+    for (const b of bars) expectClose(b.area, 0.79, 1e-12);
+    const at = (x: number, y: number) => bars.filter((b) => Math.abs(b.x - x) < 1e-9 && Math.abs(b.y - y) < 1e-9).length;
+    for (const y of [9, -9]) for (const x of [-5, 0, 5]) expect(at(x, y)).toBe(1);
+    for (const y of [4.5, 0, -4.5]) for (const x of [-5, 5]) expect(at(x, y)).toBe(1);
+  });
+  it('four-faces [3, 5] with γB 0.5 puts the h faces at x = ±0.5·16/2 = ±4 in', () => {
+    const r: Shape = { kind: 'rectangle', b: 16, h: 24 };
+    const bars = layoutBars(r, { kind: 'four-faces', barsPerFace: [3, 5] }, 12, { gamma: 0.75, gammaX: 0.5 });
+    expect([...new Set(bars.map((b) => Math.abs(b.x)))].sort()).toEqual([0, 4]);
+  });
+  it('four-faces [nb, nh] for every pair 2–8: 2·nb + 2·nh − 4 distinct bars, all on the perimeter at γ and γB', () => {
+    const r: Shape = { kind: 'rectangle', b: 16, h: 24 };
+    for (let nb = 2; nb <= 8; nb++) {
+      for (let nh = 2; nh <= 8; nh++) {
+        const bars = layoutBars(r, { kind: 'four-faces', barsPerFace: [nb, nh] }, 1, { gamma: 0.75, gammaX: 0.6 });
+        expect(bars).toHaveLength(2 * nb + 2 * nh - 4);
+        expect(new Set(bars.map((b) => `${b.x.toFixed(9)},${b.y.toFixed(9)}`)).size).toBe(bars.length);
+        for (const b of bars) expect(Math.abs(Math.abs(b.x) - 4.8) < 1e-9 || Math.abs(Math.abs(b.y) - 9) < 1e-9).toBe(true);
+        expect(bars.filter((b) => Math.abs(b.y - 9) < 1e-9)).toHaveLength(nb);
+        expect(bars.filter((b) => Math.abs(b.x - 4.8) < 1e-9)).toHaveLength(nh);
+      }
+    }
+  });
+  it('four-faces [4, 4] is the same layout as a single count 4', () => {
+    expect(layoutBars(sq, { kind: 'four-faces', barsPerFace: [4, 4] }, 12, { gamma: 0.75 })).toEqual(layoutBars(sq, { kind: 'four-faces', barsPerFace: 4 }, 12, { gamma: 0.75 }));
+  });
   it('two-faces puts half of Ast in each outer row', () => {
     const bars = layoutBars(sq, { kind: 'two-faces', barsPerFace: 3 }, 6, { gamma: 0.8 });
     expect(bars.filter((b) => b.y > 0).reduce((s, b) => s + b.area, 0)).toBeCloseTo(3, 12);
