@@ -92,6 +92,37 @@ describe('contours meet the uniaxial chart curves (computeFamily) at the same P'
   }
 });
 
+describe('unequal counts: a [3, 5] rectangle (issue 15)', () => {
+  // 3 bars on each b face, 5 on each h face, b/h 0.75, γ 0.75 and γB 0.6: the contour meets the uniaxial chart
+  // curve about x at My = 0 and the turned section's curve at Mx = 0 (first principles, as above), 1e-6 relative.
+  const shape: Shape = { kind: 'rectangle', b: 0.75, h: 1 };
+  const arrangement: Arrangement = { kind: 'four-faces', barsPerFace: [3, 5] };
+  const at = (ps: ReturnType<typeof prepareSection>, rho: number, p: number): number => {
+    const c = Math.exp(findRoot((lc) => designAt(ps.respond(Math.exp(lc)), rho)[0] - p, Math.log(1e-5), Math.log(1e5), 1e-14));
+    return designAt(ps.respond(c), rho)[1];
+  };
+  it('Mxo and Myo equal the uniaxial curves about x and about y at the same P; one quadrant (symmetric about both axes)', () => {
+    const rhos = [0.01, 0.04];
+    const levels = [0, 0.15, 0.4];
+    const f = computeBiaxialFamily({ basis: aci, shape, arrangement, gamma: 0.75, gammaX: 0.6, rhos, levels });
+    expect(f.quadrants).toBe('first');
+    expect(f.bars).toHaveLength(12);
+    const chart = computeFamily({ basis: aci, shape, arrangement, gamma: 0.75, gammaX: 0.6, rhos, basePoints: 60 });
+    const turned = prepareSection(aci, { kind: 'rectangle', b: 1, h: 0.75 }, swap(chart.bars));
+    rhos.forEach((rho, k) =>
+      levels.forEach((level, i) => {
+        const c = f.contours[i]![k]!;
+        expect(c.reachable).toBe(true);
+        expectClose(c.mxo, at(chart.section, rho, level * aci.normalisingStress), 1e-6);
+        expectClose(c.myo, at(turned, rho, level * aci.normalisingStress), 1e-6);
+      }),
+    );
+    // γB 0.6 below γ 0.75 puts the outer columns nearer the centre (for My) than the outer rows (for Mx): Mxo per Ag·h
+    // exceeds Myo per Ag·b here although the outer columns hold five bars each and the outer rows three
+    expect(f.contours[1]![1]!.mxo).toBeGreaterThan(f.contours[1]![1]!.myo);
+  });
+});
+
 describe('symmetry of square sections with equal counts', () => {
   it('mx(ψ) = my(90° − ψ) to 1e-7 relative, one quadrant drawn (reference values §6: a doubly symmetric section gives a contour symmetric about both axes)', () => {
     const f = computeBiaxialFamily({ basis: aci, shape: square, arrangement: { kind: 'four-faces', barsPerFace: 4 }, gamma: 0.7, rhos: [0.02, 0.05], levels: [0, 0.25, 0.5] });
