@@ -233,7 +233,7 @@ function drawIndex(page: PDFPage, input: BookInput, regular: PDFFont, bold: PDFF
     const s = set.sheets[i]!;
     if ((i - from) % 2 === 1) page.drawRectangle({ x: m, y: y - 0.45 * u, width: W - 2 * m, height: 15, color: hex('#f3f5f7') });
     row(
-      [String(s.index), describeShape(s.shape), stressText(s.fc, set.units), stressText(s.fy, set.units), withGammaB ? `${s.gamma.toFixed(2)} · ${s.gammaB === undefined ? '—' : s.gammaB.toFixed(2)}` : s.gamma.toFixed(2), describeArrangement(s.arrangement), describeTransverse(s.transverse), s.fileStem, String(front + i + 1)],
+      [String(s.index), describeShape(s.shape), stressText(s.fc, set.units), stressText(s.fy, set.units), withGammaB ? `${s.gamma.toFixed(2)} · ${s.gammaB === undefined ? '—' : s.gammaB.toFixed(2)}` : s.gamma.toFixed(2), describeArrangement(s.arrangement) + biaxialIndexText(s), describeTransverse(s.transverse), s.fileStem, String(front + i + 1)],
       regular,
       COLOURS.ink,
     );
@@ -278,4 +278,11 @@ export async function fixPdfMetadata(bytes: Uint8Array, m: { title: string; subj
 function biaxialCoverLine(set: BookInput['set'], symbols: BookInput['symbols']): [string, string][] {
   const n = set.sheets.filter((s) => s.chart === 'biaxial').length;
   return n === 0 ? [] : [['Biaxial sheets', `${n} of ${set.sheets.length}: ${symbols.designFamily} Mx–My contours per axial level`]];
+}
+
+/** A biaxial sheet's index entry names its kind and levels after the bars: " · Mx–My at 0–0.3". */
+function biaxialIndexText(s: BookInput['set']['sheets'][number]): string {
+  const lv = s.axialLevels;
+  if (s.chart !== 'biaxial' || !lv || lv.length === 0) return '';
+  return ` · Mx–My at ${lv.length > 1 ? `${fmt(lv[0]!)}–${fmt(lv[lv.length - 1]!)}` : fmt(lv[0]!)}`;
 }
