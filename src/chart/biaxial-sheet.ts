@@ -190,7 +190,7 @@ function readingNotes(ctx: BiaxialSheetContext, g: Deco, top: number, bottom: nu
   const key = RATIO_SYMBOL[set.ratios.kind];
   const steps = [
     `1. Normalise the factored load: level ${P}/(${ns}·Ag); mx = ${M}x/${by('Ag·h')} and my = ${M}y/${by('Ag·b')}, with h along y and b along x.`,
-    `2. Take the panels whose levels bracket the load's. In each, the point (|mx|, |my|) lies inside the contour of every ${key} that carries the load; interpolate between contours, then linearly between the two levels.`,
+    `2. Take the panels whose levels bracket the load's. In each, the point ${family.quadrants === 'first' ? '(|mx|, |my|)' : '(mx, my), signs kept,'} lies inside the contour of every ${key} that carries the load; interpolate between contours, then linearly between the two levels.`,
     `3. No contour of a ${key} at a level: the level is above that ${key}'s axial cap, which cannot carry the load.`,
     '4. The fitted α is a least-squares average: the exact contour lies up to the misfit inside or outside the fitted curve, so a check with α is only as close as its misfit; read final values off the drawn contours.',
   ];
