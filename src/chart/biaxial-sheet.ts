@@ -130,7 +130,8 @@ function panels(ctx: BiaxialSheetContext, g: Deco, d: number): void {
   const sy = family.basis.symbols;
   // the colour key of the ρg family across the top (the heading left out where the key needs the room)
   const keyH = 2.0 * u;
-  const head = `${sy.designFamily.charAt(0).toUpperCase()}${sy.designFamily.slice(1)} Mx–My contours`;
+  // a capital for words ("Design"), never for a symbol (φ-factored stays φ, not Φ)
+  const head = `${/^[a-z]/.test(sy.designFamily) ? sy.designFamily.charAt(0).toUpperCase() : sy.designFamily.charAt(0)}${sy.designFamily.slice(1)} Mx–My contours`;
   const sym = `${RATIO_SYMBOL[set.ratios.kind]}:`;
   const values = family.rhos.map((rho, k) => curveKeyText(set, rho, k).replace(/^\S+ /, ''));
   const keyW = g.width('body', sym) + 0.8 * u + values.reduce((w, t) => w + 3.4 * u + g.width('body', t), 0);

@@ -154,3 +154,14 @@ describe('layouts not symmetric about both axes: all four quadrants', () => {
     expect(csv.slice(1).some((l) => Number(l.split(',')[3]) < 0 && Number(l.split(',')[4]) < 0)).toBe(true);
   });
 });
+
+describe('the panels heading', () => {
+  it('keeps the φ of "φ-factored" lower case (Φ is another symbol) and capitalises a word ("Design")', () => {
+    const set = setOf();
+    const aci = buildBiaxialSheet({ set, sheet: set.sheets[0]!, family: biaxialFamilyForSheet(set, set.sheets[0]!), sheetNumber: 1, sheetCount: 1, generator: 'pmchart 0.1.0' });
+    expect(aci.data.texts.map((t) => t.text)).toContain('φ-factored Mx–My contours');
+    const en = setOf({ units: 'si', basis: { code: 'en1992-1-1' } }, { fc: 30, fy: 500 });
+    const b = buildBiaxialSheet({ set: en, sheet: en.sheets[0]!, family: biaxialFamilyForSheet(en, en.sheets[0]!), sheetNumber: 1, sheetCount: 1, generator: 'pmchart 0.1.0' });
+    expect(b.data.texts.map((t) => t.text)).toContain('Design Mx–My contours');
+  });
+});
