@@ -8,7 +8,9 @@ import { compile } from 'vega-lite';
 import { expressionInterpreter } from 'vega-interpreter';
 import { liveData, liveTemplateParams, pageChartData, pageChartTemplate, type PageChartData, type PageLoad } from '../chart/page-spec.js';
 import { chartSetSnippet, commandLine } from './commands.js';
-import { chartView, checkFlags, loadsView, PAGE_CAUTION, readingAt, type ChartView, type CheckJson, type PageFields, type PageLoads } from './engine.js';
+import { biaxialRows, biaxialTemplate, type BiaxialRow, type BiaxialWords } from './biaxial-spec.js';
+import { biaxialView, chartView, checkFlags, loadsView, PAGE_CAUTION, readingAt, type BiaxialView, type ChartView, type CheckJson, type PageFields, type PageLoads } from './engine.js';
+import type { ColumnCheck } from '../design/column-check.js';
 import { ALL_FIELDS, FIELD_DEFAULTS, fieldForPath } from './fields.js';
 
 interface Presets {
@@ -225,10 +227,111 @@ function commands(cv: ChartView, fields: PageFields, loads: PageLoads | null): v
   $('set-json').textContent = chartSetSnippet(cv, fields);
 }
 
+// ── biaxial view ────────────────────────────────────────────────────────────────────────────────
+
+let biaxView: vega.View | null = null;
+let biaxKey = '';
+let currentBiax: BiaxialView | null = null;
+let currentBiaxRows: BiaxialRow[] = [];
+/** the load the user picked for the biaxial view; unset: the governing one (the first with a reading) */
+let biaxChosen: string | undefined;
+
+/** The axis and level words of the biaxial panels, in the basis's symbols (as the sheets' axis titles). */
+function biaxialWords(v: BiaxialView, divisor: number, units: 'us' | 'si'): BiaxialWords {
+  const sy = v.family.basis.symbols;
+  const circle = v.family.shape.kind === 'circle';
+  const ns = sy.normalisingStress;
+  const su = units === 'us' ? 'ksi' : 'MPa';
+  const M = sy.designMoment;
+  const axis = (a: 'x' | 'y', d: string) => (divisor === 1 ? `${M}${a} / (Ag · ${d})   (${su})` : `${M}${a} / (${ns} · Ag · ${d})   (dimensionless)`);
+  return { levelName: sy.dimensionlessAxial ?? `P/(${ns}·Ag)`, x: axis('x', circle ? 'D' : 'h'), y: axis('y', circle ? 'D' : 'b') };
+}
+
+/** Draws the contour panels (compiled once per template, then only the rows are swapped). */
+async function drawBiaxial(v: BiaxialView, words: BiaxialWords, divisor: number): Promise<void> {
+  const template = biaxialTemplate(words);
+  currentBiaxRows = biaxialRows(v, words, divisor);
+  const key = JSON.stringify(template);
+  if (!biaxView || key !== biaxKey) {
+    biaxView?.finalize();
+    biaxView = new vega.View(compileView(template, { biax: currentBiaxRows } as never), { expr: expressionInterpreter as never, renderer: 'svg', container: '#biaxial-chart', hover: false });
+    biaxKey = key;
+  } else biaxView.data('biax', currentBiaxRows);
+  await biaxView.runAsync();
+}
+
+type JsonBiaxial = { rhoRequired: number | null; rhoStatus: string | null; rhoFromChart: number | null; chartMinusExact: number | null; chartLevels: { level: number; rho: number | null; position: string }[] };
+
+const positionWords: Record<string, string> = { between: 'between curves', 'inside-lowest': 'inside the lowest curve', 'outside-highest': 'outside the highest curve' };
+
+/** The readout (the check's own figures, as `pmchart check --json` prints them), the α table and the notes. */
+function biaxialText(v: BiaxialView, words: BiaxialWords, check: CheckJson, divisor: number): void {
+  const r = check.results.find((x) => String(x.id) === v.id)!;
+  const b = r.biaxial as JsonBiaxial;
+  const diff = b.chartMinusExact;
+  const levels = b.chartLevels.map((l) => `${fmt(l.level)} → ${l.rho === null ? '—' : fmt(l.rho)} (${positionWords[l.position] ?? l.position})`).join('; ');
+  const bc = check.biaxialChart as { axialStep: number; angleStepDeg: number; rhos: number[] };
+  const su = check.units as { stress: string };
+  const row = (label: string, cls: string, value: unknown, text: string) => `<tr><th>${esc(label)}</th><td class="${cls}" data-value="${value === null || value === undefined ? '' : esc(String(value))}">${esc(text)}</td></tr>`;
+  $('biaxial-readout').innerHTML = `<table>${[
+    row('load read', 'biax-load-id', v.id, `${v.id}${r.governing ? ' ◆ governing' : ''}, ${words.levelName} = ${fmt(v.level)}`),
+    row('ρg req biax (exact)', 'rho-required-biaxial', b.rhoRequired, b.rhoRequired === null ? `— (${b.rhoStatus ?? 'no exact figure'})` : fmt(b.rhoRequired)),
+    row('ρg chart biax', 'rho-chart-biaxial', b.rhoFromChart, b.rhoFromChart === null ? '— (off the sheets)' : fmt(b.rhoFromChart)),
+    row('chart − exact', 'chart-minus-exact', diff, diff === null ? '—' : diff === 0 ? '0' : `${diff > 0 ? '+' : '−'}${fmt(Math.abs(diff), 3)}`),
+    row(`levels read (${words.levelName} step ${bc.axialStep})`, 'levels-read', b.chartLevels.map((l) => l.level).join(','), levels),
+  ].join('')}</table>`;
+  const f = v.family;
+  const head = f.levels.map((l) => `<th colspan="4">${esc(`${words.levelName} = ${fmt(l)}`)}</th>`).join('');
+  const sub = f.levels.map(() => ['Mxo', 'Myo', 'α', 'misfit'].map((t) => `<th>${t}</th>`).join('')).join('');
+  // moments to four significant figures at the scale of the largest (about 1 ksi, or 10 MPa)
+  const top = Math.max(...f.contours.flat().filter((c) => c.reachable).map((c) => Math.max(c.mxo, c.myo) / divisor), 1e-9);
+  const mDigits = Math.max(0, 3 - Math.floor(Math.log10(top)));
+  const body = f.rhos
+    .map((rho, k) => {
+      const cells = f.levels.map((_, li) => {
+        const c = f.contours[li]![k]!;
+        const fixed = (x: number, d: number) => `<td data-value="${x}">${x.toFixed(d)}</td>`;
+        return c.reachable
+          ? `${fixed(c.mxo / divisor, mDigits)}${fixed(c.myo / divisor, mDigits)}${fixed(c.alpha, 2)}<td data-value="${c.misfit}">${(c.misfit * 100).toFixed(1)} %</td>`
+          : `<td colspan="4" class="muted">beyond this ρg’s reach</td>`;
+      });
+      return `<tr><td class="rho">${rho}</td>${cells.join('')}</tr>`;
+    })
+    .join('');
+  const unit = divisor === 1 ? su.stress : 'dimensionless';
+  $('biaxial-table').innerHTML = `<table id="biaxial-alpha"><thead><tr><th rowspan="2">ρg</th>${head}</tr><tr>${sub}</tr></thead><tbody>${body}</tbody></table>
+<p class="muted">Mxo, Myo: the uniaxial capacities at the level (${unit}, normalised as the panels${f.quadrants === 'all' ? '; the positive faces' : ''}). α: exponent of the load contour (Mx/Mxo)^α + (My/Myo)^α = 1 (Bresler 1960) fitted to the drawn contour by least squares on its radius; misfit: the worst radial departure of that curve from the contour. Printed aids often take one α for everything; where the misfit is large the one-α shortcut is not safe.</p>`;
+  const others = v.loads.length > 1 ? ` Every load with Muy is drawn on each panel at its own moments, though each load is read on the levels of its own ${words.levelName} (the table above gives its reading).` : '';
+  $('biaxial-note').textContent =
+    `Factored Mx–My contours of the ρg family ${bc.rhos.join(', ')} at γ = ${fmt(f.gamma)}${f.gammaX !== undefined ? `, γB = ${fmt(f.gammaX)}` : ''}: the exact biaxial capacity under an inclined neutral axis with the bars smeared in the chosen arrangement, one point every ${bc.angleStepDeg}° of moment direction, straight between; a curve is left out where the level is beyond that ρg’s reach. ` +
+    (f.quadrants === 'first'
+      ? `The layout is symmetric about both axes, so the first quadrant tells all: loads are drawn at (|Mux|/(Ag·h), |Muy|/(Ag·b)). `
+      : `The layout is not symmetric about both axes: all four quadrants are drawn and the loads keep their signs. `) +
+    `Moments are those the check used (after slenderness and the minimum moment where asked). ρg chart biax reads the panels as an engineer would: linear between the two contours that bracket the load along its moment direction (dashed ray), then linear in ${words.levelName} between the two levels.` +
+    others;
+  const sel = $<HTMLSelectElement>('biax-load');
+  const options = v.choices.map((id) => `<option value="${esc(id)}"${id === v.id ? ' selected' : ''}>${esc(id)}</option>`).join('');
+  if (sel.innerHTML !== options) sel.innerHTML = options;
+  sel.value = v.id;
+}
+
+/** The biaxial section for a check: shown when a load has Muy and a sheet reading, hidden otherwise. */
+async function updateBiaxial(check: ColumnCheck | null, json: CheckJson | null, cv: ChartView): Promise<void> {
+  const v = check && json ? biaxialView(check, biaxChosen) : null;
+  currentBiax = v;
+  $('biaxial').hidden = v === null;
+  if (!v || !json) return;
+  const words = biaxialWords(v, cv.divisor, cv.request.section.units);
+  await drawBiaxial(v, words, cv.divisor);
+  biaxialText(v, words, json, cv.divisor);
+}
+
 // ── update loop ─────────────────────────────────────────────────────────────────────────────────
 
 let seq = 0;
 let draws = 0;
+/** the engine's check behind `currentCheck`, for redrawing the biaxial view at another load's levels */
+let lastCheck: ColumnCheck | null = null;
 /** updates finished, drawn or stopped at a message */
 let settled = 0;
 let lastMs = NaN;
@@ -249,17 +352,22 @@ async function update(): Promise<void> {
   const loads = readLoads();
   clearMessages('loads');
   let check: CheckJson | null = null;
+  let engineCheck: ColumnCheck | null = null;
   let effects = '';
   if (loads) {
     const lv = await loadsView(fields, loads, grid());
     if (my !== seq) return;
-    if (lv.ok) ({ json: check, effectsText: effects } = lv.value);
+    if (lv.ok) ({ json: check, effectsText: effects, check: engineCheck } = lv.value);
     else showProblem(lv.problem.path, lv.problem.message);
   }
   const t2 = performance.now();
   await draw(cv.value, check);
   if (my !== seq) return;
-  phases = { chart: t1 - t0, loads: t2 - t1, draw: performance.now() - t2 };
+  const t3 = performance.now();
+  await updateBiaxial(engineCheck, check, cv.value);
+  if (my !== seq) return;
+  lastCheck = engineCheck;
+  phases = { chart: t1 - t0, loads: t2 - t1, draw: t3 - t2, biaxial: performance.now() - t3 };
   current = cv.value;
   currentCheck = check;
   lastMs = performance.now() - t0;
@@ -336,6 +444,10 @@ function wire(): void {
     for (const k of ['pu', 'mu', 'muy', 'loads']) control(k).value = '';
     schedule();
   });
+  $('biax-load').addEventListener('change', () => {
+    biaxChosen = $<HTMLSelectElement>('biax-load').value || undefined;
+    if (current) void updateBiaxial(lastCheck, currentCheck, current).catch(internalError).finally(() => settled++);
+  });
   $('chart').addEventListener('pointermove', pointerReading);
   $('chart').addEventListener('pointerleave', () => ($('crosshair').hidden = true));
   $('export-svg').addEventListener('click', () => {
@@ -365,6 +477,19 @@ window.pmchartPage = {
       curves: current.family.curves.map((c) => ({ rho: c.rho, Pn: Array.from(c.Pn), Mn: Array.from(c.Mn), phiPn: Array.from(c.phiPn), phiMn: Array.from(c.phiMn), keyPoints: c.keyPoints })),
     },
   check: () => currentCheck,
+  /** the biaxial view as drawn: the load read, its levels, and per panel the ρg of every curve drawn */
+  biaxial: () =>
+    currentBiax && {
+      id: currentBiax.id,
+      level: currentBiax.level,
+      quadrants: currentBiax.family.quadrants,
+      levels: currentBiax.family.levels,
+      reachable: currentBiax.family.contours.map((row) => row.filter((c) => c.reachable).map((c) => c.rho)),
+      drawn: [...new Set(currentBiaxRows.filter((r) => r.kind === 'contour').map((r) => r.panel))].map((panel) => ({
+        panel,
+        rhos: [...new Set(currentBiaxRows.filter((r) => r.kind === 'contour' && r.panel === panel).map((r) => r.rho))],
+      })),
+    },
   draws: () => draws,
   settled: () => settled,
   lastMs: () => lastMs,
@@ -372,9 +497,9 @@ window.pmchartPage = {
   exportSvg,
   /** sets a field as a user would and resolves when the page has redrawn (or given up with a message) */
   set: (key: string, value: string) => {
-    const el = key === 'grid' ? $<HTMLSelectElement>('grid') : control(key);
+    const el = key === 'grid' || key === 'biax-load' ? $<HTMLSelectElement>(key) : control(key);
     el.value = value;
-    el.dispatchEvent(new Event('input', { bubbles: true }));
+    el.dispatchEvent(new Event(key === 'biax-load' ? 'change' : 'input', { bubbles: true }));
   },
   update: () => update(),
 };
