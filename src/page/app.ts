@@ -185,13 +185,13 @@ function loadsTable(check: CheckJson): string {
   const u = check.units as { force: string; moment: string; stress: string; area: string };
   const d = (check.section as { shape: { kind: string } }).shape.kind === 'circle' ? 'D' : 'h';
   const biax = check.results.some((r) => r.biaxial != null);
-  const head = ['id', `Pu ${u.force}`, `Mu ${u.moment}`, `P/Ag ${u.stress}`, `M/(Ag·${d}) ${u.stress}`, `e/${d}`, 'ρg required', ...(biax ? ['ρg req biax'] : []), 'ρg chart', 'ρg rounded', `steel cost ${u.area}`, 'status'];
+  const head = ['id', `Pu ${u.force}`, `Mu ${u.moment}`, `P/Ag ${u.stress}`, `M/(Ag·${d}) ${u.stress}`, `e/${d}`, 'ρg required', ...(biax ? ['ρg req biax', 'ρg chart biax'] : []), 'ρg chart', 'ρg rounded', `steel cost ${u.area}`, 'status'];
   const rows = check.results.map((r) => {
     const n = r.normalised as { P: number; M: number; eOverH: number | null };
-    const b = r.biaxial as { rhoRequired: number | null } | null | undefined;
+    const b = r.biaxial as { rhoRequired: number | null; rhoFromChart: number | null } | null | undefined;
     // the check engine's status, its reason, and the notes (the CLI's words)
     const status = [String(r.status), String(r.statusReason ?? ''), ...((r.notes as string[]) ?? [])].filter(Boolean).join('; ');
-    return `<tr class="${r.governing ? 'governing' : ''}" data-id="${esc(String(r.id))}">${cell(`${r.governing ? '◆ ' : ''}${String(r.id)}`)}${cell(r.Pu, 5)}${cell(r.Mu, 5)}${cell(n.P)}${cell(n.M)}${cell(n.eOverH, 3)}${cell(r.rhoRequired, 4, 'rho-required')}${biax ? cell(b?.rhoRequired ?? null, 4, 'rho-required-biaxial') : ''}${cell(r.rhoFromChart, 4, 'rho-chart')}${cell(r.rhoRoundedDown, 3, 'rho-rounded')}${cell(r.extraSteelRoundedDown, 3, 'steel-cost')}${cell(status, 4, 'status')}</tr>`;
+    return `<tr class="${r.governing ? 'governing' : ''}" data-id="${esc(String(r.id))}">${cell(`${r.governing ? '◆ ' : ''}${String(r.id)}`)}${cell(r.Pu, 5)}${cell(r.Mu, 5)}${cell(n.P)}${cell(n.M)}${cell(n.eOverH, 3)}${cell(r.rhoRequired, 4, 'rho-required')}${biax ? cell(b?.rhoRequired ?? null, 4, 'rho-required-biaxial') + cell(b?.rhoFromChart ?? null, 4, 'rho-chart-biaxial') : ''}${cell(r.rhoFromChart, 4, 'rho-chart')}${cell(r.rhoRoundedDown, 3, 'rho-rounded')}${cell(r.extraSteelRoundedDown, 3, 'steel-cost')}${cell(status, 4, 'status')}</tr>`;
   });
   const chart = check.chart as { sheets: number[]; gammaStep: number };
   return `<table id="results"><thead><tr>${head.map((h) => `<th>${esc(h)}</th>`).join('')}</tr></thead><tbody>${rows.join('')}</tbody></table>
@@ -301,7 +301,10 @@ function biaxialText(v: BiaxialView, words: BiaxialWords, check: CheckJson, divi
   const unit = divisor === 1 ? su.stress : 'dimensionless';
   $('biaxial-table').innerHTML = `<table id="biaxial-alpha"><thead><tr><th rowspan="2">ρg</th>${head}</tr><tr>${sub}</tr></thead><tbody>${body}</tbody></table>
 <p class="muted">Mxo, Myo: the uniaxial capacities at the level (${unit}, normalised as the panels${f.quadrants === 'all' ? '; the positive faces' : ''}). α: exponent of the load contour (Mx/Mxo)^α + (My/Myo)^α = 1 (Bresler 1960) fitted to the drawn contour by least squares on its radius; misfit: the worst radial departure of that curve from the contour. Printed aids often take one α for everything; where the misfit is large the one-α shortcut is not safe.</p>`;
-  const others = v.loads.length > 1 ? ` Every load with Muy is drawn on each panel at its own moments, though each load is read on the levels of its own ${words.levelName} (the table above gives its reading).` : '';
+  const others =
+    v.loads.length > 1
+      ? ` Every load with Muy is drawn on each panel at its own moments, though each is read on the levels of its own ${words.levelName}, given in brackets beside its name (the loads table gives each reading; pick a load above to draw its levels).`
+      : '';
   $('biaxial-note').textContent =
     `Factored Mx–My contours of the ρg family ${bc.rhos.join(', ')} at γ = ${fmt(f.gamma)}${f.gammaX !== undefined ? `, γB = ${fmt(f.gammaX)}` : ''}: the exact biaxial capacity under an inclined neutral axis with the bars smeared in the chosen arrangement, one point every ${bc.angleStepDeg}° of moment direction, straight between; a curve is left out where the level is beyond that ρg’s reach. ` +
     (f.quadrants === 'first'

@@ -104,7 +104,9 @@ export function biaxialRows(v: BiaxialView, words: BiaxialWords, divisor: number
       xMax = Math.max(xMax, Math.abs(x));
       yMax = Math.max(yMax, Math.abs(y));
       const shown = l.id === v.id ? 1 : 0;
-      rows.push({ kind: 'load', panel, level, x: r5(x), y: r5(y), text: labelled || shown || l.governing ? l.id : '', governing: l.governing ? 1 : 0, shown, z });
+      // a load read on other levels carries its own level in brackets
+      const text = labelled || shown || l.governing ? (shown ? l.id : `${l.id} (${fmt(l.level, 2)})`) : '';
+      rows.push({ kind: 'load', panel, level, x: r5(x), y: r5(y), text, governing: l.governing ? 1 : 0, shown, z });
       // the moment direction the reading follows, from the origin through the read load
       if (shown) rows.push({ kind: 'ray', panel, level, x: 0, y: 0, x2: r5(x), y2: r5(y) });
     });
