@@ -262,6 +262,9 @@ async function drawBiaxial(v: BiaxialView, words: BiaxialWords, divisor: number)
 
 type JsonBiaxial = { rhoRequired: number | null; rhoStatus: string | null; rhoFromChart: number | null; chartMinusExact: number | null; chartLevels: { level: number; rho: number | null; position: string }[] };
 
+/** A number with a true minus sign, for the levels (below zero for loads in tension). */
+const signed = (x: number): string => fmt(x).replace(/^-/, '−');
+
 const positionWords: Record<string, string> = { between: 'between curves', 'inside-lowest': 'inside the lowest curve', 'outside-highest': 'outside the highest curve' };
 
 /** The readout (the check's own figures, as `pmchart check --json` prints them), the α table and the notes. */
@@ -269,19 +272,24 @@ function biaxialText(v: BiaxialView, words: BiaxialWords, check: CheckJson, divi
   const r = check.results.find((x) => String(x.id) === v.id)!;
   const b = r.biaxial as JsonBiaxial;
   const diff = b.chartMinusExact;
-  const levels = b.chartLevels.map((l) => `${fmt(l.level)} → ${l.rho === null ? '—' : fmt(l.rho)} (${positionWords[l.position] ?? l.position})`).join('; ');
+  const levels = b.chartLevels.map((l) => `${signed(l.level)} → ${l.rho === null ? '—' : fmt(l.rho)} (${positionWords[l.position] ?? l.position})`).join('; ');
   const bc = check.biaxialChart as { axialStep: number; angleStepDeg: number; rhos: number[] };
   const su = check.units as { stress: string };
   const row = (label: string, cls: string, value: unknown, text: string) => `<tr><th>${esc(label)}</th><td class="${cls}" data-value="${value === null || value === undefined ? '' : esc(String(value))}">${esc(text)}</td></tr>`;
   $('biaxial-readout').innerHTML = `<table>${[
-    row('load read', 'biax-load-id', v.id, `${v.id}${r.governing ? ' ◆ governing' : ''}, ${words.levelName} = ${fmt(v.level)}`),
-    row('ρg req biax (exact)', 'rho-required-biaxial', b.rhoRequired, b.rhoRequired === null ? `— (${b.rhoStatus ?? 'no exact figure'})` : fmt(b.rhoRequired)),
+    row('load read', 'biax-load-id', v.id, `${v.id}${r.governing ? ' ◆ governing' : ''}, ${words.levelName} = ${signed(v.level)}`),
+    row(
+      'ρg req biax (exact)',
+      'rho-required-biaxial',
+      b.rhoRequired,
+      b.rhoRequired === null ? (b.rhoStatus === 'not-possible' ? `— (not possible within ρg ≤ ${fmt(Math.max(...bc.rhos))})` : '—') : `${fmt(b.rhoRequired)}${b.rhoStatus === 'minimum-governs' ? ' (the minimum governs)' : ''}`,
+    ),
     row('ρg chart biax', 'rho-chart-biaxial', b.rhoFromChart, b.rhoFromChart === null ? '— (off the sheets)' : fmt(b.rhoFromChart)),
     row('chart − exact', 'chart-minus-exact', diff, diff === null ? '—' : diff === 0 ? '0' : `${diff > 0 ? '+' : '−'}${fmt(Math.abs(diff), 3)}`),
     row(`levels read (${words.levelName} step ${bc.axialStep})`, 'levels-read', b.chartLevels.map((l) => l.level).join(','), levels),
   ].join('')}</table>`;
   const f = v.family;
-  const head = f.levels.map((l) => `<th colspan="4">${esc(`${words.levelName} = ${fmt(l)}`)}</th>`).join('');
+  const head = f.levels.map((l) => `<th colspan="4">${esc(`${words.levelName} = ${signed(l)}`)}</th>`).join('');
   const sub = f.levels.map(() => ['Mxo', 'Myo', 'α', 'misfit'].map((t) => `<th>${t}</th>`).join('')).join('');
   // moments to four significant figures at the scale of the largest (about 1 ksi, or 10 MPa)
   const top = Math.max(...f.contours.flat().filter((c) => c.reachable).map((c) => Math.max(c.mxo, c.myo) / divisor), 1e-9);
@@ -299,8 +307,9 @@ function biaxialText(v: BiaxialView, words: BiaxialWords, check: CheckJson, divi
     })
     .join('');
   const unit = divisor === 1 ? su.stress : 'dimensionless';
+  const caution = `<p class="biaxial-caution"><strong>Caution.</strong> ${esc(PAGE_CAUTION)}</p>`;
   $('biaxial-table').innerHTML = `<table id="biaxial-alpha"><thead><tr><th rowspan="2">ρg</th>${head}</tr><tr>${sub}</tr></thead><tbody>${body}</tbody></table>
-<p class="muted">Mxo, Myo: the uniaxial capacities at the level (${unit}, normalised as the panels${f.quadrants === 'all' ? '; the positive faces' : ''}). α: exponent of the load contour (Mx/Mxo)^α + (My/Myo)^α = 1 (Bresler 1960) fitted to the drawn contour by least squares on its radius; misfit: the worst radial departure of that curve from the contour. Printed aids often take one α for everything; where the misfit is large the one-α shortcut is not safe.</p>`;
+<p class="muted">Mxo, Myo: the uniaxial capacities at the level (${unit}, normalised as the panels${f.quadrants === 'all' ? '; the positive faces' : ''}). α: exponent of the load contour (Mx/Mxo)^α + (My/Myo)^α = 1 (Bresler 1960) fitted to the drawn contour by least squares on its radius; misfit: the worst radial departure of that curve from the contour. Printed aids often take one α for everything; where the misfit is large the one-α shortcut is not safe.</p>${caution}`;
   const others =
     v.loads.length > 1
       ? ` Every load with Muy is drawn on each panel at its own moments, though each is read on the levels of its own ${words.levelName}, given in brackets beside its name (the loads table gives each reading; pick a load above to draw its levels).`

@@ -51,7 +51,7 @@ const r5 = (x: number): number => Math.round(x * 1e5) / 1e5 + 0;
 const fmt = (x: number, d = 3): string => String(Number(x.toPrecision(d)));
 
 /** The heading of a level's panel. */
-export const panelTitle = (levelName: string, level: number): string => `${levelName} = ${fmt(level, 4)}`;
+export const panelTitle = (levelName: string, level: number): string => `${levelName} = ${fmt(level, 4).replace(/^-/, '−')}`;
 
 /** Index of the contour point nearest the direction `deg`. */
 function nearest(c: BiaxialContour, deg: number): number {
@@ -105,7 +105,7 @@ export function biaxialRows(v: BiaxialView, words: BiaxialWords, divisor: number
       yMax = Math.max(yMax, Math.abs(y));
       const shown = l.id === v.id ? 1 : 0;
       // a load read on other levels carries its own level in brackets
-      const text = labelled || shown || l.governing ? (shown ? l.id : `${l.id} (${fmt(l.level, 2)})`) : '';
+      const text = labelled || shown || l.governing ? (shown ? l.id : `${l.id} (${fmt(l.level, 2).replace(/^-/, '−')})`) : '';
       rows.push({ kind: 'load', panel, level, x: r5(x), y: r5(y), text, governing: l.governing ? 1 : 0, shown, z });
       // the moment direction the reading follows, from the origin through the read load
       if (shown) rows.push({ kind: 'ray', panel, level, x: 0, y: 0, x2: r5(x), y2: r5(y) });

@@ -98,6 +98,7 @@ button{font:inherit;padding:3px 10px;margin-right:6px;border:1px solid var(--acc
 #biaxial-chart svg{max-width:100%;height:auto;display:block}
 #biaxial-readout table td,#biaxial-readout table th{border:0;padding:1px 10px 1px 0;text-align:left}
 #biaxial-table td.rho{text-align:left;font-weight:bold}
+.biaxial-caution{color:var(--caution);font-size:12px}
 select#biax-load{width:auto;min-width:10em}
 #crosshair{position:absolute;width:9px;height:9px;margin:-5px 0 0 -5px;border:1px solid var(--caution);border-radius:50%;pointer-events:none}
 .reading{margin:6px 0;padding:4px 8px;background:var(--panel);font-variant-numeric:tabular-nums;min-height:1.6em}
