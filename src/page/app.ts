@@ -328,8 +328,13 @@ function biaxialText(v: BiaxialView, words: BiaxialWords, check: CheckJson, divi
 }
 
 /** The biaxial section for a check: shown when a load has Muy and a sheet reading, hidden otherwise. */
-async function updateBiaxial(check: ColumnCheck | null, json: CheckJson | null, cv: ChartView): Promise<void> {
-  const v = check && json ? biaxialView(check, biaxChosen) : null;
+/** the last biaxial view and the inputs it was computed for (the grid and the drawing options do not change it) */
+let biaxMemo: { key: string; view: BiaxialView | null } = { key: '', view: null };
+
+async function updateBiaxial(check: ColumnCheck | null, json: CheckJson | null, cv: ChartView, inputs: string): Promise<void> {
+  const key = JSON.stringify([inputs, biaxChosen ?? null]);
+  if (key !== biaxMemo.key || !check) biaxMemo = { key, view: check && json ? biaxialView(check, biaxChosen) : null };
+  const v = biaxMemo.view;
   currentBiax = v;
   $('biaxial').hidden = v === null;
   if (!v || !json) return;
@@ -344,6 +349,7 @@ let seq = 0;
 let draws = 0;
 /** the engine's check behind `currentCheck`, for redrawing the biaxial view at another load's levels */
 let lastCheck: ColumnCheck | null = null;
+let lastInputs = '';
 /** updates finished, drawn or stopped at a message */
 let settled = 0;
 let lastMs = NaN;
@@ -376,7 +382,10 @@ async function update(): Promise<void> {
   await draw(cv.value, check);
   if (my !== seq) return;
   const t3 = performance.now();
-  await updateBiaxial(engineCheck, check, cv.value);
+  // the section and loads as the check reads them (not the ratio list or the γ grid, which do not move the contours)
+  const { rho: _r, omega: _w, families: _f, dimensionless: _d, eccentricities: _e, paper: _p, portrait: _o, ...checkInputs } = fields;
+  lastInputs = JSON.stringify([checkInputs, loads]);
+  await updateBiaxial(engineCheck, check, cv.value, lastInputs);
   if (my !== seq) return;
   lastCheck = engineCheck;
   phases = { chart: t1 - t0, loads: t2 - t1, draw: t3 - t2, biaxial: performance.now() - t3 };
@@ -439,6 +448,15 @@ async function exportSvg(): Promise<string> {
   return svg.replace(/<svg\b[^>]*>/, (open) => `${open}<title>pmchart live chart</title><desc>${esc(desc)}</desc>`);
 }
 
+/** The biaxial panels as SVG, carrying the caution, the panels' notes and the check's assumptions in the description. */
+async function exportBiaxialSvg(): Promise<string> {
+  if (!biaxView || !currentBiax) return '';
+  const svg = await biaxView.toSVG();
+  const b = currentBiax.family.basis;
+  const desc = [PAGE_CAUTION, `${b.title}.`, $('biaxial-note').textContent ?? '', ...(currentCheck ? currentCheck.assumptions : [])].join('\n');
+  return svg.replace(/<svg\b[^>]*>/, (open) => `${open}<title>pmchart biaxial contours, load ${esc(currentBiax!.id)}</title><desc>${esc(desc)}</desc>`);
+}
+
 function wire(): void {
   const form = $('inputs');
   form.addEventListener('input', (ev) => {
@@ -458,12 +476,15 @@ function wire(): void {
   });
   $('biax-load').addEventListener('change', () => {
     biaxChosen = $<HTMLSelectElement>('biax-load').value || undefined;
-    if (current) void updateBiaxial(lastCheck, currentCheck, current).catch(internalError).finally(() => settled++);
+    if (current) void updateBiaxial(lastCheck, currentCheck, current, lastInputs).catch(internalError).finally(() => settled++);
   });
   $('chart').addEventListener('pointermove', pointerReading);
   $('chart').addEventListener('pointerleave', () => ($('crosshair').hidden = true));
   $('export-svg').addEventListener('click', () => {
     void exportSvg().then((svg) => download('pmchart-chart.svg', URL.createObjectURL(new Blob([svg], { type: 'image/svg+xml' }))));
+  });
+  $('export-biaxial-svg').addEventListener('click', () => {
+    void exportBiaxialSvg().then((svg) => download('pmchart-biaxial.svg', URL.createObjectURL(new Blob([svg], { type: 'image/svg+xml' }))));
   });
   $('export-png').addEventListener('click', () => {
     const full = sheetView();
@@ -507,6 +528,7 @@ window.pmchartPage = {
   lastMs: () => lastMs,
   phases: () => ({ ...phases, compiles }),
   exportSvg,
+  exportBiaxialSvg,
   /** sets a field as a user would and resolves when the page has redrawn (or given up with a message) */
   set: (key: string, value: string) => {
     const el = key === 'grid' || key === 'biax-load' ? $<HTMLSelectElement>(key) : control(key);

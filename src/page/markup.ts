@@ -48,7 +48,7 @@ export function pageBody(caution: string): string {
   <div id="loads-table"><p class="muted">Type Pu and Mu, or paste a load CSV, with b and h (or D).</p></div>
   <div id="biaxial" hidden>
     <h2>Biaxial: Mx–My contours at the load’s axial levels</h2>
-    <div class="toolbar"><label for="biax-load">Levels of load</label> <select id="biax-load"></select></div>
+    <div class="toolbar"><label for="biax-load">Levels of load</label> <select id="biax-load"></select> <button type="button" id="export-biaxial-svg">Export SVG</button></div>
     <div id="biaxial-readout" class="reading"></div>
     <div id="biaxial-wrap"><div id="biaxial-chart"></div></div>
     <p id="biaxial-note" class="muted"></p>

@@ -229,6 +229,11 @@ describe.sequential('pmchart page in Chromium', () => {
     const cells = await page.$$eval('#biaxial-chart g.cell > g', (gs) => gs.map((g) => ({ lines: g.querySelectorAll('g.biax_contours_marks path').length, governing: g.querySelectorAll('g.biax_load_governing_marks path').length })));
     expect(cells).toEqual(hand.map((h) => ({ lines: h.length, governing: 1 })));
     expect(await page.locator('#biaxial-alpha tbody tr').count()).toBe(out.biaxialChart.rhos.length);
+    const [download] = await Promise.all([page.waitForEvent('download'), page.click('#export-biaxial-svg')]);
+    const svg = readFileSync((await download.path())!, 'utf8');
+    expect(svg).toMatch(/^<svg/);
+    expect(svg).toContain('For use by qualified engineers only.');
+    expect(svg).toContain('ACI 318-19');
     await page.locator('#biaxial').screenshot({ path: join(tmpdir(), 'pmchart-page-biaxial.png') });
     expect(problems).toEqual([]);
   });
