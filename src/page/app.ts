@@ -8,7 +8,9 @@ import { compile } from 'vega-lite';
 import { expressionInterpreter } from 'vega-interpreter';
 import { liveData, liveTemplateParams, pageChartData, pageChartTemplate, type PageChartData, type PageLoad } from '../chart/page-spec.js';
 import { chartSetSnippet, commandLine } from './commands.js';
-import { chartView, checkFlags, loadsView, PAGE_CAUTION, readingAt, type ChartView, type CheckJson, type PageFields, type PageLoads } from './engine.js';
+import { biaxialRows, biaxialTemplate, type BiaxialRow, type BiaxialWords } from './biaxial-spec.js';
+import { biaxialView, chartView, checkFlags, loadsView, PAGE_CAUTION, readingAt, type BiaxialView, type ChartView, type CheckJson, type PageFields, type PageLoads } from './engine.js';
+import type { ColumnCheck } from '../design/column-check.js';
 import { ALL_FIELDS, FIELD_DEFAULTS, fieldForPath } from './fields.js';
 
 interface Presets {
@@ -183,13 +185,13 @@ function loadsTable(check: CheckJson): string {
   const u = check.units as { force: string; moment: string; stress: string; area: string };
   const d = (check.section as { shape: { kind: string } }).shape.kind === 'circle' ? 'D' : 'h';
   const biax = check.results.some((r) => r.biaxial != null);
-  const head = ['id', `Pu ${u.force}`, `Mu ${u.moment}`, `P/Ag ${u.stress}`, `M/(Ag·${d}) ${u.stress}`, `e/${d}`, 'ρg required', ...(biax ? ['ρg req biax'] : []), 'ρg chart', 'ρg rounded', `steel cost ${u.area}`, 'status'];
+  const head = ['id', `Pu ${u.force}`, `Mu ${u.moment}`, `P/Ag ${u.stress}`, `M/(Ag·${d}) ${u.stress}`, `e/${d}`, 'ρg required', ...(biax ? ['ρg req biax', 'ρg chart biax'] : []), 'ρg chart', 'ρg rounded', `steel cost ${u.area}`, 'status'];
   const rows = check.results.map((r) => {
     const n = r.normalised as { P: number; M: number; eOverH: number | null };
-    const b = r.biaxial as { rhoRequired: number | null } | null | undefined;
+    const b = r.biaxial as { rhoRequired: number | null; rhoFromChart: number | null } | null | undefined;
     // the check engine's status, its reason, and the notes (the CLI's words)
     const status = [String(r.status), String(r.statusReason ?? ''), ...((r.notes as string[]) ?? [])].filter(Boolean).join('; ');
-    return `<tr class="${r.governing ? 'governing' : ''}" data-id="${esc(String(r.id))}">${cell(`${r.governing ? '◆ ' : ''}${String(r.id)}`)}${cell(r.Pu, 5)}${cell(r.Mu, 5)}${cell(n.P)}${cell(n.M)}${cell(n.eOverH, 3)}${cell(r.rhoRequired, 4, 'rho-required')}${biax ? cell(b?.rhoRequired ?? null, 4, 'rho-required-biaxial') : ''}${cell(r.rhoFromChart, 4, 'rho-chart')}${cell(r.rhoRoundedDown, 3, 'rho-rounded')}${cell(r.extraSteelRoundedDown, 3, 'steel-cost')}${cell(status, 4, 'status')}</tr>`;
+    return `<tr class="${r.governing ? 'governing' : ''}" data-id="${esc(String(r.id))}">${cell(`${r.governing ? '◆ ' : ''}${String(r.id)}`)}${cell(r.Pu, 5)}${cell(r.Mu, 5)}${cell(n.P)}${cell(n.M)}${cell(n.eOverH, 3)}${cell(r.rhoRequired, 4, 'rho-required')}${biax ? cell(b?.rhoRequired ?? null, 4, 'rho-required-biaxial') + cell(b?.rhoFromChart ?? null, 4, 'rho-chart-biaxial') : ''}${cell(r.rhoFromChart, 4, 'rho-chart')}${cell(r.rhoRoundedDown, 3, 'rho-rounded')}${cell(r.extraSteelRoundedDown, 3, 'steel-cost')}${cell(status, 4, 'status')}</tr>`;
   });
   const chart = check.chart as { sheets: number[]; gammaStep: number };
   return `<table id="results"><thead><tr>${head.map((h) => `<th>${esc(h)}</th>`).join('')}</tr></thead><tbody>${rows.join('')}</tbody></table>
@@ -225,10 +227,129 @@ function commands(cv: ChartView, fields: PageFields, loads: PageLoads | null): v
   $('set-json').textContent = chartSetSnippet(cv, fields);
 }
 
+// ── biaxial view ────────────────────────────────────────────────────────────────────────────────
+
+let biaxView: vega.View | null = null;
+let biaxKey = '';
+let currentBiax: BiaxialView | null = null;
+let currentBiaxRows: BiaxialRow[] = [];
+/** the load the user picked for the biaxial view; unset: the governing one (the first with a reading) */
+let biaxChosen: string | undefined;
+
+/** The axis and level words of the biaxial panels, in the basis's symbols (as the sheets' axis titles). */
+function biaxialWords(v: BiaxialView, divisor: number, units: 'us' | 'si'): BiaxialWords {
+  const sy = v.family.basis.symbols;
+  const circle = v.family.shape.kind === 'circle';
+  const ns = sy.normalisingStress;
+  const su = units === 'us' ? 'ksi' : 'MPa';
+  const M = sy.designMoment;
+  const axis = (a: 'x' | 'y', d: string) => (divisor === 1 ? `${M}${a} / (Ag · ${d})   (${su})` : `${M}${a} / (${ns} · Ag · ${d})   (dimensionless)`);
+  return { levelName: sy.dimensionlessAxial ?? `P/(${ns}·Ag)`, x: axis('x', circle ? 'D' : 'h'), y: axis('y', circle ? 'D' : 'b') };
+}
+
+/** Draws the contour panels (compiled once per template, then only the rows are swapped). */
+async function drawBiaxial(v: BiaxialView, words: BiaxialWords, divisor: number): Promise<void> {
+  const template = biaxialTemplate(words);
+  currentBiaxRows = biaxialRows(v, words, divisor);
+  const key = JSON.stringify(template);
+  if (!biaxView || key !== biaxKey) {
+    biaxView?.finalize();
+    biaxView = new vega.View(compileView(template, { biax: currentBiaxRows } as never), { expr: expressionInterpreter as never, renderer: 'svg', container: '#biaxial-chart', hover: false });
+    biaxKey = key;
+  } else biaxView.data('biax', currentBiaxRows);
+  await biaxView.runAsync();
+}
+
+type JsonBiaxial = { rhoRequired: number | null; rhoStatus: string | null; rhoFromChart: number | null; chartMinusExact: number | null; chartLevels: { level: number; rho: number | null; position: string }[] };
+
+/** A number with a true minus sign, for the levels (below zero for loads in tension). */
+const signed = (x: number): string => fmt(x).replace(/^-/, '−');
+
+const positionWords: Record<string, string> = { between: 'between curves', 'inside-lowest': 'inside the lowest curve', 'outside-highest': 'outside the highest curve' };
+
+/** The readout (the check's own figures, as `pmchart check --json` prints them), the α table and the notes. */
+function biaxialText(v: BiaxialView, words: BiaxialWords, check: CheckJson, divisor: number): void {
+  const r = check.results.find((x) => String(x.id) === v.id)!;
+  const b = r.biaxial as JsonBiaxial;
+  const diff = b.chartMinusExact;
+  const levels = b.chartLevels.map((l) => `${signed(l.level)} → ${l.rho === null ? '—' : fmt(l.rho)} (${positionWords[l.position] ?? l.position})`).join('; ');
+  const bc = check.biaxialChart as { axialStep: number; angleStepDeg: number; rhos: number[] };
+  const su = check.units as { stress: string };
+  const row = (label: string, cls: string, value: unknown, text: string) => `<tr><th>${esc(label)}</th><td class="${cls}" data-value="${value === null || value === undefined ? '' : esc(String(value))}">${esc(text)}</td></tr>`;
+  $('biaxial-readout').innerHTML = `<table>${[
+    row('load read', 'biax-load-id', v.id, `${v.id}${r.governing ? ' ◆ governing' : ''}, ${words.levelName} = ${signed(v.level)}`),
+    row(
+      'ρg req biax (exact)',
+      'rho-required-biaxial',
+      b.rhoRequired,
+      b.rhoRequired === null ? (b.rhoStatus === 'not-possible' ? `— (not possible within ρg ≤ ${fmt(Math.max(...bc.rhos))})` : '—') : `${fmt(b.rhoRequired)}${b.rhoStatus === 'minimum-governs' ? ' (the minimum governs)' : ''}`,
+    ),
+    row('ρg chart biax', 'rho-chart-biaxial', b.rhoFromChart, b.rhoFromChart === null ? '— (off the sheets)' : fmt(b.rhoFromChart)),
+    row('chart − exact', 'chart-minus-exact', diff, diff === null ? '—' : diff === 0 ? '0' : `${diff > 0 ? '+' : '−'}${fmt(Math.abs(diff), 3)}`),
+    row(`levels read (${words.levelName} step ${bc.axialStep})`, 'levels-read', b.chartLevels.map((l) => l.level).join(','), levels),
+  ].join('')}</table>`;
+  const f = v.family;
+  const head = f.levels.map((l) => `<th colspan="4">${esc(`${words.levelName} = ${signed(l)}`)}</th>`).join('');
+  const sub = f.levels.map(() => ['Mxo', 'Myo', 'α', 'misfit'].map((t) => `<th>${t}</th>`).join('')).join('');
+  // moments to four significant figures at the scale of the largest (about 1 ksi, or 10 MPa)
+  const top = Math.max(...f.contours.flat().filter((c) => c.reachable).map((c) => Math.max(c.mxo, c.myo) / divisor), 1e-9);
+  const mDigits = Math.max(0, 3 - Math.floor(Math.log10(top)));
+  const body = f.rhos
+    .map((rho, k) => {
+      const cells = f.levels.map((_, li) => {
+        const c = f.contours[li]![k]!;
+        const fixed = (x: number, d: number) => `<td data-value="${x}">${x.toFixed(d)}</td>`;
+        return c.reachable
+          ? `${fixed(c.mxo / divisor, mDigits)}${fixed(c.myo / divisor, mDigits)}${fixed(c.alpha, 2)}<td data-value="${c.misfit}">${(c.misfit * 100).toFixed(1)} %</td>`
+          : `<td colspan="4" class="muted">beyond this ρg’s reach</td>`;
+      });
+      return `<tr><td class="rho">${rho}</td>${cells.join('')}</tr>`;
+    })
+    .join('');
+  const unit = divisor === 1 ? su.stress : 'dimensionless';
+  const caution = `<p class="biaxial-caution"><strong>Caution.</strong> ${esc(PAGE_CAUTION)}</p>`;
+  $('biaxial-table').innerHTML = `<table id="biaxial-alpha"><thead><tr><th rowspan="2">ρg</th>${head}</tr><tr>${sub}</tr></thead><tbody>${body}</tbody></table>
+<p class="muted">Mxo, Myo: the uniaxial capacities at the level (${unit}, normalised as the panels${f.quadrants === 'all' ? '; the positive faces' : ''}). α: exponent of the load contour (Mx/Mxo)^α + (My/Myo)^α = 1 (Bresler 1960) fitted to the drawn contour by least squares on its radius; misfit: the worst radial departure of that curve from the contour. Printed aids often take one α for everything; where the misfit is large the one-α shortcut is not safe.</p>${caution}`;
+  const others =
+    v.loads.length > 1
+      ? ` Every load with Muy is drawn on each panel at its own moments, though each is read on the levels of its own ${words.levelName}, given in brackets beside its name (the loads table gives each reading; pick a load above to draw its levels).`
+      : '';
+  $('biaxial-note').textContent =
+    `Factored Mx–My contours of the ρg family ${bc.rhos.join(', ')} at γ = ${fmt(f.gamma)}${f.gammaX !== undefined ? `, γB = ${fmt(f.gammaX)}` : ''}: the exact biaxial capacity under an inclined neutral axis with the bars smeared in the chosen arrangement, one point every ${bc.angleStepDeg}° of moment direction, straight between; a curve is left out where the level is beyond that ρg’s reach. ` +
+    (f.quadrants === 'first'
+      ? `The layout is symmetric about both axes, so the first quadrant tells all: loads are drawn at (|Mux|/(Ag·h), |Muy|/(Ag·b)). `
+      : `The layout is not symmetric about both axes: all four quadrants are drawn and the loads keep their signs. `) +
+    `Moments are those the check used (after slenderness and the minimum moment where asked). ρg chart biax reads the panels as an engineer would: linear between the two contours that bracket the load along its moment direction (dashed ray), then linear in ${words.levelName} between the two levels.` +
+    others;
+  const sel = $<HTMLSelectElement>('biax-load');
+  const options = v.choices.map((id) => `<option value="${esc(id)}"${id === v.id ? ' selected' : ''}>${esc(id)}</option>`).join('');
+  if (sel.innerHTML !== options) sel.innerHTML = options;
+  sel.value = v.id;
+}
+
+/** The biaxial section for a check: shown when a load has Muy and a sheet reading, hidden otherwise. */
+/** the last biaxial view and the inputs it was computed for (the grid and the drawing options do not change it) */
+let biaxMemo: { key: string; view: BiaxialView | null } = { key: '', view: null };
+
+async function updateBiaxial(check: ColumnCheck | null, json: CheckJson | null, cv: ChartView, inputs: string): Promise<void> {
+  const key = JSON.stringify([inputs, biaxChosen ?? null]);
+  if (key !== biaxMemo.key || !check) biaxMemo = { key, view: check && json ? biaxialView(check, biaxChosen) : null };
+  const v = biaxMemo.view;
+  currentBiax = v;
+  $('biaxial').hidden = v === null;
+  if (!v || !json) return;
+  const words = biaxialWords(v, cv.divisor, cv.request.section.units);
+  await drawBiaxial(v, words, cv.divisor);
+  biaxialText(v, words, json, cv.divisor);
+}
+
 // ── update loop ─────────────────────────────────────────────────────────────────────────────────
 
 let seq = 0;
 let draws = 0;
+/** the engine's check behind `currentCheck`, for redrawing the biaxial view at another load's levels */
+let lastCheck: ColumnCheck | null = null;
+let lastInputs = '';
 /** updates finished, drawn or stopped at a message */
 let settled = 0;
 let lastMs = NaN;
@@ -249,17 +370,25 @@ async function update(): Promise<void> {
   const loads = readLoads();
   clearMessages('loads');
   let check: CheckJson | null = null;
+  let engineCheck: ColumnCheck | null = null;
   let effects = '';
   if (loads) {
     const lv = await loadsView(fields, loads, grid());
     if (my !== seq) return;
-    if (lv.ok) ({ json: check, effectsText: effects } = lv.value);
+    if (lv.ok) ({ json: check, effectsText: effects, check: engineCheck } = lv.value);
     else showProblem(lv.problem.path, lv.problem.message);
   }
   const t2 = performance.now();
   await draw(cv.value, check);
   if (my !== seq) return;
-  phases = { chart: t1 - t0, loads: t2 - t1, draw: performance.now() - t2 };
+  const t3 = performance.now();
+  // the section and loads as the check reads them (not the ratio list or the γ grid, which do not move the contours)
+  const { rho: _r, omega: _w, families: _f, dimensionless: _d, eccentricities: _e, paper: _p, portrait: _o, ...checkInputs } = fields;
+  lastInputs = JSON.stringify([checkInputs, loads]);
+  await updateBiaxial(engineCheck, check, cv.value, lastInputs);
+  if (my !== seq) return;
+  lastCheck = engineCheck;
+  phases = { chart: t1 - t0, loads: t2 - t1, draw: t3 - t2, biaxial: performance.now() - t3 };
   current = cv.value;
   currentCheck = check;
   lastMs = performance.now() - t0;
@@ -319,6 +448,15 @@ async function exportSvg(): Promise<string> {
   return svg.replace(/<svg\b[^>]*>/, (open) => `${open}<title>pmchart live chart</title><desc>${esc(desc)}</desc>`);
 }
 
+/** The biaxial panels as SVG, carrying the caution, the panels' notes and the check's assumptions in the description. */
+async function exportBiaxialSvg(): Promise<string> {
+  if (!biaxView || !currentBiax) return '';
+  const svg = await biaxView.toSVG();
+  const b = currentBiax.family.basis;
+  const desc = [PAGE_CAUTION, `${b.title}.`, $('biaxial-note').textContent ?? '', ...(currentCheck ? currentCheck.assumptions : [])].join('\n');
+  return svg.replace(/<svg\b[^>]*>/, (open) => `${open}<title>pmchart biaxial contours, load ${esc(currentBiax!.id)}</title><desc>${esc(desc)}</desc>`);
+}
+
 function wire(): void {
   const form = $('inputs');
   form.addEventListener('input', (ev) => {
@@ -336,10 +474,17 @@ function wire(): void {
     for (const k of ['pu', 'mu', 'muy', 'loads']) control(k).value = '';
     schedule();
   });
+  $('biax-load').addEventListener('change', () => {
+    biaxChosen = $<HTMLSelectElement>('biax-load').value || undefined;
+    if (current) void updateBiaxial(lastCheck, currentCheck, current, lastInputs).catch(internalError).finally(() => settled++);
+  });
   $('chart').addEventListener('pointermove', pointerReading);
   $('chart').addEventListener('pointerleave', () => ($('crosshair').hidden = true));
   $('export-svg').addEventListener('click', () => {
     void exportSvg().then((svg) => download('pmchart-chart.svg', URL.createObjectURL(new Blob([svg], { type: 'image/svg+xml' }))));
+  });
+  $('export-biaxial-svg').addEventListener('click', () => {
+    void exportBiaxialSvg().then((svg) => download('pmchart-biaxial.svg', URL.createObjectURL(new Blob([svg], { type: 'image/svg+xml' }))));
   });
   $('export-png').addEventListener('click', () => {
     const full = sheetView();
@@ -365,16 +510,30 @@ window.pmchartPage = {
       curves: current.family.curves.map((c) => ({ rho: c.rho, Pn: Array.from(c.Pn), Mn: Array.from(c.Mn), phiPn: Array.from(c.phiPn), phiMn: Array.from(c.phiMn), keyPoints: c.keyPoints })),
     },
   check: () => currentCheck,
+  /** the biaxial view as drawn: the load read, its levels, and per panel the ρg of every curve drawn */
+  biaxial: () =>
+    currentBiax && {
+      id: currentBiax.id,
+      level: currentBiax.level,
+      quadrants: currentBiax.family.quadrants,
+      levels: currentBiax.family.levels,
+      reachable: currentBiax.family.contours.map((row) => row.filter((c) => c.reachable).map((c) => c.rho)),
+      drawn: [...new Set(currentBiaxRows.filter((r) => r.kind === 'contour').map((r) => r.panel))].map((panel) => ({
+        panel,
+        rhos: [...new Set(currentBiaxRows.filter((r) => r.kind === 'contour' && r.panel === panel).map((r) => r.rho))],
+      })),
+    },
   draws: () => draws,
   settled: () => settled,
   lastMs: () => lastMs,
   phases: () => ({ ...phases, compiles }),
   exportSvg,
+  exportBiaxialSvg,
   /** sets a field as a user would and resolves when the page has redrawn (or given up with a message) */
   set: (key: string, value: string) => {
-    const el = key === 'grid' ? $<HTMLSelectElement>('grid') : control(key);
+    const el = key === 'grid' || key === 'biax-load' ? $<HTMLSelectElement>(key) : control(key);
     el.value = value;
-    el.dispatchEvent(new Event('input', { bubbles: true }));
+    el.dispatchEvent(new Event(key === 'biax-load' ? 'change' : 'input', { bubbles: true }));
   },
   update: () => update(),
 };

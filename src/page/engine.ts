@@ -5,6 +5,7 @@
  *
  *   form fields (flag names, as typed) ─▶ chartView: family · sheet datasets · bracketing sheets
  *                                      └▶ loadsView: the column check, as `pmchart check --json` prints it
+ *                                                   └▶ biaxialView: Mx–My contours at the levels the check read
  *
  * Swap points for the integrator:
  *  - the column check: `loadsView` parses the flags with the CLI's `computeCheck`, which calls the engine's
@@ -12,7 +13,11 @@
  *  - the flag readers are src/flags/ (shared with the CLI, below it); pasted CSV reaches the load reader
  *    through virtual-fs.ts, offered as a file.
  */
+import { computeBiaxialFamily, type BiaxialFamily } from '../analysis/biaxial-family.js';
 import { computeFamily, type CurveFamily } from '../analysis/family.js';
+import type { ColumnCheck } from '../design/column-check.js';
+import { grossArea, sectionDepth, sectionWidth } from '../section/geometry.js';
+import type { Shape } from '../section/types.js';
 import { buildSheet, type BuiltSheet } from '../chart/sheet-data.js';
 import { computeCheck, type CheckOptions } from '../flags/check-flags.js';
 import { checkJson, effectsText } from '../report/check-view.js';
@@ -96,6 +101,8 @@ export type CheckJson = Record<string, unknown> & { results: Record<string, unkn
 export interface LoadsView {
   json: CheckJson;
   effectsText: string;
+  /** the check itself, for the biaxial view (`biaxialView`) */
+  check: ColumnCheck;
 }
 
 /** The column check for the page's section and loads; the chart sheets read are those of the chosen grid. */
@@ -105,7 +112,7 @@ export function loadsView(fields: PageFields, loads: PageLoads, grid: number): P
     if (loads.kind === 'csv') putVirtualFile(PASTED_LOADS, loads.text);
     // flags → ColumnCheckInput (the CLI's parsers) → checkColumn → the JSON view, as `pmchart check --json`
     const { check } = computeCheck(o);
-    return { json: JSON.parse(checkJson(check, generatorLabel())) as CheckJson, effectsText: effectsText(check).trim() };
+    return { json: JSON.parse(checkJson(check, generatorLabel())) as CheckJson, effectsText: effectsText(check).trim(), check };
   });
 }
 
@@ -116,6 +123,63 @@ export function checkFlags(fields: PageFields, loads: PageLoads, grid: number): 
   if (loads.kind === 'typed') Object.assign(o, { pu: loads.pu, mu: loads.mu }, loads.muy ? { muy: loads.muy } : {});
   else o.loads = PASTED_LOADS;
   return o;
+}
+
+/** A load with Muy, normalised as the biaxial panels: mx = Mux/(Ag·h), my = Muy/(Ag·b) (stress units), ν = Pu/(stress·Ag). */
+export interface BiaxialLoadPoint {
+  id: string;
+  level: number;
+  mx: number;
+  my: number;
+  governing: boolean;
+}
+
+/** The biaxial view of one load: the ρg family of factored Mx–My contours at the axial levels its sheet reading used. */
+export interface BiaxialView {
+  /** the load whose levels are drawn */
+  id: string;
+  /** its axial level ν = Pu/(normalising stress·Ag) */
+  level: number;
+  /** one call: the contours at the levels read (one level when ν sits on the grid) */
+  family: BiaxialFamily;
+  /** every load with Muy, normalised as the panels (signed; the view folds them into the first quadrant when that is all it draws) */
+  loads: BiaxialLoadPoint[];
+  /** loads that can be drawn, in the check's order (governing first) */
+  choices: string[];
+}
+
+/**
+ * The biaxial view for the load `id` (default: the first load with a biaxial sheet reading, which is the
+ * governing one when it has Muy): computeBiaxialFamily on the section the check read its sheets from —
+ * same basis, arrangement, γ, γB and ρg family (`biaxialChart.rhos`), unit depth as the sheets are drawn —
+ * at the levels in that load's `chartLevels`. Null when no load has a biaxial sheet reading.
+ */
+export function biaxialView(check: ColumnCheck, id?: string): BiaxialView | null {
+  const bc = check.biaxialChart;
+  if (!bc) return null;
+  const readable = check.results.filter((r) => (r.biaxial?.chartLevels.length ?? 0) > 0);
+  const load = readable.find((r) => r.id === id) ?? readable[0];
+  if (!load) return null;
+  const shape = check.shape;
+  const unit: Shape = shape.kind === 'circle' ? { kind: 'circle', diameter: 1 } : { kind: 'rectangle', b: shape.b / shape.h, h: 1 };
+  const family = computeBiaxialFamily({
+    basis: check.basis,
+    shape: unit,
+    arrangement: check.arrangement,
+    gamma: check.gamma,
+    ...(check.gammaB !== null ? { gammaX: check.gammaB } : {}),
+    rhos: bc.rhos,
+    levels: load.biaxial!.chartLevels.map((l) => l.level),
+    capContext: check.capContext,
+    angleStepDeg: bc.angleStepDeg,
+  });
+  const ag = grossArea(shape);
+  const stress = check.basis.normalisingStress;
+  // the moments the sheets were read with: after slenderness and the minimum moment, signed
+  const loads = check.results
+    .filter((r) => r.Muy !== null && Number.isFinite(r.Mu) && Number.isFinite(r.Muy!))
+    .map((r) => ({ id: r.id, level: r.Pu / (stress * ag), mx: r.Mu / (ag * sectionDepth(shape)), my: r.Muy! / (ag * sectionWidth(shape)), governing: r.governing }));
+  return { id: load.id, level: load.Pu / (stress * ag), family, loads, choices: readable.map((r) => r.id) };
 }
 
 /** The caution every page view and export carries (the CLI's words). */

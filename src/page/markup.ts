@@ -46,6 +46,14 @@ export function pageBody(caution: string): string {
   <div id="sheets-note" class="muted"></div>
   <h2>Loads</h2>
   <div id="loads-table"><p class="muted">Type Pu and Mu, or paste a load CSV, with b and h (or D).</p></div>
+  <div id="biaxial" hidden>
+    <h2>Biaxial: Mx–My contours at the load’s axial levels</h2>
+    <div class="toolbar"><label for="biax-load">Levels of load</label> <select id="biax-load"></select> <button type="button" id="export-biaxial-svg">Export SVG</button></div>
+    <div id="biaxial-readout" class="reading"></div>
+    <div id="biaxial-wrap"><div id="biaxial-chart"></div></div>
+    <p id="biaxial-note" class="muted"></p>
+    <div id="biaxial-table"></div>
+  </div>
   <h2>Basis and assumptions</h2>
   <ul id="assumptions"></ul>
   <h2 id="reproduce">Reproduce this view</h2>
@@ -86,6 +94,12 @@ button{font:inherit;padding:3px 10px;margin-right:6px;border:1px solid var(--acc
 .toolbar{margin:8px 0}
 #chart-wrap{position:relative;border:1px solid var(--rule)}
 #chart svg,#chart canvas{width:100%;height:auto;display:block}
+#biaxial-wrap{border:1px solid var(--rule);overflow-x:auto}
+#biaxial-chart svg{max-width:100%;height:auto;display:block}
+#biaxial-readout table td,#biaxial-readout table th{border:0;padding:1px 10px 1px 0;text-align:left}
+#biaxial-table td.rho{text-align:left;font-weight:bold}
+.biaxial-caution{color:var(--caution);font-size:12px}
+select#biax-load{width:auto;min-width:10em}
 #crosshair{position:absolute;width:9px;height:9px;margin:-5px 0 0 -5px;border:1px solid var(--caution);border-radius:50%;pointer-events:none}
 .reading{margin:6px 0;padding:4px 8px;background:var(--panel);font-variant-numeric:tabular-nums;min-height:1.6em}
 #loads-table{overflow-x:auto}
@@ -100,7 +114,8 @@ pre.copy{background:var(--panel);padding:6px 8px;white-space:pre-wrap;word-break
   @page{size:landscape;margin:10mm}
   header .sub,form,.toolbar,#reading,#crosshair,#reproduce,#cmd-sheet,#cmd-check,#set-json,#out>p.muted{display:none}
   main{display:block;padding:0}
-  #chart-wrap{border:0;page-break-inside:avoid}
+  #chart-wrap,#biaxial-wrap{border:0;page-break-inside:avoid}
+  #biaxial .toolbar{display:none}
   #chart svg{width:auto;max-width:100%;max-height:150mm}
   table,#assumptions{page-break-inside:avoid}
   .print-only{display:block}

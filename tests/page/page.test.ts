@@ -13,6 +13,7 @@ import { join } from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readChartSet } from '../../src/config/read.js';
+import { runCli } from '../helpers/run-cli.js';
 import { expectClose } from '../helpers/tolerance.js';
 
 const CHROMIUM = process.env.PMCHART_CHROMIUM ?? '/usr/bin/chromium';
@@ -191,6 +192,75 @@ describe.sequential('pmchart page in Chromium', () => {
     const text = cli(['check', ...section, '--b', '24', '--h', '24', '--pu', '900', '--mu', '600', '--muy', '300', '--proposals', '0']).stdout;
     expect(note).toContain('exact biaxial ρg required');
     expect(text).toContain(note.trim());
+    expect(problems).toEqual([]);
+  });
+
+  it('biaxial view: contours at the levels the check read, the CLI’s ρg chart biax, one curve per reachable ρg', async () => {
+    // a corner column with unequal counts: 3 bars on each 16 in face, 5 on each 24 in face
+    await setField('arrangement', 'four-faces');
+    await setField('barsPerFace', '3,5');
+    await setField('b', '16');
+    await setField('h', '24');
+    await setField('pu', '844.8');
+    await setField('mu', '150');
+    await setField('muy', '80');
+    expect(await visibleMessages()).toEqual({});
+    await page.waitForFunction(() => !(document.getElementById('biaxial') as HTMLElement).hidden);
+    const run = await runCli(['check', '--json', ...section.map((a) => (a === 'two-faces' ? 'four-faces' : a === '3' ? '3,5' : a)), '--b', '16', '--h', '24', '--pu', '844.8', '--mu', '150', '--muy', '80']);
+    expect(run.stderr).toBe('');
+    const out = JSON.parse(run.stdout);
+    const biax = out.results[0].biaxial;
+    const readout = (cls: string) => page.locator(`#biaxial-readout td.${cls}`).getAttribute('data-value');
+    expect(await readout('rho-chart-biaxial')).toBe(String(biax.rhoFromChart));
+    expect(await readout('rho-required-biaxial')).toBe(String(biax.rhoRequired));
+    expect(await readout('chart-minus-exact')).toBe(String(biax.chartMinusExact));
+    expect(await readout('levels-read')).toBe(biax.chartLevels.map((l: { level: number }) => l.level).join(','));
+    // Pu/(f′c·Ag) = 844.8/(4·384) = 0.55: the sheets at 0.5 and 0.6 are read
+    expect(biax.chartLevels.map((l: { level: number }) => l.level)).toEqual([0.5, 0.6]);
+    // Which contours a panel can draw, by hand (ACI 318-19 22.4.2.1, 22.4.2.2, Table 21.2.2 tied φ = 0.65):
+    // φPn,max/Ag = 0.65·0.8·(0.85·4·(1 − ρg) + 60·ρg) = 0.52·(3.4 + 56.6·ρg) ksi reaches 0.5·4 = 2.0 ksi for every
+    // ρg ≥ 0.01 (2.062 ksi at 0.01), but 0.6·4 = 2.4 ksi only for ρg ≥ 0.0215: the 0.6 panel starts at 0.03.
+    const hand = [out.biaxialChart.rhos, out.biaxialChart.rhos.filter((r: number) => r >= 0.0215)];
+    expect(hand[1]).toEqual([0.03, 0.04, 0.05, 0.06, 0.07, 0.08]);
+    const drawn = (await page.evaluate(() => (window as unknown as { pmchartPage: { biaxial(): unknown } }).pmchartPage.biaxial())) as { levels: number[]; drawn: { rhos: number[] }[] };
+    expect(drawn.levels).toEqual([0.5, 0.6]);
+    expect(drawn.drawn.map((d) => d.rhos)).toEqual(hand);
+    // one drawn line per reachable ρg in each panel of the SVG, and the governing load marked once per panel
+    const cells = await page.$$eval('#biaxial-chart g.cell > g', (gs) => gs.map((g) => ({ lines: g.querySelectorAll('g.biax_contours_marks path').length, governing: g.querySelectorAll('g.biax_load_governing_marks path').length })));
+    expect(cells).toEqual(hand.map((h) => ({ lines: h.length, governing: 1 })));
+    expect(await page.locator('#biaxial-alpha tbody tr').count()).toBe(out.biaxialChart.rhos.length);
+    const [download] = await Promise.all([page.waitForEvent('download'), page.click('#export-biaxial-svg')]);
+    const svg = readFileSync((await download.path())!, 'utf8');
+    expect(svg).toMatch(/^<svg/);
+    expect(svg).toContain('For use by qualified engineers only.');
+    expect(svg).toContain('ACI 318-19');
+    await page.locator('#biaxial').screenshot({ path: join(tmpdir(), 'pmchart-page-biaxial.png') });
+    expect(problems).toEqual([]);
+  });
+
+  it('biaxial view: pasted loads with a Muy column; another load’s levels on request', async () => {
+    const csv = 'id,Pu,Mu,Muy\nC-corner-1,844.8,150,80\nC-corner-2,420,210,-160\nC-corner-3,1000,60,40\n';
+    const loadsFile = join(dir, 'corner-loads.csv');
+    writeFileSync(loadsFile, csv);
+    await setField('loads', csv);
+    expect(await visibleMessages()).toEqual({});
+    const run = await runCli(['check', '--json', ...section.map((a) => (a === 'two-faces' ? 'four-faces' : a === '3' ? '3,5' : a)), '--b', '16', '--h', '24', '--loads', loadsFile]);
+    expect(run.stderr).toBe('');
+    const out = JSON.parse(run.stdout);
+    const column = await page.$$eval('#results tbody tr', (rows) => rows.map((row) => [row.getAttribute('data-id'), row.querySelector('td.rho-chart-biaxial')?.getAttribute('data-value')]));
+    expect(column).toEqual(out.results.map((r: { id: string; biaxial: { rhoFromChart: number | null } }) => [r.id, r.biaxial.rhoFromChart === null ? '' : String(r.biaxial.rhoFromChart)]));
+    for (const r of out.results as { id: string; biaxial: { rhoFromChart: number | null } }[]) {
+      await setField('biax-load', r.id);
+      expect(await page.locator('#biaxial-readout td.biax-load-id').getAttribute('data-value')).toBe(r.id);
+      expect(await page.locator('#biaxial-readout td.rho-chart-biaxial').getAttribute('data-value')).toBe(r.biaxial.rhoFromChart === null ? '' : String(r.biaxial.rhoFromChart));
+    }
+    // every load is drawn on every panel, the governing one as the diamond
+    const loadsPerCell = await page.$$eval('#biaxial-chart g.cell > g', (gs) => gs.map((g) => g.querySelectorAll('g.biax_loads_marks path, g.biax_load_governing_marks path').length));
+    expect(loadsPerCell.every((n) => n === 3)).toBe(true);
+    await page.locator('#biaxial').screenshot({ path: join(tmpdir(), 'pmchart-page-biaxial-csv.png') });
+    await setField('loads', '');
+    await setField('muy', '');
+    expect(await page.locator('#biaxial').isHidden()).toBe(true);
     expect(problems).toEqual([]);
   });
 
