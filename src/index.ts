@@ -3,6 +3,7 @@
  *
  *   computeFamily   basis + section → one sweep in neutral-axis depth → a family of normalised ρg curves
  *   checkColumn     a column and its loads → one frozen ColumnCheck (status, ρg required, readings, bars)
+ *   computeBiaxialFamily  basis + section + axial levels → normalised Mx–My contours per ρg, with Mxo, Myo, fitted α
  *   readChartSet    a chart-set file's text → the resolved set (field paths in errors)
  *   makeChartSet    a resolved set → sheets, tables and the bound book on disk
  *   renderSheet     one sheet of a set → SVG, PNG or PDF bytes
@@ -35,6 +36,7 @@ export {
   type VariantInfo,
 } from './design/column-check.js';
 export type { FactoredLoad, GivenLayout } from './design/check.js';
+export { BiaxialCharts, DEFAULT_CHART_AXIAL_STEP, type BiaxialChartReading, type BiaxialLevelReading } from './design/biaxial-chart-reading.js';
 export type { SlendernessRequest, AxisMember } from './design/column-effects.js';
 export type { BarProposal, Detailing } from './design/bar-selection.js';
 export { checkJson, checkText, checkReportText, checkJsonPieces, checkTextPieces, checkReportPieces, textSizer } from './report/check-view.js';

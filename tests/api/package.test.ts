@@ -35,6 +35,27 @@ describe("import { checkColumn } from 'pmchart'", () => {
     expect(out.statuses).toEqual(['ok', 'fails', 'not-possible', 'unstable', 'outside-scope']);
   });
 
+  it('computes a biaxial contour family and reads a load off it (issue 15)', () => {
+    const r = run(`
+      import { computeBiaxialFamily, BiaxialCharts, resolveBasis } from 'pmchart';
+      const basis = resolveBasis('aci318-19', { units: 'us', fc: 5, fy: 60, transverse: 'tied' });
+      const f = computeBiaxialFamily({ basis, shape: { kind: 'rectangle', b: 1, h: 1 }, arrangement: { kind: 'four-faces', barsPerFace: [3, 3] },
+        gamma: 0.8, rhos: [0.02], levels: [0.3] });
+      const c = f.contours[0][0];
+      const charts = new BiaxialCharts({ basis, shape: { kind: 'rectangle', b: 20, h: 20 }, arrangement: { kind: 'four-faces', barsPerFace: 3 }, gamma: 0.8, rhoLimits: basis.rhoLimits });
+      const reading = charts.read(0.3 * 5 * 400, 100 * 12, 80 * 12);
+      console.log(JSON.stringify({ quadrants: f.quadrants, mxo: c.mxo, myo: c.myo, alpha: c.alpha, points: c.angleDeg.length, rho: reading.rhoFromChart }));
+    `);
+    expect(r.stderr).toBe('');
+    const out = JSON.parse(r.stdout);
+    // a square with the same bars on every face is symmetric about both axes and the diagonal (common practice)
+    expect(out.quadrants).toBe('first');
+    expect(out.mxo).toBeCloseTo(out.myo, 9);
+    expect(out.points).toBe(19);
+    expect(Number.isFinite(out.alpha)).toBe(true);
+    expect(out.rho).toBeGreaterThanOrEqual(0.01);
+  });
+
   it('renders one sheet of a chart set read from text', () => {
     const r = run(`
       import { readFileSync } from 'node:fs';
