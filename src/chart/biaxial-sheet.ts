@@ -14,7 +14,7 @@ import { roundStep, tickFormat, type AxisExtent, type AxisScale } from './axes.j
 import { biaxialTable, type BiaxialTable } from './biaxial-table.js';
 import { centredBox, estimateText, LabelPlacer, type MeasureText, type Segment } from './labels.js';
 import { sheetLayout, type Box, type SheetLayout } from './layout.js';
-import { curveKeyText, Deco, drawTitleBlock, header, SHEET_CAUTION, wrap, type SheetData, type TemplateParams } from './sheet-data.js';
+import { curveKeyText, Deco, drawTitleBlock, fitSideColumn, header, SHEET_CAUTION, wrap, type SheetData, type TemplateParams } from './sheet-data.js';
 import { COLOURS, curveColour, type TextStyle } from './style.js';
 
 export interface BiaxialSheetContext {
@@ -350,21 +350,7 @@ function lookupPanel(ctx: BiaxialSheetContext, t: BiaxialTable, g: Deco): void {
 
 // ── side column ─────────────────────────────────────────────────────────────────────────────────
 
-const SIDE_FITS: { picture: number; notes: TextStyle }[] = [
-  { picture: 1, notes: 'body' },
-  { picture: 0.8, notes: 'bodySmall' },
-  { picture: 0.6, notes: 'bodyTiny' },
-];
-
-function sidePanel(ctx: BiaxialSheetContext, g: Deco): void {
-  for (const fit of SIDE_FITS) {
-    const trial = new Deco(g.L, { curves: [], curveLabels: [], refs: [], refLabels: [], frame: [], texts: [], rects: [], rules: [], dots: [], rings: [] }, g.measure);
-    if (sideColumn(ctx, trial, fit) <= g.L.side.y + g.L.side.h + 0.01 || fit === SIDE_FITS[SIDE_FITS.length - 1]) {
-      sideColumn(ctx, g, fit);
-      return;
-    }
-  }
-}
+const sidePanel = (ctx: BiaxialSheetContext, g: Deco): void => fitSideColumn(g, (d, fit) => sideColumn(ctx, d, fit));
 
 /** The notes of a biaxial sheet after the basis's own. */
 export function biaxialNotes(set: ResolvedChartSet, family: BiaxialFamily): string[] {

@@ -646,21 +646,25 @@ export const SHEET_CAUTION =
   'For use by qualified engineers only. Check every value against the governing code edition, the project specification and local practice; this sheet does not replace the judgement of the engineer of record.';
 
 /** Side-column variants, largest first: the first whose notes and caution fit the column is drawn. */
-const SIDE_FITS: { picture: number; notes: TextStyle }[] = [
+export type SideFit = { picture: number; notes: TextStyle };
+const SIDE_FITS: SideFit[] = [
   { picture: 1, notes: 'body' },
   { picture: 0.8, notes: 'bodySmall' },
   { picture: 0.6, notes: 'bodyTiny' },
 ];
 
-function sidePanel(ctx: SheetContext, g: Deco): void {
+/** Draws a side column with the largest variant that fits (tried on a scratch layer); `draw` returns the column's bottom. */
+export function fitSideColumn(g: Deco, draw: (g: Deco, fit: SideFit) => number): void {
   for (const fit of SIDE_FITS) {
     const trial = new Deco(g.L, { curves: [], curveLabels: [], refs: [], refLabels: [], frame: [], texts: [], rects: [], rules: [], dots: [], rings: [] }, g.measure);
-    if (sideColumn(ctx, trial, fit) <= g.L.side.y + g.L.side.h + 0.01 || fit === SIDE_FITS[SIDE_FITS.length - 1]) {
-      sideColumn(ctx, g, fit);
+    if (draw(trial, fit) <= g.L.side.y + g.L.side.h + 0.01 || fit === SIDE_FITS[SIDE_FITS.length - 1]) {
+      draw(g, fit);
       return;
     }
   }
 }
+
+const sidePanel = (ctx: SheetContext, g: Deco): void => fitSideColumn(g, (d, fit) => sideColumn(ctx, d, fit));
 
 /** Draws the side column; returns the bottom of its caution box. */
 function sideColumn(ctx: SheetContext, g: Deco, fit: { picture: number; notes: TextStyle }): number {
