@@ -14,8 +14,8 @@ import { roundStep, tickFormat, type AxisExtent, type AxisScale } from './axes.j
 import { biaxialTable, type BiaxialTable } from './biaxial-table.js';
 import { centredBox, estimateText, LabelPlacer, type MeasureText, type Segment } from './labels.js';
 import { sheetLayout, type Box, type SheetLayout } from './layout.js';
-import { curveKeyText, Deco, drawTitleBlock, fitSideColumn, header, SHEET_CAUTION, wrap, type SheetData, type TemplateParams } from './sheet-data.js';
-import { COLOURS, curveColour, type TextStyle } from './style.js';
+import { curveKeyText, Deco, drawTitleBlock, fitSideColumn, notesAndCaution, type SideFit, header, wrap, type SheetData, type TemplateParams } from './sheet-data.js';
+import { COLOURS, curveColour } from './style.js';
 
 export interface BiaxialSheetContext {
   set: ResolvedChartSet;
@@ -381,7 +381,7 @@ const angleStep = (family: BiaxialFamily): string => {
   return c ? fmt(c.angleDeg[1]! - c.angleDeg[0]!) : '5';
 };
 
-function sideColumn(ctx: BiaxialSheetContext, g: Deco, fit: { picture: number; notes: TextStyle }): number {
+function sideColumn(ctx: BiaxialSheetContext, g: Deco, fit: SideFit): number {
   const { side: b, u } = g.L;
   const { family, sheet, set } = ctx;
   const basis = family.basis;
@@ -440,16 +440,7 @@ function sideColumn(ctx: BiaxialSheetContext, g: Deco, fit: { picture: number; n
   y += 1.0 * u;
   g.text('heading', b.x, y, 'Assumptions');
   y += 1.5 * u;
-  for (const note of [...basis.notes, ...biaxialNotes(set, family)]) {
-    g.text(fit.notes, b.x, y, '•');
-    y = g.paragraph(fit.notes, b.x + 1.0 * u, y, b.w - 1.0 * u, note) + 0.3 * u;
-  }
-  const lines = wrap(SHEET_CAUTION, b.w - 2 * u, g.size('caution'), (t, f) => g.measure(t, f, true));
-  const ch = lines.length * g.size('caution') * 1.35 + 1.4 * u;
-  const cTop = Math.max(y + 0.5 * u, b.y + b.h - ch);
-  g.rect({ x: b.x, y: cTop, w: b.w, h: ch }, '#fbf1ef', COLOURS.caution, 0.7);
-  g.paragraph('caution', b.x + u, cTop + 1.0 * u + 0.5 * g.size('caution'), b.w - 2 * u, SHEET_CAUTION, 1.35);
-  return cTop + ch;
+  return notesAndCaution(g, fit, y, [...basis.notes, ...biaxialNotes(set, family)]);
 }
 
 // ── title block ─────────────────────────────────────────────────────────────────────────────────

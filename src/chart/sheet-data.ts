@@ -667,7 +667,7 @@ export function fitSideColumn(g: Deco, draw: (g: Deco, fit: SideFit) => number):
 const sidePanel = (ctx: SheetContext, g: Deco): void => fitSideColumn(g, (d, fit) => sideColumn(ctx, d, fit));
 
 /** Draws the side column; returns the bottom of its caution box. */
-function sideColumn(ctx: SheetContext, g: Deco, fit: { picture: number; notes: TextStyle }): number {
+function sideColumn(ctx: SheetContext, g: Deco, fit: SideFit): number {
   const { side: b, u } = g.L;
   const { family, sheet, set } = ctx;
   const basis = family.basis;
@@ -748,22 +748,25 @@ function sideColumn(ctx: SheetContext, g: Deco, fit: { picture: number; notes: T
       `Curves per mechanical ratio ω = ρg·σy/${basis.symbols.normalisingStress}, σy = ${stressText(fyd, set.units)} the design yield stress: ρg = ω·${fmt(basis.normalisingStress / fyd, 4)} here.`,
     );
   }
-  for (const note of [...basis.notes, ...extra]) {
+  return notesAndCaution(g, fit, y, [...basis.notes, ...extra]);
+}
+
+/** The side column's bulleted notes from `y`, then the caution box pinned to the column's foot; returns the box's bottom. */
+export function notesAndCaution(g: Deco, fit: SideFit, y: number, notes: readonly string[]): number {
+  const { side: b, u } = g.L;
+  for (const note of notes) {
     g.text(fit.notes, b.x, y, '•');
     y = g.paragraph(fit.notes, b.x + 1.0 * u, y, b.w - 1.0 * u, note) + 0.3 * u;
   }
-  // caution, pinned to the bottom of the column
-  const caution = SHEET_CAUTION;
-  const lines = wrap(caution, b.w - 2 * u, g.size('caution'), (t, f) => g.measure(t, f, true));
+  const lines = wrap(SHEET_CAUTION, b.w - 2 * u, g.size('caution'), (t, f) => g.measure(t, f, true));
   const ch = lines.length * g.size('caution') * 1.35 + 1.4 * u;
   const cTop = Math.max(y + 0.5 * u, b.y + b.h - ch);
   g.rect({ x: b.x, y: cTop, w: b.w, h: ch }, '#fbf1ef', COLOURS.caution, 0.7);
-  g.paragraph('caution', b.x + u, cTop + 1.0 * u + 0.5 * g.size('caution'), b.w - 2 * u, caution, 1.35);
+  g.paragraph('caution', b.x + u, cTop + 1.0 * u + 0.5 * g.size('caution'), b.w - 2 * u, SHEET_CAUTION, 1.35);
   return cTop + ch;
 }
 
 function titleBlock(ctx: SheetContext, g: Deco): void {
-  const { titleBlock: b, u } = g.L;
   const { set, sheet, family } = ctx;
   const tb = set.titleBlock;
   const basis = family.basis;

@@ -12,23 +12,29 @@ import { BIAXIAL_TABLE_COLUMNS, biaxialCellRecord, type BiaxialTable } from '../
 import { levelSymbol } from '../config/describe.js';
 import { sig } from '../chart/lookup-table.js';
 
+/** The sheet's parameters as both tables' JSON gives them (`chart` after the title on biaxial sheets). */
+function sheetRecord(sheet: ResolvedSheet, chart?: 'biaxial') {
+  return {
+    index: sheet.index,
+    title: sheet.title,
+    ...(chart ? { chart } : {}),
+    shape: describeShape(sheet.shape),
+    fc: sheet.fc,
+    fy: sheet.fy,
+    basisOptions: sheet.basisOptions,
+    gamma: sheet.gamma,
+    ...(sheet.gammaB !== undefined ? { gammaB: sheet.gammaB } : {}),
+    arrangement: { ...sheet.arrangement, text: describeArrangement(sheet.arrangement) },
+    transverse: sheet.transverse,
+  };
+}
+
 export function tableJson(set: ResolvedChartSet, sheet: ResolvedSheet, basis: Basis, table: LookupTable, primary: FamilyKind, generator: string): string {
   const dimless = set.normalisation === 'dimensionless';
   const doc = {
     generator,
     set: set.name,
-    sheet: {
-      index: sheet.index,
-      title: sheet.title,
-      shape: describeShape(sheet.shape),
-      fc: sheet.fc,
-      fy: sheet.fy,
-      basisOptions: sheet.basisOptions,
-      gamma: sheet.gamma,
-      ...(sheet.gammaB !== undefined ? { gammaB: sheet.gammaB } : {}),
-      arrangement: { ...sheet.arrangement, text: describeArrangement(sheet.arrangement) },
-      transverse: sheet.transverse,
-    },
+    sheet: sheetRecord(sheet),
     basis: { code: basis.code, title: basis.title, factors: basis.factorSummary, symbols: basis.symbols },
     units: set.units,
     normalisation: set.normalisation,
@@ -60,20 +66,7 @@ export function biaxialTableJson(set: ResolvedChartSet, sheet: ResolvedSheet, fa
   const doc = {
     generator,
     set: set.name,
-    sheet: {
-      index: sheet.index,
-      title: sheet.title,
-      chart: 'biaxial',
-      shape: describeShape(sheet.shape),
-      fc: sheet.fc,
-      fy: sheet.fy,
-      basisOptions: sheet.basisOptions,
-      gamma: sheet.gamma,
-      ...(family.gammaX !== undefined ? { gammaB: family.gammaX } : {}),
-      arrangement: { ...sheet.arrangement, text: describeArrangement(sheet.arrangement) },
-      transverse: sheet.transverse,
-      axial_levels: table.levels.map((v) => sig(v) + 0),
-    },
+    sheet: { ...sheetRecord(sheet, 'biaxial'), axial_levels: table.levels.map((v) => sig(v) + 0) },
     basis: { code: basis.code, title: basis.title, factors: basis.factorSummary, symbols: sy },
     units: set.units,
     normalisation: set.normalisation,
