@@ -6,7 +6,7 @@
 import type { Box } from './layout.js';
 import type { TextRow } from './sheet-data.js';
 import type { VlSpec } from './spec.js';
-import { chartConfig, COLOURS, round2, TEXT_STYLES, type TextStyle } from './style.js';
+import { chartConfig, COLOURS, round2, textLayer, type TextStyle } from './style.js';
 
 export interface ContourPoint { i: number; Mx: number; My: number }
 export interface ContourLoad { id: string; Mx: number; My: number; governing: 0 | 1 }
@@ -44,18 +44,7 @@ export function contourSpec(c: ContourPlot): VlSpec {
   const dom = [-c.extent, c.extent];
   const x = { field: 'Mx', type: 'quantitative', scale: { domain: dom, nice: false, zero: false } };
   const y = { field: 'My', type: 'quantitative', scale: { domain: dom, nice: false, zero: false } };
-  const raw = (field: string) => ({ field, type: 'quantitative' as const, scale: null });
   const gov = (v: 0 | 1) => [{ filter: `datum.governing === ${v}` }];
-  const textLayer = (style: TextStyle) => {
-    const s = TEXT_STYLES[style];
-    return {
-      name: `text_${style}`,
-      data: { name: 'texts' },
-      transform: [{ filter: `datum.style === '${style}'` }],
-      mark: { type: 'text', align: s.align, baseline: 'alphabetic', fontSize: r2(s.size * u), fontWeight: s.weight, color: s.colour },
-      encoding: { x: raw('x'), y: raw('y'), text: { field: 'text' }, order: { field: 'z', type: 'quantitative' } },
-    };
-  };
   const styles = [...new Set(c.texts.map((t) => t.style))].sort() as TextStyle[];
   const label = (name: string, v: 0 | 1, extra: Record<string, unknown>) => ({
     name,
@@ -113,7 +102,7 @@ export function contourSpec(c: ContourPlot): VlSpec {
       label('contour_labels', 0, { color: COLOURS.ink }),
       label('contour_governing_halo', 1, { stroke: COLOURS.paper, strokeWidth: 3, strokeJoin: 'round' }),
       label('contour_governing_label', 1, { color: COLOURS.caution }),
-      ...styles.map(textLayer),
+      ...styles.map((s) => textLayer(s, u)),
     ],
   };
 }

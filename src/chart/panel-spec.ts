@@ -5,7 +5,7 @@
  */
 import type { TemplateParams } from './sheet-data.js';
 import type { VlSpec } from './spec.js';
-import { chartConfig, COLOURS, round2, TEXT_STYLES, type TextStyle } from './style.js';
+import { chartConfig, COLOURS, pageFrame, round2, TEXT_STYLES, textLayer, type TextStyle } from './style.js';
 
 const raw = (field: string) => ({ field, type: 'quantitative' as const, scale: null });
 const lit = (field: string) => ({ field, type: 'nominal' as const, scale: null });
@@ -14,29 +14,9 @@ const z = { field: 'z', type: 'quantitative' as const };
 export function panelTemplate(t: TemplateParams): VlSpec {
   const L = t.layout;
   const u = L.u;
-  const textLayer = (style: TextStyle) => {
-    const s = TEXT_STYLES[style];
-    return {
-      name: `text_${style}`,
-      data: { name: 'texts' },
-      transform: [{ filter: `datum.style === '${style}'` }],
-      mark: { type: 'text', align: s.align, baseline: 'alphabetic', fontSize: round2(s.size * u), fontWeight: s.weight, color: s.colour },
-      encoding: { x: raw('x'), y: raw('y'), text: { field: 'text' }, order: z },
-    };
-  };
   const labelMark = { type: 'text', align: 'center', baseline: 'middle', fontSize: round2(0.72 * u), fontWeight: 'bold' };
   return {
-    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
-    width: round2(L.plot.w),
-    height: round2(L.plot.h),
-    autosize: { type: 'none' },
-    padding: {
-      left: round2(L.plot.x),
-      top: round2(L.plot.y),
-      right: round2(L.page.w - L.plot.x - L.plot.w),
-      bottom: round2(L.page.h - L.plot.y - L.plot.h),
-    },
-    background: COLOURS.paper,
+    ...pageFrame(L),
     config: { ...chartConfig(u), view: { stroke: null } },
     layer: [
       { name: 'rects', data: { name: 'rects' }, mark: { type: 'rect' }, encoding: { x: raw('x'), x2: { field: 'x2' }, y: raw('y'), y2: { field: 'y2' }, fill: lit('fill'), stroke: lit('stroke'), strokeWidth: raw('strokeWidth'), order: z } },
@@ -51,7 +31,7 @@ export function panelTemplate(t: TemplateParams): VlSpec {
       { name: 'contour_labels', data: { name: 'curveLabels' }, mark: labelMark, encoding: { x: raw('M'), y: raw('P'), text: { field: 'text' }, fill: lit('colour'), order: z } },
       { name: 'rings', data: { name: 'rings' }, mark: { type: 'point', shape: 'circle', filled: false, strokeWidth: 1.1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), stroke: lit('fill'), order: z } },
       { name: 'dots', data: { name: 'dots' }, mark: { type: 'point', shape: 'circle', filled: true, opacity: 1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), fill: lit('fill'), order: z } },
-      ...(Object.keys(TEXT_STYLES) as TextStyle[]).map(textLayer),
+      ...(Object.keys(TEXT_STYLES) as TextStyle[]).map((s) => textLayer(s, u)),
     ],
   };
 }

@@ -6,7 +6,7 @@
  */
 import type { SheetData, TemplateParams } from './sheet-data.js';
 import { tickFormat, tickValues } from './axes.js';
-import { chartConfig, COLOURS, round2, TEXT_STYLES, type TextStyle } from './style.js';
+import { chartConfig, COLOURS, pageFrame, round2, TEXT_STYLES, textLayer, type TextStyle } from './style.js';
 import { panelTemplate } from './panel-spec.js';
 
 export type VlSpec = Record<string, unknown>;
@@ -40,16 +40,6 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
     mark: { type: 'line', ...mark },
     encoding: { x, y, detail: { field: 'line' }, order: { field: 'i' } },
   });
-  const textLayer = (style: TextStyle) => {
-    const s = TEXT_STYLES[style];
-    return {
-      name: `text_${style}`,
-      data: { name: 'texts' },
-      transform: [{ filter: `datum.style === '${style}'` }],
-      mark: { type: 'text', align: s.align, baseline: 'alphabetic', fontSize: Math.round(s.size * u * 100) / 100, fontWeight: s.weight, color: s.colour },
-      encoding: { x: raw('x'), y: raw('y'), text: { field: 'text' }, order: z },
-    };
-  };
 
   const layers: Record<string, unknown>[] = [
     { name: 'frame', data: { name: 'frame' }, mark: { type: 'point', opacity: 0 }, encoding: { x, y } },
@@ -96,22 +86,12 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
     { name: 'rules', data: { name: 'rules' }, mark: { type: 'rule' }, encoding: { x: raw('x'), x2: { field: 'x2' }, y: raw('y'), y2: { field: 'y2' }, stroke: lit('stroke'), strokeWidth: raw('strokeWidth'), order: z } },
     { name: 'rings', data: { name: 'rings' }, mark: { type: 'point', shape: 'circle', filled: false, strokeWidth: 1.1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), stroke: lit('fill'), order: z } },
     { name: 'dots', data: { name: 'dots' }, mark: { type: 'point', shape: 'circle', filled: true, opacity: 1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), fill: lit('fill'), order: z } },
-    ...(Object.keys(TEXT_STYLES) as TextStyle[]).map(textLayer),
+    ...(Object.keys(TEXT_STYLES) as TextStyle[]).map((s) => textLayer(s, u)),
   );
   if (o) layers.splice(layers.findIndex((l) => l.name === 'rules'), 0, ...overlayLayers(x, y, u, o.loadRays !== false));
 
   return {
-    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
-    width: round2(L.plot.w),
-    height: round2(L.plot.h),
-    autosize: { type: 'none' },
-    padding: {
-      left: round2(L.plot.x),
-      top: round2(L.plot.y),
-      right: round2(L.page.w - L.plot.x - L.plot.w),
-      bottom: round2(L.page.h - L.plot.y - L.plot.h),
-    },
-    background: COLOURS.paper,
+    ...pageFrame(L),
     config: chartConfig(u),
     encoding: {
       x: { ...x, axis: { title: t.xTitle, orient: 'bottom', ...(a && !o ? { values: tickValues(a.M), format: tickFormat(a.M) } : { tickCount: 12 }) } },

@@ -93,3 +93,32 @@ export function chartConfig(u: number) {
     },
   };
 }
+
+/** A vega-lite layer drawing the `texts` rows of one style, in page points (`scale: null`); sheets, panels and contour plots share it. */
+export function textLayer(style: TextStyle, u: number) {
+  const s = TEXT_STYLES[style];
+  return {
+    name: `text_${style}`,
+    data: { name: 'texts' },
+    transform: [{ filter: `datum.style === '${style}'` }],
+    mark: { type: 'text', align: s.align, baseline: 'alphabetic', fontSize: round2(s.size * u), fontWeight: s.weight, color: s.colour },
+    encoding: { x: { field: 'x', type: 'quantitative' as const, scale: null }, y: { field: 'y', type: 'quantitative' as const, scale: null }, text: { field: 'text' }, order: { field: 'z', type: 'quantitative' as const } },
+  };
+}
+
+/** The top of a sheet's vega-lite spec: the plot area placed on the page by padding, on paper. */
+export function pageFrame(L: { plot: { x: number; y: number; w: number; h: number }; page: { w: number; h: number } }) {
+  return {
+    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
+    width: round2(L.plot.w),
+    height: round2(L.plot.h),
+    autosize: { type: 'none' },
+    padding: {
+      left: round2(L.plot.x),
+      top: round2(L.plot.y),
+      right: round2(L.page.w - L.plot.x - L.plot.w),
+      bottom: round2(L.page.h - L.plot.y - L.plot.h),
+    },
+    background: COLOURS.paper,
+  };
+}
