@@ -82,7 +82,7 @@ export function concreteResultant(shape: Shape, law: ConcreteLaw, p: StrainProfi
 
 /**
  * Bar resultant with the displaced concrete deducted where a bar sits in compressed concrete
- * (common practice; see the note on reference-values section 1 in the tests).
+ * (common practice; Nilson, Darwin & Dolan, Design of Concrete Structures, 14th ed., Example 8.1 deducts it).
  */
 export function barResultant(bars: readonly Bar[], depth: number, steel: SteelLaw, concrete: ConcreteLaw, p: StrainProfile): Resultant {
   let P = 0;

@@ -124,7 +124,7 @@ describe('unequal counts: a [3, 5] rectangle (issue 15)', () => {
 });
 
 describe('Mxo against outside chart points at the balanced axial load', () => {
-  // Reference values §2 (first principles): ACI 318-19, f′c 4 ksi, fy 60 ksi, γ 0.80, bars on two faces; the
+  // First principles (hand strain compatibility, ACI 318-19 22.2): ACI 318-19, f′c 4 ksi, fy 60 ksi, γ 0.80, bars on two faces; the
   // nominal contour at the balanced Pn/(b·h) meets My = 0 at the balanced Mn/(b·h²). Tolerance 0.1 % (its digits).
   const basis = ACI_318_19.resolve({ units: 'us', fc: 4, fy: 60, transverse: 'tied' });
   const rows: [number, number, number][] = [
@@ -138,7 +138,7 @@ describe('Mxo against outside chart points at the balanced axial load', () => {
       const f = computeBiaxialFamily({ basis, shape: square, arrangement: { kind: 'two-faces', barsPerFace: 3 }, gamma: 0.8, rhos: [rho], levels: [P / 4], model: 'nominal' });
       expectClose(f.contours[0]![0]!.mxo, M, 0.001);
     });
-  // Reference values §4 (first principles): EN 1992-1-1, C30/37 (fcd 20 MPa), B500 (fyd 434.8 MPa, horizontal
+  // First principles (hand strain compatibility, EN 1992-1-1:2004 6.1 and 3.1.7 parabola–rectangle): EN 1992-1-1, C30/37 (fcd 20 MPa), B500 (fyd 434.8 MPa, horizontal
   // branch), parabola–rectangle, γ 0.80, bars on two faces: balanced ν 0.4444 / μ 0.2059 at ρ 0.01, 0.4394 / 0.2908 at 0.02.
   const en = EN_1992_1_1.resolve({ units: 'si', fc: 30, fy: 500, transverse: 'tied' });
   for (const [rho, nu, mu] of [
@@ -152,7 +152,7 @@ describe('Mxo against outside chart points at the balanced axial load', () => {
 });
 
 describe('symmetry of square sections with equal counts', () => {
-  it('mx(ψ) = my(90° − ψ) to 1e-7 relative, one quadrant drawn (reference values §6: a doubly symmetric section gives a contour symmetric about both axes)', () => {
+  it('mx(ψ) = my(90° − ψ) to 1e-7 relative, one quadrant drawn (common practice: a doubly symmetric section gives a contour symmetric about both axes)', () => {
     const f = computeBiaxialFamily({ basis: aci, shape: square, arrangement: { kind: 'four-faces', barsPerFace: 4 }, gamma: 0.7, rhos: [0.02, 0.05], levels: [0, 0.25, 0.5] });
     expect(f.quadrants).toBe('first');
     for (const row of f.contours)

@@ -65,7 +65,7 @@ describe('biaxialResultant reduces to the uniaxial section', () => {
     }
   });
 
-  it('circle at θ = 0°, 45°, 90°, 225° (a bar at the pole each time): balanced Pn = 466.1, Mn = 3663 (reference values §3, first principles)', () => {
+  it('circle at θ = 0°, 45°, 90°, 225° (a bar at the pole each time): balanced Pn = 466.1, Mn = 3663 (first principles: hand strain compatibility, ACI 318-19 22.2)', () => {
     const circle: Shape = { kind: 'circle', diameter: 20 };
     const ring = layoutBars(circle, { kind: 'ring', bars: 8 }, 6.32, { gamma: 0.7625 });
     const cs = prepareBiaxial(basis, circle, ring);

@@ -1,5 +1,5 @@
 /**
- * Normalised family points against reference-values section 2 (ACI 318-19, f′c = 4 ksi, fy = 60 ksi,
+ * Normalised family points against first-principles chart points (hand strain compatibility per ACI 318-19 22.2, f′c = 4 ksi, fy = 60 ksi,
  * γ = 0.80, bars on two faces; first principles), plus properties of the sweep.
  */
 import fc from 'fast-check';

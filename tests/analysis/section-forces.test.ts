@@ -1,8 +1,8 @@
 /**
  * Discrete strain-compatibility points against outside references.
  * Source A: Nilson, Darwin & Dolan, Design of Concrete Structures, 14th ed., Example 8.1 (inputs from memory),
- *           recomputed from first principles (reference-values section 1).
- * Source B: circular spiral column, ACI 318-19, first principles (reference-values section 3).
+ *           recomputed from first principles (ACI 318-19 22.2 strain compatibility).
+ * Source B: circular spiral column, ACI 318-19, first principles (hand strain compatibility, 22.2; D 20 in, 8 #8, f′c 4 ksi, fy 60 ksi).
  */
 import { describe, expect, it } from 'vitest';
 import { designAt, nominalAt, prepareSection, R } from '../../src/analysis/prepared-section.js';

@@ -1,6 +1,6 @@
 /**
  * Sheet → vega-lite spec (pure). Snapshot of the spec; curve order; lookup table against the core's
- * key points and against first-principles values (shared/reference-values.md §2, worked from
+ * key points and against first-principles values (hand calculation, worked from
  * ACI 318-19 22.2 strain compatibility, f′c 4 ksi, fy 60 ksi, γ 0.80, bars on two faces).
  */
 import { describe, expect, it } from 'vitest';
@@ -104,7 +104,7 @@ describe('lookup table', () => {
     });
   });
 
-  it('agrees with first-principles values (reference-values §2: f′c 4, fy 60, γ 0.80, two faces)', () => {
+  it('agrees with first-principles values (hand strain compatibility, ACI 318-19 22.2: f′c 4, fy 60, γ 0.80, two faces)', () => {
     const { built } = build();
     const row = (rho: number) => built.table.rows.find((r) => r.rhoG === rho)!;
     const pt = (rho: number, id: string) => row(rho).points.find((p) => p.id === id)!;
@@ -151,7 +151,7 @@ describe('lookup table', () => {
     const cells = bal[0]!.split(',').map(Number);
     expectClose(cells[4]!, kp.nominal!.P, 1e-5);
     expectClose(cells[6]!, kp.design!.P, 1e-5);
-    // ACI 318-19 §2 of the outside values (first principles): balanced Pn/(b·h) = 1.505 ksi at ρg 0.02
+    // ACI 318-19 22.2 strain compatibility (first principles, hand calculation): balanced Pn/(b·h) = 1.505 ksi at ρg 0.02
     expect(cells[4]!).toBeCloseTo(1.505, 2);
   });
 

@@ -1,4 +1,4 @@
-/** `pmchart table` end to end through the built CLI (npm test builds first), against reference-values section 2. */
+/** `pmchart table` end to end through the built CLI (npm test builds first), against first-principles chart points (ACI 318-19 22.2 strain compatibility, hand calculation: f′c 4 ksi, fy 60 ksi, γ 0.80, two faces). */
 import { execFileSync, spawnSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
 import { runTable } from '../../src/cli/table.js';

@@ -1,4 +1,4 @@
-/** ACI 318-19 / 318-14 basis parameters against the code tables (reference-values section 5). */
+/** ACI 318-19 / 318-14 basis parameters against the code tables (ACI 318-19 Tables 21.2.2 and 22.2.2.4.3, 22.4.2.1; ACI 318-14 21.2.2). */
 import { describe, expect, it } from 'vitest';
 import { ACI_318_14, ACI_318_19, aciBeta1, aciPhi } from '../../src/codes/aci318.js';
 import { resolveBasis } from '../../src/codes/registry.js';

@@ -155,7 +155,7 @@ describe('a ring of 6 bars in a circle: the weakest orientation governs (hand ca
     }
   });
 
-  it('the reference-values circle (8 #8, one bar at each pole) at 0° keeps its balanced point: utilisation ≥ 1 there', () => {
+  it('the first-principles spiral circle (8 #8, one bar at each pole) at 0° keeps its balanced point: utilisation ≥ 1 there', () => {
     // balanced Pn = 466.1 kip, Mn = 3663 kip·in, φ = 0.75 (first principles, D = 20 in, f′c = 4 ksi, fy = 60 ksi)
     const basis = resolveBasis('aci318-19', { units: 'us', fc: 4, fy: 60, transverse: 'spiral' });
     const res = checkColumn({

@@ -1,6 +1,6 @@
 import { readChartSet } from '../../src/config/read.js';
 
-/** A small US set around reference-values §2 (f′c 4 ksi, fy 60 ksi, γ 0.80, two faces); invented office and project. */
+/** A small US set around the first-principles chart points of ACI 318-19 22.2 strain compatibility (hand calculation; f′c 4 ksi, fy 60 ksi, γ 0.80, two faces); invented office and project. */
 export const referenceSet = (over: Record<string, unknown> = {}) =>
   readChartSet(
     JSON.stringify({
