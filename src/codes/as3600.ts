@@ -21,6 +21,7 @@ import { ERROR_CODES, PmError } from '../errors.js';
 import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
 import { rectangularBlock } from '../materials/rectangular-block.js';
 import { aciProfile } from './aci318.js';
+import { as3600BiaxialExponent } from './biaxial-exponent.js';
 import type { Basis, BasisInput, DesignCode, ResistanceModel, StrainClass, StrainProfile } from './types.js';
 
 /** AS 3600-2018 8.1.2 / 10.6.1: maximum concrete compressive strain (from memory). */
@@ -129,6 +130,9 @@ function resolveAs3600(input: BasisInput): Basis {
     minimumBarRule: 'at least 4 bars in a rectangular and 6 in a circular arrangement (AS 3600-2018 10.7.4, from memory)',
     factorSummary: `φ 0.65–0.85 = 1.24 − 13·kuo/12 (Table 2.2.2, Class N) · α2 ${fmt(alpha2)} · γ₂ ${fmt(gammaBlock)} · α1 ${fmt(alpha1)}`,
     slendernessMethod: 'moment-magnification-as3600',
+    // 10.6.4 (from memory): αn from N*/(0.6·Nuo), Nuo = α1·f′c·(Ag − As) + fsy·As (10.6.2.2)
+    biaxialExponent: as3600BiaxialExponent,
+    biaxialReferenceLoad: (Ag: number, As: number) => 0.6 * (alpha1 * fc * (Ag - As) + fsy * As),
     parameters: {
       'α2': r4(alpha2),
       'γ₂ (block depth)': r4(gammaBlock),

@@ -232,7 +232,8 @@ export function aciMomentMagnification(basis: Basis, section: SlendernessSection
   const { shape, bars } = section;
   const h = depthOf(shape);
   const { effectiveLength: klu, M1, M2, Pu } = input;
-  const ratio = M2 > 0 ? M1 / M2 : 0;
+  // no end moment (M2 = 0): the single-curvature default M1/M2 = −1 (README; the most severe case, conservative)
+  const ratio = M2 > 0 ? M1 / M2 : -1;
 
   const r = shape.kind === 'rectangle' ? 0.3 * h : 0.25 * h;
   steps.push({ label: `r = ${shape.kind === 'rectangle' ? '0.30·h' : '0.25·D'} (6.2.5.2)`, value: r, unit: lu });
@@ -430,8 +431,15 @@ export function enNominalCurvature(basis: Basis, section: SlendernessSection, in
   });
   const invR = Math.max(0, Kr) * Kphi * invR0;
   steps.push({ label: '1/r = Kr·Kφ·1/r0 (Eq. 5.34)', value: invR, unit: '1/mm' });
-  const e2 = (invR * l0 * l0) / 10;
-  steps.push({ label: 'e2 = (1/r)·l0²/c, c = 10 (Eq. 5.33)', value: e2, unit: 'mm' });
+  // 5.8.8.2(4): c = 10 normally; a constant first-order moment (rm = 1, M01 = M02) takes the lower limit 8
+  const constantMoment = rm >= 1 - 1e-9;
+  const c = constantMoment ? 8 : 10;
+  const e2 = (invR * l0 * l0) / c;
+  steps.push({
+    label: constantMoment ? 'e2 = (1/r)·l0²/c, c = 8 (5.8.8.2(4), constant first-order moment)' : 'e2 = (1/r)·l0²/c, c = 10 (5.8.8.2(4), Eq. 5.33)',
+    value: e2,
+    unit: 'mm',
+  });
   const M2nd = NEd * e2;
   const MEd = M0Ed + M2nd;
   steps.push({ label: 'M2 = NEd·e2 (5.8.8.2(3))', value: M2nd / 1e6, unit: 'kN·m' });
@@ -466,7 +474,9 @@ export function as3600MomentMagnification(basis: Basis, section: SlendernessSect
   const D = depthOf(shape);
   const Ag = grossA(shape);
   const { effectiveLength: Le, M1, M2, Pu: N } = input;
-  const ratio = M2 > 0 ? M1 / M2 : -1;
+  // 10.3.1, 10.4.2 (from memory): M1*/M2* is taken as −1 when |M2*| ≤ 0.05·D·N* (and with no end moment)
+  const smallM2 = !(M2 > 0.05 * D * N);
+  const ratio = smallM2 ? -1 : M1 / M2;
   const knownBars = section.positionsOnly ? section.bars.map((b) => ({ ...b, area: 0 })) : section.bars;
   const As = knownBars.reduce((s, b) => s + b.area, 0);
   const Nuo = basis.nominal.squash.concreteStress * (Ag - As) + basis.nominal.squash.steelStress * As;
@@ -475,7 +485,10 @@ export function as3600MomentMagnification(basis: Basis, section: SlendernessSect
   steps.push({ label: `r = ${shape.kind === 'rectangle' ? '0.3·D' : '0.25·D'} (10.5.2)`, value: r, unit: 'mm' });
   const slenderness = Le / r;
   steps.push({ label: 'Le/r', value: slenderness });
-  steps.push({ label: 'M1*/M2* (negative in single curvature, 10.3.1)', value: ratio });
+  steps.push({
+    label: smallM2 ? 'M1*/M2* = −1: |M2*| ≤ 0.05·D·N* (10.3.1, from memory)' : 'M1*/M2* (negative in single curvature, 10.3.1)',
+    value: ratio,
+  });
   steps.push({ label: `Nuo = α1·f′c·(Ag − As) + fsy·As (10.6.2.2)${section.positionsOnly ? ', bars not given: As = 0' : ''}`, value: Nuo, unit: 'N' });
   const q = N / (0.6 * Nuo);
   const alphaC = q >= 0.15 ? Math.sqrt(Math.max(0, 2.25 - 2.5 * q)) : Math.sqrt(1 / (3.5 * q));
@@ -488,7 +501,12 @@ export function as3600MomentMagnification(basis: Basis, section: SlendernessSect
   steps.push({ label: 'M*min = N*·0.05·D (10.1.2)', value: Mmin, unit: 'N·mm' });
   const M2c = Math.max(M2, Mmin);
   steps.push({ label: 'M2* used = max(M2*, N*·0.05·D)', value: M2c, unit: 'N·mm' });
-  if (neglected) return { method, neglected, delta: 1, magnifiedMoment: M2c, firstOrderMoment: M2c, ok: true, warnings, steps };
+  // 10.5.1 (from memory): the simplified column rules apply up to Le/r = 120; beyond, a rigorous analysis is needed
+  const withinScope = slenderness <= 120 * (1 + 1e-12);
+  steps.push({ label: 'Le/r ≤ 120, the scope of the moment magnifier (10.5.1, from memory)', value: withinScope });
+  if (!withinScope) warnings.push('Le/r exceeds 120 (AS 3600-2018 10.5.1, from memory): outside the moment-magnifier method; a rigorous analysis is needed');
+  const scopeClause = withinScope ? {} : { limitClause: 'AS 3600-2018 10.5.1 (Le/r ≤ 120, from memory)' };
+  if (neglected) return { method, neglected, delta: 1, magnifiedMoment: M2c, firstOrderMoment: M2c, ok: withinScope, ...scopeClause, warnings, steps };
 
   // balanced moment Mub at kuo = εcu/(εcu + εsy) about the bending axis (bars y toward the compression face)
   const sec = prepareBiaxial(basis, shape, knownBars);
@@ -511,7 +529,7 @@ export function as3600MomentMagnification(basis: Basis, section: SlendernessSect
     steps.push({ label: 'km = 1.0, transverse loads between the ends (10.4.2)', value: km });
   } else {
     km = Math.max(0.4, 0.6 - 0.4 * ratio);
-    steps.push({ label: 'km = 0.6 − 0.4·M1*/M2* ≥ 0.4 (10.4.2)', value: km });
+    steps.push({ label: smallM2 ? 'km = 0.6 − 0.4·(−1) = 1.0, M1*/M2* taken as −1 (10.4.2, from memory)' : 'km = 0.6 − 0.4·M1*/M2* ≥ 0.4 (10.4.2)', value: km });
   }
   const stable = N < Nc;
   const delta = stable ? Math.max(1, km / (1 - N / Nc)) : Infinity;
@@ -520,7 +538,17 @@ export function as3600MomentMagnification(basis: Basis, section: SlendernessSect
   if (!stable) warnings.push('N* ≥ Nc: the column is unstable by AS 3600-2018 10.4.2; enlarge the section or brace it');
   const magnified = delta * M2c;
   steps.push({ label: 'M* = δb·M2* (10.4.2)', value: magnified, unit: 'N·mm' });
-  return { method, neglected: false, delta, magnifiedMoment: magnified, firstOrderMoment: M2c, ok: stable, ...(stable ? {} : { limitClause: 'AS 3600-2018 10.4.2 (N* ≥ Nc)' }), warnings, steps };
+  return {
+    method,
+    neglected: false,
+    delta,
+    magnifiedMoment: magnified,
+    firstOrderMoment: M2c,
+    ok: stable && withinScope,
+    ...(!stable ? { limitClause: 'AS 3600-2018 10.4.2 (N* ≥ Nc)' } : scopeClause),
+    warnings,
+    steps,
+  };
 }
 
 /** CSA A23.3-19 8.6.2.3 (from memory): Ec = 4500·√f′c MPa for normal-density concrete. */
