@@ -17,6 +17,8 @@
  *     kuo = c/do with do the depth of the extreme tension bar; 0.65 at Nuo;
  *   - minimum eccentricity 0.05·D (10.1.2); column steel 1 %–4 % of Ag (10.7.1).
  */
+import { AS_3600_RULES } from './rulebooks.js';
+import { AS_3600_SLENDERNESS } from './slenderness-as3600.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
 import { rectangularBlock } from '../materials/rectangular-block.js';
@@ -129,7 +131,8 @@ function resolveAs3600(input: BasisInput): Basis {
     minimumBarCount: (shape: 'rectangle' | 'circle') => (shape === 'circle' ? 6 : 4),
     minimumBarRule: 'at least 4 bars in a rectangular and 6 in a circular arrangement (AS 3600-2018 10.7.4, from memory)',
     factorSummary: `φ 0.65–0.85 = 1.24 − 13·kuo/12 (Table 2.2.2, Class N) · α2 ${fmt(alpha2)} · γ₂ ${fmt(gammaBlock)} · α1 ${fmt(alpha1)}`,
-    slendernessMethod: 'moment-magnification-as3600',
+    slenderness: AS_3600_SLENDERNESS,
+    rules: AS_3600_RULES,
     // 10.6.4 (from memory): αn from N*/(0.6·Nuo), Nuo = α1·f′c·(Ag − As) + fsy·As (10.6.2.2)
     biaxialExponent: as3600BiaxialExponent,
     biaxialReferenceLoad: (Ag: number, As: number) => 0.6 * (alpha1 * fc * (Ag - As) + fsy * As),

@@ -201,14 +201,14 @@ export function slendernessRows(r: ColumnLoadResult, c: ColumnCheckFrame): { met
   const out: { method: string; cells: string[] }[] = [];
   for (const [axis, sl] of [['x', e.x], ['y', e.y]] as const) {
     if (!sl) continue;
-    const st = (p: string) => sl.steps.find((x) => x.label.startsWith(p))?.value;
+    const st = (key: string) => sl.steps.find((x) => x.key === key)?.value;
     out.push({
       method: sl.method,
       cells: [
         r.id,
         axis,
-        f(((st('kℓu/r') ?? st('λ = l0/i') ?? st('Le/r')) as number | undefined) ?? null, 3),
-        f(((st('limit') ?? st('λlim')) as number | undefined) ?? null, 3),
+        f((st('klu-over-r') as number | undefined) ?? null, 3),
+        f((st('limit') as number | undefined) ?? null, 3),
         sl.neglected ? 'yes' : 'no',
         f(sl.delta, 4),
         M(sl.firstOrderMoment),
@@ -575,7 +575,7 @@ function slenderJson(s: SlendernessResult, u: UnitSystem) {
     ok: s.ok,
     method: s.method,
     warnings: s.warnings,
-    steps: s.steps.map((st) => ({ label: st.label, value: typeof st.value === 'number' ? num(st.value) : st.value, ...(st.unit ? { unit: st.unit } : {}) })),
+    steps: s.steps.map((st) => ({ key: st.key, clause: st.clause, label: st.label, value: typeof st.value === 'number' ? num(st.value) : st.value, ...(st.unit ? { unit: st.unit } : {}) })),
   };
 }
 
