@@ -223,6 +223,12 @@ export interface BasisSymbols {
   /** the slenderness table's moments: first-order and second-order ("M2"/"Mc" for ACI, "M0Ed"/"MEd" for EN); absent: M2, Mc */
   firstOrderMoment?: string;
   secondOrderMoment?: string;
+  /** symbol of the extreme-tension-bar strain in tables and notes: "εt" (ACI 318 21.2.2); absent: εt */
+  tensionStrain?: string;
+  /** symbol of the squash load: "Po" (ACI 318 22.4.2.2), "Nuo" (AS 3600 10.6.2.2); absent: Po */
+  squashLoad?: string;
+  /** words for the axial limit of the design curve: "axial cap" (ACI 318 22.4.2.1); absent: axial cap */
+  axialCap?: string;
 }
 
 /** ACI 318-19 21.2.2 words for the strain classes. */
