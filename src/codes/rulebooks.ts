@@ -40,7 +40,6 @@ export const ACI_318_14_RULES: readonly RuleDef[] = [...aciSection('ACI 318-14')
 /** EN 1992-1-1:2004 with the recommended values. */
 export const EN_1992_RULES: readonly RuleDef[] = [
   { id: 'biaxial-method', clause: '5.8.9(4)', title: 'load contour (MEdz/MRdz)^a + (MEdy/MRdy)^a ≤ 1, a from NEd/NRd by Eq. 5.39 (a = 2 for circles); exact surface beside', source: 'from memory' },
-  { id: 'biaxial-separate-check', clause: '5.8.9(3)', title: 'each axis is checked separately first, with its own imperfection', source: 'from memory' },
   ...EN_1992_SLENDERNESS.rules,
 ];
 
@@ -62,3 +61,6 @@ export const CSA_A23_RULES: readonly RuleDef[] = [
   { id: 'biaxial-method', clause: 'Bresler (1960)', title: 'exact strain-compatibility surface governs; Bresler reciprocal load and load contour (α = 1.5) shown beside', source: 'from memory' },
   ...CSA_A23_SLENDERNESS.rules,
 ];
+
+/** The sources a rule may name (RuleDef.source). */
+export const RULE_SOURCES: readonly RuleDef['source'][] = ['published', 'from memory'];
