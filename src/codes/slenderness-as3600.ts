@@ -21,7 +21,8 @@ export const AS_3600_SLENDERNESS_RULES: readonly RuleDef[] = [
   { id: 'slenderness-limit', clause: '10.3.1(b)', title: 'short braced column: Le/r ≤ 25, or ≤ αc·(38 − f′c/15)·(1 + M1*/M2*)', source: 'from memory' },
   { id: 'radius-of-gyration', clause: '10.5.2', title: 'r = 0.3D (rectangle), 0.25D (circle)', source: 'from memory' },
   { id: 'end-moment-convention', clause: '10.3.1', title: 'M1*/M2* negative in single curvature; taken as −1 when |M2*| ≤ 0.05·D·N*', source: 'from memory' },
-  { id: 'min-moment', clause: '10.1.2', title: 'design moment about each principal axis not less than N*·0.05·D', source: 'published' },
+  // the text found is AS 3600-2009's 10.1.2 (the same words are recalled for 2018, not confirmed)
+  { id: 'min-moment', clause: '10.1.2', title: 'design moment about each principal axis not less than N*·0.05·D', source: 'from memory' },
   { id: 'magnifier', clause: '10.4.2', title: 'δb = km/(1 − N*/Nc) ≥ 1, km = 0.6 − 0.4·M1*/M2* ≥ 0.4 (1.0 with transverse loads)', source: 'from memory' },
   { id: 'buckling-load', clause: '10.4.4', title: 'Nc = (π²/Le²)·182·do·(φ·Mub)/(1 + βd), φ = 0.6', source: 'from memory' },
   { id: 'stability-limit', clause: '10.4.2', title: 'N* < Nc, else unstable', source: 'from memory' },

@@ -103,6 +103,17 @@ describe('ACI 318-14 cites its own clauses around 6.6.4 (6.2.5, 6.2.5.1, 6.2.6; 
     expect(r.delta).toBe(Infinity);
     expect(r.limitClause).toBe('ACI 318-14 6.6.4.5.2 (Pu ≥ 0.75·Pc)');
   });
+  it('ACI 318-14: M1 = M2 = 0 is single curvature, M1/M2 = −1: limit 34 − 12 = 22 < kℓu/r = 144/4.8 = 30, slender', () => {
+    const r = slendernessCheck(basis, section, { ...input, effectiveLength: 144, M1: 0, M2: 0 });
+    expectClose(byKey(r, 'end-moment-ratio'), -1, 1e-12);
+    expectClose(byKey(r, 'limit'), 22, 1e-12);
+    expect(r.neglected).toBe(false);
+  });
+  it('ACI 318-14: Pn,max = 0.80·Po tied, 0.85·Po spiral (22.4.2.1); load contour α = 1.5 (Bresler, 1960, from memory)', () => {
+    expect(basis.nominal.capFactor({})).toBe(0.8);
+    expect(resolveBasis('aci318-14', { units: 'us', fc: 4, fy: 60, transverse: 'spiral' }).nominal.capFactor({})).toBe(0.85);
+    expect(basis.biaxialExponent!(0.3, 'rectangle').alpha).toBe(1.5);
+  });
   it('the 318-19 basis keeps 6.2.5.1(b), 6.2.5.2 and 6.2.5.3', () => {
     const r = slendernessCheck(resolveBasis('aci318-19', { units: 'us', fc: 4, fy: 60, transverse: 'tied' }), section, input);
     expect(r.steps.find((s) => s.key === 'limit')!.clause).toBe('6.2.5.1(b)');
