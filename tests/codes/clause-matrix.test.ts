@@ -57,3 +57,16 @@ describe('clause matrix: every rule of every rulebook has a test row', () => {
     for (const id of Object.keys(CLAUSE_MATRIX)) expect(Object.keys(DESIGN_CODES)).toContain(id);
   });
 });
+
+describe('the README lists every rule of every basis with its clause and source', () => {
+  const readme = readFileSync(resolve(root, 'README.md'), 'utf8');
+  for (const code of Object.values(DESIGN_CODES) as DesignCode[]) {
+    it(`${code.title}: a row per rule in the rulebook section`, () => {
+      const start = readme.indexOf(`(\`${code.id}\`)\n\n| rule | clause |`);
+      expect(start, `no rule table for ${code.id} in README.md`).toBeGreaterThan(0);
+      const table = readme.slice(start, readme.indexOf('\n\n', readme.indexOf('| --- |', start)));
+      for (const rule of bases(code)[0]!.rules) expect(table).toContain(`| \`${rule.id}\` | ${rule.clause} |`);
+      for (const rule of bases(code)[0]!.rules) expect(table).toMatch(new RegExp(`\\| \`${rule.id}\` \\|[^\\n]*\\| ${rule.source} \\|`));
+    });
+  }
+});
