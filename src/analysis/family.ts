@@ -322,7 +322,7 @@ function keyPointsFor(section: PreparedSection, rho: number, stateDepths: readon
   const topD = pointAt(section, rho, C_OVER_H_MAX, 'design')!;
   out.push({
     id: 'pure-compression',
-    label: 'pure compression (Po)',
+    label: `pure compression (${basis.symbols.squashLoad ?? 'Po'})`,
     nominal: { ...top, P: section.squash('nominal', rho) },
     design: { ...topD, P: topD.phi * section.squash('design', rho) },
   });

@@ -192,7 +192,7 @@ function readingNotes(ctx: BiaxialSheetContext, g: Deco, top: number, bottom: nu
   const steps = [
     `1. Normalise the factored load: level ${P}/(${ns}·Ag); mx = ${M}x/${by('Ag·h')} and my = ${M}y/${by('Ag·b')}, with h along y and b along x.`,
     `2. Take the panels whose levels bracket the load's. In each, the point ${family.quadrants === 'first' ? '(|mx|, |my|)' : '(mx, my), signs kept,'} lies inside the contour of every ${key} that carries the load; interpolate between contours, then linearly between the two levels.`,
-    `3. No contour of a ${key} at a level: the level is above that ${key}'s axial cap, which cannot carry the load.`,
+    `3. No contour of a ${key} at a level: the level is above that ${key}'s ${sy.axialCap ?? 'axial cap'}, which cannot carry the load.`,
     '4. The fitted α is a least-squares average: the exact contour lies up to the misfit inside or outside the fitted curve, so a check with α is only as close as its misfit; read final values off the drawn contours.',
   ];
   const fs = g.size('bodySmall');
@@ -270,7 +270,7 @@ function panel(ctx: BiaxialSheetContext, g: Deco, b: Box, s: { x: AxisScale; y: 
     const sym = RATIO_SYMBOL[set.ratios.kind];
     const idx = contours.map((c, k) => (c.reachable ? -1 : k)).filter((k) => k >= 0);
     const names = idx.map((k) => curveKeyText(set, family.rhos[k]!, k).replace(/^\S+ /, ''));
-    const what = level > 0 ? 'above the axial cap' : 'beyond pure tension';
+    const what = level > 0 ? `above the ${family.basis.symbols.axialCap ?? 'axial cap'}` : 'beyond pure tension';
     const text = missing.length === contours.length ? `every ${sym}: ${what}` : `${sym} ${names.length > 2 ? `${names[0]}–${names[names.length - 1]}` : names.join(', ')}: ${what}`;
     const tw = g.width('caption', text);
     const tx = family.quadrants === 'first' ? b.x + b.w - tw - 0.6 * u : b.x + 0.6 * u;
@@ -366,7 +366,7 @@ export function biaxialNotes(set: ResolvedChartSet, family: BiaxialFamily): stri
     set.normalisation === 'dimensionless'
       ? `Mx is divided by Ag·h and My by Ag·b, both also by ${ns} = ${stressText(basis.normalisingStress, set.units)}; h is the depth along y, b the width along x.`
       : `Mx is divided by Ag·h and My by Ag·b, in ${su}; h is the depth along y, b the width along x.`,
-    `Axial level: the factored axial load over ${ns}·Ag (compression positive). A ${RATIO_SYMBOL[set.ratios.kind]} whose axial cap lies below a level has no contour there.`,
+    `Axial level: the factored axial load over ${ns}·Ag (compression positive). A ${RATIO_SYMBOL[set.ratios.kind]} whose ${basis.symbols.axialCap ?? 'axial cap'} lies below a level has no contour there.`,
     'Short column: slenderness, creep and second-order effects are not included; enter moments already magnified about each axis.',
   ];
   if (set.ratios.kind === 'omega') {

@@ -89,7 +89,7 @@ function contourPageTexts(
   }
   heading('Conventions');
   para('body', 'x runs across the width b, y along the depth h. Mx bends the depth h (the chart plane), My bends the width b. Both axes share one scale, so the contour keeps its true shape.');
-  para('body', `Each point is the ${b.symbols.designFamily} moment pair of one neutral-axis angle (${PLOT_CONTOUR_POINTS} over a full turn) with the depth set so that P = Pu; the axial cap is checked for Pu.`);
+  para('body', `Each point is the ${b.symbols.designFamily} moment pair of one neutral-axis angle (${PLOT_CONTOUR_POINTS} over a full turn) with the depth set so that P = Pu; the ${b.symbols.axialCap ?? 'axial cap'} is checked for Pu.`);
   heading(`Basis: ${b.title}`);
   for (const n of b.notes) para('body', `• ${n}`, 1.3);
   y = Math.max(y + 0.8 * u, g.H - m - 5.2 * u);

@@ -9,7 +9,7 @@ import type { Command } from 'commander';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { reportDate } from './format.js';
 import { parseLoadsCsv } from './check.js';
-import { designCode } from '../codes/registry.js';
+import { BASIS_IDS, designCode } from '../codes/registry.js';
 import { isUnitSystem } from '../units/index.js';
 import { addSectionOptions } from './section-flags.js';
 import { sheetSetFromFlags, type SheetOptions } from './sheet.js';
@@ -54,7 +54,7 @@ export async function runPage(o: PageOptions): Promise<string> {
     } catch (e) {
       throw new PmError(ERROR_CODES.io, '--loads', `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'})`, { value: o.loads });
     }
-    const units = o.units ?? designCode(o.code ?? 'aci318-19').unitSystems[0]!;
+    const units = o.units ?? designCode(o.code ?? BASIS_IDS[0]!).unitSystems[0]!;
     if (isUnitSystem(units)) parseLoadsCsv(text, units);
     fields.loads = text;
   }

@@ -2,10 +2,14 @@
  * ACI 318-19 and ACI 318-14 design bases. The two editions differ here only in the strain that
  * ends the transition zone: εty + 0.003 (318-19 Table 21.2.2) against 0.005 (318-14 Table 21.2.2).
  */
+import { ACI_318_14_RULES, ACI_318_19_RULES } from './rulebooks.js';
+import { ACI_318_14_SLENDERNESS, ACI_318_19_SLENDERNESS } from './slenderness-aci318.js';
 import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
 import { rectangularBlock } from '../materials/rectangular-block.js';
 import { stressToMPa, type UnitSystem } from '../units/index.js';
 import { bresslerBiaxialExponent } from './biaxial-exponent.js';
+import type { RuleDef } from './rules.js';
+import type { SlendernessMethod } from './slenderness.js';
 import type { Basis, BasisInput, CodeId, ColumnUse, DesignCode, ResistanceModel, StrainClass, StrainProfile } from './types.js';
 
 /** ACI 318-19 22.2.2.1: maximum usable strain at the extreme concrete compression fibre. */
@@ -39,6 +43,11 @@ interface Edition {
   clause: string;
   /** Table 20.2.2.4(a): maximum fy of longitudinal column bars by use, ksi (from memory) */
   fyMaxKsi: Record<ColumnUse, number>;
+  /** what the special-seismic limit covers, in the edition's words (Table 20.2.2.4(a), from memory) */
+  seismicWhat: string;
+  /** the edition's rulebook for slender columns and its list of rules */
+  slenderness: SlendernessMethod;
+  rules: readonly RuleDef[];
 }
 
 /** ksi → MPa as the SI editions round the grades: 60 → 420, 80 → 550, 100 → 690. */
@@ -53,6 +62,11 @@ const EDITIONS: Record<'aci318-19' | 'aci318-14', Edition> = {
     clause: 'ACI 318-19 Table 21.2.2',
     // Table 20.2.2.4(a) (from memory): Grade 100 in gravity columns; special moment frames and special walls Grade 80
     fyMaxKsi: { gravity: 100, 'special-seismic': 80 },
+    // Table 20.2.2.4(a) (from memory): special moment frames Grade 80; special structural walls allow Grade 100,
+    // so the 80 ksi limit is the frames' (conservative for a wall boundary element, which is not what pmchart checks)
+    seismicWhat: 'longitudinal bars of special moment frames (special structural walls allow up to 100 ksi / 690 MPa there; pmchart applies the frame limit)',
+    slenderness: ACI_318_19_SLENDERNESS,
+    rules: ACI_318_19_RULES,
   },
   'aci318-14': {
     id: 'aci318-14',
@@ -62,6 +76,9 @@ const EDITIONS: Record<'aci318-19' | 'aci318-14', Edition> = {
     clause: 'ACI 318-14 Table 21.2.2',
     // Table 20.2.2.4(a) (from memory): 80 ksi for longitudinal column bars; 20.2.2.5: A706 Grade 60 in special seismic systems
     fyMaxKsi: { gravity: 80, 'special-seismic': 60 },
+    seismicWhat: 'longitudinal bars of special moment frames and special structural walls (20.2.2.5: ASTM A706 Grade 60)',
+    slenderness: ACI_318_14_SLENDERNESS,
+    rules: ACI_318_14_RULES,
   },
 };
 
@@ -96,7 +113,7 @@ function makeAci(edition: Edition): DesignCode {
 function yieldLimitOf(edition: Edition, units: UnitSystem, use: ColumnUse): { max: number; rule: string } {
   const ksi = edition.fyMaxKsi[use];
   const max = units === 'us' ? ksi : GRADE_MPA[ksi]!;
-  const what = use === 'gravity' ? 'longitudinal bars of columns outside special seismic systems' : 'longitudinal bars of special moment frames and special structural walls';
+  const what = use === 'gravity' ? 'longitudinal bars of columns outside special seismic systems' : edition.seismicWhat;
   return { max, rule: `the ${edition.title} limit fy ≤ ${max} ${units === 'us' ? 'ksi' : 'MPa'} for ${what} (Table 20.2.2.4(a), from memory)` };
 }
 
@@ -171,7 +188,8 @@ function resolveAci(edition: Edition, input: BasisInput): Basis {
       'fy in Po': squash.steelStress,
     },
     biaxialExponent: bresslerBiaxialExponent,
-    slendernessMethod: 'moment-magnification-aci318',
+    slenderness: edition.slenderness,
+    rules: edition.rules,
     notes: [
       `Equivalent rectangular stress block 0.85·f′c over a = β1·c, β1 = ${beta1.toFixed(3)} (${edition.title} 22.2.2.4, Table 22.2.2.4.3); concrete tensile strength neglected (22.2.2.2).`,
       `Extreme-fibre concrete strain εcu = 0.003 (22.2.2.1); plane sections (22.2.1.2).`,

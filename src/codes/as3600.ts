@@ -17,10 +17,13 @@
  *     kuo = c/do with do the depth of the extreme tension bar; 0.65 at Nuo;
  *   - minimum eccentricity 0.05·D (10.1.2); column steel 1 %–4 % of Ag (10.7.1).
  */
+import { AS_3600_RULES } from './rulebooks.js';
+import { AS_3600_SLENDERNESS } from './slenderness-as3600.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
 import { rectangularBlock } from '../materials/rectangular-block.js';
 import { aciProfile } from './aci318.js';
+import { as3600BiaxialExponent } from './biaxial-exponent.js';
 import type { Basis, BasisInput, DesignCode, ResistanceModel, StrainClass, StrainProfile } from './types.js';
 
 /** AS 3600-2018 8.1.2 / 10.6.1: maximum concrete compressive strain (from memory). */
@@ -43,6 +46,16 @@ export const asPhi = (kuo: number): number => clamp(1.24 - (13 * kuo) / 12, 0.65
 /** kuo = c/do from the extreme-tension-bar strain εt (tension positive) with εcu at the face: εt = εcu·(1/kuo − 1). */
 export const kuoFromStrain = (epsT: number): number => (epsT <= -AS_EPS_CU ? Infinity : AS_EPS_CU / (AS_EPS_CU + epsT));
 
+/**
+ * The edition pmchart implements: the 2018 text, from memory. Amendment 2 (published 21 May 2021) amends
+ * Table 2.2.2 among others (its published summary lists the table); secondary sources describe its φ for
+ * bending with axial compression as re-expressed with a factor kφ (φ0 = 0.65·kφ). That text was not found,
+ * so it is not applied: the title says so on every output.
+ */
+export const AS_EDITION_TITLE = 'AS 3600-2018 (Amdt 2 φ not applied)';
+export const AS_EDITION_NOTE =
+  'Edition: AS 3600-2018 as recalled (from memory); Amendment 2 (2021), which amends Table 2.2.2 (φ for bending with axial compression, re-expressed with kφ), is not applied: check φ against the amended table.';
+
 /** Symbols of AS 3600-2018 (1.7 notation, from memory): f′c, fsy; φNu, φMu; loads N*, M*. */
 export const AS_SYMBOLS = {
   nominalAxial: 'Nu',
@@ -58,6 +71,16 @@ export const AS_SYMBOLS = {
   actionMoment: 'M*',
   firstOrderMoment: 'M*',
   secondOrderMoment: 'δb·M*',
+  // AS words, not ACI's (issue 19; from memory of AS 3600-2018 notation): steel strain εs, squash load Nuo,
+  // no separate axial cap (the curve ends at φ·Nuo, 10.6.2.2); sections classed by kuo against the balanced kuo
+  tensionStrain: 'εs',
+  squashLoad: 'Nuo',
+  axialCap: 'squash load φNuo (no separate axial cap)',
+  strainClassWords: {
+    'compression-controlled': 'compression failure (kuo ≥ kuo,b)',
+    transition: 'tension failure, φ rising',
+    'tension-controlled': 'tension failure, φ = 0.85',
+  },
 } as const;
 
 export const AS_3600_2018: DesignCode = {
@@ -98,7 +121,8 @@ function resolveAs3600(input: BasisInput): Basis {
   };
   return {
     code: 'as3600-2018',
-    title: 'AS 3600-2018',
+    // the edition and amendment assumed, on every output that prints the basis title (issue 19)
+    title: AS_EDITION_TITLE,
     units,
     fc,
     fy: fsy,
@@ -128,7 +152,11 @@ function resolveAs3600(input: BasisInput): Basis {
     minimumBarCount: (shape: 'rectangle' | 'circle') => (shape === 'circle' ? 6 : 4),
     minimumBarRule: 'at least 4 bars in a rectangular and 6 in a circular arrangement (AS 3600-2018 10.7.4, from memory)',
     factorSummary: `φ 0.65–0.85 = 1.24 − 13·kuo/12 (Table 2.2.2, Class N) · α2 ${fmt(alpha2)} · γ₂ ${fmt(gammaBlock)} · α1 ${fmt(alpha1)}`,
-    slendernessMethod: 'moment-magnification-as3600',
+    slenderness: AS_3600_SLENDERNESS,
+    rules: AS_3600_RULES,
+    // 10.6.4 (from memory): αn from N*/(0.6·Nuo), Nuo = α1·f′c·(Ag − As) + fsy·As (10.6.2.2)
+    biaxialExponent: as3600BiaxialExponent,
+    biaxialReferenceLoad: (Ag: number, As: number) => 0.6 * (alpha1 * fc * (Ag - As) + fsy * As),
     parameters: {
       'α2': r4(alpha2),
       'γ₂ (block depth)': r4(gammaBlock),
@@ -140,6 +168,7 @@ function resolveAs3600(input: BasisInput): Basis {
       'φ': '1.24 − 13·kuo/12, 0.65–0.85',
     },
     notes: [
+      AS_EDITION_NOTE,
       `Rectangular stress block α2·f′c over γ₂·c with α2 = 0.85 − 0.0015·f′c = ${fmt(alpha2)} and γ₂ = 0.97 − 0.0025·f′c = ${fmt(gammaBlock)}, each within 0.67–0.85 (AS 3600-2018 8.1.3, from memory). γ₂ is the standard's γ, renamed so it is not read as the bar-spacing γ.`,
       `Extreme-fibre concrete strain εcu = 0.003; plane sections; concrete tensile strength neglected (8.1.2, 10.6.1, from memory).`,
       `Reinforcement D500N (AS/NZS 4671) elastic–perfectly plastic, fsy = ${fsy} MPa, Es = ${Es} MPa; εsy = ${fmt(epsSy)}, so the balanced kuo = 0.003/(0.003 + εsy) = ${fmt(kuoBalanced)}.`,

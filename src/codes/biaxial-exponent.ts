@@ -27,3 +27,15 @@ export function bresslerBiaxialExponent(_axialRatio: number, shape: ShapeKind): 
   if (shape === 'circle') return { alpha: 2, source: 'α = 2 for a circle with a ring of bars (common practice)' };
   return { alpha: 1.5, source: 'α = 1.5 for rectangles (Bresler, ACI Journal 57(5), 1960: α ≈ 1.15–1.55, from memory)' };
 }
+
+/**
+ * AS 3600-2018 10.6.4 (from memory; no published text found to confirm): (Mx* ÷ φMux)^αn + (My* ÷ φMuy)^αn ≤ 1 with
+ * αn = 0.7 + 1.7·N* ÷ (0.6·Nuo), 1 ≤ αn ≤ 2. The axial ratio passed in is N* ÷ (0.6·Nuo) (`biaxialReferenceLoad`
+ * of the AS basis). Circles keep α = 2 (a ring of bars gives a near-circular contour, common practice).
+ */
+export function as3600BiaxialExponent(axialRatio: number, shape: ShapeKind): BiaxialExponent {
+  if (shape === 'circle') return { alpha: 2, source: 'α = 2 for a circle with a ring of bars (common practice; AS 3600-2018 10.6.4 is written for rectangles)' };
+  const raw = 0.7 + 1.7 * axialRatio;
+  const alpha = Math.min(2, Math.max(1, raw));
+  return { alpha, source: `AS 3600-2018 10.6.4 (from memory): αn = 0.7 + 1.7·N*/(0.6·Nuo) = 0.7 + 1.7·${axialRatio.toFixed(3)}, within 1–2` };
+}

@@ -10,6 +10,8 @@
  *
  * CSA A23.3 is an SI code: the basis accepts `units: 'si'` only (N, mm, MPa).
  */
+import { CSA_A23_RULES } from './rulebooks.js';
+import { CSA_A23_SLENDERNESS } from './slenderness-csa-a23.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
 import { rectangularBlock } from '../materials/rectangular-block.js';
@@ -135,7 +137,8 @@ function resolveCsa(input: BasisInput): Basis {
     minimumBarRule: `at least ${transverse === 'spiral' ? 6 : 4} bars (CSA A23.3-19 10.9.3, from memory)`,
     clearSpacingRule: 'clear spacing ≥ max(1.4·db, 1.4·aggregate, 30 mm) (CSA A23.1-19 6.6.5.2, from memory)',
     barSet: 'csa-g30.18',
-    slendernessMethod: 'moment-magnification-csa-a23', // 10.15.3 non-sway (from memory)
+    slenderness: CSA_A23_SLENDERNESS, // 10.15.3 non-sway (from memory)
+    rules: CSA_A23_RULES,
     factorSummary: `φc ${CSA_PHI_C} · φs ${CSA_PHI_S} · α1 ${fmt(alpha1)} · β1 ${fmt(beta1)} (8.4.2, 8.4.3, 10.1.7)`,
     parameters: {
       'α1': r4(alpha1),

@@ -8,6 +8,8 @@
  *
  * EN 1992-1-1 is an SI code: the basis accepts `units: 'si'` only (N, mm, MPa).
  */
+import { EN_1992_RULES } from './rulebooks.js';
+import { EN_1992_SLENDERNESS } from './slenderness-en1992.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
 import { inclinedBranchSteel } from '../materials/inclined-branch-steel.js';
@@ -256,7 +258,8 @@ function resolveEc2(input: BasisInput): Basis {
     factorSummary: `αcc ${alphaCc} · γc ${gammaC} · γs ${gammaS} (${nonDefault.length > 0 ? 'not all recommended: check the NA' : 'recommended'})`,
     biaxialExponent: en1992BiaxialExponent, // 5.8.9(4) Eq. 5.39
     biaxialReferenceLoad: (Ac: number, As: number) => Ac * fcd + As * fyd, // 5.8.9(4): NRd = Ac·fcd + As·fyd
-    slendernessMethod: 'nominal-curvature-en1992', // 5.8.8
+    slenderness: EN_1992_SLENDERNESS, // 5.8.8
+    rules: EN_1992_RULES,
     parameters: {
       fcd: r4(fcd),
       fyd: r4(fyd),

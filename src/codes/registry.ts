@@ -6,8 +6,12 @@ import { CSA_A23_3_19 } from './csa-a23.js';
 import { EN_1992_1_1 } from './en1992.js';
 import type { Basis, BasisInput, CodeId, DesignCode } from './types.js';
 
-/** Every design basis pmchart knows, keyed by the `--code` value. */
-export const DESIGN_CODES: Partial<Record<CodeId, DesignCode>> = {
+/**
+ * Every design basis pmchart knows, keyed by the `--code` value: the one list every other list of bases
+ * (flag help, the page's select, the chart-set schema, error messages) is derived from. Typed as a full
+ * record so a code id without an entry does not compile.
+ */
+export const DESIGN_CODES: Readonly<Record<CodeId, DesignCode>> = {
   'aci318-19': ACI_318_19,
   'aci318-14': ACI_318_14,
   'en1992-1-1': EN_1992_1_1,
@@ -15,8 +19,13 @@ export const DESIGN_CODES: Partial<Record<CodeId, DesignCode>> = {
   'as3600-2018': AS_3600_2018,
 };
 
+/** The design bases in registry order. */
+export const DESIGN_CODE_LIST: readonly DesignCode[] = Object.values(DESIGN_CODES);
+/** The `--code` values in registry order. */
+export const BASIS_IDS: readonly CodeId[] = DESIGN_CODE_LIST.map((c) => c.id);
+
 export function designCode(id: string, path = 'code'): DesignCode {
-  const code = DESIGN_CODES[id as CodeId];
+  const code = (DESIGN_CODES as Partial<Record<string, DesignCode>>)[id];
   if (!code) {
     throw new PmError(ERROR_CODES.invalidValue, path, 'is not a known design basis', {
       value: id,

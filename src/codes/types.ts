@@ -5,6 +5,8 @@
 import type { ConcreteLaw, SteelLaw } from '../materials/types.js';
 import type { ShapeKind } from '../section/types.js';
 import type { UnitSystem } from '../units/index.js';
+import type { RuleDef } from './rules.js';
+import type { SlendernessMethod } from './slenderness.js';
 
 export const CODE_IDS = ['aci318-19', 'aci318-14', 'en1992-1-1', 'csa-a23.3-19', 'as3600-2018'] as const;
 export type CodeId = (typeof CODE_IDS)[number];
@@ -172,8 +174,17 @@ export interface Basis {
    * response is the linear blend of the decompression response and the squash load. Default false.
    */
   readonly linearTransitionToSquash?: boolean;
-  /** second-order method for slender columns the basis offers (src/design/slenderness.ts); none when absent */
-  readonly slendernessMethod?: SlendernessMethodId;
+  /**
+   * The basis's rulebook for slender braced columns (src/codes/slenderness-*.ts): its method, end-moment
+   * convention and rules; src/design/slenderness.ts runs it. None when absent.
+   */
+  readonly slenderness?: SlendernessMethod;
+  /**
+   * Every rule the check applies around the section for this basis, with clause and source (published or
+   * from memory): slenderness, minimum moments, biaxial method, scope limits … Each has a row in the
+   * clause matrix of the tests (tests/codes/clause-matrix.ts).
+   */
+  readonly rules: readonly RuleDef[];
 }
 
 /** An exponent with where it comes from. */
@@ -182,8 +193,7 @@ export interface BiaxialExponent {
   source: string;
 }
 
-export const SLENDERNESS_METHODS = ['moment-magnification-aci318', 'nominal-curvature-en1992', 'moment-magnification-as3600', 'moment-magnification-csa-a23'] as const;
-export type SlendernessMethodId = (typeof SLENDERNESS_METHODS)[number];
+export { SLENDERNESS_METHODS, type SlendernessMethodId } from './slenderness.js';
 
 export interface BasisSymbols {
   /** e.g. "Pn", "NRk"; the unfactored family */
@@ -213,6 +223,12 @@ export interface BasisSymbols {
   /** the slenderness table's moments: first-order and second-order ("M2"/"Mc" for ACI, "M0Ed"/"MEd" for EN); absent: M2, Mc */
   firstOrderMoment?: string;
   secondOrderMoment?: string;
+  /** symbol of the extreme-tension-bar strain in tables and notes: "εt" (ACI 318 21.2.2); absent: εt */
+  tensionStrain?: string;
+  /** symbol of the squash load: "Po" (ACI 318 22.4.2.2), "Nuo" (AS 3600 10.6.2.2); absent: Po */
+  squashLoad?: string;
+  /** words for the axial limit of the design curve: "axial cap" (ACI 318 22.4.2.1); absent: axial cap */
+  axialCap?: string;
 }
 
 /** ACI 318-19 21.2.2 words for the strain classes. */

@@ -7,7 +7,8 @@
  * Pure: the caller reads the file; `now` stands in for the clock.
  */
 import { DESIGN_CODES, parseStrength } from '../codes/registry.js';
-import { CODE_IDS, type CodeId } from '../codes/types.js';
+import { BASIS_IDS } from '../codes/registry.js';
+import type { CodeId } from '../codes/types.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import type { UnitSystem } from '../units/index.js';
 import { formatPath, parseOrThrow } from '../input/fields.js';
@@ -115,8 +116,8 @@ export function resolveChartSet(file: ChartSetFile, opts: ReadOptions = {}): Res
   const date = file.titleBlock.date ?? defaultDate(opts);
   const units = file.units;
   const code = file.basis.code as CodeId;
-  if (!CODE_IDS.includes(code)) {
-    throw new PmError(ERROR_CODES.invalidValue, 'basis.code', 'is not a known design basis', { value: file.basis.code, allowed: CODE_IDS.join(', ') });
+  if (!BASIS_IDS.includes(code)) {
+    throw new PmError(ERROR_CODES.invalidValue, 'basis.code', 'is not a known design basis', { value: file.basis.code, allowed: BASIS_IDS.join(', ') });
   }
   const size = file.paper?.size ?? (units === 'us' ? 'tabloid' : 'a3');
   const orientation = file.paper?.orientation ?? 'landscape';

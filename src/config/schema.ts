@@ -4,6 +4,7 @@
  * Ranges and cross-field rules are checked after resolution (src/config/rules.ts), so that errors
  * can name the allowed range in the trade's terms.
  */
+import { BASIS_IDS } from '../codes/registry.js';
 import { z } from 'zod';
 import { calendarDate, list, quantity, ranged, rangedInt, text } from '../input/fields.js';
 import {
@@ -169,7 +170,7 @@ export const ChartSetFileSchema = z
     units: z.enum(['us', 'si']).describe('unit system: "us" (kip, in, ksi) or "si" (N, mm, MPa)'),
     basis: z
       .object({
-        code: z.string().describe('design basis and edition, e.g. "aci318-19"'),
+        code: z.string().describe(`design basis and edition, one of: ${BASIS_IDS.join(', ')}`),
         options: BasisOptions
           .describe('options some bases read (EN 1992-1-1 partial factors and laws); default: each basis’s recommended values')
           .optional(),

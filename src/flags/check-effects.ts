@@ -99,8 +99,7 @@ export function resolveEffects(o: EffectsFlags, section: ResolvedSection, input:
       transverseLoads: o.transverseLoads === true,
       ...(o.creep !== undefined ? { creepRatio: plain('--creep', o.creep, 0, 5) } : {}),
     });
-    const magnifier = section.basis.slendernessMethod;
-    if (o.betaDns === undefined && magnifier !== undefined && magnifier.startsWith('moment-magnification')) {
+    if (o.betaDns === undefined && section.basis.slenderness?.needsSustainedLoadRatio === true) {
       throw new PmError(ERROR_CODES.missing, '--beta-dns', 'is required with --klu (sustained ÷ total factored axial load, 0–1: ACI 318-19 βdns, AS 3600 βd, CSA A23.3 βd)');
     }
     slenderness = { x: member(len('--klu', o.klu)), ...(o.kluY !== undefined ? { y: member(len('--klu-y', o.kluY)) } : {}) };

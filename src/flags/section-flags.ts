@@ -4,7 +4,7 @@
  */
 import { readFileSync, statSync } from 'node:fs';
 import type { Command } from 'commander';
-import { designCode, parseStrength, resolveBasis } from '../codes/registry.js';
+import { BASIS_IDS, designCode, parseStrength, resolveBasis } from '../codes/registry.js';
 import type { Basis, BasisOptions, CapContext, CodeId, ColumnUse } from '../codes/types.js';
 import { ERROR_CODES, isFieldKey, isPmError, PmError, requireInRange } from '../errors.js';
 import { parseCustomBars } from '../input/custom-bars.js';
@@ -72,7 +72,7 @@ export { GAMMA_RANGE };
 /** Registers the shared section flags on a command. */
 export function addSectionOptions(cmd: Command): Command {
   return cmd
-    .option('--code <id>', 'design basis: aci318-19, aci318-14, en1992-1-1, csa-a23.3-19, as3600-2018', 'aci318-19')
+    .option('--code <id>', `design basis: ${BASIS_IDS.join(', ')}`, BASIS_IDS[0])
     .option('--units <system>', "unit system: us (kip, in, ksi) or si (kN, mm, MPa); default: the basis's first (us for ACI, si otherwise)")
     .option('--fc <stress>', "specified concrete strength f′c (fck), e.g. 4, 4ksi, 28MPa")
     .option('--fy <stress>', 'specified yield strength fy (fyk), e.g. 60, 420MPa')
@@ -141,7 +141,7 @@ function barCount(kind: Exclude<ArrangementKind, 'custom'>, f: CheckedSectionFla
 export function resolveSectionFlags(given: SectionFlags, needSize = false): ResolvedSection {
   // 1. each flag on its own: the zod schema of src/input/flags.ts (form, enums, unit-free ranges)
   const f = parseFlags(SectionFlagsSchema, given);
-  const code = f.code ?? 'aci318-19';
+  const code = f.code ?? BASIS_IDS[0]!;
   const u: UnitSystem = f.units ?? withFlagNames(() => designCode(code)).unitSystems[0]!;
   const su = DISPLAY_UNITS[u];
   if (f.fc === undefined) throw new PmError(ERROR_CODES.missing, '--fc', `is required (a stress, default unit ${su.stress})`);

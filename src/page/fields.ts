@@ -3,6 +3,8 @@
  * `pmchart check`), so presets, messages and copyable command lines map one to one. Shared by the
  * markup (build time) and the browser code.
  */
+import { BASIS_IDS, DESIGN_CODE_LIST } from '../codes/registry.js';
+
 export type FieldKind = 'text' | 'select' | 'int' | 'checkbox';
 
 export interface FieldDef {
@@ -34,7 +36,7 @@ export const FIELD_GROUPS: readonly FieldGroup[] = [
     id: 'basis',
     title: 'Basis and materials',
     fields: [
-      f('code', 'Design basis', 'select', { options: [['aci318-19', 'ACI 318-19'], ['aci318-14', 'ACI 318-14'], ['en1992-1-1', 'EN 1992-1-1'], ['csa-a23.3-19', 'CSA A23.3-19']] }),
+      f('code', 'Design basis', 'select', { options: DESIGN_CODE_LIST.map((c) => [c.id, c.title] as const) }),
       f('units', 'Units', 'select', { options: [['', "basis's first"], ['us', 'US (kip, in, ksi)'], ['si', 'SI (kN, mm, MPa)']] }),
       f('fc', 'f′c (fck)', 'text', { placeholder: 'e.g. 5ksi, 35MPa', hint: 'a stress; a plain number is in the unit system’s stress unit' }),
       f('fy', 'fy (fyk)', 'text', { placeholder: 'e.g. 60ksi, 500MPa' }),
@@ -95,7 +97,7 @@ export const ALL_FIELDS: readonly FieldDef[] = FIELD_GROUPS.flatMap((g) => g.fie
 
 /** Initial values when no flag presets them. */
 export const FIELD_DEFAULTS: Readonly<Record<string, string | boolean>> = {
-  code: 'aci318-19',
+  code: BASIS_IDS[0]!,
   units: '',
   fc: '5ksi',
   fy: '60ksi',

@@ -57,6 +57,9 @@ export function symbolsOf(c: Pick<ColumnCheck, 'basis' | 'shape'>) {
     mu: sy.dimensionlessMoment ?? null,
     firstOrder: sy.firstOrderMoment ?? 'M2',
     secondOrder: sy.secondOrderMoment ?? 'Mc',
+    epsT: sy.tensionStrain ?? 'εt',
+    Po: sy.squashLoad ?? 'Po',
+    cap: sy.axialCap ?? 'axial cap',
   };
 }
 
@@ -100,7 +103,7 @@ export function resultsHeaders(c: ColumnCheckFrame): string[] {
     ...(biax ? ['ρg chart biax'] : []),
     'ρg rounded',
     `extra ${un.area}`,
-    'εt',
+    s.epsT,
     'φ',
     'strain state',
     ...(withUtil ? ['util'] : []),
@@ -151,7 +154,7 @@ function footnotesFor(c: ColumnCheckHead, gov: ColumnLoadResult | undefined): st
   const s = symbolsOf(c);
   const out = [
     `* governing load: ${c.governingWhy}. Loads are ranked by status (unstable, outside scope, not possible, fails, ok), then by ${c.measure === 'utilisation' ? 'utilisation' : 'ρg required'}.`,
-    `${s.M} is the moment checked: after slenderness where asked, ↑ where raised to the basis minimum; signed. Normalised values in ${un.stress}; εt and φ at capacity along the load ray (${c.checked ? 'checked reinforcement' : 'at ρg required'}).`,
+    `${s.M} is the moment checked: after slenderness where asked, ↑ where raised to the basis minimum; signed. Normalised values in ${un.stress}; ${s.epsT} and φ at capacity along the load ray (${c.checked ? 'checked reinforcement' : 'at ρg required'}).`,
   ];
   if (gov && gov.extraSteelRoundedDown !== null && gov.extraSteelRoundedDown > 0) {
     out.push(`Reading the next lower sheet and rounding up would cost ${f(gov.extraSteelRoundedDown, 3)} ${un.area} more steel than the exact ρg for ${gov.id}.`);
@@ -201,14 +204,14 @@ export function slendernessRows(r: ColumnLoadResult, c: ColumnCheckFrame): { met
   const out: { method: string; cells: string[] }[] = [];
   for (const [axis, sl] of [['x', e.x], ['y', e.y]] as const) {
     if (!sl) continue;
-    const st = (p: string) => sl.steps.find((x) => x.label.startsWith(p))?.value;
+    const st = (key: string) => sl.steps.find((x) => x.key === key)?.value;
     out.push({
       method: sl.method,
       cells: [
         r.id,
         axis,
-        f(((st('kℓu/r') ?? st('λ = l0/i') ?? st('Le/r')) as number | undefined) ?? null, 3),
-        f(((st('limit') ?? st('λlim')) as number | undefined) ?? null, 3),
+        f((st('klu-over-r') as number | undefined) ?? null, 3),
+        f((st('limit') as number | undefined) ?? null, 3),
         sl.neglected ? 'yes' : 'no',
         f(sl.delta, 4),
         M(sl.firstOrderMoment),
@@ -303,7 +306,7 @@ export function checkAssumptions(c: ColumnCheckFrame): string[] {
       ? `Slender column (non-sway): ${s.M} is the second-order moment of the basis's method; every step is listed per load.`
       : `Short column: factored ${s.P} and ${s.M} are taken as given (slenderness effects are not added here).`,
     `Moments keep their signs. ${c.variants.length === 1 ? 'The layout is symmetric about the bending axis, so both signs give the same capacity.' : c.variants.map((v) => v.label).join('; ') + ': the weakest governs.'}`,
-    `ρg required is solved exactly at the actual γ = ${fmt(c.gamma, 4)} with the bars smeared in the chosen arrangement; the ${b.symbols.designFamily} curve includes the axial cap.`,
+    `ρg required is solved exactly at the actual γ = ${fmt(c.gamma, 4)} with the bars smeared in the chosen arrangement; the ${b.symbols.designFamily} curve includes the ${s.cap}.`,
     `Chart readings emulate sheets at γ steps of ${c.chart.gammaStep} with curves at ρg ${c.chart.rhos.map((r) => fmt(r, 3)).join(', ')}: linear between curves along the load ray, linear in γ between sheets; the traditional reading takes the next lower sheet and the next curve out.`,
     `ρg limits ${fmt(lim.min, 3)}–${fmt(lim.max, 3)} of Ag at zero axial load; each load uses the basis's limits for its own axial force, chart readings included.`,
     'Status: ok; FAILS (utilisation above 1); NOT POSSIBLE (more than the maximum ρg); UNSTABLE (the axial load reaches the magnifier’s critical load); OUTSIDE SCOPE (beyond the second-order method’s limit). Exit status 1 when any load is not ok.',
@@ -322,7 +325,7 @@ export function checkAssumptions(c: ColumnCheckFrame): string[] {
   if (c.biaxial) {
     out.push(
       c.checked
-        ? 'Biaxial: exact capacity of the actual bars under an inclined neutral axis along the load ray in (P, Mx, My); reciprocal load 1/Pn = 1/Pnx + 1/Pny − 1/Po where Pn ≥ 0.1·f′c·Ag (factored values), else the linear moment sum at Pu; load contour (Mx/Mxo)^α + (My/Myo)^α with the basis’s exponent.'
+        ? `Biaxial: exact capacity of the actual bars under an inclined neutral axis along the load ray in (P, Mx, My); reciprocal load 1/Pn = 1/Pnx + 1/Pny − 1/${s.Po} where Pn ≥ 0.1·f′c·Ag (factored values), else the linear moment sum at Pu; load contour (Mx/Mxo)^α + (My/Myo)^α with the basis’s exponent.`
         : 'Biaxial: ρg req biax is the exact ρg at which the smeared bars at γ carry the load along its ray in (P, Mx, My) under an inclined neutral axis.',
     );
   }
@@ -553,8 +556,8 @@ function* detailLines(src: CheckRows): Generator<string> {
     for (const r of src.results()) {
       const b = r.biaxial;
       if (!b?.exact || !b.reciprocalLoad || !b.loadContour) continue;
-      yield `  ${r.id}: exact ${f(b.exact.utilisation, 4)} (neutral axis ${f(b.exact.neutralAxisAngleDeg, 4)}°, depth ${f(b.exact.neutralAxisDepth, 4)}, εt = ${f(b.exact.epsT, 3)}, φ = ${f(b.exact.phi, 3)}${b.exact.capGoverns ? ', axial cap governs' : ''})`;
-      yield `    reciprocal load: Pnx = ${F(b.reciprocalLoad.Pnx)}, Pny = ${F(b.reciprocalLoad.Pny)}, Po = ${F(b.reciprocalLoad.Po)}, Pn = ${F(b.reciprocalLoad.Pn)} (0.1·f′c·Ag = ${F(b.reciprocalLoad.validityLimit)}) → ${b.reciprocalLoad.method} ${f(b.reciprocalLoad.utilisation, 4)}; ${b.reciprocalLoad.note}`;
+      yield `  ${r.id}: exact ${f(b.exact.utilisation, 4)} (neutral axis ${f(b.exact.neutralAxisAngleDeg, 4)}°, depth ${f(b.exact.neutralAxisDepth, 4)}, ${symbolsOf(c).epsT} = ${f(b.exact.epsT, 3)}, φ = ${f(b.exact.phi, 3)}${b.exact.capGoverns ? `, ${symbolsOf(c).cap} governs` : ''})`;
+      yield `    reciprocal load: Pnx = ${F(b.reciprocalLoad.Pnx)}, Pny = ${F(b.reciprocalLoad.Pny)}, ${symbolsOf(c).Po} = ${F(b.reciprocalLoad.Po)}, Pn = ${F(b.reciprocalLoad.Pn)} (0.1·f′c·Ag = ${F(b.reciprocalLoad.validityLimit)}) → ${b.reciprocalLoad.method} ${f(b.reciprocalLoad.utilisation, 4)}; ${b.reciprocalLoad.note}`;
       yield `    load contour: Mnox = ${M(b.loadContour.Mnox)}, Mnoy = ${M(b.loadContour.Mnoy)} at Pu, α = ${f(b.loadContour.alpha, 3)} (${b.loadContour.alphaSource}) → ${f(b.loadContour.utilisation, 4)}; moments may scale by 1/${f(b.loadContour.momentScale, 4)} at fixed Pu (exact: 1/${f(b.exact.momentUtilisation, 4)})`;
     }
     yield '';
@@ -575,7 +578,7 @@ function slenderJson(s: SlendernessResult, u: UnitSystem) {
     ok: s.ok,
     method: s.method,
     warnings: s.warnings,
-    steps: s.steps.map((st) => ({ label: st.label, value: typeof st.value === 'number' ? num(st.value) : st.value, ...(st.unit ? { unit: st.unit } : {}) })),
+    steps: s.steps.map((st) => ({ key: st.key, clause: st.clause, label: st.label, value: typeof st.value === 'number' ? num(st.value) : st.value, ...(st.unit ? { unit: st.unit } : {}) })),
   };
 }
 

@@ -61,7 +61,7 @@ export function contourText(format: 'csv' | 'json', v: ContourViewInput, generat
         conventions: [
           'x across the width b, y along the depth h; Mx bends in the depth h (the chart plane), My in the width b.',
           'Neutral-axis angle 0° is uniaxial bending about x with the +y face compressed, 90° about y with the +x face compressed.',
-          `Values are ${b.symbols.designFamily} (design) capacities of the actual bars; the axial cap is checked for Pu.`,
+          `Values are ${b.symbols.designFamily} (design) capacities of the actual bars; the ${b.symbols.axialCap ?? 'axial cap'} is checked for Pu.`,
         ],
         basis: { parameters: b.parameters, notes: b.notes },
         columns: CONTOUR_COLUMNS,

@@ -364,7 +364,7 @@ function summaryPanel(g: Deco, L: ReportLayout, c: ColumnCheck, y: number): void
   if (gov.rhoRequired !== null) {
     lines.push(['valueBold', `ρg required = ${f(gov.rhoRequired)}${gov.steelRequired !== null ? `, Ast = ${f(gov.steelRequired, 4)} ${area}` : ''}`]);
     if (gov.rhoStatus === 'minimum-governs') lines.push(['body', `The minimum ρg = ${fmt(c.limits.min, 3)} governs.`]);
-    if (gov.governedBy === 'cap') lines.push(['body', 'Held by the axial cap, not by the curve.']);
+    if (gov.governedBy === 'cap') lines.push(['body', `Held by the ${c.basis.symbols.axialCap ?? 'axial cap'}, not by the curve.`]);
   }
   if (gov.biaxial?.rhoStatus) lines.push(['valueBold', `ρg required, exact biaxial = ${f(gov.biaxial.rhoRequired)}`]);
   lines.push(['body', `Chart reading ${f(gov.rhoFromChart)}; next lower sheet, next curve out: ${f(gov.rhoRoundedDown, 3)}${gov.extraSteelRoundedDown != null && gov.extraSteelRoundedDown > 0 ? `, ${f(gov.extraSteelRoundedDown, 4)} ${area} more steel than exact` : ''}.`]);
@@ -372,7 +372,7 @@ function summaryPanel(g: Deco, L: ReportLayout, c: ColumnCheck, y: number): void
     const d = gov.biaxial.chartMinusExact;
     lines.push(['body', `Biaxial sheets (level step ${c.biaxialChart.axialStep}): ρg ${f(gov.biaxial.rhoFromChart)}${d !== null ? `, ${d >= 0 ? '+' : ''}${f(d)} against the exact biaxial` : ''}.`]);
   }
-  lines.push(['body', `At capacity along the load ray: εt = ${f(gov.strain.epsT, 3)}, φ = ${f(gov.strain.phi, 3)}, ${strainClassWord(c.basis.symbols, gov.strain.class)}.`]);
+  lines.push(['body', `At capacity along the load ray: ${c.basis.symbols.tensionStrain ?? 'εt'} = ${f(gov.strain.epsT, 3)}, φ = ${f(gov.strain.phi, 3)}, ${strainClassWord(c.basis.symbols, gov.strain.class)}.`]);
   if (gov.utilisation !== null) lines.push(['valueBold', `Utilisation of the checked steel: ${f(gov.utilisation, 3)}`]);
   for (const [style, text] of lines) y = g.paragraph(style, b.x, y, b.w, text, 1.35) + 0.3 * u;
 }

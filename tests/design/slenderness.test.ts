@@ -3,6 +3,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { ACI_318_19 } from '../../src/codes/aci318.js';
+import { EN_1992_SLENDERNESS } from '../../src/codes/slenderness-en1992.js';
 import type { Basis } from '../../src/codes/types.js';
 import { isPmError } from '../../src/errors.js';
 import { elasticPlasticSteel } from '../../src/materials/elastic-plastic-steel.js';
@@ -115,7 +116,7 @@ describe('EN 1992-1-1 5.8.8 nominal curvature — hand calculation', () => {
     normalisingStress: 20,
     Es: 200_000,
     design: { ...aci.design, steel: elasticPlasticSteel(500 / 1.15, 200_000) },
-    slendernessMethod: 'nominal-curvature-en1992',
+    slenderness: EN_1992_SLENDERNESS,
   };
   // 400 × 400 mm, 8 Ø20 (314.159 mm² each) on four faces, 3 bars at y = ±150 and 2 at y = 0; l0 = 6 m,
   // NEd = 1500 kN, M02 = 60 kN·m, M01 = 30 kN·m same side (single curvature; M1 = −30 in pmchart's sign), φef = 1.0.
@@ -152,7 +153,8 @@ describe('EN 1992-1-1 5.8.8 nominal curvature — hand calculation', () => {
     expectClose(r.magnifiedMoment, 60e6 + 1.5e6 * 7.5, 1e-12);
   });
   it('a basis without a declared method refuses with a one-line error', () => {
-    const bare: Basis = { ...basis, slendernessMethod: undefined };
+    const { slenderness: _dropped, ...rest } = basis;
+    const bare: Basis = rest;
     expect(() => slendernessCheck(bare, { shape: { kind: 'rectangle', b: 16, h: 16 }, bars: [] }, { effectiveLength: 200, M1: 0, M2: 100, Pu: 100 })).toThrow(/declares no slenderness method/);
   });
 });
