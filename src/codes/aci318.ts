@@ -172,6 +172,8 @@ function resolveAci(edition: Edition, input: BasisInput): Basis {
     },
     biaxialExponent: bresslerBiaxialExponent,
     slendernessMethod: 'moment-magnification-aci318',
+    // 6.6.4.5.4 M2,min = Pu(0.6 + 0.03h) in. (both editions); 22.2.1, 22.2.2 strain compatibility
+    checkClauses: { slenderMinimumMoment: '6.6.4.5.4', sectionAnalysis: '22.2.1, 22.2.2' },
     notes: [
       `Equivalent rectangular stress block 0.85·f′c over a = β1·c, β1 = ${beta1.toFixed(3)} (${edition.title} 22.2.2.4, Table 22.2.2.4.3); concrete tensile strength neglected (22.2.2.2).`,
       `Extreme-fibre concrete strain εcu = 0.003 (22.2.2.1); plane sections (22.2.1.2).`,

@@ -136,6 +136,8 @@ function resolveCsa(input: BasisInput): Basis {
     clearSpacingRule: 'clear spacing ≥ max(1.4·db, 1.4·aggregate, 30 mm) (CSA A23.1-19 6.6.5.2, from memory)',
     barSet: 'csa-g30.18',
     slendernessMethod: 'moment-magnification-csa-a23', // 10.15.3 non-sway (from memory)
+    // from memory: 10.15.3.1 M2 ≥ Pf(15 + 0.03h); 10.1 strain compatibility
+    checkClauses: { slenderMinimumMoment: '10.15.3.1', sectionAnalysis: '10.1' },
     factorSummary: `φc ${CSA_PHI_C} · φs ${CSA_PHI_S} · α1 ${fmt(alpha1)} · β1 ${fmt(beta1)} (8.4.2, 8.4.3, 10.1.7)`,
     parameters: {
       'α1': r4(alpha1),

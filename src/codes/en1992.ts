@@ -257,6 +257,8 @@ function resolveEc2(input: BasisInput): Basis {
     biaxialExponent: en1992BiaxialExponent, // 5.8.9(4) Eq. 5.39
     biaxialReferenceLoad: (Ac: number, As: number) => Ac * fcd + As * fyd, // 5.8.9(4): NRd = Ac·fcd + As·fyd
     slendernessMethod: 'nominal-curvature-en1992', // 5.8.8
+    // 6.1(4) e0 = max(h/30, 20 mm); a slender column adds the imperfection ei of 5.2(7) (5.8.8.2); 6.1(2) section analysis
+    checkClauses: { minimumMoment: '6.1(4)', slenderMinimumMoment: '6.1(4), 5.2(7)', sectionAnalysis: '6.1(2)' },
     parameters: {
       fcd: r4(fcd),
       fyd: r4(fyd),

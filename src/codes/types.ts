@@ -174,6 +174,21 @@ export interface Basis {
   readonly linearTransitionToSquash?: boolean;
   /** second-order method for slender columns the basis offers (src/design/slenderness.ts); none when absent */
   readonly slendernessMethod?: SlendernessMethodId;
+  /** clauses (in this basis's edition) of the rules the check applies around the section, for its typed findings */
+  readonly checkClauses?: CheckClauses;
+}
+
+/**
+ * Clauses of the check's rules around the section, named by the basis (the engine never spells one).
+ * A minimum moment is an accidental eccentricity: it acts about one axis at a time, in either sign.
+ */
+export interface CheckClauses {
+  /** the clause of `minimumMoment` (every column); absent where `minimumMoment` is 0 */
+  readonly minimumMoment?: string;
+  /** the minimum the slenderness method puts on a slender column's first-order moment */
+  readonly slenderMinimumMoment?: string;
+  /** strain compatibility of the actual section, the neutral axis free to incline (the exact biaxial search) */
+  readonly sectionAnalysis: string;
 }
 
 /** An exponent with where it comes from. */
