@@ -968,6 +968,13 @@ function addToDigest(d: LoadDigest, r: ColumnLoadResult, area: number): void {
   d.requiredArea = Math.max(d.requiredArea, r.steelRequired ?? 0, (r.biaxial?.rhoRequired ?? 0) * area, rhoMeasure ? (r.measureValue ?? 0) * area : 0);
 }
 
+/** Where the governing figure comes from, when not the uniaxial check about x or the biaxial check. */
+const GOVERNING_FROM: Partial<Record<MeasureSource, string>> = {
+  'x-exact': '; here the exact search about x',
+  y: '; here the check about y alone',
+  'y-exact': '; here the exact search about y alone',
+};
+
 /** Ranking, bar proposals, summary and exit status for the results of every load. */
 export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadResult[]): ColumnCheck {
   const d = newDigest();
@@ -987,8 +994,8 @@ function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult 
     : gov.status !== 'ok' && gov.status !== 'fails'
       ? `${gov.status} ${gov.statusReason}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`
       : measure === 'utilisation'
-        ? `highest utilisation ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(3)} (the larger of the uniaxial and exact biaxial figures)`
-        : `largest ρg required ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(4)}${ctx.biaxial ? ' (the larger of the uniaxial and exact biaxial figures)' : ''}`;
+        ? `highest utilisation ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(3)} (the larger of the uniaxial and exact biaxial figures${GOVERNING_FROM[gov.measureFrom] ?? ''})`
+        : `largest ρg required ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(4)}${ctx.biaxial ? ` (the larger of the uniaxial and exact biaxial figures${GOVERNING_FROM[gov.measureFrom] ?? ''})` : GOVERNING_FROM[gov.measureFrom] ? ` (${GOVERNING_FROM[gov.measureFrom]!.slice(2)})` : ''}`;
   const summaryText =
     total === 0
       ? 'no loads'
