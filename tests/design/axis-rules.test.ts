@@ -80,6 +80,39 @@ describe('U1: the y axis is always checked for slenderness and its minimum momen
   });
 });
 
+describe('U1 with a section minimum: EN 1992-1-1 6.1(4) e0 = max(h/30, 20 mm) about y on its own (5.8.9: one axis at a time)', () => {
+  // 200 mm (b, across x) × 600 mm (h, along y); 2 bars of 490.85 mm² at (0, ±240 mm): about y both sit on the axis.
+  // C30/37, B500: fcd = 30/1.5 = 20 MPa, fyd = 500/1.15 = 434.78 MPa; rectangular block (3.1.7(3)) λ = 0.8, η = 1,
+  // εcu3 = 0.0035; displaced concrete deducted. NEd = 2450 kN, no moment given.
+  const en = resolveBasis('en1992-1-1', { units: 'si', fc: 30, fy: 500, transverse: 'tied', options: { concreteLaw: 'rectangular-block' } });
+  const input = {
+    basis: en,
+    shape: { kind: 'rectangle' as const, b: 200, h: 600 },
+    arrangement: { kind: 'custom' as const, bars: [{ x: 0, y: 0.4, share: 1 }, { x: 0, y: -0.4, share: 1 }] },
+    gamma: 0.8,
+    loads: [{ id: 'E', Pu: 2_450_000, Mu: 0 }],
+    rho: 981.7 / 120_000,
+  };
+
+  it('e0 about y = max(200/30, 20) = 20 mm: MEd,y = 2450·0.020 = 49.0 kN·m, checked alone; the load fails about y', () => {
+    // Hand point about y (depth 200 mm, width 600 mm), x = 180 mm: block 0.8·180 = 144 mm, Cc = 20·144·600 = 1,728,000 N
+    // at 100 − 72 = 28 mm → 48.384 kN·m; bars at 100 mm: ε = 0.0035·80/180 = 0.0015556 → 311.1 MPa, less fcd = 20
+    // (inside the block): 291.1 MPa · 981.7 mm² = 285,780 N at 0. NRd = 2013.8 kN, MRd = 48.38 kN·m (compression branch).
+    // The demand (2450 kN, 49.0 kN·m) is at or above it: utilisation about y > 1.
+    const r = checkColumn(input).results[0]!;
+    expect(2_450_000).toBeGreaterThanOrEqual(1_728_000 + 285_780);
+    expectClose(r.yAxis!.Mdesign, 49e6, 1e-12);
+    expect(r.yAxis!.Mdesign).toBeGreaterThanOrEqual(48.384e6);
+    expect(r.yAxis!.utilisation!).toBeGreaterThan(1);
+    const f = r.findings.find((x) => x.rule === 'min-moment' && x.axis === 'y');
+    expect(f).toMatchObject({ clause: '6.1(4)', outcome: 'applied', value: 0, limit: 49e6 });
+    // about x alone the same e0 = 20 mm on h = 600 mm is carried (the x figure is below 1): the y check decides
+    expect(r.utilisation!).toBeLessThan(1);
+    expect(r.measureFrom).toBe('y');
+    expect(r.status).toBe('fails');
+  });
+});
+
 describe('U2: a governing minimum moment acts in either sign; on an unsymmetric layout the worse sign governs (ACI 318-19 6.6.4.5.4)', () => {
   // 12 × 20 in; 1 in² at y = +7.5 in (top), 3 in² at y = −7.5 in (bottom); Pu = 515 kip, Mu = −10 kip·in (compression
   // on the bottom, 3 in² face); kℓu = 216 in about x, 60 in about y (kℓu/r = 16.7, short: no minimum about y).
