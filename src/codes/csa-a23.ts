@@ -128,6 +128,8 @@ function resolveCsa(input: BasisInput): Basis {
     steelAreaLimits: (_p: number, ag: number) => ({ min: 0.01 * ag, max: 0.08 * ag }), // 10.9.1, 10.9.2
     // Short columns: no minimum eccentricity; the cap Pr,max stands in (the 15 + 0.03h minimum of 10.15.3 is for slender columns).
     minimumMoment: () => 0,
+    // from memory: 10.15.3.1 M2 ≥ Pf(15 + 0.03h); 10.1 strain compatibility
+    checkClauses: { slenderMinimumMoment: '10.15.3.1', sectionAnalysis: '10.1' },
     // CSA A23.1-19 6.6.5.2 (referenced by A23.3; from memory): clear distance ≥ max(1.4·db, 1.4·aggregate, 30 mm).
     minimumClearSpacing: (db: number, dg: number) => Math.max(1.4 * db, 1.4 * dg, 30),
     // 10.9.3 (from memory): four bars in rectangular or circular ties, six in spirals
@@ -136,8 +138,6 @@ function resolveCsa(input: BasisInput): Basis {
     clearSpacingRule: 'clear spacing ≥ max(1.4·db, 1.4·aggregate, 30 mm) (CSA A23.1-19 6.6.5.2, from memory)',
     barSet: 'csa-g30.18',
     slendernessMethod: 'moment-magnification-csa-a23', // 10.15.3 non-sway (from memory)
-    // from memory: 10.15.3.1 M2 ≥ Pf(15 + 0.03h); 10.1 strain compatibility
-    checkClauses: { slenderMinimumMoment: '10.15.3.1', sectionAnalysis: '10.1' },
     factorSummary: `φc ${CSA_PHI_C} · φs ${CSA_PHI_S} · α1 ${fmt(alpha1)} · β1 ${fmt(beta1)} (8.4.2, 8.4.3, 10.1.7)`,
     parameters: {
       'α1': r4(alpha1),
