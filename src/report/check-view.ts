@@ -394,7 +394,7 @@ export function checkAssumptions(c: ColumnCheckFrame): string[] {
   if (c.barSelection) {
     out.push(
       c.barSelection.detailing === 'cover'
-        ? `Bar proposals: one bar size each, centres at cover + tie + db/2 from the faces (γ recomputed per size); ${b.clearSpacingRule}; ${b.minimumBarRule}; sizes from ${barSet(b.barSet).source}, ${b.units === 'us' ? '#5' : '12 mm'} and up (common practice). Each proposal is re-verified with its discrete bars against every load with every effect (slenderness, minimum moment, both signs, ring orientations, exact biaxial).`
+        ? `Bar proposals: one bar size each, centres at cover + tie + db/2 from the faces (γ recomputed per size); ${b.clearSpacingRule}; ${b.minimumBarRule}; sizes from ${barSet(b.barSet).source}, ${b.units === 'us' ? '#5' : '12 mm'} and up (common practice). Each proposal is re-verified with its discrete bars against every load with every effect (slenderness, minimum moment, both signs, ring orientations, about y alone, exact biaxial).`
         : `Bar proposals: γ was given, so bar centres stay at (1 − γ)·h/2 from the faces for every size and the cover is not checked; ${b.clearSpacingRule}; ${b.minimumBarRule}. Each proposal is re-verified against every load with every effect.`,
     );
     if (c.barSelection.aggregate === null) out.push('No maximum aggregate size given: the aggregate term of the spacing rule is not checked.');
