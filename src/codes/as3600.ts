@@ -144,6 +144,8 @@ function resolveAs3600(input: BasisInput): Basis {
     steelAreaLimits: (_n: number, ag: number) => ({ min: 0.01 * ag, max: 0.04 * ag }), // 10.7.1 (from memory)
     // 10.1.2 (from memory): design moment not less than N*·0.05·D
     minimumMoment: (N: number, D: number) => Math.max(0, N) * 0.05 * D,
+    // from memory: 10.1.2 M* ≥ N*·0.05D, for short and slender columns alike; 10.6.2 section strength
+    checkClauses: { minimumMoment: '10.1.2', slenderMinimumMoment: '10.1.2', sectionAnalysis: '10.6.2' },
     // clear spacing of column bars (from memory; clause not verified): at least max(db, 1.5·aggregate, 25 mm)
     minimumClearSpacing: (db: number, dg: number) => Math.max(db, 1.5 * dg, 25),
     clearSpacingRule: 'clear spacing ≥ max(db, 1.5·aggregate, 25 mm) (AS 3600-2018, from memory; clause not verified)',

@@ -130,6 +130,8 @@ function resolveCsa(input: BasisInput): Basis {
     steelAreaLimits: (_p: number, ag: number) => ({ min: 0.01 * ag, max: 0.08 * ag }), // 10.9.1, 10.9.2
     // Short columns: no minimum eccentricity; the cap Pr,max stands in (the 15 + 0.03h minimum of 10.15.3 is for slender columns).
     minimumMoment: () => 0,
+    // from memory: 10.15.3.1 M2 ≥ Pf(15 + 0.03h); 10.1 strain compatibility
+    checkClauses: { slenderMinimumMoment: '10.15.3.1', sectionAnalysis: '10.1' },
     // CSA A23.1-19 6.6.5.2 (referenced by A23.3; from memory): clear distance ≥ max(1.4·db, 1.4·aggregate, 30 mm).
     minimumClearSpacing: (db: number, dg: number) => Math.max(1.4 * db, 1.4 * dg, 30),
     // 10.9.3 (from memory): four bars in rectangular or circular ties, six in spirals

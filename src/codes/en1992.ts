@@ -248,6 +248,8 @@ function resolveEc2(input: BasisInput): Basis {
     steelAreaLimits: (NEd: number, Ac: number) => ({ min: Math.max((0.1 * Math.max(0, NEd)) / fyd, 0.002 * Ac), max: rhoMax * Ac }),
     // 6.1(4): e0 = max(h/30, 20 mm) for compression; N in N, h in mm, moment in N·mm.
     minimumMoment: (NEd: number, h: number) => Math.max(0, NEd) * Math.max(h / 30, 20),
+    // 6.1(4) e0 = max(h/30, 20 mm); a slender column adds the imperfection ei of 5.2(7) (5.8.8.2); 6.1(2) section analysis
+    checkClauses: { minimumMoment: '6.1(4)', slenderMinimumMoment: '6.1(4), 5.2(7)', sectionAnalysis: '6.1(2)' },
     // 8.2(2): clear distance ≥ max(k1·φ, dg + k2, 20 mm), recommended k1 = 1, k2 = 5 mm.
     minimumClearSpacing: (db: number, dg: number) => Math.max(db, dg > 0 ? dg + 5 : 0, 20),
     // 9.5.2(4): a bar in each corner of a polygonal section (4 in a rectangle); at least four in a circular column

@@ -134,6 +134,8 @@ export interface Basis {
    * (EN 1992-1-1 6.1(4) minimum eccentricity); 0 where the basis sets none for short columns.
    */
   minimumMoment(axialDemand: number, depth: number): number;
+  /** clauses (in this basis's edition) of the rules the check applies around the section, for its typed findings */
+  readonly checkClauses?: CheckClauses;
   /**
    * Smallest clear distance between adjacent longitudinal bars of diameter db with maximum aggregate
    * size dg (0 when not given: the aggregate term is not checked), in the system's length unit.
@@ -264,4 +266,17 @@ export interface DesignCode {
    */
   namedStrength?(text: string, kind: 'concrete' | 'steel'): number | undefined;
   resolve(input: BasisInput): Basis;
+}
+
+/**
+ * Clauses of the check's rules around the section, named by the basis (the engine never spells one).
+ * A minimum moment is an accidental eccentricity: it acts about one axis at a time, in either sign.
+ */
+export interface CheckClauses {
+  /** the clause of `minimumMoment` (every column); absent where `minimumMoment` is 0 */
+  readonly minimumMoment?: string;
+  /** the minimum the slenderness method puts on a slender column's first-order moment */
+  readonly slenderMinimumMoment?: string;
+  /** strain compatibility of the actual section, the neutral axis free to incline (the exact biaxial search) */
+  readonly sectionAnalysis: string;
 }

@@ -17,6 +17,7 @@
 import { DEFAULT_ANGLE_STEP_DEG } from '../analysis/biaxial-family.js';
 import { capacityAlongRay as biaxialRay, prepareBiaxial, type BiaxialSection } from '../analysis/biaxial.js';
 import { prepareSection } from '../analysis/prepared-section.js';
+import type { RuleFinding } from '../codes/rules.js';
 import type { Basis, CapContext, StrainClass } from '../codes/types.js';
 import { layoutBars, mirroredBars, symmetricAboutBendingAxis, type LayoutOptions } from '../section/arrangements.js';
 import type { BarSize } from '../section/bar-tables.js';
@@ -134,6 +135,59 @@ export interface ColumnLoadResult {
   readonly measureValue: number | null;
   readonly governing: boolean;
   readonly notes: readonly string[];
+  /** the check about y alone (one axis at a time): the y minimum moment at the same Pu, with the y slenderness; null where nothing about y is checked alone */
+  readonly yAxis: YAxisCheck | null;
+  /** the exact biaxial search with Muy = 0, for a layout not symmetric about the bending plane (its neutral axis inclines); null otherwise */
+  readonly exactUniaxial: ExactUniaxial | null;
+  /** which check gives `measureValue` */
+  readonly measureFrom: MeasureSource;
+  /** the rules applied around the section for this load: rule, clause, axis, outcome and figures */
+  readonly findings: readonly RuleFinding[];
+}
+
+/** The check that gives a load's measure: about x (uniaxial or its exact search), about y alone (the same), or biaxial (Mux and Muy together). */
+export const MEASURE_SOURCES = ['x', 'x-exact', 'y', 'y-exact', 'biaxial'] as const;
+export type MeasureSource = (typeof MEASURE_SOURCES)[number];
+
+/**
+ * Bending about y alone at the same Pu (ACI 318-19 R6.6.4.5.4, EN 1992-1-1 5.8.9: a minimum moment acts about
+ * one axis at a time): the section turned (b and h swapped, bars swapped), the moment about y after the y
+ * slenderness raised to the y minimum, both signs (an accidental moment acts either way).
+ */
+export interface YAxisCheck {
+  /** moment about y after slenderness (magnitude), before the section minimum */
+  readonly Mu: number;
+  /** the basis's section minimum about y (0 where it sets none) */
+  readonly minimum: number;
+  /** the moment checked about y alone (magnitude) */
+  readonly Mdesign: number;
+  /** section depth in this bending plane (b for a rectangle) */
+  readonly depth: number;
+  /** P/Ag and M/(Ag·depth) */
+  readonly normalised: { readonly P: number; readonly M: number };
+  /** ρg required about y (reinforcement smeared at γ); null when not possible */
+  readonly rhoRequired: number | null;
+  readonly rhoStatus: RhoStatus;
+  /** utilisation of the given reinforcement about y; null when none is given */
+  readonly utilisation: number | null;
+  readonly capacity: { readonly P: number; readonly M: number } | null;
+  /** the variant that governs (branch with compression on the ±x face, ring orientation) */
+  readonly variant: VariantInfo;
+  /** the exact search, for a layout not symmetric about this bending plane */
+  readonly exact: ExactUniaxial | null;
+}
+
+/** The exact biaxial search of one axis's moment alone (the other moment 0), for a layout whose neutral axis inclines. */
+export interface ExactUniaxial {
+  /** exact utilisation of the given reinforcement over the signs searched; null when none is given */
+  readonly utilisation: number | null;
+  /** exact ρg required (bars smeared at γ) over the signs searched; null when not possible or reinforcement is given */
+  readonly rhoRequired: number | null;
+  readonly rhoStatus: RhoStatus | null;
+  /** the moment signs searched: +1 compresses the + face */
+  readonly signs: readonly (1 | -1)[];
+  /** neutral-axis angle at the governing capacity, degrees (0: parallel to the bending axis); null without given reinforcement */
+  readonly neutralAxisAngleDeg: number | null;
 }
 
 /** The reading off biaxial sheets (src/design/biaxial-chart-reading.ts); null where readings are off or the load is off the sheets. */
@@ -221,6 +275,31 @@ export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: n
 
 const fmtDeg = (d: number): string => String(Number(d.toFixed(2)));
 
+/**
+ * true when the bars are symmetric about the bending plane (x → −x for bending about x): only then does the
+ * neutral axis stay parallel to the bending axis under a moment about that axis alone. Otherwise the exact
+ * biaxial search (analysis/biaxial.ts) finds the inclined neutral axis.
+ */
+export function symmetricAboutBendingPlane(bars: readonly Bar[], depth: number): boolean {
+  return symmetricAboutBendingAxis(swapAxes(bars), depth);
+}
+
+/** The bars seen for bending about y: x and y swapped (a reflection; the y-axis check's section). */
+const swapAxes = (bars: readonly Bar[]): Bar[] => bars.map((b) => ({ x: b.y, y: b.x, area: b.area }));
+
+/** The shape seen for bending about y: b and h swapped. */
+const turnedShape = (shape: Shape): Shape => (shape.kind === 'rectangle' ? { ...shape, b: shape.h, h: shape.b } : shape);
+
+/** The variants of the section turned for bending about y (rings: the same orientations; otherwise the ±x faces). */
+function yVariants(shape: Shape, arrangement: Arrangement, unitBars: readonly Bar[]): Variant[] {
+  if (shape.kind === 'circle' && arrangement.kind === 'ring') return sectionVariants(shape, arrangement, 0.8 /* unused for rings */).map((v) => ({ ...v, map: (b) => v.map(swapAxes(b)) }));
+  if (symmetricAboutBendingAxis(swapAxes(unitBars), sectionDepth(turnedShape(shape)))) return [{ label: 'as drawn, about y', sign: 0, turnDeg: 0, map: swapAxes }];
+  return [
+    { label: 'branch with compression on the +x face', sign: 1, turnDeg: 0, map: swapAxes },
+    { label: 'branch with compression on the −x face', sign: -1, turnDeg: 0, map: (b) => mirroredBars(swapAxes(b)) },
+  ];
+}
+
 /** Layout options of γ and, when given, γB (layoutBars' gammaX). */
 const layoutOptions = (gamma: number, gammaB: number | undefined): LayoutOptions => (gammaB === undefined ? { gamma } : { gamma, gammaX: gammaB });
 
@@ -253,6 +332,19 @@ export interface ColumnCheckContext {
   /** biaxial surface of the checked bars */
   readonly checkedBiaxial: BiaxialSection | null;
   readonly biaxial: boolean;
+  /** the bars are symmetric about the bending plane (x → −x): the uniaxial check about x is exact */
+  readonly planeSymmetric: boolean;
+  /** the bars are symmetric about the x axis (y → −y): the uniaxial check about y alone is exact */
+  readonly axisSymmetric: boolean;
+  /** the section turned for bending about y, prepared on first use */
+  readonly yAxis: () => YAxisContext;
+}
+
+/** The section as the y-axis check sees it: b and h swapped, bars swapped, its variants. */
+export interface YAxisContext {
+  readonly shape: Shape;
+  readonly depth: number;
+  readonly variants: readonly PreparedVariant[];
 }
 
 /** Prepares everything shared by every load: variants, ray tables, chart sheets, the biaxial surface. */
@@ -279,7 +371,24 @@ export function prepareColumnCheck(input: ColumnCheckInput, opts: { readings?: b
     return { info, table, checked };
   });
   const biaxial = input.loads.some((l) => l.Muy !== undefined);
-  const checkedBiaxial = checkedBars && biaxial ? prepareBiaxial(basis, shape, checkedBars, capContext) : null;
+  const planeSymmetric = symmetricAboutBendingPlane(unit, depth) && (checkedBars === null || symmetricAboutBendingPlane(checkedBars, depth));
+  const axisSymmetric = variants.every((v) => v.info.sign === 0) && (checkedBars === null || shape.kind === 'circle' || symmetricAboutBendingAxis(checkedBars, depth));
+  // the exact surface serves loads with Muy and the exact search of a layout whose neutral axis inclines about x or y
+  const checkedBiaxial = checkedBars && (biaxial || !planeSymmetric || !axisSymmetric) ? prepareBiaxial(basis, shape, checkedBars, capContext) : null;
+  let yAxisCtx: YAxisContext | null = null;
+  const yAxis = (): YAxisContext => {
+    if (yAxisCtx) return yAxisCtx;
+    const shapeY = turnedShape(shape);
+    const yv = yVariants(shape, input.arrangement, unit).map(
+      (info): PreparedVariant => ({
+        info,
+        table: tabulate(prepareSection(basis, shapeY, info.map(unit), capContext), 128),
+        checked: checkedBars ? tabulate(prepareSection(basis, shapeY, info.map(checkedBars), capContext), 128) : null,
+      }),
+    );
+    yAxisCtx = { shape: shapeY, depth: sectionDepth(shapeY), variants: yv };
+    return yAxisCtx;
+  };
   const positionBars = layoutBars(shape, input.arrangement, area, at);
   const biaxialCharts =
     readings && biaxial && input.arrangement.kind !== 'custom'
@@ -294,7 +403,7 @@ export function prepareColumnCheck(input: ColumnCheckInput, opts: { readings?: b
           ...(input.chartAxialStep !== undefined ? { axialStep: input.chartAxialStep } : {}),
         })
       : null;
-  return { input, basis, area, depth, capContext, variants, charts, biaxialCharts, checkedRho, checkedBars, positionBars, checkedBiaxial, biaxial };
+  return { input, basis, area, depth, capContext, variants, charts, biaxialCharts, checkedRho, checkedBars, positionBars, checkedBiaxial, biaxial, planeSymmetric, axisSymmetric, yAxis };
 }
 
 // ───────────────────────────── one load ─────────────────────────────
@@ -353,6 +462,13 @@ function eccentricityRatio(P: number, M: number): number | null {
 
 const fmtRho = (r: number): string => String(Number(r.toFixed(4)));
 
+/** One variant with the load as it sees it, and the sign of the moment (+1 compresses the + face). */
+interface Candidate {
+  v: PreparedVariant;
+  load: NormalisedLoad;
+  sign: 1 | -1;
+}
+
 /** What a load demands of the section: slenderness applied, the moment raised to the minimum, the variants it meets. */
 interface Demand {
   magnified: MagnifiedLoad | null;
@@ -362,16 +478,34 @@ interface Demand {
   finiteMoments: boolean;
   Mdesign: number;
   raised: boolean;
+  /** the moment's sign is free: raised to a minimum, a minimum (accidental) moment governs the slenderness, or Mux = 0 */
+  signFree: boolean;
+  /** the signs of the moment about x checked (+1 compresses the +y face) */
+  signs: (1 | -1)[];
   n: NormalisedLoad;
   limits: { min: number; max: number };
   /** each variant with the load as it sees it (M signed for the two branches of an unsymmetric layout) */
-  candidates: { v: PreparedVariant; load: NormalisedLoad }[];
+  candidates: Candidate[];
   unsymmetric: boolean;
+  /** the check about y alone; null where nothing about y is checked alone */
+  y: YDemand | null;
+}
+
+/** The demand about y alone (one axis at a time). */
+interface YDemand {
+  /** moment about y after slenderness, magnitude, before the section minimum */
+  Mu: number;
+  minimum: number;
+  Mdesign: number;
+  raised: boolean;
+  n: NormalisedLoad;
+  candidates: Candidate[];
+  axis: YAxisContext;
 }
 
 function demandOf(ctx: ColumnCheckContext, load: FactoredLoad): Demand {
   const { basis, area, depth, input } = ctx;
-  // 1. slenderness: magnified moments keep their signs
+  // 1. slenderness about both axes: magnified moments keep their signs
   let magnified: MagnifiedLoad | null = null;
   let Mux = load.Mu;
   let Muy = load.Muy;
@@ -380,7 +514,8 @@ function demandOf(ctx: ColumnCheckContext, load: FactoredLoad): Demand {
     const bars = ctx.checkedBars ?? ctx.positionBars;
     magnified = magnifyLoad(basis, input.shape, bars, { Pu: load.Pu, Mux: load.Mu, Muy: load.Muy ?? 0, ...endMoments(load) }, input.slenderness, ctx.checkedBars === null);
     Mux = magnified.Mux;
-    if (load.Muy !== undefined || magnified.y) Muy = magnified.Muy;
+    // a load without Muy stays uniaxial: its y slenderness feeds the check about y alone
+    if (load.Muy !== undefined) Muy = magnified.Muy;
   }
   // an unstable magnifier gives unbounded moments: no section check applies (the status says why)
   const finiteMoments = Number.isFinite(Mux) && (Muy === undefined || Number.isFinite(Muy));
@@ -393,18 +528,43 @@ function demandOf(ctx: ColumnCheckContext, load: FactoredLoad): Demand {
   const Mdesign = Math.max(Mmag, minimum);
   const raised = Mdesign > Mmag;
   const n = normalise(load.Pu, Mdesign, area, depth);
-  // an unsymmetric layout is one closed curve of two branches: the load, with its sign, meets one of them
-  // (a moment raised to a minimum is taken with both signs); symmetric layouts and rings see |M|
+  // an unsymmetric layout is one closed curve of two branches: the load, with its sign, meets one of them.
+  // A minimum moment is an accidental eccentricity and acts either way: where one governs (the basis minimum
+  // raised the moment, or the slenderness method's minimum set it) both signs are taken; symmetric layouts and rings see |M|
   const unsymmetric = ctx.variants.some((v) => v.info.sign !== 0);
-  const signs = !unsymmetric ? [1] : raised || Mux === 0 ? [1, -1] : [Math.sign(Mux)];
-  const candidates = signs.flatMap((sg) => ctx.variants.map((v) => ({ v, load: { P: n.P, M: v.info.sign === -1 ? -sg * n.M : sg * n.M } })));
-  return { magnified, Mux, Muy, finiteMoments, Mdesign, raised, n, limits: rhoLimitsFor(basis, load.Pu, area), candidates, unsymmetric };
+  const signFree = raised || Mux === 0 || (magnified?.minimum.x.governs ?? false);
+  const signs: (1 | -1)[] = !unsymmetric ? [1] : signFree ? [1, -1] : [Mux < 0 ? -1 : 1];
+  const candidates = signs.flatMap((sg) => ctx.variants.map((v): Candidate => ({ v, sign: sg, load: { P: n.P, M: v.info.sign === -1 ? -sg * n.M : sg * n.M } })));
+  const y = finiteMoments ? yDemandOf(ctx, load, magnified, Muy) : null;
+  return { magnified, Mux, Muy, finiteMoments, Mdesign, raised, signFree, signs, n, limits: rhoLimitsFor(basis, load.Pu, area), candidates, unsymmetric, y };
 }
 
 /**
- * Utilisation of the checked reinforcement for one load with every effect: the worst variant (screened on the
- * ray table when `exact` is false) and the exact biaxial capacity where Muy is given. Infinity when the load is
- * unstable or outside the slenderness method.
+ * Bending about y alone at the same Pu (ACI 318-19 R6.6.4.5.4, EN 1992-1-1 5.8.9: minimum moments act about one
+ * axis at a time): the moment about y after the y slenderness (0 for a load without Muy), raised to the basis
+ * minimum about y. A load with Muy is checked with Mux and Muy together (biaxial), and about y alone only where
+ * the section minimum raises its Muy. Both signs: the moment is accidental. Null where there is nothing to check.
+ */
+function yDemandOf(ctx: ColumnCheckContext, load: FactoredLoad, magnified: MagnifiedLoad | null, Muy: number | undefined): YDemand | null {
+  const { basis, area, input } = ctx;
+  const yMag = magnified?.y ? magnified.y.magnifiedMoment : Math.abs(load.Muy ?? 0);
+  // an unstable magnifier about y: the status says so, no section check applies
+  if (!Number.isFinite(yMag)) return null;
+  const minimum = basis.minimumMoment(load.Pu, sectionDepth(turnedShape(input.shape)));
+  const Mdesign = Math.max(Math.abs(yMag), minimum);
+  if (!(Mdesign > 0)) return null;
+  if (load.Muy !== undefined && !(Mdesign > Math.abs(Muy ?? 0) * (1 + 1e-9))) return null;
+  const axis = ctx.yAxis();
+  const n = normalise(load.Pu, Mdesign, area, axis.depth);
+  const signs: (1 | -1)[] = axis.variants.some((v) => v.info.sign !== 0) ? [1, -1] : [1];
+  const candidates = signs.flatMap((sg) => axis.variants.map((v): Candidate => ({ v, sign: sg, load: { P: n.P, M: v.info.sign === -1 ? -sg * n.M : sg * n.M } })));
+  return { Mu: Math.abs(yMag), minimum, Mdesign, raised: Mdesign > Math.abs(yMag), n, candidates, axis };
+}
+
+/**
+ * Utilisation of the checked reinforcement for one load with every effect: the worst variant about x and about y
+ * alone (screened on the ray tables when `exact` is false), the exact search where the neutral axis inclines, and
+ * the exact biaxial capacity where Muy is given. Infinity when the load is unstable or outside the slenderness method.
  */
 function checkedUtilisation(ctx: ColumnCheckContext, load: FactoredLoad, exact: boolean): number {
   const d = demandOf(ctx, load);
@@ -412,26 +572,89 @@ function checkedUtilisation(ctx: ColumnCheckContext, load: FactoredLoad, exact: 
   if (bad || !d.finiteMoments) return Infinity;
   let u = 0;
   for (const { v, load: l } of d.candidates) u = Math.max(u, capacityAlongRay(v.checked!, ctx.checkedRho!, l, exact).utilisation);
+  if (d.y) for (const { v, load: l } of d.y.candidates) u = Math.max(u, capacityAlongRay(v.checked!, ctx.checkedRho!, l, exact).utilisation);
   if (exact && d.Muy !== undefined && ctx.checkedBiaxial) u = Math.max(u, biaxialRay(ctx.checkedBiaxial, load.Pu, d.Mux, d.Muy).utilisation);
+  if (exact) {
+    const ex = exactSearches(ctx, load.Pu, d);
+    u = Math.max(u, ex.x?.utilisation ?? 0, ex.y?.utilisation ?? 0);
+  }
   return u;
 }
 
-/** The whole result for one load. */
-export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index: number): ColumnLoadResult {
-  const { basis, area, depth, input } = ctx;
-  const notes: string[] = [];
-  const { magnified, Mux, Muy, finiteMoments, Mdesign, raised, n, limits, candidates, unsymmetric } = demandOf(ctx, load);
+/**
+ * The exact biaxial search of one axis's moment alone (the other 0), for a layout not symmetric about that
+ * bending plane: its neutral axis inclines, so the uniaxial curve (neutral axis parallel to the axis) is not the
+ * capacity. Checked reinforcement: the largest exact utilisation over the signs; else the largest exact ρg required.
+ */
+function exactAlone(ctx: ColumnCheckContext, Pu: number, axis: 'x' | 'y', M: number, signs: readonly (1 | -1)[], limits: { min: number; max: number }): ExactUniaxial {
+  const { basis, input } = ctx;
+  const vec = (sg: number) => (axis === 'x' ? { Mux: sg * M, Muy: 0 } : { Mux: 0, Muy: sg * M });
+  if (ctx.checkedBiaxial) {
+    let best: ReturnType<typeof biaxialRay> | null = null;
+    for (const sg of signs) {
+      const m = vec(sg);
+      const r = biaxialRay(ctx.checkedBiaxial, Pu, m.Mux, m.Muy);
+      if (!best || r.utilisation > best.utilisation) best = r;
+    }
+    // inclination of the neutral axis from the bending axis (θ = 0 about x, π/2 about y), degrees in (−180, 180]
+    const deg = ((best!.point.theta - (axis === 'x' ? 0 : Math.PI / 2)) * 180) / Math.PI;
+    const wrapped = deg - 360 * Math.ceil((deg - 180) / 360);
+    return { utilisation: best!.utilisation, rhoRequired: null, rhoStatus: null, signs, neutralAxisAngleDeg: wrapped };
+  }
+  let rho = -Infinity;
+  let status: RhoStatus = 'minimum-governs';
+  for (const sg of signs) {
+    const r = biaxialRhoRequired(basis, input.shape, input.arrangement, input.gamma, ctx.capContext, { Pu, ...vec(sg) }, limits, input.gammaB);
+    if (r.rho === null) return { utilisation: null, rhoRequired: null, rhoStatus: 'not-possible', signs, neutralAxisAngleDeg: null };
+    if (r.rho > rho) {
+      rho = r.rho;
+      status = r.status;
+    }
+  }
+  return { utilisation: null, rhoRequired: rho, rhoStatus: status, signs, neutralAxisAngleDeg: null };
+}
+
+/** The exact searches a load needs: about x where the layout is not symmetric about the bending plane, about y alone where it is not symmetric about the x axis. */
+function exactSearches(ctx: ColumnCheckContext, Pu: number, d: Demand): { x: ExactUniaxial | null; y: ExactUniaxial | null } {
+  if (!d.finiteMoments) return { x: null, y: null };
+  const x = !ctx.planeSymmetric && d.Mdesign > 0 ? exactAlone(ctx, Pu, 'x', d.Mdesign, d.signs, d.limits) : null;
+  const y = d.y && !ctx.axisSymmetric ? exactAlone(ctx, Pu, 'y', d.y.Mdesign, [1, -1], d.limits) : null;
+  return { x, y };
+}
+
+/** The governing variant of a set of candidates, with every sign's worst measure (utilisation, or ρg required). */
+function governingOf(ctx: ColumnCheckContext, candidates: readonly Candidate[], limits: { min: number; max: number }): { g: VariantOutcome; bySign: Map<1 | -1, number> } {
   const checked = ctx.checkedRho !== null;
   let gov: VariantOutcome | null = null;
-  for (const { v, load: l } of candidates) {
+  const bySign = new Map<1 | -1, number>();
+  for (const { v, load: l, sign } of candidates) {
     const req = rhoRequired(v.table, l, limits);
     const strainRho = checked ? ctx.checkedRho! : (req.rho ?? limits.max);
     const strainTable = v.checked ?? v.table;
     const cap = capacityAlongRay(strainTable, strainRho, l);
     const o = { v, req, strainRho, cap, strainTable };
     gov = gov ? worse(gov, o, checked) : o;
+    const m = checked ? cap.utilisation : (req.rho ?? Infinity);
+    bySign.set(sign, Math.max(bySign.get(sign) ?? -Infinity, m));
   }
-  const g = gov!;
+  return { g: gov!, bySign };
+}
+
+/** Words for where a failing measure comes from (the x uniaxial and biaxial figures need none). */
+const MEASURE_WORDS: Partial<Record<MeasureSource, string>> = {
+  'x-exact': 'about x, exact search: the neutral axis inclines',
+  y: 'about y alone',
+  'y-exact': 'about y alone, exact search: the neutral axis inclines',
+};
+
+/** The whole result for one load. */
+export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index: number): ColumnLoadResult {
+  const { basis, area, depth, input } = ctx;
+  const notes: string[] = [];
+  const d = demandOf(ctx, load);
+  const { magnified, Mux, Muy, finiteMoments, Mdesign, raised, n, limits, candidates, unsymmetric } = d;
+  const checked = ctx.checkedRho !== null;
+  const { g, bySign } = governingOf(ctx, candidates, limits);
   // the sheets of an unsymmetric layout draw both branches: read them with the signed moment
   const chartM = unsymmetric && Mux < 0 ? -n.M : n.M;
   const chartSet = ctx.charts;
@@ -440,6 +663,7 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
   if (g.req.status === 'minimum-governs') notes.push(`minimum ρg = ${fmtRho(limits.min)} governs`);
   if (g.req.governedBy === 'cap') notes.push('axial cap governs ρg');
   if (raised) notes.push(unsymmetric ? 'moment raised to the basis minimum; both signs checked, the worse governs' : 'moment raised to the basis minimum');
+  else if (unsymmetric && Mux !== 0 && d.signs.length === 2) notes.push('the minimum moment of the slenderness method governs: both signs checked, the worse governs');
   if (g.v.info.turnDeg !== 0) notes.push(`weakest orientation: ${g.v.info.label}`);
   if (g.v.info.sign === -1) notes.push('the branch with compression on the −y face governs');
   if (chartSet && reading.rhoFromChart === null) notes.push('off the charted range');
@@ -463,13 +687,53 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
     }
   }
 
-  // 4. status and measure
+  // 3b. about y alone, and the exact searches of layouts whose neutral axis inclines
+  const ex = exactSearches(ctx, load.Pu, d);
+  let yAxis: YAxisCheck | null = null;
+  let yBySign: Map<1 | -1, number> | null = null;
+  if (d.y) {
+    const yo = governingOf(ctx, d.y.candidates, limits);
+    yBySign = yo.bySign;
+    const yg = yo.g;
+    yAxis = {
+      Mu: d.y.Mu,
+      minimum: d.y.minimum,
+      Mdesign: d.y.Mdesign,
+      depth: d.y.axis.depth,
+      normalised: { P: d.y.n.P, M: d.y.n.M },
+      rhoRequired: yg.req.rho,
+      rhoStatus: yg.req.status,
+      utilisation: checked ? yg.cap.utilisation : null,
+      capacity: checked && !(d.y.n.P === 0 && d.y.n.M === 0) ? { P: yg.cap.P * area, M: yg.cap.M * area * d.y.axis.depth } : null,
+      variant: { label: yg.v.info.label, sign: yg.v.info.sign, turnDeg: yg.v.info.turnDeg },
+      exact: ex.y,
+    };
+    if (d.y.raised) notes.push('about y alone: the moment raised to the basis minimum (one axis at a time)');
+  }
+  if (ex.x) notes.push('bars not symmetric about the bending plane: exact search with the neutral axis free to incline');
+
+  // 4. status and measure: the largest of every figure
   const utilisation = checked ? g.cap.utilisation : null;
   const biaxialUtil = biaxial?.exact?.utilisation ?? null;
   const biaxialRho = biaxial && biaxial.rhoStatus !== null ? (biaxial.rhoRequired ?? Infinity) : null;
   const uniRho = g.req.rho ?? Infinity;
-  const measureValue = checked ? Math.max(utilisation!, biaxialUtil ?? 0) : Math.max(uniRho, biaxialRho ?? 0);
-  const st = statusOf({ magnified, checked, measureValue, notPossible: !checked && !Number.isFinite(measureValue), finite: finiteMoments, limitsMax: limits.max });
+  const exactMeasure = (e: ExactUniaxial | null): number => (e === null ? 0 : checked ? (e.utilisation ?? 0) : e.rhoStatus === 'not-possible' ? Infinity : (e.rhoRequired ?? 0));
+  const parts: [MeasureSource, number][] = [
+    ['x', checked ? utilisation! : uniRho],
+    ['x-exact', exactMeasure(ex.x)],
+    ['y', yAxis === null ? 0 : checked ? yAxis.utilisation! : (yAxis.rhoRequired ?? Infinity)],
+    ['y-exact', exactMeasure(ex.y)],
+    ['biaxial', checked ? (biaxialUtil ?? 0) : (biaxialRho ?? 0)],
+  ];
+  let [measureFrom, measureValue] = parts[0]!;
+  for (const [from, v] of parts.slice(1)) {
+    if (v > measureValue) {
+      measureFrom = from;
+      measureValue = v;
+    }
+  }
+  const st = statusOf({ magnified, checked, measureValue, measureFrom, notPossible: !checked && !Number.isFinite(measureValue), finite: finiteMoments, limitsMax: limits.max });
+  const findings = findingsOf(ctx, load, d, { bySign, yBySign, exX: ex.x, exY: ex.y, uniX: parts[0]![1], uniY: parts[2]![1] });
 
   const unbounded = !finiteMoments;
   return {
@@ -505,7 +769,66 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
     measureValue: Number.isFinite(measureValue) ? measureValue : null,
     governing: false,
     notes,
+    yAxis,
+    exactUniaxial: ex.x,
+    measureFrom,
+    findings,
   };
+}
+
+/**
+ * The rules applied around the section for one load, as typed findings with the basis's clauses: the minimum
+ * moment about each axis (the section minimum, and the slenderness method's minimum on a slender axis), both
+ * signs where a minimum governs on an unsymmetric layout (value: the worse sign's measure, limit: the other's),
+ * and the exact search where the neutral axis inclines (value: exact measure, limit: the uniaxial one).
+ */
+function findingsOf(
+  ctx: ColumnCheckContext,
+  load: FactoredLoad,
+  d: Demand,
+  f: { bySign: Map<1 | -1, number>; yBySign: Map<1 | -1, number> | null; exX: ExactUniaxial | null; exY: ExactUniaxial | null; uniX: number; uniY: number },
+): RuleFinding[] {
+  const cl = ctx.basis.checkClauses;
+  const out: RuleFinding[] = [];
+  if (!cl || !d.finiteMoments) return out;
+  const checked = ctx.checkedRho !== null;
+  const mx = d.magnified?.minimum.x;
+  const my = d.magnified?.minimum.y;
+  const minimumX = ctx.basis.minimumMoment(load.Pu, ctx.depth);
+  // the minimum about x
+  if (cl.minimumMoment && minimumX > 0) {
+    out.push({ rule: 'min-moment', clause: cl.minimumMoment, axis: 'x', outcome: d.raised ? 'applied' : 'met', value: d.Mdesign > minimumX && !d.raised ? d.Mdesign : Math.abs(d.Mux), limit: minimumX, quantity: 'moment' });
+  }
+  if (cl.slenderMinimumMoment && d.magnified && !d.magnified.x.neglected && mx && mx.firstOrder > 0) {
+    out.push({ rule: 'min-moment', clause: cl.slenderMinimumMoment, axis: 'x', outcome: mx.governs ? 'applied' : 'met', value: mx.given, limit: mx.firstOrder, quantity: 'moment' });
+  }
+  // the minimum about y, checked alone
+  if (d.y && cl.minimumMoment && d.y.minimum > 0) {
+    out.push({ rule: 'min-moment', clause: cl.minimumMoment, axis: 'y', outcome: d.y.raised ? 'applied' : 'met', value: d.y.Mu, limit: d.y.minimum, quantity: 'moment' });
+  }
+  if (cl.slenderMinimumMoment && d.magnified?.y && !d.magnified.y.neglected && my && my.firstOrder > 0) {
+    out.push({ rule: 'min-moment', clause: cl.slenderMinimumMoment, axis: 'y', outcome: my.governs ? 'applied' : 'met', value: my.given, limit: my.firstOrder, quantity: 'moment' });
+  }
+  // both signs of a governing minimum on an unsymmetric layout
+  const signClause = (raisedBySection: boolean) => (raisedBySection ? cl.minimumMoment : cl.slenderMinimumMoment) ?? cl.minimumMoment ?? cl.slenderMinimumMoment;
+  const bothSigns = (axis: 'x' | 'y', by: Map<1 | -1, number>, raisedBySection: boolean) => {
+    const a = by.get(1);
+    const b = by.get(-1);
+    const clause = signClause(raisedBySection);
+    if (a === undefined || b === undefined || !clause) return;
+    out.push({ rule: 'min-moment-sign', clause, axis, outcome: 'applied', value: Math.max(a, b), limit: Math.min(a, b), quantity: 'ratio' });
+  };
+  if (d.unsymmetric && d.signs.length === 2 && (d.raised || (mx?.governs ?? false))) bothSigns('x', f.bySign, d.raised);
+  if (d.y && f.yBySign && f.yBySign.size === 2) bothSigns('y', f.yBySign, d.y.raised);
+  // the exact search where the neutral axis inclines
+  const exact = (axis: 'x' | 'y', e: ExactUniaxial | null, uni: number) => {
+    if (!e) return;
+    const v = checked ? e.utilisation : e.rhoStatus === 'not-possible' ? null : e.rhoRequired;
+    out.push({ rule: 'exact-section', clause: cl.sectionAnalysis, axis, outcome: 'applied', value: v, limit: Number.isFinite(uni) ? uni : null, quantity: 'ratio' });
+  };
+  exact('x', f.exX, f.uniX);
+  exact('y', f.exY, f.uniY);
+  return out;
 }
 
 /** The biaxial sheet reading of a load (minimum ρg applied as on the uniaxial readings), or nulls where there are no sheets. */
@@ -520,7 +843,7 @@ const END_KEYS = ['M1', 'M2', 'M1y', 'M2y', 'M01', 'M02', 'M01y', 'M02y'] as con
 const endMoments = (l: FactoredLoad): EndMoments => Object.fromEntries(END_KEYS.filter((k) => l[k] !== undefined).map((k) => [k, l[k]!])) as EndMoments;
 
 /** Status from the checks, worst first: unstable, outside the method's scope, not possible, fails. */
-function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measureValue: number; notPossible: boolean; finite: boolean; limitsMax: number }): {
+function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measureValue: number; measureFrom: MeasureSource; notPossible: boolean; finite: boolean; limitsMax: number }): {
   status: LoadStatus;
   statusReason: string;
   statusClause: string | null;
@@ -535,7 +858,7 @@ function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measur
     if (s && !s.ok) return { status: 'outside-scope', statusReason: `about ${axis}: ${s.warnings[0] ?? "second-order moment beyond the method's limit"}`, statusClause: s.limitClause ?? s.method };
   }
   if (!x.finite || x.notPossible) return { status: 'not-possible', statusReason: `needs more than the maximum ρg = ${fmtRho(x.limitsMax)}: enlarge the section`, statusClause: null };
-  if (x.checked && !(x.measureValue <= 1 + 1e-9)) return { status: 'fails', statusReason: `utilisation ${x.measureValue.toFixed(3)} > 1`, statusClause: null };
+  if (x.checked && !(x.measureValue <= 1 + 1e-9)) return { status: 'fails', statusReason: `utilisation ${x.measureValue.toFixed(3)} > 1${MEASURE_WORDS[x.measureFrom] ? ` (${MEASURE_WORDS[x.measureFrom]})` : ''}`, statusClause: null };
   return { status: 'ok', statusReason: '', statusClause: null };
 }
 
@@ -639,9 +962,18 @@ const newDigest = (): LoadDigest => ({ counts: Object.fromEntries(LOAD_STATUSES.
 function addToDigest(d: LoadDigest, r: ColumnLoadResult, area: number): void {
   d.counts[r.status]++;
   if (r.status === 'unstable' || r.status === 'outside-scope') d.blocked = true;
-  if (r.rhoRequired === null || r.biaxial?.rhoStatus === 'not-possible') d.beyondMax = true;
-  d.requiredArea = Math.max(d.requiredArea, r.steelRequired ?? 0, (r.biaxial?.rhoRequired ?? 0) * area);
+  // with no reinforcement given the measure is the largest ρg required (about x, about y alone, exact, biaxial)
+  const rhoMeasure = r.utilisation === null && r.status !== 'unstable' && r.status !== 'outside-scope';
+  if (r.rhoRequired === null || r.biaxial?.rhoStatus === 'not-possible' || (rhoMeasure && r.measureValue === null)) d.beyondMax = true;
+  d.requiredArea = Math.max(d.requiredArea, r.steelRequired ?? 0, (r.biaxial?.rhoRequired ?? 0) * area, rhoMeasure ? (r.measureValue ?? 0) * area : 0);
 }
+
+/** Where the governing figure comes from, when not the uniaxial check about x or the biaxial check. */
+const GOVERNING_FROM: Partial<Record<MeasureSource, string>> = {
+  'x-exact': '; here the exact search about x',
+  y: '; here the check about y alone',
+  'y-exact': '; here the exact search about y alone',
+};
 
 /** Ranking, bar proposals, summary and exit status for the results of every load. */
 export function summarise(ctx: ColumnCheckContext, sorted: readonly ColumnLoadResult[]): ColumnCheck {
@@ -662,8 +994,8 @@ function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult 
     : gov.status !== 'ok' && gov.status !== 'fails'
       ? `${gov.status} ${gov.statusReason}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`
       : measure === 'utilisation'
-        ? `highest utilisation ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(3)} (the larger of the uniaxial and exact biaxial figures)`
-        : `largest ρg required ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(4)}${ctx.biaxial ? ' (the larger of the uniaxial and exact biaxial figures)' : ''}`;
+        ? `highest utilisation ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(3)} (the larger of the uniaxial and exact biaxial figures${GOVERNING_FROM[gov.measureFrom] ?? ''})`
+        : `largest ρg required ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(4)}${ctx.biaxial ? ` (the larger of the uniaxial and exact biaxial figures${GOVERNING_FROM[gov.measureFrom] ?? ''})` : GOVERNING_FROM[gov.measureFrom] ? ` (${GOVERNING_FROM[gov.measureFrom]!.slice(2)})` : ''}`;
   const summaryText =
     total === 0
       ? 'no loads'

@@ -58,15 +58,31 @@ export interface MagnifiedLoad {
   Mux: number;
   Muy: number;
   x: SlendernessResult;
-  /** present when the load has a moment about y or y-axis member data is given */
+  /** bending about y: always checked (klu-y defaults to klu), with Muy = 0 when the load has none */
   y: SlendernessResult | null;
+  /** the accidental part of each axis's moment: what the method gives with no end moments (the minimum moment, magnified) */
+  minimum: { readonly x: AxisMinimum; readonly y: AxisMinimum };
+}
+
+/** The minimum (accidental) moment of one axis, as the slenderness method applies it. */
+export interface AxisMinimum {
+  /** the larger first-order end moment the method took from the load (M2 given, or |Mu|) */
+  given: number;
+  /** the first-order moment the method takes with no end moments given (ACI 318-19 6.6.4.5.4 M2,min; EN 1992-1-1 NEd·max(ei, e0)); 0 where slenderness is neglected */
+  firstOrder: number;
+  /** the same after the method (magnified) */
+  moment: number;
+  /** the minimum governs the axis's moment (it is at least the moment from the given end moments): its sign is free */
+  governs: boolean;
 }
 
 /**
  * Second-order moments about each axis separately (ACI 318-19 6.6.4: each axis magnified for its own
- * conditions, common practice). M2 defaults to |Mu| about that axis; M1 defaults to −M2 (equal end
- * moments in single curvature, M1/M2 = −1, the most severe case: Cm = 1.0). Signs of Mux and Muy are kept.
- * M01 without M02 is refused; M02 alone means equal end moments in single curvature (M01 = M02).
+ * conditions, common practice). Both axes are always checked: bending about y with Muy = 0 when the load
+ * has none, with y member data defaulting to x's (a minimum moment acts about one axis at a time,
+ * ACI 318-19 R6.6.4.5.4, EN 1992-1-1 5.8.9). M2 defaults to |Mu| about that axis; M1 defaults to −M2
+ * (equal end moments in single curvature, M1/M2 = −1, the most severe case: Cm = 1.0). Signs of Mux and
+ * Muy are kept. M01 without M02 is refused; M02 alone means equal end moments in single curvature (M01 = M02).
  * `positionsOnly`: the bars mark positions from γ and the arrangement, not a chosen reinforcement.
  */
 export function magnifyLoad(
@@ -78,19 +94,27 @@ export function magnifyLoad(
   positionsOnly = false,
 ): MagnifiedLoad {
   const sec = { shape, bars, positionsOnly };
+  const secY = aboutYAxis(sec);
   const ex = endPair(load.M1, load.M2, load.M01, load.M02);
   const ey = endPair(load.M1y, load.M2y, load.M01y, load.M02y);
   const m2x = ex.M2 ?? Math.abs(load.Mux);
   const x = slendernessCheck(basis, sec, { ...req.x, Pu: load.Pu, M2: m2x, M1: ex.M1 ?? -m2x });
   const sign = (m: number) => (m < 0 ? -1 : 1);
-  let y: SlendernessResult | null = null;
-  let Muy = load.Muy;
-  if (load.Muy !== 0 || req.y !== undefined || ey.M2 !== undefined) {
-    const m2y = ey.M2 ?? Math.abs(load.Muy);
-    y = slendernessCheck(basis, aboutYAxis(sec), { ...(req.y ?? req.x), Pu: load.Pu, M2: m2y, M1: ey.M1 ?? -m2y });
-    Muy = sign(load.Muy) * y.magnifiedMoment;
-  }
-  return { Mux: sign(load.Mux) * x.magnifiedMoment, Muy, x, y };
+  const m2y = ey.M2 ?? Math.abs(load.Muy);
+  const memberY = req.y ?? req.x;
+  const y = slendernessCheck(basis, secY, { ...memberY, Pu: load.Pu, M2: m2y, M1: ey.M1 ?? -m2y });
+  // the accidental part alone: the same method with no end moments (M1 = M2 = 0)
+  const accidental = (r: SlendernessResult, m2: number, run: () => SlendernessResult): AxisMinimum => {
+    const z = m2 === 0 ? r : run();
+    const firstOrder = z.neglected ? 0 : z.firstOrderMoment;
+    const moment = z.neglected ? 0 : z.magnifiedMoment;
+    return { given: m2, firstOrder, moment, governs: moment > 0 && Number.isFinite(r.magnifiedMoment) && moment >= r.magnifiedMoment * (1 - 1e-9) };
+  };
+  const minimum = {
+    x: accidental(x, m2x, () => slendernessCheck(basis, sec, { ...req.x, Pu: load.Pu, M2: 0, M1: -0 })),
+    y: accidental(y, m2y, () => slendernessCheck(basis, secY, { ...memberY, Pu: load.Pu, M2: 0, M1: -0 })),
+  };
+  return { Mux: sign(load.Mux) * x.magnifiedMoment, Muy: sign(load.Muy) * y.magnifiedMoment, x, y, minimum };
 }
 
 /** The actual bars of a checked reinforcement, ready for the biaxial surface. */

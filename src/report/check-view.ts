@@ -7,8 +7,9 @@
  * so the text and the JSON can also be produced load by load (`checkTextPieces`, `checkJsonPieces`) from
  * a check held as a ranking (`rankColumnCheck`), with the same bytes as from a whole `ColumnCheck`.
  */
+import type { RuleFinding } from '../codes/rules.js';
 import { strainClassWord } from '../codes/types.js';
-import type { ColumnCheck, ColumnCheckFrame, ColumnCheckHead, ColumnLoadResult, LoadStatus } from '../design/column-check.js';
+import type { ColumnCheck, ColumnCheckFrame, ColumnCheckHead, ColumnLoadResult, LoadStatus, MeasureSource } from '../design/column-check.js';
 import type { SlendernessResult } from '../design/slenderness.js';
 import { barSet } from '../section/bar-tables.js';
 import { faceCounts, type Arrangement } from '../section/types.js';
@@ -72,9 +73,91 @@ export function noteText(r: ColumnLoadResult, c: Pick<ColumnCheck, 'basis' | 'sh
     r.momentRaised ? `${symbolsOf(c).M} raised to minimum` : '',
     r.variant.sign === -1 ? '−y-face branch governs' : '',
     r.variant.turnDeg !== 0 ? `weakest orientation ${fmt(r.variant.turnDeg, 4)}°` : '',
+    ...r.findings.filter((x) => x.rule === 'min-moment-sign').map((x) => `minimum both signs about ${x.axis}: ${f(x.value ?? null, 3)} vs ${f(x.limit ?? null, 3)} [${x.clause}]`),
+    MEASURE_NOTE[r.measureFrom] ? `${MEASURE_NOTE[r.measureFrom]} governs` : '',
   ]
     .filter(Boolean)
     .join('; ');
+}
+
+/** The check that gives a load's measure, in words (the uniaxial and biaxial figures have their own columns). */
+const MEASURE_NOTE: Partial<Record<MeasureSource, string>> = {
+  'x-exact': 'exact search about x (neutral axis inclined)',
+  y: 'about y alone',
+  'y-exact': 'about y alone, exact search (neutral axis inclined)',
+};
+
+/** A rule finding's name in words; rules added by other checks show their id. */
+const RULE_WORDS: Readonly<Record<string, string>> = {
+  'min-moment': 'minimum moment',
+  'min-moment-sign': 'minimum moment in either sign, the worse governs',
+  'exact-section': 'exact search, neutral axis free to incline',
+};
+
+/** One finding as a line: rule, axis, clause, outcome, and the figures compared (display units). */
+export function findingText(x: RuleFinding, units: UnitSystem): string {
+  const v = (n: number | null | undefined) =>
+    n === null || n === undefined ? '—' : x.quantity === 'moment' || x.quantity === 'force' ? `${f(toDisplay(n, x.quantity, units), 5)} ${unitsOf(units)[x.quantity]}` : f(n, 4);
+  const figures = x.value !== undefined || x.limit !== undefined ? `: ${v(x.value)} against ${v(x.limit)}` : '';
+  return `${RULE_WORDS[x.rule] ?? x.rule}${x.axis ? ` about ${x.axis}` : ''} [${x.clause}] ${x.outcome}${figures}`;
+}
+
+/** A finding in JSON: the facts, moments and forces in display units. */
+export function findingJson(x: RuleFinding, units: UnitSystem) {
+  const d = (n: number | null | undefined) =>
+    n === null || n === undefined ? null : x.quantity === 'moment' || x.quantity === 'force' ? num(toDisplay(n, x.quantity, units)) : num(n);
+  return {
+    rule: x.rule,
+    clause: x.clause,
+    ...(x.axis ? { axis: x.axis } : {}),
+    outcome: x.outcome,
+    ...(x.value !== undefined ? { value: d(x.value) } : {}),
+    ...(x.limit !== undefined ? { limit: d(x.limit) } : {}),
+    ...(x.quantity ? { quantity: x.quantity } : {}),
+  };
+}
+
+/** Headers of the table of the checks about each axis alone (the y minimum moment, the exact searches). */
+export function axisChecksHeaders(c: ColumnCheckFrame): string[] {
+  const un = unitsOf(c.units);
+  const s = symbolsOf(c);
+  const measure = c.checked ? 'util' : 'ρg req';
+  return ['id', 'check', `${s.M} ${un.moment}`, measure, `uniaxial ${measure}`, 'NA angle°', 'clause', 'governs'];
+}
+
+/** One load's rows of that table: about y alone, its exact search, and the exact search about x, where each applies. */
+export function axisChecksRows(r: ColumnLoadResult, c: ColumnCheckFrame): string[][] {
+  const u = c.units;
+  const M = (x: number) => f(toDisplay(x, 'moment', u), 5);
+  const checked = c.checked !== null;
+  const clauses = (axis: 'x' | 'y', rule: string) => [...new Set(r.findings.filter((x) => x.axis === axis && x.rule === rule).map((x) => x.clause))].join(', ');
+  const gov = (from: MeasureSource) => (r.measureFrom === from ? 'yes' : '');
+  const rows: string[][] = [];
+  const y = r.yAxis;
+  if (y) {
+    const uni = checked ? y.utilisation : y.rhoRequired;
+    rows.push([r.id, 'about y alone', M(y.Mdesign), f(uni, checked ? 3 : undefined), '', '', clauses('y', 'min-moment'), gov('y')]);
+    if (y.exact) rows.push([r.id, 'about y alone, exact', M(y.Mdesign), f(checked ? y.exact.utilisation : y.exact.rhoRequired, checked ? 3 : undefined), f(uni, checked ? 3 : undefined), f(y.exact.neutralAxisAngleDeg, 3), clauses('y', 'exact-section'), gov('y-exact')]);
+  }
+  const e = r.exactUniaxial;
+  if (e) {
+    const uni = checked ? r.utilisation : r.rhoRequired;
+    rows.push([r.id, 'about x, exact', M(r.Mdesign), f(checked ? e.utilisation : e.rhoRequired, checked ? 3 : undefined), f(uni, checked ? 3 : undefined), f(e.neutralAxisAngleDeg, 3), clauses('x', 'exact-section'), gov('x-exact')]);
+  }
+  return rows;
+}
+
+/** The checks about each axis alone for every load that has one; null when no load has any. */
+export function axisChecksView(c: ColumnCheck): TableView | null {
+  const rows: string[][] = [];
+  const marked: boolean[] = [];
+  for (const r of c.results) {
+    for (const row of axisChecksRows(r, c)) {
+      rows.push(row);
+      marked.push(r.governing);
+    }
+  }
+  return rows.length === 0 ? null : { headers: axisChecksHeaders(c), rows, marked };
 }
 
 /** The results table: one row per load, governing first. */
@@ -314,14 +397,17 @@ export function checkAssumptions(c: ColumnCheckFrame): string[] {
   if (c.barSelection) {
     out.push(
       c.barSelection.detailing === 'cover'
-        ? `Bar proposals: one bar size each, centres at cover + tie + db/2 from the faces (γ recomputed per size); ${b.clearSpacingRule}; ${b.minimumBarRule}; sizes from ${barSet(b.barSet).source}, ${b.units === 'us' ? '#5' : '12 mm'} and up (common practice). Each proposal is re-verified with its discrete bars against every load with every effect (slenderness, minimum moment, both signs, ring orientations, exact biaxial).`
+        ? `Bar proposals: one bar size each, centres at cover + tie + db/2 from the faces (γ recomputed per size); ${b.clearSpacingRule}; ${b.minimumBarRule}; sizes from ${barSet(b.barSet).source}, ${b.units === 'us' ? '#5' : '12 mm'} and up (common practice). Each proposal is re-verified with its discrete bars against every load with every effect (slenderness, minimum moment, both signs, ring orientations, about y alone, exact biaxial).`
         : `Bar proposals: γ was given, so bar centres stay at (1 − γ)·h/2 from the faces for every size and the cover is not checked; ${b.clearSpacingRule}; ${b.minimumBarRule}. Each proposal is re-verified against every load with every effect.`,
     );
     if (c.barSelection.aggregate === null) out.push('No maximum aggregate size given: the aggregate term of the spacing rule is not checked.');
   }
   if (c.slenderness) {
-    out.push(`Slenderness: each axis magnified separately for its own member data (non-sway); the magnified moments feed the uniaxial and biaxial checks.`);
+    out.push(`Slenderness: each axis magnified separately for its own member data (non-sway), both axes always (a load without ${s.M}y has ${s.M}y = 0, and kℓu about y defaults to kℓu about x); the magnified moments feed the uniaxial and biaxial checks.`);
   }
+  out.push(
+    `Minimum moments act about one axis at a time (ACI 318-19 R6.6.4.5.4; EN 1992-1-1 5.8.9): each load is also checked about y alone at the same ${s.P}, its moment about y raised to the minimum; a governing minimum is an accidental eccentricity, checked in both signs on a layout not symmetric about the axis. A layout not symmetric about the bending plane is checked by the exact search with the neutral axis free to incline (the uniaxial figure never governs lower).`,
+  );
   if (c.biaxial) {
     out.push(
       c.checked
@@ -380,6 +466,9 @@ export interface TextSizes {
   results: ColumnWidths;
   slenderness: ColumnWidths | null;
   biaxial: ColumnWidths | null;
+  /** the checks about each axis alone, and how many rows they have */
+  axes: ColumnWidths;
+  axesRows: number;
 }
 
 /**
@@ -391,9 +480,15 @@ export function textSizer(c: ColumnCheckFrame): { visit(r: ColumnLoadResult): vo
     results: new ColumnWidths(resultsHeaders(c)),
     slenderness: c.slenderness ? new ColumnWidths(slendernessHeaders(c)) : null,
     biaxial: c.biaxial && c.checked ? new ColumnWidths(biaxialHeaders(c)) : null,
+    axes: new ColumnWidths(axisChecksHeaders(c)),
+    axesRows: 0,
   };
   const add = (r: ColumnLoadResult, marked: boolean) => {
     sizes.results.add(resultRow(r, c), marked);
+    for (const row of axisChecksRows(r, c)) {
+      sizes.axes.add(row, marked);
+      if (!marked) sizes.axesRows++;
+    }
     if (sizes.slenderness) for (const row of slendernessRows(r, c)) sizes.slenderness.add(row.cells, marked);
     if (sizes.biaxial) sizes.biaxial.add(biaxialRow(r, c), marked);
   };
@@ -441,7 +536,7 @@ function* textBlocks(src: CheckRows, sizes: TextSizes): Generator<TextBlock> {
   yield* footnotesFor(c, src.governing);
   yield '';
   yield `Summary: ${c.summary.text}.`;
-  if (c.slenderness || c.biaxial) {
+  if (c.slenderness || c.biaxial || sizes.axesRows > 0) {
     yield '';
     yield { lines: effectLines(src, sizes) };
   }
@@ -484,9 +579,16 @@ function* effectLines(src: CheckRows, sizes: TextSizes): Generator<string> {
     yield 'Biaxial (checked reinforcement, actual bars; > 1 fails). exact: along the load ray in (P, Mx, My); reciprocal: Pu/Pn (or the linear moment sum);';
     yield 'contour: left-hand side (Mux/Mxo)^α + (Muy/Myo)^α. The M@P columns compare moments at fixed P: exact, and the contour value^(1/α).';
     yield* tableLines(biaxialHeaders(c), sizes.biaxial, mapRows(src.results(), (r) => [{ cells: biaxialRow(r, c), marked: r.governing }]));
+    any = true;
   } else if (c.biaxial) {
     if (any) yield '';
     yield 'Biaxial: no reinforcement given, so ρg req biax is the exact biaxial ρg required (Mux and Muy together; ρg req is for Mux alone); give --rho or a bar layout for the three methods side by side.';
+    any = true;
+  }
+  if (sizes.axesRows > 0) {
+    if (any) yield '';
+    yield 'Each axis alone (one axis at a time; the minimum moment in both signs where it governs; the exact search where the neutral axis inclines):';
+    yield* tableLines(axisChecksHeaders(c), sizes.axes, mapRows(src.results(), (r) => axisChecksRows(r, c).map((cells) => ({ cells, marked: r.governing }))));
   }
 }
 
@@ -549,6 +651,14 @@ function* detailLines(src: CheckRows): Generator<string> {
     }
     yield '';
   }
+  let findings = false;
+  for (const r of src.results()) {
+    if (r.findings.length === 0) continue;
+    if (!findings) yield 'RULE FINDINGS (clauses of the basis)';
+    findings = true;
+    for (const x of r.findings) yield `  ${r.id}: ${findingText(x, u)}`;
+  }
+  if (findings) yield '';
   if (c.biaxial && c.checked) {
     yield 'BIAXIAL METHODS';
     const F = (x: number) => f(toDisplay(x, 'force', u), 5);
@@ -581,6 +691,12 @@ function slenderJson(s: SlendernessResult, u: UnitSystem) {
     steps: s.steps.map((st) => ({ key: st.key, clause: st.clause, label: st.label, value: typeof st.value === 'number' ? num(st.value) : st.value, ...(st.unit ? { unit: st.unit } : {}) })),
   };
 }
+
+/** The exact search of one axis alone as JSON. */
+const exactJson = (e: ColumnLoadResult['exactUniaxial']) =>
+  e === null
+    ? null
+    : { utilisation: orNull(e.utilisation), rhoRequired: orNull(e.rhoRequired), rhoStatus: e.rhoStatus, signs: e.signs, neutralAxisAngleDeg: orNull(e.neutralAxisAngleDeg) };
 
 /** One result as JSON: the stable fields (id, rhoRequired, rhoFromChart, rhoRoundedDown …) and the engine's additions. */
 export function resultJson(r: ColumnLoadResult, c: ColumnCheckFrame) {
@@ -622,6 +738,23 @@ export function resultJson(r: ColumnLoadResult, c: ColumnCheckFrame) {
     measure: orNull(r.measureValue),
     governing: r.governing,
     notes: r.notes,
+    measureFrom: r.measureFrom,
+    findings: r.findings.map((x) => findingJson(x, u)),
+    yAxis: r.yAxis
+      ? {
+          Mu: disp(r.yAxis.Mu, 'moment', u),
+          minimum: disp(r.yAxis.minimum, 'moment', u),
+          Mdesign: disp(r.yAxis.Mdesign, 'moment', u),
+          normalised: { P: num(r.yAxis.normalised.P), M: num(r.yAxis.normalised.M) },
+          rhoRequired: orNull(r.yAxis.rhoRequired),
+          rhoStatus: r.yAxis.rhoStatus,
+          utilisation: orNull(r.yAxis.utilisation),
+          capacity: r.yAxis.capacity === null ? null : { Pu: disp(r.yAxis.capacity.P, 'force', u), Mu: disp(r.yAxis.capacity.M, 'moment', u) },
+          variant: { label: r.yAxis.variant.label, sign: r.yAxis.variant.sign, turnDeg: num(r.yAxis.variant.turnDeg) },
+          exact: exactJson(r.yAxis.exact),
+        }
+      : null,
+    exactUniaxial: exactJson(r.exactUniaxial),
     ...(r.slenderness ? { slenderness: { ...slenderJson(r.slenderness.x, u), ...(r.slenderness.y ? { y: slenderJson(r.slenderness.y, u) } : {}) } } : {}),
     ...(c.biaxial
       ? {
