@@ -73,7 +73,11 @@ export function exportOptions(o: { columns?: string; compression?: string }, ext
   };
 }
 
-export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
+/**
+ * Reads the flags into one `ResolvedCheck`. `given` supplies loads already read (a schedule's loads of
+ * one mark, src/flags/schedule-rows.ts): they stand for a load file (end moments as columns).
+ */
+export function resolveCheckOptions(o: CheckOptions, given?: { loads: readonly FactoredLoad[] }): ResolvedCheck {
   if (o.report !== undefined) {
     const ext = extname(o.report).toLowerCase();
     if (!(REPORT_FORMATS as readonly string[]).includes(ext)) {
@@ -87,10 +91,13 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
 
   let loads: FactoredLoad[];
   const notes: string[] = [];
-  if (o.loads === undefined && (o.columns !== undefined || o.compression !== undefined)) {
+  if (given === undefined && o.loads === undefined && (o.columns !== undefined || o.compression !== undefined)) {
     throw new PmError(ERROR_CODES.conflict, o.columns !== undefined ? '--columns' : '--compression', 'applies to --loads; --pu is compression positive');
   }
-  if (o.loads !== undefined) {
+  if (given !== undefined) {
+    // read already (a schedule's loads of one mark)
+    loads = given.loads.map((l) => ({ ...l }));
+  } else if (o.loads !== undefined) {
     if (o.pu !== undefined || o.mu !== undefined) throw new PmError(ERROR_CODES.conflict, '--loads', 'and --pu/--mu both give loads; use one of them');
     let text: string;
     try {
@@ -159,7 +166,7 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
         : { kind: 'gamma', gamma: section.gamma, ...(section.gammaB !== undefined ? { gammaB: section.gammaB } : {}) };
     input.barSelection = { detailing, sizes, count: proposals, ...(aggregate !== undefined ? { aggregate } : {}) };
   }
-  const fx = resolveEffects(o, section, input, o.loads === undefined);
+  const fx = resolveEffects(o, section, input, given === undefined && o.loads === undefined);
   input.loads = fx.loads;
   if (fx.slenderness) input.slenderness = fx.slenderness;
   return { section, input, json: o.json === true, ...(o.report !== undefined ? { report: o.report } : {}), notes };
