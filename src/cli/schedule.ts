@@ -80,7 +80,7 @@ export function prepareSchedule(file: string, o: ScheduleOptions): PreparedSched
   const at = basename(file);
   const rows = parseScheduleCsv(readText(file, 'schedule file', MAX_SCHEDULE_BYTES), at);
   const notes: string[] = [];
-  const loads = readScheduleLoads(readText(o.loads, '--loads', MAX_LOADS_BYTES), rows, o, '--loads', (n) => notes.push(n));
+  const loads = readScheduleLoads(readText(o.loads, '--loads', MAX_LOADS_BYTES), rows, o, '--loads', (n) => notes.push(n), at);
   // each row resolved with its loads: a bad cell or a load column of the wrong convention is an error here
   const entries = scheduleEntries(rows, loads, proposals, at);
   const { entries: kept, missing } = matchMarks(entries, loads, { allowMissing: o.allowMissing === true });

@@ -91,9 +91,10 @@ export function readScheduleLoads(
   o: { columns?: string; compression?: string },
   at = '--loads',
   onNote?: (n: string) => void,
+  scheduleAt = 'schedule',
 ): Map<string, FactoredLoad[]> {
   const units = new Map<string, UnitSystem>();
-  for (const r of rows) units.set(r.mark, rowUnits(r));
+  for (const r of rows) units.set(r.mark, rowUnits(r, scheduleAt));
   const first = units.get(rows[0]!.mark)!;
   const grouped = parseGroupedLoadsCsv(text, first, at, {
     ...exportOptions(o, ['mark']),
