@@ -52,7 +52,7 @@ rmSync(outdir, { recursive: true, force: true });
 const cli = await build({
   ...common,
   outdir,
-  entryPoints: { pmchart: 'src/cli/main.ts', worker: 'src/sheet/worker.ts' },
+  entryPoints: { pmchart: 'src/cli/main.ts', worker: 'src/sheet/worker.ts', 'schedule-worker': 'src/cli/schedule-worker.ts' },
   splitting: true,
   chunkNames: 'chunk-[hash]',
   plugins: [vendorPlugin],

@@ -3,6 +3,7 @@
  *
  *   computeFamily   basis + section → one sweep in neutral-axis depth → a family of normalised ρg curves
  *   checkColumn     a column and its loads → one frozen ColumnCheck (status, ρg required, readings, bars)
+ *   checkSchedule   a schedule of column marks and their loads → one checkColumn per mark, rows by mark, counts by status
  *   computeBiaxialFamily  basis + section + axial levels → normalised Mx–My contours per ρg, with Mxo, Myo, fitted α
  *   readChartSet    a chart-set file's text → the resolved set (field paths in errors)
  *   makeChartSet    a resolved set → sheets, tables and the bound book on disk
@@ -36,6 +37,19 @@ export {
   type VariantInfo,
 } from './design/column-check.js';
 export type { FactoredLoad, GivenLayout } from './design/check.js';
+export {
+  checkSchedule,
+  scheduleMarks,
+  matchMarks,
+  summariseSchedule,
+  compareMarks,
+  type ScheduleEntry,
+  type ScheduleCheck,
+  type ScheduleMarkResult,
+  type ScheduleRowFacts,
+  type ScheduleSummary,
+  type ScheduleOptions,
+} from './design/schedule.js';
 export { BiaxialCharts, DEFAULT_CHART_AXIAL_STEP, type BiaxialChartReading, type BiaxialLevelReading } from './design/biaxial-chart-reading.js';
 export type { SlendernessRequest, AxisMember } from './design/column-effects.js';
 export type { BarProposal, Detailing } from './design/bar-selection.js';

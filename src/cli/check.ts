@@ -86,6 +86,7 @@ async function runResolvedAsync(o: CheckOptions, rc: ResolvedCheck): Promise<str
  */
 export async function writeCheck(o: CheckOptions, out: NodeJS.WritableStream = process.stdout, streamAbove = STREAM_ABOVE_LOADS): Promise<void> {
   const rc = resolveCheckOptions(o);
+  for (const n of rc.notes) process.stderr.write(`pmchart: note: ${n}\n`);
   if (rc.input.loads.length <= streamAbove || (rc.report !== undefined && isDrawn(rc.report))) {
     await writePieces(out, [await runResolvedAsync(o, rc)]);
     return;
@@ -136,6 +137,8 @@ export function registerCheck(program: Command, run: (fn: () => Promise<void> | 
     .option('--pu <force>', 'factored axial load, compression positive (default unit kip or kN)')
     .option('--mu <moment>', 'factored moment (default unit kip-ft or kN-m)')
     .option('--loads <file>', 'CSV of load combinations with columns id,Pu,Mu (tension negative Pu)')
+    .option('--columns <map>', 'read an analysis export: its headers for our fields, e.g. "id=Story+Combo,Pu=P,Mu=M3,Muy=M2" (other columns ignored, listed in a note)')
+    .option('--compression <sign>', 'sign of axial compression in --loads: positive (default) or negative (most frame-analysis exports)')
     .option('--rho <ratio>', 'given ρg to check (utilisation)')
     .option('--aggregate <length>', 'maximum aggregate size, for the clear-spacing rule')
     .option('--chart-gamma-step <step>', 'γ step of the emulated chart sheets', '0.05')

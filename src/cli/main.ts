@@ -10,6 +10,7 @@ import { GENERATOR } from '../version.js';
 import { registerCheck } from './check.js';
 import { registerContour } from './contour.js';
 import { registerPage } from './page.js';
+import { registerSchedule } from './schedule.js';
 import { registerSet } from './set.js';
 import { registerSheet } from './sheet.js';
 import { registerTable } from './table.js';
@@ -46,6 +47,7 @@ export function buildProgram(): Command {
   registerContour(program, runAction);
   registerSet(program, runAction);
   registerSheet(program, runAction);
+  registerSchedule(program, runAction);
   registerPage(program, runAction);
   return program;
 }

@@ -10,7 +10,8 @@ import type { FactoredLoad } from '../design/check.js';
 import { checkColumn, type ColumnCheck, type ColumnCheckInput } from '../design/column-check.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { MAX_DRAWN_REPORT_LOADS } from '../input/limits.js';
-import { parseLoadQuantity, parseLoadsCsv as readLoadsCsv } from '../input/loads-csv.js';
+import { LOAD_FIELDS, parseLoadQuantity, parseLoadsCsv as readLoadsCsv, type LoadsCsvOptions } from '../input/loads-csv.js';
+import { parseColumnMap, parseCompression } from '../input/column-map.js';
 import { CHART_AXIAL_STEP_RANGE, CHART_GAMMA_STEP_RANGE } from '../input/limits.js';
 import { barSet } from '../section/bar-tables.js';
 import { barCount } from '../section/arrangements.js';
@@ -24,6 +25,10 @@ export interface CheckOptions extends SectionFlags, EffectsFlags {
   pu?: string;
   mu?: string;
   loads?: string;
+  /** `--columns`: an export's headers → ours (src/input/column-map.ts) */
+  columns?: string;
+  /** `--compression`: the load file's sign of axial compression, positive (default) or negative */
+  compression?: string;
   rho?: string;
   aggregate?: string;
   chartGammaStep?: string;
@@ -50,14 +55,29 @@ export interface ResolvedCheck {
   input: ColumnCheckInput;
   json: boolean;
   report?: string;
+  /** notes on how the input was read (columns a --columns map leaves unread), for standard error */
+  notes: string[];
 }
 
 /** Load files are read by src/input/loads-csv.ts (csv-parse; header units, ";" files, duplicates refused). */
-export function parseLoadsCsv(text: string, units: UnitSystem, path = '--loads'): FactoredLoad[] {
-  return readLoadsCsv(text, units, path);
+export function parseLoadsCsv(text: string, units: UnitSystem, path = '--loads', opts: LoadsCsvOptions = {}): FactoredLoad[] {
+  return readLoadsCsv(text, units, path, opts);
 }
 
-export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
+/** `--columns` and `--compression` as load-file options (shared by `check --loads` and `schedule`); `fields` adds the schedule's mark. */
+export function exportOptions(o: { columns?: string; compression?: string }, extraFields: readonly string[] = []): LoadsCsvOptions {
+  const compression = parseCompression(o.compression);
+  return {
+    ...(o.columns !== undefined ? { columns: parseColumnMap(o.columns, [...extraFields, ...LOAD_FIELDS]), duplicates: 'number' as const } : {}),
+    compression,
+  };
+}
+
+/**
+ * Reads the flags into one `ResolvedCheck`. `given` supplies loads already read (a schedule's loads of
+ * one mark, src/flags/schedule-rows.ts): they stand for a load file (end moments as columns).
+ */
+export function resolveCheckOptions(o: CheckOptions, given?: { loads: readonly FactoredLoad[] }): ResolvedCheck {
   if (o.report !== undefined) {
     const ext = extname(o.report).toLowerCase();
     if (!(REPORT_FORMATS as readonly string[]).includes(ext)) {
@@ -70,7 +90,14 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
   const { basis } = section;
 
   let loads: FactoredLoad[];
-  if (o.loads !== undefined) {
+  const notes: string[] = [];
+  if (given === undefined && o.loads === undefined && (o.columns !== undefined || o.compression !== undefined)) {
+    throw new PmError(ERROR_CODES.conflict, o.columns !== undefined ? '--columns' : '--compression', 'applies to --loads; --pu is compression positive');
+  }
+  if (given !== undefined) {
+    // read already (a schedule's loads of one mark)
+    loads = given.loads.map((l) => ({ ...l }));
+  } else if (o.loads !== undefined) {
     if (o.pu !== undefined || o.mu !== undefined) throw new PmError(ERROR_CODES.conflict, '--loads', 'and --pu/--mu both give loads; use one of them');
     let text: string;
     try {
@@ -78,7 +105,7 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
     } catch (e) {
       throw new PmError(ERROR_CODES.io, '--loads', `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'})`, { value: o.loads });
     }
-    loads = parseLoadsCsv(text, u);
+    loads = parseLoadsCsv(text, u, '--loads', { ...exportOptions(o), onNote: (n) => notes.push(n) });
     if (o.report !== undefined && isDrawn(o.report) && loads.length > MAX_DRAWN_REPORT_LOADS) {
       throw new PmError(ERROR_CODES.outOfRange, '--report', `draws at most ${MAX_DRAWN_REPORT_LOADS} loads and --loads has ${loads.length}; write a .txt or .json report for every load`);
     }
@@ -139,10 +166,10 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
         : { kind: 'gamma', gamma: section.gamma, ...(section.gammaB !== undefined ? { gammaB: section.gammaB } : {}) };
     input.barSelection = { detailing, sizes, count: proposals, ...(aggregate !== undefined ? { aggregate } : {}) };
   }
-  const fx = resolveEffects(o, section, input, o.loads === undefined);
+  const fx = resolveEffects(o, section, input, given === undefined && o.loads === undefined);
   input.loads = fx.loads;
   if (fx.slenderness) input.slenderness = fx.slenderness;
-  return { section, input, json: o.json === true, ...(o.report !== undefined ? { report: o.report } : {}) };
+  return { section, input, json: o.json === true, ...(o.report !== undefined ? { report: o.report } : {}), notes };
 }
 
 /** " (3 on each b face, 5 on each h face)" for unequal four-faces counts; "" otherwise. */

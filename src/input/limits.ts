@@ -174,3 +174,10 @@ export function issueDate(given: string | undefined, flag: string, sourceDateEpo
   }
   return now.toISOString().slice(0, 10);
 }
+
+/** Column schedules (`pmchart schedule`, issue 22): file size, marks and the characters of a mark. */
+export const MAX_SCHEDULE_BYTES = 8 << 20;
+export const MAX_SCHEDULE_MARKS = 20_000;
+export const MAX_MARK_CHARS = 64;
+/** `schedule --jobs`: processes checking marks. */
+export const SCHEDULE_JOBS_RANGE = [1, 64] as const;

@@ -19,6 +19,7 @@ import { ERROR_CODES, PmError } from '../errors.js';
 import { DISPLAY_UNITS, parseQuantity, splitQuantity, unitSuffixes, type QuantityKind, type UnitSystem } from '../units/index.js';
 import type { FactoredLoad } from '../design/check.js';
 import { parseOrThrow, quantityText, text } from './fields.js';
+import { ID_JOIN, ignoredNote, planHeader, type ColumnMap, type CompressionSign } from './column-map.js';
 import { LOAD_MAX_ABS, MAX_LOAD_ID_CHARS, MAX_LOAD_ROWS, MAX_LOADS_BYTES } from './limits.js';
 
 /** A load in internal units: the check engine's own load type. */
@@ -62,8 +63,43 @@ export function detectSeparator(text: string): ',' | ';' {
   return ',';
 }
 
+/** The fields a load file may fill (for `--columns`), the schedule's `mark` beside them. */
+export const LOAD_FIELDS: readonly string[] = Object.keys(COLUMNS);
+
+/** How an export is read (issue 22): its header map, its sign of compression, the grouping column, duplicates. */
+export interface LoadsCsvOptions {
+  /** `--columns`: source headers → our fields (src/input/column-map.ts); absent: our own headers */
+  columns?: ColumnMap;
+  /** the file's sign of axial compression (default positive: ours) */
+  compression?: CompressionSign;
+  /** a further required text column that groups the rows (the schedule's `mark`) */
+  group?: string;
+  /** the unit system of a group's bare numbers (default: the `units` argument) */
+  unitsOf?: (group: string, at: string) => UnitSystem;
+  /** a repeated id (within a group): refused (default), or kept as a separate load numbered " #2", " #3" … */
+  duplicates?: 'refuse' | 'number';
+  /** receives the one note on columns a map leaves unread */
+  onNote?: (text: string) => void;
+}
+
+/** A load with the group it belongs to (`LoadsCsvOptions.group`). */
+export interface GroupedLoad {
+  group: string;
+  load: LoadRow;
+  line: number;
+}
+
 /** Parses a load file's text; `at` names it in errors (a flag such as --loads, or "pasted loads"). */
-export function parseLoadsCsv(textIn: string, units: UnitSystem, at = '--loads'): LoadRow[] {
+export function parseLoadsCsv(textIn: string, units: UnitSystem, at = '--loads', opts: LoadsCsvOptions = {}): LoadRow[] {
+  return readLoads(textIn, units, at, opts).map((g) => g.load);
+}
+
+/** Parses a load file whose rows carry a group column (`opts.group`, e.g. the schedule's mark). */
+export function parseGroupedLoadsCsv(textIn: string, units: UnitSystem, at: string, opts: LoadsCsvOptions & { group: string }): GroupedLoad[] {
+  return readLoads(textIn, units, at, opts);
+}
+
+function readLoads(textIn: string, units: UnitSystem, at: string, opts: LoadsCsvOptions): GroupedLoad[] {
   // 1. size and separator, then csv-parse (quotes, CRLF, BOM)
   if (textIn.length > MAX_LOADS_BYTES) throw new PmError(ERROR_CODES.invalidValue, at, `is larger than ${MAX_LOADS_BYTES} bytes`);
   const delimiter = detectSeparator(textIn.replace(/^\uFEFF/, ''));
@@ -101,8 +137,21 @@ export function parseLoadsCsv(textIn: string, units: UnitSystem, at = '--loads')
   const headLine = head.info.lines;
   const columns = new Map<Column, HeaderColumn>();
   const seen = new Map<string, number>();
+  const group = opts.group;
+  let groupIndex = -1;
+  const plan = planHeader(head.record, opts.columns, headerCell, at);
+  const note = ignoredNote(plan, at);
+  if (note !== null) opts.onNote?.(note);
   head.record.forEach((cell, index) => {
-    const { name, unit } = headerCell(cell);
+    const planned = plan.columns[index];
+    if (planned === null || planned === undefined) return;
+    const { field: name, unit } = planned;
+    if (group !== undefined && name.toLowerCase() === group.toLowerCase()) {
+      if (groupIndex >= 0) throw new PmError(ERROR_CODES.conflict, `${at} line ${headLine}`, `names the column "${group}" twice (columns ${groupIndex + 1} and ${index + 1})`);
+      groupIndex = index;
+      return;
+    }
+    if (plan.idParts !== null && name === 'id' && index !== plan.idParts[0]) return;
     const known = (Object.keys(COLUMNS) as Column[]).find((c) => c.toLowerCase() === name.toLowerCase());
     const key = known ?? cell.trim().toLowerCase();
     const before = seen.get(key);
@@ -121,14 +170,17 @@ export function parseLoadsCsv(textIn: string, units: UnitSystem, at = '--loads')
     }
     columns.set(known, { name: known, index, unit: u });
   });
-  if (!columns.has('id') || !columns.has('Pu') || !columns.has('Mu')) {
-    throw new PmError(ERROR_CODES.invalidValue, `${at} header`, 'must name the columns id, Pu and Mu', { value: head.record.join(delimiter) });
+  if (!columns.has('id') || !columns.has('Pu') || !columns.has('Mu') || (group !== undefined && groupIndex < 0)) {
+    const need = `${group !== undefined ? `${group}, ` : ''}id, Pu and Mu`;
+    throw new PmError(ERROR_CODES.invalidValue, `${at} header`, `must name the columns ${need}${opts.columns ? ' (through --columns)' : ''}`, { value: head.record.join(delimiter) });
   }
   if (records.length === 1) throw new PmError(ERROR_CODES.invalidValue, at, 'has a header but no load rows');
 
   // 3. rows: form by the zod row schema, then units, finiteness and the magnitude cap
   const ids = new Map<string, number>();
-  const loads: LoadRow[] = [];
+  const repeats = new Map<string, number>();
+  const loads: GroupedLoad[] = [];
+  const sign = opts.compression === 'negative' ? -1 : 1;
   for (let r = 1; r < records.length; r++) {
     const { record, info } = records[r]!;
     const line = info.lines;
@@ -137,6 +189,11 @@ export function parseLoadsCsv(textIn: string, units: UnitSystem, at = '--loads')
       const v = record[c.index];
       cells[c.name] = v === undefined ? (c.name === 'id' || c.name === 'Pu' || c.name === 'Mu' ? '' : undefined) : delimiter === ';' && c.name !== 'id' ? v.replace(',', '.') : v;
     }
+    // an id from several source columns (`id=Story+Combo`), joined
+    if (plan.idParts !== null) cells.id = plan.idParts.map((i) => (record[i] ?? '').trim()).join(ID_JOIN);
+    const groupValue = group === undefined ? '' : (record[groupIndex] ?? '').trim();
+    if (group !== undefined && groupValue === '') throw new PmError(ERROR_CODES.invalidValue, `${at} line ${line} ${group}`, 'is empty');
+    const rowUnits = group !== undefined && opts.unitsOf ? opts.unitsOf(groupValue, `${at} line ${line} ${group}`) : units;
     const row = parseOrThrow(RowSchema, cells, (path) => `${at} line ${line}${path.length ? ` ${String(path[0])}` : ''}`, true);
     const value = (name: Column, kind: QuantityKind): number => {
       const cell = row[name]!;
@@ -145,25 +202,32 @@ export function parseLoadsCsv(textIn: string, units: UnitSystem, at = '--loads')
       if (col.unit !== '' && split && split.unit !== '') {
         throw new PmError(ERROR_CODES.conflict, `${at} line ${line} ${name}`, `has a unit while the header gives ${col.unit}`, { value: cell });
       }
-      const v = parseQuantity(col.unit === '' ? cell : `${cell}${col.unit}`, kind, units, `${at} line ${line} ${name}`);
-      const shown = Math.abs(v / parseQuantity('1', kind, units, name));
+      const v = parseQuantity(col.unit === '' ? cell : `${cell}${col.unit}`, kind, rowUnits, `${at} line ${line} ${name}`);
+      const shown = Math.abs(v / parseQuantity('1', kind, rowUnits, name));
       if (!(shown <= LOAD_MAX_ABS)) {
-        throw new PmError(ERROR_CODES.outOfRange, `${at} line ${line} ${name}`, `is beyond ±${LOAD_MAX_ABS} ${DISPLAY_UNITS[units][kind]}`, { value: cell });
+        throw new PmError(ERROR_CODES.outOfRange, `${at} line ${line} ${name}`, `is beyond ±${LOAD_MAX_ABS} ${DISPLAY_UNITS[rowUnits][kind]}`, { value: cell });
       }
       return v;
     };
-    const id = row.id!;
-    const first = ids.get(id);
-    if (first !== undefined) throw new PmError(ERROR_CODES.conflict, `${at} line ${line} id`, `repeats the id of line ${first}`, { value: JSON.stringify(id) });
-    ids.set(id, line);
-    const load: LoadRow = { id, Pu: value('Pu', 'force'), Mu: value('Mu', 'moment') };
+    let id = row.id!;
+    const key = `${groupValue}\u0000${id}`;
+    const first = ids.get(key);
+    if (first !== undefined) {
+      if (opts.duplicates !== 'number') throw new PmError(ERROR_CODES.conflict, `${at} line ${line} id`, `repeats the id of line ${first}`, { value: JSON.stringify(id) });
+      // an export repeats a combination per station: each row is its own load, numbered #2, #3 …
+      const n = (repeats.get(key) ?? 1) + 1;
+      repeats.set(key, n);
+      id = `${id} #${n}`;
+    } else ids.set(key, line);
+    // the file's sign of compression made ours (positive); `|| 0` keeps −0 out
+    const load: LoadRow = { id, Pu: sign * value('Pu', 'force') || 0, Mu: value('Mu', 'moment') };
     for (const name of OPTIONAL_MOMENTS) {
       if (!columns.has(name)) continue;
       const cell = row[name];
       if (cell !== undefined && cell !== '') load[name] = value(name, 'moment');
       else if (name === 'Muy') load.Muy = 0;
     }
-    loads.push(load);
+    loads.push({ group: groupValue, load, line });
   }
   return loads;
 }

@@ -242,7 +242,7 @@ function drawIndex(page: PDFPage, input: BookInput, regular: PDFFont, bold: PDFF
 }
 
 /** A flat PDF outline (ISO 32000-1 12.3.3): one item per entry, each opening its page. */
-function addOutline(doc: PDFDocument, entries: { title: string; page: PDFPage }[]): void {
+export function addOutline(doc: PDFDocument, entries: { title: string; page: PDFPage }[]): void {
   const ctx = doc.context;
   const rootRef = ctx.nextRef();
   const refs: PDFRef[] = entries.map(() => ctx.nextRef());
