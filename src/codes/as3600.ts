@@ -21,7 +21,7 @@ import { ERROR_CODES, PmError } from '../errors.js';
 import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
 import { rectangularBlock } from '../materials/rectangular-block.js';
 import { aciProfile } from './aci318.js';
-import type { Basis, BasisInput, DesignCode, ResistanceModel, StrainClass, StrainProfile } from './types.js';
+import type { Basis, BasisInput, DesignCode, DetailingRules, ResistanceModel, StrainClass, StrainProfile } from './types.js';
 
 /** AS 3600-2018 8.1.2 / 10.6.1: maximum concrete compressive strain (from memory). */
 export const AS_EPS_CU = 0.003;
@@ -129,6 +129,7 @@ function resolveAs3600(input: BasisInput): Basis {
     minimumBarRule: 'at least 4 bars in a rectangular and 6 in a circular arrangement (AS 3600-2018 10.7.4, from memory)',
     factorSummary: `φ 0.65–0.85 = 1.24 − 13·kuo/12 (Table 2.2.2, Class N) · α2 ${fmt(alpha2)} · γ₂ ${fmt(gammaBlock)} · α1 ${fmt(alpha1)}`,
     slendernessMethod: 'moment-magnification-as3600',
+    detailing: AS3600_DETAILING,
     parameters: {
       'α2': r4(alpha2),
       'γ₂ (block depth)': r4(gammaBlock),
@@ -155,3 +156,25 @@ function resolveAs3600(input: BasisInput): Basis {
 const fmt = (x: number): string => String(Number(x.toPrecision(4)));
 const r4 = (x: number): number => Number(x.toFixed(4));
 const r6 = (x: number): number => Number(x.toFixed(6));
+
+// ───────────────────────────── detailing (issue 19) ─────────────────────────────
+
+/**
+ * AS 3600-2018 detailing rules for columns (from memory: the standard's text was not found): 10.7.1 0.01·Ag ≤
+ * As ≤ 0.04·Ag, the 0.04 applying at splices too; clear spacing max(db, 1.5·aggregate, 25 mm) (clause not
+ * verified); cover at least the bar diameter for placing (4.10.3, exposure table 4.10.3.2 not checked).
+ */
+const AS3600_DETAILING: DetailingRules = {
+  rules: [
+    { id: 'steel-min', clause: '10.7.1', title: 'As ≥ 0.01·Ag', source: 'from memory', binding: true },
+    { id: 'steel-max', clause: '10.7.1', title: 'As ≤ 0.04·Ag', source: 'from memory', binding: true },
+    { id: 'steel-max-lap', clause: '10.7.1', title: 'As ≤ 0.04·Ag where bars are lapped', source: 'from memory', binding: false },
+    { id: 'clear-spacing', clause: 'not verified', title: 'clear spacing ≥ max(db, 1.5·aggregate, 25 mm)', source: 'from memory', binding: true },
+    { id: 'cover', clause: '4.10.3', title: 'cover ≥ the bar diameter for placing', source: 'from memory', binding: true },
+  ],
+  lapZoneRho: 0.04,
+  defaultAggregate: 20, // 20 mm maximum aggregate, common practice
+  minimumCover: (tie: number, bar: number) => Math.max(tie, bar - tie),
+  coverAssumption: 'cover for placing only: at least the tie diameter, and the bar diameter to the main bars (4.10.3, from memory); the exposure classification table (4.10.3.2) and fire are not checked',
+  maxLappedBar: Infinity,
+};

@@ -17,6 +17,7 @@
 import { DEFAULT_ANGLE_STEP_DEG } from '../analysis/biaxial-family.js';
 import { capacityAlongRay as biaxialRay, prepareBiaxial, type BiaxialSection } from '../analysis/biaxial.js';
 import { prepareSection } from '../analysis/prepared-section.js';
+import type { RuleFinding } from '../codes/rules.js';
 import type { Basis, CapContext, StrainClass } from '../codes/types.js';
 import { layoutBars, mirroredBars, symmetricAboutBendingAxis, type LayoutOptions } from '../section/arrangements.js';
 import type { BarSize } from '../section/bar-tables.js';
@@ -25,6 +26,7 @@ import type { Arrangement, Bar, Shape } from '../section/types.js';
 import type { UnitSystem } from '../units/index.js';
 import { isSelectableKind, proposeBars, type BarProposal, type Detailing } from './bar-selection.js';
 import { checkBiaxial, type BiaxialResult } from './biaxial.js';
+import { aggregateOf, breaksDetailing, findingText, loadSteelDetailing, sectionDetailing, type DetailingInput } from './detailing.js';
 import { BiaxialCharts, type BiaxialLevelReading } from './biaxial-chart-reading.js';
 import { rhoLimitsFor, withMinimum, type FactoredLoad, type GivenLayout } from './check.js';
 import { buildChartSet, readCharts, type ChartSet, type SheetReading } from './chart-reading.js';
@@ -43,8 +45,10 @@ export interface ColumnCheckInput {
   gamma: number;
   /** γB: outer-column spacing ÷ b (rectangles); absent: the same cover as γ gives on h */
   gammaB?: number;
-  /** where γ came from, for the views (default 'given') */
-  gammaSource?: 'given' | 'detailing';
+  /** where γ came from, for the views (default 'given'): given, or from the bars (cover, tie and bar; custom bar positions) */
+  gammaSource?: 'given' | 'bars';
+  /** what is known of the given bars beyond their area (bar and tie sizes, cover, aggregate), for the detailing rules */
+  detailingInput?: DetailingInput;
   capContext?: CapContext;
   loads: readonly FactoredLoad[];
   /** a given ρg to check (bars smeared at γ in the arrangement) */
@@ -63,12 +67,12 @@ export interface ColumnCheckInput {
 
 // ───────────────────────────── result ─────────────────────────────
 
-export const LOAD_STATUSES = ['ok', 'fails', 'not-possible', 'unstable', 'outside-scope'] as const;
+export const LOAD_STATUSES = ['ok', 'fails', 'not-possible', 'unstable', 'outside-scope', 'detailing'] as const;
 export type LoadStatus = (typeof LOAD_STATUSES)[number];
 export const isLoadStatus = (s: unknown): s is LoadStatus => LOAD_STATUSES.includes(s as LoadStatus);
 
 /** Worst first: the order in which statuses govern. */
-const STATUS_RANK: Record<LoadStatus, number> = { unstable: 0, 'outside-scope': 1, 'not-possible': 2, fails: 3, ok: 4 };
+const STATUS_RANK: Record<LoadStatus, number> = { unstable: 0, 'outside-scope': 1, 'not-possible': 2, detailing: 3, fails: 4, ok: 5 };
 
 /** Which measure ranks the loads: utilisation of the given reinforcement, else the ρg required. */
 export type GoverningMeasure = 'utilisation' | 'rhoRequired';
@@ -130,6 +134,8 @@ export interface ColumnLoadResult {
   /** why, in words, with the clause where there is one */
   readonly statusReason: string;
   readonly statusClause: string | null;
+  /** the rules checked for this load with their clauses: the detailing rules of the given reinforcement (none when no reinforcement is given) */
+  readonly findings: readonly RuleFinding[];
   /** the ranking value: max of the uniaxial and exact biaxial figures of `ColumnCheck.measure` (Infinity when not possible) */
   readonly measureValue: number | null;
   readonly governing: boolean;
@@ -153,7 +159,7 @@ export interface ColumnCheck {
   readonly gamma: number;
   /** γB, outer-column spacing ÷ b, when given (null: the same cover as γ gives on h) */
   readonly gammaB: number | null;
-  readonly gammaSource: 'given' | 'detailing';
+  readonly gammaSource: 'given' | 'bars';
   readonly capContext: CapContext;
   readonly area: number;
   readonly depth: number;
@@ -180,6 +186,8 @@ export interface ColumnCheck {
   readonly biaxial: boolean;
   readonly variants: readonly VariantInfo[];
   readonly notes: readonly string[];
+  /** detailing of the given reinforcement: the rules that do not depend on the load (each load's `findings` adds the steel ratio), and the aggregate the spacing rule assumed */
+  readonly detailing: { readonly findings: readonly RuleFinding[]; readonly aggregate: number; readonly aggregateAssumed: boolean };
 }
 
 // ───────────────────────────── section variants ─────────────────────────────
@@ -253,6 +261,8 @@ export interface ColumnCheckContext {
   /** biaxial surface of the checked bars */
   readonly checkedBiaxial: BiaxialSection | null;
   readonly biaxial: boolean;
+  /** detailing findings of the given reinforcement that do not depend on the load (empty when none is given) */
+  readonly detailing: readonly RuleFinding[];
 }
 
 /** Prepares everything shared by every load: variants, ray tables, chart sheets, the biaxial surface. */
@@ -294,7 +304,22 @@ export function prepareColumnCheck(input: ColumnCheckInput, opts: { readings?: b
           ...(input.chartAxialStep !== undefined ? { axialStep: input.chartAxialStep } : {}),
         })
       : null;
-  return { input, basis, area, depth, capContext, variants, charts, biaxialCharts, checkedRho, checkedBars, positionBars, checkedBiaxial, biaxial };
+  const detailing =
+    checkedBars && checkedRho !== null
+      ? sectionDetailing(
+          {
+            basis,
+            shape,
+            arrangement: input.layout?.arrangement ?? input.arrangement,
+            gamma: input.layout?.gamma ?? input.gamma,
+            ...(input.gammaB !== undefined ? { gammaB: input.gammaB } : {}),
+            bars: checkedBars,
+            ...(input.detailingInput ? { input: input.detailingInput } : {}),
+          },
+          checkedRho,
+        )
+      : [];
+  return { input, basis, area, depth, capContext, variants, charts, biaxialCharts, checkedRho, checkedBars, positionBars, checkedBiaxial, biaxial, detailing };
 }
 
 // ───────────────────────────── one load ─────────────────────────────
@@ -469,7 +494,18 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
   const biaxialRho = biaxial && biaxial.rhoStatus !== null ? (biaxial.rhoRequired ?? Infinity) : null;
   const uniRho = g.req.rho ?? Infinity;
   const measureValue = checked ? Math.max(utilisation!, biaxialUtil ?? 0) : Math.max(uniRho, biaxialRho ?? 0);
-  const st = statusOf({ magnified, checked, measureValue, notPossible: !checked && !Number.isFinite(measureValue), finite: finiteMoments, limitsMax: limits.max });
+  // detailing of the given reinforcement: the section's rules and this load's steel ratio (issue 19 U4)
+  const findings = checked ? [...ctx.detailing, ...loadSteelDetailing(basis, load.Pu, area, ctx.checkedRho!, measureValue)] : [];
+  const broken = findings.find((f) => breaksDetailing(basis, f));
+  const st = statusOf({
+    magnified,
+    checked,
+    measureValue,
+    notPossible: !checked && !Number.isFinite(measureValue),
+    finite: finiteMoments,
+    limitsMax: limits.max,
+    detailing: broken ? { reason: findingText(basis, broken), clause: broken.clause } : null,
+  });
 
   const unbounded = !finiteMoments;
   return {
@@ -501,6 +537,7 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
     slenderness: magnified,
     biaxial,
     ...st,
+    findings,
     // finite or null: a load beyond any capacity is a status, never ∞
     measureValue: Number.isFinite(measureValue) ? measureValue : null,
     governing: false,
@@ -520,7 +557,7 @@ const END_KEYS = ['M1', 'M2', 'M1y', 'M2y', 'M01', 'M02', 'M01y', 'M02y'] as con
 const endMoments = (l: FactoredLoad): EndMoments => Object.fromEntries(END_KEYS.filter((k) => l[k] !== undefined).map((k) => [k, l[k]!])) as EndMoments;
 
 /** Status from the checks, worst first: unstable, outside the method's scope, not possible, fails. */
-function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measureValue: number; notPossible: boolean; finite: boolean; limitsMax: number }): {
+function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measureValue: number; notPossible: boolean; finite: boolean; limitsMax: number; detailing: { reason: string; clause: string } | null }): {
   status: LoadStatus;
   statusReason: string;
   statusClause: string | null;
@@ -535,6 +572,7 @@ function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measur
     if (s && !s.ok) return { status: 'outside-scope', statusReason: `about ${axis}: ${s.warnings[0] ?? "second-order moment beyond the method's limit"}`, statusClause: s.limitClause ?? s.method };
   }
   if (!x.finite || x.notPossible) return { status: 'not-possible', statusReason: `needs more than the maximum ρg = ${fmtRho(x.limitsMax)}: enlarge the section`, statusClause: null };
+  if (x.detailing) return { status: 'detailing', statusReason: x.detailing.reason, statusClause: x.detailing.clause };
   if (x.checked && !(x.measureValue <= 1 + 1e-9)) return { status: 'fails', statusReason: `utilisation ${x.measureValue.toFixed(3)} > 1`, statusClause: null };
   return { status: 'ok', statusReason: '', statusClause: null };
 }
@@ -620,8 +658,14 @@ export function describeCheck(ctx: ColumnCheckContext): ColumnCheckFrame {
     biaxial: ctx.biaxial,
     variants: ctx.variants.map((v) => ({ label: v.info.label, sign: v.info.sign, turnDeg: v.info.turnDeg })),
     notes,
+    detailing: { findings: ctx.detailing, ...aggregateFields(basis, input.detailingInput) },
   };
 }
+
+const aggregateFields = (basis: Basis, input: DetailingInput | undefined) => {
+  const a = aggregateOf(basis, input);
+  return { aggregate: a.value, aggregateAssumed: a.assumed };
+};
 
 /** What the summary and the bar proposals read of every load, gathered one load at a time. */
 interface LoadDigest {
@@ -737,6 +781,7 @@ function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult 
     biaxial: f.biaxial,
     variants: f.variants,
     notes: f.notes,
+    detailing: f.detailing,
   };
 }
 

@@ -41,6 +41,7 @@ export const STATUS_WORDS: Record<LoadStatus, string> = {
   'not-possible': 'NOT POSSIBLE',
   unstable: 'UNSTABLE',
   'outside-scope': 'OUTSIDE SCOPE',
+  detailing: 'DETAILING',
 };
 
 /** Symbols of the actions and the normalised axes for this check's basis and shape. */
