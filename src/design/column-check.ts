@@ -174,6 +174,8 @@ export interface ColumnCheck {
   readonly exitCode: 0 | 1;
   readonly bars: readonly BarProposal[];
   readonly barsSkipped: string | null;
+  /** ids of the loads the proposals do not cover (unstable, outside the slenderness method, or beyond the maximum ρg), in input order */
+  readonly barsUnmet: readonly string[];
   readonly limits: { readonly min: number; readonly max: number };
   readonly chart: { readonly gammaStep: number; readonly lower: number; readonly upper: number | null; readonly rhos: readonly number[] };
   /** the biaxial sheets read for loads with Muy (axial-level step, moment-direction step of the drawn contours); null when none are read */
@@ -614,7 +616,7 @@ export function checkColumn(input: ColumnCheckInput): ColumnCheck {
 }
 
 /** The fields of a check that no load's result changes: what a view needs to format one load's row. */
-export type ColumnCheckFrame = Omit<ColumnCheck, 'results' | 'governingId' | 'governingWhy' | 'summary' | 'exitCode' | 'bars' | 'barsSkipped'>;
+export type ColumnCheckFrame = Omit<ColumnCheck, 'results' | 'governingId' | 'governingWhy' | 'summary' | 'exitCode' | 'bars' | 'barsSkipped' | 'barsUnmet'>;
 /** The check without its per-load results: what views print around the rows. */
 export type ColumnCheckHead = Omit<ColumnCheck, 'results'>;
 
@@ -670,21 +672,22 @@ const aggregateFields = (basis: Basis, input: DetailingInput | undefined) => {
 /** What the summary and the bar proposals read of every load, gathered one load at a time. */
 interface LoadDigest {
   counts: Record<LoadStatus, number>;
-  /** a load is unstable or outside the slenderness method */
-  blocked: boolean;
-  /** a load needs more than the maximum ρg (uniaxial or exact biaxial) */
-  beyondMax: boolean;
-  /** the largest steel area any load requires */
+  /** input indices of the loads no layout can meet: unstable, outside the slenderness method, or needing more than the maximum ρg */
+  unmet: number[];
+  /** the largest steel area any load that can be met requires */
   requiredArea: number;
 }
 
-const newDigest = (): LoadDigest => ({ counts: Object.fromEntries(LOAD_STATUSES.map((s) => [s, 0])) as Record<LoadStatus, number>, blocked: false, beyondMax: false, requiredArea: 0 });
+const newDigest = (): LoadDigest => ({ counts: Object.fromEntries(LOAD_STATUSES.map((s) => [s, 0])) as Record<LoadStatus, number>, unmet: [], requiredArea: 0 });
+
+/** A load no bar layout within the basis's limits can meet (proposals leave it out and name it). */
+const cannotBeMet = (r: ColumnLoadResult): boolean =>
+  r.status === 'unstable' || r.status === 'outside-scope' || r.status === 'not-possible' || r.rhoRequired === null || r.biaxial?.rhoStatus === 'not-possible';
 
 function addToDigest(d: LoadDigest, r: ColumnLoadResult, area: number): void {
   d.counts[r.status]++;
-  if (r.status === 'unstable' || r.status === 'outside-scope') d.blocked = true;
-  if (r.rhoRequired === null || r.biaxial?.rhoStatus === 'not-possible') d.beyondMax = true;
-  d.requiredArea = Math.max(d.requiredArea, r.steelRequired ?? 0, (r.biaxial?.rhoRequired ?? 0) * area);
+  if (cannotBeMet(r)) d.unmet.push(r.index);
+  else d.requiredArea = Math.max(d.requiredArea, r.steelRequired ?? 0, (r.biaxial?.rhoRequired ?? 0) * area);
 }
 
 /** Ranking, bar proposals, summary and exit status for the results of every load. */
@@ -724,12 +727,14 @@ function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult 
   if (!input.barSelection) barsSkipped = 'bar selection not requested';
   else if (!isSelectableKind(kind)) barsSkipped = 'bar selection needs a regular arrangement (two-faces, four-faces, side-faces or ring)';
   else if (total === 0) barsSkipped = 'no loads';
-  else if (d.blocked) barsSkipped = 'a load is unstable or outside the slenderness method: change the section or the bracing';
-  else if (d.beyondMax && ctx.checkedRho === null) barsSkipped = 'a load needs more than the maximum ρg: enlarge the section';
+  else if (d.unmet.length === total) barsSkipped = 'no load can be met: each is unstable, outside the slenderness method or needs more than the maximum ρg; change the section or the bracing';
   else {
-    const limits = input.loads.reduce(
-      (acc, l) => {
-        const x = basis.steelAreaLimits(l.Pu, ctx.area);
+    // proposals cover the loads that can be met; the others are named in barsUnmet
+    const unmet = new Set(d.unmet);
+    const met = Array.from(order).filter((i) => !unmet.has(i));
+    const limits = met.reduce(
+      (acc, i) => {
+        const x = basis.steelAreaLimits(input.loads[i]!.Pu, ctx.area);
         return { min: Math.max(acc.min, x.min), max: Math.min(acc.max, x.max) };
       },
       { min: 0, max: Infinity },
@@ -743,8 +748,9 @@ function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult 
       sizes: sel.sizes,
       requiredArea: d.requiredArea,
       areaLimits: limits,
-      verify: layoutVerifier(input, order),
-      ...(sel.aggregate !== undefined ? { aggregate: sel.aggregate } : {}),
+      verify: layoutVerifier(input, met),
+      // the spacing rule at the given aggregate, else the basis's stated assumption
+      aggregate: sel.aggregate ?? basis.detailing.defaultAggregate,
       ...(input.capContext ? { capContext: input.capContext } : {}),
       ...(sel.count !== undefined ? { count: sel.count } : {}),
     });
@@ -772,6 +778,7 @@ function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult 
     exitCode: bad === 0 ? 0 : 1,
     bars,
     barsSkipped,
+    barsUnmet: input.barSelection && bars.length > 0 ? [...d.unmet].sort((a, b) => a - b).map((i) => input.loads[i]!.id) : [],
     limits: f.limits,
     chart: f.chart,
     biaxialChart: f.biaxialChart,
