@@ -124,7 +124,7 @@ function reportError(file: string, write: () => void): void {
 export const EXIT_STATUS_HELP = `
 Exit status:
   0  every load passes
-  1  a load fails, is not possible within the ρg limits, is unstable, or is outside the method's scope
+  1  a load fails, breaks a detailing rule (steel limits, clear spacing, cover), is not possible within the ρg limits, is unstable, or is outside the method's scope
   2  bad input (one line names the flag, field or CSV line)
   3  internal or I/O error`;
 
@@ -139,8 +139,8 @@ export function registerCheck(program: Command, run: (fn: () => Promise<void> | 
     .option('--loads <file>', 'CSV of load combinations with columns id,Pu,Mu (tension negative Pu)')
     .option('--columns <map>', 'read an analysis export: its headers for our fields, e.g. "id=Story+Combo,Pu=P,Mu=M3,Muy=M2" (other columns ignored, listed in a note)')
     .option('--compression <sign>', 'sign of axial compression in --loads: positive (default) or negative (most frame-analysis exports)')
-    .option('--rho <ratio>', 'given ρg to check (utilisation)')
-    .option('--aggregate <length>', 'maximum aggregate size, for the clear-spacing rule')
+    .option('--rho <ratio>', 'given ρg to check (utilisation); beyond the basis limits the load status is detailing')
+    .option('--aggregate <length>', 'maximum aggregate size for the clear-spacing rule of the given bars and of proposals (default: the basis assumption, 3/4 in or 19–20 mm)')
     .option('--chart-gamma-step <step>', 'γ step of the emulated chart sheets', '0.05')
     .option('--chart-axial-step <step>', 'axial-level step (P/(f′c·Ag), ν for EN) of the emulated biaxial sheets read for loads with Muy', '0.1')
     .option('--proposals <n>', 'how many bar layouts to propose (0 for none)', '5')

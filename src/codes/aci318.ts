@@ -10,7 +10,7 @@ import { stressToMPa, type UnitSystem } from '../units/index.js';
 import { bresslerBiaxialExponent } from './biaxial-exponent.js';
 import type { RuleDef } from './rules.js';
 import type { SlendernessMethod } from './slenderness.js';
-import type { Basis, BasisInput, CodeId, ColumnUse, DesignCode, ResistanceModel, StrainClass, StrainProfile } from './types.js';
+import type { Basis, BasisInput, CodeId, ColumnUse, DesignCode, DetailingRules, ResistanceModel, StrainClass, StrainProfile } from './types.js';
 
 /** ACI 318-19 22.2.2.1: maximum usable strain at the extreme concrete compression fibre. */
 export const ACI_EPS_CU = 0.003;
@@ -192,6 +192,7 @@ function resolveAci(edition: Edition, input: BasisInput): Basis {
     biaxialExponent: bresslerBiaxialExponent,
     slenderness: edition.slenderness,
     rules: edition.rules,
+    detailing: aciDetailing(edition.id as 'aci318-19' | 'aci318-14', units, input.options?.columnUse ?? 'gravity'),
     notes: [
       `Equivalent rectangular stress block 0.85·f′c over a = β1·c, β1 = ${beta1.toFixed(3)} (${edition.title} 22.2.2.4, Table 22.2.2.4.3); concrete tensile strength neglected (22.2.2.2).`,
       `Extreme-fibre concrete strain εcu = 0.003 (22.2.2.1); plane sections (22.2.1.2).`,
@@ -220,3 +221,38 @@ const fmt = (x: number): string => String(Number(x.toPrecision(4)));
 
 export const ACI_318_19: DesignCode = makeAci(EDITIONS['aci318-19']);
 export const ACI_318_14: DesignCode = makeAci(EDITIONS['aci318-14']);
+
+// ───────────────────────────── detailing (issue 19) ─────────────────────────────
+
+/** The cover table of each edition: 318-19 moved the durability chapter's cover table to 20.6 (ACI 318-19 Table 20.6.1.3.1; 318-14 Table 20.5.1.3.1). */
+const ACI_COVER_TABLE: Record<'aci318-19' | 'aci318-14', string> = { 'aci318-19': 'Table 20.6.1.3.1', 'aci318-14': 'Table 20.5.1.3.1' };
+
+/**
+ * ACI 318 detailing rules for columns (the same clause numbers in 318-14 and 318-19, but the cover table):
+ * 10.6.1.1 0.01·Ag ≤ Ast ≤ 0.08·Ag; 10.3.1.2 a reduced effective area ≥ Ag/2 for a column larger than the
+ * loads need (not for special moment frames); R10.6.1.1 about 0.04 where bars are lapped (a note); 25.2.3
+ * clear spacing; the cover table (columns not exposed to weather or in contact with ground: 1.5 in to ties);
+ * 25.5.1.1 no lap splices of bars larger than No. 11 (a note: splice them mechanically or by welding).
+ */
+function aciDetailing(id: 'aci318-19' | 'aci318-14', units: UnitSystem, use: ColumnUse): DetailingRules {
+  const us = units === 'us';
+  return {
+    rules: [
+      { id: 'steel-min', clause: '10.6.1.1', title: 'Ast ≥ 0.01·Ag', source: 'published', binding: true },
+      { id: 'steel-max', clause: '10.6.1.1', title: 'Ast ≤ 0.08·Ag', source: 'published', binding: true },
+      { id: 'steel-max-lap', clause: 'R10.6.1.1', title: 'about 0.04·Ag where bars are lap spliced', source: 'from memory', binding: false },
+      { id: 'clear-spacing', clause: '25.2.3', title: 'clear spacing ≥ max(1.5 in, 1.5·db, 4/3·dagg)', source: 'published', binding: true },
+      { id: 'cover', clause: ACI_COVER_TABLE[id], title: 'specified cover 1.5 in to ties, columns not exposed to weather or in contact with ground', source: 'published', binding: true },
+      { id: 'bar-size-lap', clause: '25.5.1.1', title: 'no lap splices of bars larger than No. 11', source: 'from memory', binding: false },
+    ],
+    // 10.3.1.2: not for columns of special moment frames
+    ...(use === 'gravity' ? { reducedAreaShare: 0.5 } : {}),
+    lapZoneRho: 0.04,
+    defaultAggregate: us ? 0.75 : 19, // 3/4 in (19 mm) maximum aggregate, common practice
+    // the cover table: 1.5 in; 40 mm in SI (ACI 318M, from memory)
+    minimumCover: () => (us ? 1.5 : 40),
+    coverAssumption: `${us ? '1.5 in' : '40 mm'} to the ties: columns not exposed to weather or in contact with ground (${ACI_COVER_TABLE[id]}); other exposures and fire need more and are not checked`,
+    // No. 11 (1.41 in) and #36 (A615M, 35.8 mm) are the largest lapped sizes
+    maxLappedBar: us ? 1.41 : 35.8,
+  };
+}

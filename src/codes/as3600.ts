@@ -24,7 +24,7 @@ import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
 import { rectangularBlock } from '../materials/rectangular-block.js';
 import { aciProfile } from './aci318.js';
 import { as3600BiaxialExponent } from './biaxial-exponent.js';
-import type { Basis, BasisInput, DesignCode, ResistanceModel, StrainClass, StrainProfile } from './types.js';
+import type { Basis, BasisInput, DesignCode, DetailingRules, ResistanceModel, StrainClass, StrainProfile } from './types.js';
 
 /** AS 3600-2018 8.1.2 / 10.6.1: maximum concrete compressive strain (from memory). */
 export const AS_EPS_CU = 0.003;
@@ -159,6 +159,7 @@ function resolveAs3600(input: BasisInput): Basis {
     // 10.6.4 (from memory): αn from N*/(0.6·Nuo), Nuo = α1·f′c·(Ag − As) + fsy·As (10.6.2.2)
     biaxialExponent: as3600BiaxialExponent,
     biaxialReferenceLoad: (Ag: number, As: number) => 0.6 * (alpha1 * fc * (Ag - As) + fsy * As),
+    detailing: AS3600_DETAILING,
     parameters: {
       'α2': r4(alpha2),
       'γ₂ (block depth)': r4(gammaBlock),
@@ -186,3 +187,25 @@ function resolveAs3600(input: BasisInput): Basis {
 const fmt = (x: number): string => String(Number(x.toPrecision(4)));
 const r4 = (x: number): number => Number(x.toFixed(4));
 const r6 = (x: number): number => Number(x.toFixed(6));
+
+// ───────────────────────────── detailing (issue 19) ─────────────────────────────
+
+/**
+ * AS 3600-2018 detailing rules for columns (from memory: the standard's text was not found): 10.7.1 0.01·Ag ≤
+ * As ≤ 0.04·Ag, the 0.04 applying at splices too; clear spacing max(db, 1.5·aggregate, 25 mm) (clause not
+ * verified); cover at least the bar diameter for placing (4.10.3, exposure table 4.10.3.2 not checked).
+ */
+const AS3600_DETAILING: DetailingRules = {
+  rules: [
+    { id: 'steel-min', clause: '10.7.1', title: 'As ≥ 0.01·Ag', source: 'from memory', binding: true },
+    { id: 'steel-max', clause: '10.7.1', title: 'As ≤ 0.04·Ag', source: 'from memory', binding: true },
+    { id: 'steel-max-lap', clause: '10.7.1', title: 'As ≤ 0.04·Ag where bars are lapped', source: 'from memory', binding: false },
+    { id: 'clear-spacing', clause: 'not verified', title: 'clear spacing ≥ max(db, 1.5·aggregate, 25 mm)', source: 'from memory', binding: true },
+    { id: 'cover', clause: '4.10.3', title: 'cover ≥ the bar diameter for placing', source: 'from memory', binding: true },
+  ],
+  lapZoneRho: 0.04,
+  defaultAggregate: 20, // 20 mm maximum aggregate, common practice
+  minimumCover: (tie: number, bar: number) => Math.max(tie, bar - tie),
+  coverAssumption: 'cover for placing only: at least the tie diameter, and the bar diameter to the main bars (4.10.3, from memory); the exposure classification table (4.10.3.2) and fire are not checked',
+  maxLappedBar: Infinity,
+};

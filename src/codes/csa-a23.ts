@@ -16,7 +16,7 @@ import { ERROR_CODES, PmError } from '../errors.js';
 import { elasticPlasticSteel } from '../materials/elastic-plastic-steel.js';
 import { rectangularBlock } from '../materials/rectangular-block.js';
 import { yieldClass } from './strain-class.js';
-import type { Basis, BasisInput, CapContext, DesignCode, ResistanceModel, StrainProfile } from './types.js';
+import type { Basis, BasisInput, CapContext, DesignCode, DetailingRules, ResistanceModel, StrainProfile } from './types.js';
 
 /** CSA A23.3-19 10.1.3: maximum usable strain at the extreme concrete compression fibre (from memory). */
 export const CSA_EPS_CU = 0.0035;
@@ -141,6 +141,7 @@ function resolveCsa(input: BasisInput): Basis {
     barSet: 'csa-g30.18',
     slenderness: CSA_A23_SLENDERNESS, // 10.15.3 non-sway (from memory)
     rules: CSA_A23_RULES,
+    detailing: CSA_DETAILING,
     factorSummary: `φc ${CSA_PHI_C} · φs ${CSA_PHI_S} · α1 ${fmt(alpha1)} · β1 ${fmt(beta1)} (8.4.2, 8.4.3, 10.1.7)`,
     parameters: {
       'α1': r4(alpha1),
@@ -167,3 +168,29 @@ function resolveCsa(input: BasisInput): Basis {
 const fmt = (x: number): string => String(Number(x.toPrecision(4)));
 const r4 = (x: number): number => Number(x.toFixed(4));
 const r6 = (x: number): number => Number(x.toFixed(6));
+
+// ───────────────────────────── detailing (issue 19) ─────────────────────────────
+
+/**
+ * CSA A23.3-19 detailing rules for columns (from memory: the standard's text was not found): 10.9.1 As ≥
+ * 0.01·Ag, 10.10.5 a reduced effective area ≥ Ag/2 for a column larger than the loads need; 10.9.2 As ≤
+ * 0.08·Ag including lap splice regions (so bars lapped at one level flag above 0.04); CSA A23.1-19 6.6.5.2
+ * clear spacing; A23.1-19 Table 17 cover 30 mm for columns at exposure N; 12.14.2.1 no lap splices of bars
+ * larger than 35M (a note).
+ */
+const CSA_DETAILING: DetailingRules = {
+  rules: [
+    { id: 'steel-min', clause: '10.9.1', title: 'As ≥ 0.01·Ag', source: 'from memory', binding: true },
+    { id: 'steel-max', clause: '10.9.2', title: 'As ≤ 0.08·Ag', source: 'from memory', binding: true },
+    { id: 'steel-max-lap', clause: '10.9.2', title: '0.08·Ag including lap splice regions: 0.04·Ag between laps where bars are lapped at one level', source: 'from memory', binding: false },
+    { id: 'clear-spacing', clause: 'CSA A23.1-19 6.6.5.2', title: 'clear spacing ≥ max(1.4·db, 1.4·aggregate, 30 mm)', source: 'from memory', binding: true },
+    { id: 'cover', clause: 'CSA A23.1-19 Table 17', title: 'cover 30 mm, columns at exposure N', source: 'from memory', binding: true },
+    { id: 'bar-size-lap', clause: '12.14.2.1', title: 'no lap splices of bars larger than 35M', source: 'from memory', binding: false },
+  ],
+  reducedAreaShare: 0.5, // 10.10.5 (from memory)
+  lapZoneRho: 0.04,
+  defaultAggregate: 20, // 20 mm nominal maximum aggregate, common practice
+  minimumCover: (tie: number, bar: number) => Math.max(30, tie, bar - tie),
+  coverAssumption: '30 mm for columns at exposure N (interior; CSA A23.1-19 Table 17, from memory); other exposures and fire need more and are not checked',
+  maxLappedBar: 35.7,
+};

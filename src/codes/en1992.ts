@@ -18,7 +18,7 @@ import { rectangularBlock } from '../materials/rectangular-block.js';
 import { yieldClass } from './strain-class.js';
 import type { ConcreteLaw, SteelLaw } from '../materials/types.js';
 import { en1992BiaxialExponent } from './biaxial-exponent.js';
-import type { Basis, BasisInput, DesignCode, ResistanceModel, StrainProfile } from './types.js';
+import type { Basis, BasisInput, DesignCode, DetailingRules, ResistanceModel, StrainProfile } from './types.js';
 
 /** EN 1992-1-1 3.2.7(4): design value of the modulus of elasticity of reinforcing steel, MPa. */
 export const EC2_STEEL_MODULUS = 200_000;
@@ -262,6 +262,7 @@ function resolveEc2(input: BasisInput): Basis {
     biaxialReferenceLoad: (Ac: number, As: number) => Ac * fcd + As * fyd, // 5.8.9(4): NRd = Ac·fcd + As·fyd
     slenderness: EN_1992_SLENDERNESS, // 5.8.8
     rules: EN_1992_RULES,
+    detailing: EC2_DETAILING,
     parameters: {
       fcd: r4(fcd),
       fyd: r4(fyd),
@@ -306,3 +307,28 @@ function resolveEc2(input: BasisInput): Basis {
 const fmt = (x: number): string => String(Number(x.toPrecision(4)));
 const r4 = (x: number): number => Number(x.toFixed(4));
 const r6 = (x: number): number => Number(x.toFixed(6));
+
+// ───────────────────────────── detailing (issue 19) ─────────────────────────────
+
+/**
+ * EN 1992-1-1 detailing rules for columns, recommended values: 9.5.2(2) As,min = max(0.10·NEd/fyd, 0.002·Ac);
+ * 9.5.2(3) As,max = 0.04·Ac outside laps, 0.08·Ac at laps (so bars lapped at one level flag above 0.04);
+ * 8.2(2) clear distance ≥ max(k1·φ, dg + k2, 20 mm); 4.4.1.2(3) Table 4.2 cmin,b = φ of the bar (the link's
+ * cover ≥ φlink, and cover + φlink ≥ φ of the main bar), with 4.4.1.2(2)'s 10 mm floor; 8.8 bars above
+ * φlarge = 32 mm (recommended) are not lapped (a note).
+ */
+const EC2_DETAILING: DetailingRules = {
+  rules: [
+    { id: 'steel-min', clause: '9.5.2(2)', title: 'As,min = max(0.10·NEd/fyd, 0.002·Ac)', source: 'published', binding: true },
+    { id: 'steel-max', clause: '9.5.2(3)', title: 'As,max = 0.04·Ac outside laps (0.08·Ac at laps)', source: 'published', binding: true },
+    { id: 'steel-max-lap', clause: '9.5.2(3)', title: 'As,max = 0.08·Ac at laps: bars lapped at one level, 0.04·Ac between laps', source: 'published', binding: false },
+    { id: 'clear-spacing', clause: '8.2(2)', title: 'clear distance ≥ max(k1·φ, dg + k2, 20 mm), k1 = 1, k2 = 5 mm', source: 'published', binding: true },
+    { id: 'cover', clause: '4.4.1.2(3)', title: 'cmin,b = bar diameter (Table 4.2), at least 10 mm', source: 'from memory', binding: true },
+    { id: 'bar-size-lap', clause: '8.8', title: 'bars larger than φlarge = 32 mm are not lapped', source: 'from memory', binding: false },
+  ],
+  lapZoneRho: 0.04,
+  defaultAggregate: 20, // dg = 20 mm, common practice
+  minimumCover: (tie: number, bar: number) => Math.max(tie, bar - tie, 10),
+  coverAssumption: 'cmin,b only: the link diameter, and the bar diameter to the main bars (4.4.1.2(3), Table 4.2), at least 10 mm; cmin,dur (exposure class, 4.4.1.2(5)) and Δcdev (4.4.1.3) are not checked',
+  maxLappedBar: 32,
+};

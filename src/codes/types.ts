@@ -187,6 +187,40 @@ export interface Basis {
    * clause matrix of the tests (tests/codes/clause-matrix.ts).
    */
   readonly rules: readonly RuleDef[];
+  /** the detailing rules a given layout or ρg is checked against (src/design/detailing.ts) */
+  readonly detailing: DetailingRules;
+}
+
+/**
+ * A detailing rule of a basis. Ids: 'steel-min', 'steel-max', 'steel-max-lap', 'clear-spacing', 'cover',
+ * 'bar-size-lap'. A binding rule broken makes the load's status `detailing`; the others are flagged as notes.
+ */
+export interface DetailingRuleDef extends RuleDef {
+  readonly binding: boolean;
+}
+
+/**
+ * The detailing rules of a basis: the steel ratio limits come from `steelAreaLimits`, the clear spacing from
+ * `minimumClearSpacing`; here are the rules' clauses and the figures the other rules need.
+ */
+export interface DetailingRules {
+  /** every detailing rule the basis has, with clause and source; a rule not listed is not checked */
+  readonly rules: readonly DetailingRuleDef[];
+  /**
+   * Smallest share of Ag a reduced effective area may take for the minimum steel of a column larger than
+   * the loads need (ACI 318-19 10.3.1.2: one half); absent where the basis has no such provision.
+   */
+  readonly reducedAreaShare?: number;
+  /** gross ratio above which a layout is flagged where its bars are lapped (all bars lapped at one level doubles the area) */
+  readonly lapZoneRho: number;
+  /** maximum aggregate size assumed when none is given, in the system's length unit (common practice) */
+  readonly defaultAggregate: number;
+  /** smallest clear cover to the tie for the tie and longitudinal bar diameters (system's length unit), at the mildest exposure */
+  minimumCover(tieDiameter: number, barDiameter: number): number;
+  /** what the cover rule assumes (exposure, what is not checked), for reports */
+  readonly coverAssumption: string;
+  /** largest longitudinal bar diameter that may be lap spliced (system's length unit); Infinity where the basis sets none */
+  readonly maxLappedBar: number;
 }
 
 /** An exponent with where it comes from. */

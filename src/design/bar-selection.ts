@@ -6,8 +6,12 @@
  * - Ast between the basis limits (ACI 318-19 10.6.1.1: 0.01·Ag ≤ Ast ≤ 0.08·Ag);
  * - at least the basis's minimum bar count (basis.minimumBarCount: ACI 318-19 10.7.3.1, EN 1992-1-1 9.5.2(4), CSA A23.3-19 10.9.3);
  * - clear spacing ≥ the basis's minimum (Basis.minimumClearSpacing: ACI 318-19 25.2.3, EN 1992-1-1 8.2(2), CSA A23.1 6.6.5.2);
- * - bar centres at cover + tie + db/2 from each face (common practice), so bars fit inside cover and tie.
+ * - bar centres at cover + tie + db/2 from each face (common practice), so bars fit inside cover and tie;
+ * - with cover detailing, the given cover at least the basis's minimum for the tie and each bar size (Basis.detailing.minimumCover);
+ * - flagged, not refused (issue 19): ρg above the basis's lap-zone ratio (Basis.detailing.lapZoneRho: ACI 318-19 R10.6.1.1,
+ *   EN 1992-1-1 9.5.2(3), AS 3600 10.7.1) and bars larger than the largest that may be lap spliced (ACI 318-19 25.5.1.1).
  */
+import type { RuleFinding } from '../codes/rules.js';
 import type { Basis, CapContext } from '../codes/types.js';
 import { BARS_PER_FACE_RANGE } from '../input/limits.js';
 import type { BarSize } from '../section/bar-tables.js';
@@ -71,6 +75,20 @@ export interface BarProposal {
   utilisation: number;
   /** index into the loads of the one that governs this layout */
   governingLoad: number;
+  /** the basis's non-binding detailing rules this layout breaks (above the lap-zone ratio, a bar too large to lap): flags, not failures */
+  findings: RuleFinding[];
+}
+
+/** The flags of a proposal: rules it breaks that do not refuse it (lap-zone ratio, lap-spliceable bar size). */
+export function proposalFlags(basis: Basis, rho: number, barDiameter: number): RuleFinding[] {
+  const d = basis.detailing;
+  const rule = (id: string) => d.rules.find((r) => r.id === id);
+  const out: RuleFinding[] = [];
+  const lap = rule('steel-max-lap');
+  if (lap && rho > d.lapZoneRho + 1e-9) out.push({ rule: lap.id, clause: lap.clause, outcome: 'violated', value: rho, limit: d.lapZoneRho, quantity: 'ratio' });
+  const size = rule('bar-size-lap');
+  if (size && barDiameter > d.maxLappedBar + 1e-6) out.push({ rule: size.id, clause: size.clause, outcome: 'violated', value: barDiameter, limit: d.maxLappedBar, quantity: 'length' });
+  return out;
 }
 
 /** Smallest per-face count of an arrangement holding at least `bars` bars, and the minimum count rule. */
@@ -193,6 +211,8 @@ export function proposeBars(req: BarSelectionRequest): BarProposal[] {
   for (const size of req.sizes) {
     const gamma = detailing.kind === 'cover' ? gammaFromCover(h, detailing.cover, detailing.tieDiameter, size.diameter) : detailing.gamma;
     if (!(gamma > 0.3 && gamma < 0.95)) continue;
+    // buildable with the given cover and tie: the cover at least the basis's minimum for this bar size
+    if (detailing.kind === 'cover' && detailing.cover < basis.detailing.minimumCover(detailing.tieDiameter, size.diameter) - 1e-9) continue;
     if (((1 - gamma) * h) / 2 < size.diameter / 2) continue;
     if (gammaB !== undefined && ((1 - gammaB) * w) / 2 < size.diameter / 2) continue;
     const needed = Math.max(req.requiredArea, req.areaLimits.min);
@@ -230,6 +250,7 @@ export function proposeBars(req: BarSelectionRequest): BarProposal[] {
             clearSpacingRequired: clearRequired,
             utilisation: worst.utilisation,
             governingLoad: worst.index,
+            findings: proposalFlags(basis, area / ag, size.diameter),
           };
         }
       }

@@ -26,6 +26,7 @@ import type { Arrangement, Bar, Shape } from '../section/types.js';
 import type { UnitSystem } from '../units/index.js';
 import { isSelectableKind, proposeBars, type BarProposal, type Detailing } from './bar-selection.js';
 import { checkBiaxial, type BiaxialResult } from './biaxial.js';
+import { aggregateOf, breaksDetailing, findingText, loadSteelDetailing, sectionDetailing, type DetailingInput } from './detailing.js';
 import { BiaxialCharts, type BiaxialLevelReading } from './biaxial-chart-reading.js';
 import { rhoLimitsFor, withMinimum, type FactoredLoad, type GivenLayout } from './check.js';
 import { buildChartSet, readCharts, type ChartSet, type SheetReading } from './chart-reading.js';
@@ -44,8 +45,10 @@ export interface ColumnCheckInput {
   gamma: number;
   /** γB: outer-column spacing ÷ b (rectangles); absent: the same cover as γ gives on h */
   gammaB?: number;
-  /** where γ came from, for the views (default 'given') */
-  gammaSource?: 'given' | 'detailing';
+  /** where γ came from, for the views (default 'given'): given, or from the bars (cover, tie and bar; custom bar positions) */
+  gammaSource?: 'given' | 'bars';
+  /** what is known of the given bars beyond their area (bar and tie sizes, cover, aggregate), for the detailing rules */
+  detailingInput?: DetailingInput;
   capContext?: CapContext;
   loads: readonly FactoredLoad[];
   /** a given ρg to check (bars smeared at γ in the arrangement) */
@@ -64,12 +67,12 @@ export interface ColumnCheckInput {
 
 // ───────────────────────────── result ─────────────────────────────
 
-export const LOAD_STATUSES = ['ok', 'fails', 'not-possible', 'unstable', 'outside-scope'] as const;
+export const LOAD_STATUSES = ['ok', 'fails', 'not-possible', 'unstable', 'outside-scope', 'detailing'] as const;
 export type LoadStatus = (typeof LOAD_STATUSES)[number];
 export const isLoadStatus = (s: unknown): s is LoadStatus => LOAD_STATUSES.includes(s as LoadStatus);
 
 /** Worst first: the order in which statuses govern. */
-const STATUS_RANK: Record<LoadStatus, number> = { unstable: 0, 'outside-scope': 1, 'not-possible': 2, fails: 3, ok: 4 };
+const STATUS_RANK: Record<LoadStatus, number> = { unstable: 0, 'outside-scope': 1, 'not-possible': 2, detailing: 3, fails: 4, ok: 5 };
 
 /** Which measure ranks the loads: utilisation of the given reinforcement, else the ρg required. */
 export type GoverningMeasure = 'utilisation' | 'rhoRequired';
@@ -141,7 +144,10 @@ export interface ColumnLoadResult {
   readonly exactUniaxial: ExactUniaxial | null;
   /** which check gives `measureValue` */
   readonly measureFrom: MeasureSource;
-  /** the rules applied around the section for this load: rule, clause, axis, outcome and figures */
+  /**
+   * the rules applied around the section for this load: rule, clause, axis, outcome and figures — the minimum
+   * moments and exact searches, then the detailing rules of the given reinforcement (none when none is given)
+   */
   readonly findings: readonly RuleFinding[];
 }
 
@@ -207,7 +213,7 @@ export interface ColumnCheck {
   readonly gamma: number;
   /** γB, outer-column spacing ÷ b, when given (null: the same cover as γ gives on h) */
   readonly gammaB: number | null;
-  readonly gammaSource: 'given' | 'detailing';
+  readonly gammaSource: 'given' | 'bars';
   readonly capContext: CapContext;
   readonly area: number;
   readonly depth: number;
@@ -222,6 +228,8 @@ export interface ColumnCheck {
   readonly exitCode: 0 | 1;
   readonly bars: readonly BarProposal[];
   readonly barsSkipped: string | null;
+  /** ids of the loads the proposals do not cover (unstable, outside the slenderness method, or beyond the maximum ρg), in input order */
+  readonly barsUnmet: readonly string[];
   readonly limits: { readonly min: number; readonly max: number };
   readonly chart: { readonly gammaStep: number; readonly lower: number; readonly upper: number | null; readonly rhos: readonly number[] };
   /** the biaxial sheets read for loads with Muy (axial-level step, moment-direction step of the drawn contours); null when none are read */
@@ -234,6 +242,8 @@ export interface ColumnCheck {
   readonly biaxial: boolean;
   readonly variants: readonly VariantInfo[];
   readonly notes: readonly string[];
+  /** detailing of the given reinforcement: the rules that do not depend on the load (each load's `findings` adds the steel ratio), and the aggregate the spacing rule assumed */
+  readonly detailing: { readonly findings: readonly RuleFinding[]; readonly aggregate: number; readonly aggregateAssumed: boolean };
 }
 
 // ───────────────────────────── section variants ─────────────────────────────
@@ -338,6 +348,8 @@ export interface ColumnCheckContext {
   readonly axisSymmetric: boolean;
   /** the section turned for bending about y, prepared on first use */
   readonly yAxis: () => YAxisContext;
+  /** detailing findings of the given reinforcement that do not depend on the load (empty when none is given) */
+  readonly detailing: readonly RuleFinding[];
 }
 
 /** The section as the y-axis check sees it: b and h swapped, bars swapped, its variants. */
@@ -403,7 +415,22 @@ export function prepareColumnCheck(input: ColumnCheckInput, opts: { readings?: b
           ...(input.chartAxialStep !== undefined ? { axialStep: input.chartAxialStep } : {}),
         })
       : null;
-  return { input, basis, area, depth, capContext, variants, charts, biaxialCharts, checkedRho, checkedBars, positionBars, checkedBiaxial, biaxial, planeSymmetric, axisSymmetric, yAxis };
+  const detailing =
+    checkedBars && checkedRho !== null
+      ? sectionDetailing(
+          {
+            basis,
+            shape,
+            arrangement: input.layout?.arrangement ?? input.arrangement,
+            gamma: input.layout?.gamma ?? input.gamma,
+            ...(input.gammaB !== undefined ? { gammaB: input.gammaB } : {}),
+            bars: checkedBars,
+            ...(input.detailingInput ? { input: input.detailingInput } : {}),
+          },
+          checkedRho,
+        )
+      : [];
+  return { input, basis, area, depth, capContext, variants, charts, biaxialCharts, checkedRho, checkedBars, positionBars, checkedBiaxial, biaxial, planeSymmetric, axisSymmetric, yAxis, detailing };
 }
 
 // ───────────────────────────── one load ─────────────────────────────
@@ -732,8 +759,20 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
       measureValue = v;
     }
   }
-  const st = statusOf({ magnified, checked, measureValue, measureFrom, notPossible: !checked && !Number.isFinite(measureValue), finite: finiteMoments, limitsMax: limits.max });
-  const findings = findingsOf(ctx, load, d, { bySign, yBySign, exX: ex.x, exY: ex.y, uniX: parts[0]![1], uniY: parts[2]![1] });
+  // detailing of the given reinforcement: the section's rules and this load's steel ratio (issue 19 U4)
+  const detailingFindings = checked ? [...ctx.detailing, ...loadSteelDetailing(basis, load.Pu, area, ctx.checkedRho!, measureValue)] : [];
+  const broken = detailingFindings.find((f) => breaksDetailing(basis, f));
+  const st = statusOf({
+    magnified,
+    checked,
+    measureValue,
+    measureFrom,
+    notPossible: !checked && !Number.isFinite(measureValue),
+    finite: finiteMoments,
+    limitsMax: limits.max,
+    detailing: broken ? { reason: findingText(basis, broken), clause: broken.clause } : null,
+  });
+  const findings = [...findingsOf(ctx, load, d, { bySign, yBySign, exX: ex.x, exY: ex.y, uniX: parts[0]![1], uniY: parts[2]![1] }), ...detailingFindings];
 
   const unbounded = !finiteMoments;
   return {
@@ -843,7 +882,7 @@ const END_KEYS = ['M1', 'M2', 'M1y', 'M2y', 'M01', 'M02', 'M01y', 'M02y'] as con
 const endMoments = (l: FactoredLoad): EndMoments => Object.fromEntries(END_KEYS.filter((k) => l[k] !== undefined).map((k) => [k, l[k]!])) as EndMoments;
 
 /** Status from the checks, worst first: unstable, outside the method's scope, not possible, fails. */
-function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measureValue: number; measureFrom: MeasureSource; notPossible: boolean; finite: boolean; limitsMax: number }): {
+function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measureValue: number; measureFrom: MeasureSource; notPossible: boolean; finite: boolean; limitsMax: number; detailing: { reason: string; clause: string } | null }): {
   status: LoadStatus;
   statusReason: string;
   statusClause: string | null;
@@ -858,6 +897,7 @@ function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measur
     if (s && !s.ok) return { status: 'outside-scope', statusReason: `about ${axis}: ${s.warnings[0] ?? "second-order moment beyond the method's limit"}`, statusClause: s.limitClause ?? s.method };
   }
   if (!x.finite || x.notPossible) return { status: 'not-possible', statusReason: `needs more than the maximum ρg = ${fmtRho(x.limitsMax)}: enlarge the section`, statusClause: null };
+  if (x.detailing) return { status: 'detailing', statusReason: x.detailing.reason, statusClause: x.detailing.clause };
   if (x.checked && !(x.measureValue <= 1 + 1e-9)) return { status: 'fails', statusReason: `utilisation ${x.measureValue.toFixed(3)} > 1${MEASURE_WORDS[x.measureFrom] ? ` (${MEASURE_WORDS[x.measureFrom]})` : ''}`, statusClause: null };
   return { status: 'ok', statusReason: '', statusClause: null };
 }
@@ -899,7 +939,7 @@ export function checkColumn(input: ColumnCheckInput): ColumnCheck {
 }
 
 /** The fields of a check that no load's result changes: what a view needs to format one load's row. */
-export type ColumnCheckFrame = Omit<ColumnCheck, 'results' | 'governingId' | 'governingWhy' | 'summary' | 'exitCode' | 'bars' | 'barsSkipped'>;
+export type ColumnCheckFrame = Omit<ColumnCheck, 'results' | 'governingId' | 'governingWhy' | 'summary' | 'exitCode' | 'bars' | 'barsSkipped' | 'barsUnmet'>;
 /** The check without its per-load results: what views print around the rows. */
 export type ColumnCheckHead = Omit<ColumnCheck, 'results'>;
 
@@ -943,29 +983,36 @@ export function describeCheck(ctx: ColumnCheckContext): ColumnCheckFrame {
     biaxial: ctx.biaxial,
     variants: ctx.variants.map((v) => ({ label: v.info.label, sign: v.info.sign, turnDeg: v.info.turnDeg })),
     notes,
+    detailing: { findings: ctx.detailing, ...aggregateFields(basis, input.detailingInput) },
   };
 }
+
+const aggregateFields = (basis: Basis, input: DetailingInput | undefined) => {
+  const a = aggregateOf(basis, input);
+  return { aggregate: a.value, aggregateAssumed: a.assumed };
+};
 
 /** What the summary and the bar proposals read of every load, gathered one load at a time. */
 interface LoadDigest {
   counts: Record<LoadStatus, number>;
-  /** a load is unstable or outside the slenderness method */
-  blocked: boolean;
-  /** a load needs more than the maximum ρg (uniaxial or exact biaxial) */
-  beyondMax: boolean;
-  /** the largest steel area any load requires */
+  /** input indices of the loads no layout can meet: unstable, outside the slenderness method, or needing more than the maximum ρg */
+  unmet: number[];
+  /** the largest steel area any load that can be met requires */
   requiredArea: number;
 }
 
-const newDigest = (): LoadDigest => ({ counts: Object.fromEntries(LOAD_STATUSES.map((s) => [s, 0])) as Record<LoadStatus, number>, blocked: false, beyondMax: false, requiredArea: 0 });
+const newDigest = (): LoadDigest => ({ counts: Object.fromEntries(LOAD_STATUSES.map((s) => [s, 0])) as Record<LoadStatus, number>, unmet: [], requiredArea: 0 });
+
+/** A load no bar layout within the basis's limits can meet (proposals leave it out and name it). */
+const cannotBeMet = (r: ColumnLoadResult): boolean =>
+  r.status === 'unstable' || r.status === 'outside-scope' || r.status === 'not-possible' || r.rhoRequired === null || r.biaxial?.rhoStatus === 'not-possible';
 
 function addToDigest(d: LoadDigest, r: ColumnLoadResult, area: number): void {
   d.counts[r.status]++;
-  if (r.status === 'unstable' || r.status === 'outside-scope') d.blocked = true;
   // with no reinforcement given the measure is the largest ρg required (about x, about y alone, exact, biaxial)
   const rhoMeasure = r.utilisation === null && r.status !== 'unstable' && r.status !== 'outside-scope';
-  if (r.rhoRequired === null || r.biaxial?.rhoStatus === 'not-possible' || (rhoMeasure && r.measureValue === null)) d.beyondMax = true;
-  d.requiredArea = Math.max(d.requiredArea, r.steelRequired ?? 0, (r.biaxial?.rhoRequired ?? 0) * area, rhoMeasure ? (r.measureValue ?? 0) * area : 0);
+  if (cannotBeMet(r) || (rhoMeasure && r.measureValue === null)) d.unmet.push(r.index);
+  else d.requiredArea = Math.max(d.requiredArea, r.steelRequired ?? 0, (r.biaxial?.rhoRequired ?? 0) * area, rhoMeasure ? (r.measureValue ?? 0) * area : 0);
 }
 
 /** Where the governing figure comes from, when not the uniaxial check about x or the biaxial check. */
@@ -1012,12 +1059,14 @@ function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult 
   if (!input.barSelection) barsSkipped = 'bar selection not requested';
   else if (!isSelectableKind(kind)) barsSkipped = 'bar selection needs a regular arrangement (two-faces, four-faces, side-faces or ring)';
   else if (total === 0) barsSkipped = 'no loads';
-  else if (d.blocked) barsSkipped = 'a load is unstable or outside the slenderness method: change the section or the bracing';
-  else if (d.beyondMax && ctx.checkedRho === null) barsSkipped = 'a load needs more than the maximum ρg: enlarge the section';
+  else if (d.unmet.length === total) barsSkipped = 'no load can be met: each is unstable, outside the slenderness method or needs more than the maximum ρg; change the section or the bracing';
   else {
-    const limits = input.loads.reduce(
-      (acc, l) => {
-        const x = basis.steelAreaLimits(l.Pu, ctx.area);
+    // proposals cover the loads that can be met; the others are named in barsUnmet
+    const unmet = new Set(d.unmet);
+    const met = Array.from(order).filter((i) => !unmet.has(i));
+    const limits = met.reduce(
+      (acc, i) => {
+        const x = basis.steelAreaLimits(input.loads[i]!.Pu, ctx.area);
         return { min: Math.max(acc.min, x.min), max: Math.min(acc.max, x.max) };
       },
       { min: 0, max: Infinity },
@@ -1031,8 +1080,9 @@ function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult 
       sizes: sel.sizes,
       requiredArea: d.requiredArea,
       areaLimits: limits,
-      verify: layoutVerifier(input, order),
-      ...(sel.aggregate !== undefined ? { aggregate: sel.aggregate } : {}),
+      verify: layoutVerifier(input, met),
+      // the spacing rule at the given aggregate, else the basis's stated assumption
+      aggregate: sel.aggregate ?? basis.detailing.defaultAggregate,
       ...(input.capContext ? { capContext: input.capContext } : {}),
       ...(sel.count !== undefined ? { count: sel.count } : {}),
     });
@@ -1060,6 +1110,7 @@ function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult 
     exitCode: bad === 0 ? 0 : 1,
     bars,
     barsSkipped,
+    barsUnmet: input.barSelection && bars.length > 0 ? [...d.unmet].sort((a, b) => a - b).map((i) => input.loads[i]!.id) : [],
     limits: f.limits,
     chart: f.chart,
     biaxialChart: f.biaxialChart,
@@ -1069,6 +1120,7 @@ function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult 
     biaxial: f.biaxial,
     variants: f.variants,
     notes: f.notes,
+    detailing: f.detailing,
   };
 }
 

@@ -12,7 +12,7 @@ import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { MAX_DRAWN_REPORT_LOADS } from '../input/limits.js';
 import { LOAD_FIELDS, parseLoadQuantity, parseLoadsCsv as readLoadsCsv, type LoadsCsvOptions } from '../input/loads-csv.js';
 import { parseColumnMap, parseCompression } from '../input/column-map.js';
-import { CHART_AXIAL_STEP_RANGE, CHART_GAMMA_STEP_RANGE } from '../input/limits.js';
+import { CHART_AXIAL_STEP_RANGE, CHART_GAMMA_STEP_RANGE, CHECK_RHO_RANGE } from '../input/limits.js';
 import { barSet } from '../section/bar-tables.js';
 import { barCount } from '../section/arrangements.js';
 import { faceCounts, type Arrangement } from '../section/types.js';
@@ -134,9 +134,9 @@ export function resolveCheckOptions(o: CheckOptions, given?: { loads: readonly F
     input.chartAxialStep = requireInRange('--chart-axial-step', Number.isFinite(step) ? step : NaN, ...CHART_AXIAL_STEP_RANGE);
   }
   if (o.rho !== undefined) {
-    const lim = basis.rhoLimits;
+    // beyond the basis's limits the check runs and reports `detailing` (issue 19); only what the maths takes is refused
     const rho = Number(o.rho);
-    input.rho = requireInRange('--rho', Number.isFinite(rho) ? rho : NaN, lim.min, lim.max);
+    input.rho = requireInRange('--rho', Number.isFinite(rho) ? rho : NaN, ...CHECK_RHO_RANGE);
   } else if (section.bar && (o.barsPerFace !== undefined || o.bars !== undefined) && section.arrangement.kind !== 'custom') {
     const count = barCount(section.arrangement);
     input.layout = {
@@ -151,6 +151,12 @@ export function resolveCheckOptions(o: CheckOptions, given?: { loads: readonly F
   if (o.aggregate !== undefined) {
     aggregate = requireInRange('--aggregate', parseQuantity(o.aggregate, 'length', u, '--aggregate'), u === 'us' ? 0.25 : 5, u === 'us' ? 3 : 75, DISPLAY_UNITS[u].length);
   }
+  // what the detailing rules need of the given bars beyond their area (src/design/detailing.ts)
+  input.detailingInput = {
+    ...(section.bar ? { bar: { name: section.bar.name, diameter: section.bar.diameter } } : {}),
+    ...(section.cover !== undefined ? { cover: section.cover, tieDiameter: section.tieDiameter ?? 0 } : {}),
+    ...(aggregate !== undefined ? { aggregate } : {}),
+  };
   const proposals = o.proposals === undefined ? 5 : Number(o.proposals);
   if (!Number.isInteger(proposals)) throw new PmError(ERROR_CODES.invalidValue, '--proposals', 'is not a whole number', { value: o.proposals, allowed: '0–20' });
   requireInRange('--proposals', proposals, 0, 20);

@@ -57,7 +57,7 @@ export interface ResolvedSection {
   /** γB: outer-column spacing ÷ b, when given (rectangles); absent: the same cover as γ gives on h */
   gammaB?: number;
   /** how γ was obtained */
-  gammaSource: 'given' | 'detailing';
+  gammaSource: 'given' | 'bars';
   /** longitudinal bar, when named */
   bar?: BarSize;
   /** cover to the tie and tie diameter, internal length units, when given */
@@ -222,7 +222,7 @@ export function resolveSectionFlags(given: SectionFlags, needSize = false): Reso
     if (!sized) throw new PmError(ERROR_CODES.missing, shapeKind === 'circle' ? '--diameter' : '--h', 'is required to derive γ from --cover');
     if (bar === undefined) throw new PmError(ERROR_CODES.missing, '--bar', 'is required to derive γ from --cover');
     gamma = gammaFromCover(sectionDepth(shape), cover, tieDiameter ?? 0, bar.diameter);
-    gammaSource = 'detailing';
+    gammaSource = 'bars';
     requireInRange('γ from --cover/--tie/--bar', Number(gamma.toFixed(4)), GAMMA_RANGE[0], GAMMA_RANGE[1]);
   } else if (arrangement.kind === 'custom') {
     let lo = Infinity;
@@ -232,14 +232,14 @@ export function resolveSectionFlags(given: SectionFlags, needSize = false): Reso
       hi = Math.max(hi, b.y);
     }
     gamma = hi - lo;
-    gammaSource = 'detailing';
+    gammaSource = 'bars';
   } else {
     throw new PmError(ERROR_CODES.missing, '--gamma', `is required, or --cover with --bar and --h (allowed: ${GAMMA_RANGE[0]}–${GAMMA_RANGE[1]})`);
   }
   // γB: the columns' spacing across b, beside γ (the layout's gammaX); cover detailing keeps one cover on every face
   if (f.gammaB !== undefined) {
     if (shapeKind === 'circle' || kind === 'ring' || kind === 'custom') throw new PmError(ERROR_CODES.conflict, '--gamma-b', `applies to rectangles with two-faces, four-faces or side-faces bars, not ${shapeKind === 'circle' ? 'a circle' : kind}`);
-    if (gammaSource === 'detailing') throw new PmError(ERROR_CODES.conflict, '--gamma-b', 'needs --gamma; with --cover every face has the same cover');
+    if (gammaSource === 'bars') throw new PmError(ERROR_CODES.conflict, '--gamma-b', 'needs --gamma; with --cover every face has the same cover');
   }
 
   return {

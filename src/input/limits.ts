@@ -15,6 +15,11 @@ export const GAMMA_RANGE = [0.3, 0.95] as const;
 export const GAMMA_B_RANGE = GAMMA_RANGE;
 /** ρg values a family may hold; the basis's own column limits are printed on the sheet. */
 export const RHO_RANGE = [0.001, 0.1] as const;
+/**
+ * A ρg given to `check --rho`: what the section maths takes. Beyond the basis's own column limits the check
+ * still runs and reports the load status `detailing` with the rule and clause (issue 19), as a bar layout would.
+ */
+export const CHECK_RHO_RANGE = [0.0001, 0.25] as const;
 /** ω values a family may hold before each sheet's conversion to ρg is checked against RHO_RANGE. */
 export const OMEGA_RANGE = [0.01, 5] as const;
 export const ECCENTRICITY_RANGE = [0.01, 10] as const;

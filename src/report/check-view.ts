@@ -8,7 +8,7 @@
  * a check held as a ranking (`rankColumnCheck`), with the same bytes as from a whole `ColumnCheck`.
  */
 import type { RuleFinding } from '../codes/rules.js';
-import { strainClassWord } from '../codes/types.js';
+import { strainClassWord, type Basis } from '../codes/types.js';
 import type { ColumnCheck, ColumnCheckFrame, ColumnCheckHead, ColumnLoadResult, LoadStatus, MeasureSource } from '../design/column-check.js';
 import type { SlendernessResult } from '../design/slenderness.js';
 import { barSet } from '../section/bar-tables.js';
@@ -42,6 +42,7 @@ export const STATUS_WORDS: Record<LoadStatus, string> = {
   'not-possible': 'NOT POSSIBLE',
   unstable: 'UNSTABLE',
   'outside-scope': 'OUTSIDE SCOPE',
+  detailing: 'DETAILING',
 };
 
 /** Symbols of the actions and the normalised axes for this check's basis and shape. */
@@ -236,12 +237,13 @@ function footnotesFor(c: ColumnCheckHead, gov: ColumnLoadResult | undefined): st
   const un = unitsOf(c.units);
   const s = symbolsOf(c);
   const out = [
-    `* governing load: ${c.governingWhy}. Loads are ranked by status (unstable, outside scope, not possible, fails, ok), then by ${c.measure === 'utilisation' ? 'utilisation' : 'ρg required'}.`,
+    `* governing load: ${c.governingWhy}. Loads are ranked by status (unstable, outside scope, not possible, detailing, fails, ok), then by ${c.measure === 'utilisation' ? 'utilisation' : 'ρg required'}.`,
     `${s.M} is the moment checked: after slenderness where asked, ↑ where raised to the basis minimum; signed. Normalised values in ${un.stress}; ${s.epsT} and φ at capacity along the load ray (${c.checked ? 'checked reinforcement' : 'at ρg required'}).`,
   ];
   if (gov && gov.extraSteelRoundedDown !== null && gov.extraSteelRoundedDown > 0) {
     out.push(`Reading the next lower sheet and rounding up would cost ${f(gov.extraSteelRoundedDown, 3)} ${un.area} more steel than the exact ρg for ${gov.id}.`);
   }
+  out.push(...detailingLines(c, gov));
   const bc = c.biaxialChart;
   if (bc) {
     const diff = gov?.biaxial?.chartMinusExact ?? null;
@@ -251,6 +253,39 @@ function footnotesFor(c: ColumnCheckHead, gov: ColumnLoadResult | undefined): st
     );
   }
   return out;
+}
+
+/** Words of a finding's outcome. */
+const OUTCOME_WORDS: Record<RuleFinding['outcome'], string> = { applied: 'applied', met: 'met', violated: 'BROKEN', unchecked: 'unchecked' };
+
+/** A finding in words: the rule's title, its clause, the figures compared (display units) and the outcome; a non-binding rule broken is a note. */
+export function findingWords(basis: Basis, f: RuleFinding): string {
+  const rule = basis.detailing.rules.find((r) => r.id === f.rule);
+  const un = unitsOf(basis.units);
+  const v = (x: number | null | undefined) => (x === null || x === undefined ? '—' : f.quantity === 'length' ? `${fmt(x, 4)} ${un.length}` : fmt(x, 4));
+  const atLeast = f.rule === 'steel-min' || f.rule === 'clear-spacing' || f.rule === 'cover';
+  const figures = f.outcome === 'unchecked' ? '' : ` ${v(f.value)} ${atLeast ? (f.outcome === 'violated' ? '<' : '≥') : f.outcome === 'violated' ? '>' : '≤'} ${v(f.limit)}`;
+  const outcome = f.outcome === 'violated' && rule && !rule.binding ? 'NOTE' : OUTCOME_WORDS[f.outcome];
+  return `${rule?.title ?? f.rule} [${f.clause}${rule?.source === 'from memory' ? ', from memory' : ''}]:${figures} ${outcome}`;
+}
+
+/** The detailing of the given reinforcement in lines: the section's rules, the governing load's steel ratio, the aggregate assumed. */
+export function detailingLines(c: ColumnCheckHead | ColumnCheckFrame, gov: ColumnLoadResult | undefined): string[] {
+  if (!c.checked) return [];
+  const un = unitsOf(c.units);
+  const b = c.basis;
+  const steel = (gov?.findings ?? []).filter((f) => f.rule === 'steel-min' || f.rule === 'steel-max');
+  const all = [...steel, ...c.detailing.findings];
+  if (all.length === 0) return [];
+  return [
+    `Detailing of the given reinforcement (${b.title}; a broken rule makes the load's status DETAILING, a NOTE does not): ${all.map((f) => findingWords(b, f)).join('; ')}${steel.length > 0 && gov ? ` (steel ratio for ${gov.id}; each load is checked at its own axial force)` : ''}.`,
+    `Clear spacing at a maximum aggregate size of ${fmt(c.detailing.aggregate, 4)} ${un.length} (${c.detailing.aggregateAssumed ? 'assumed; --aggregate to change' : 'given'}); cover: ${b.detailing.coverAssumption}.`,
+  ];
+}
+
+/** The loads the proposals do not cover, in one line; null when they cover every load. */
+export function barsUnmetLine(c: Pick<ColumnCheck, 'barsUnmet'>): string | null {
+  return c.barsUnmet.length === 0 ? null : `The proposals cover the loads that can be met; no layout within the basis limits meets ${c.barsUnmet.join(', ')} (unstable, outside the slenderness method, or beyond the maximum ρg).`;
 }
 
 /** The axial level of the biaxial sheets in the basis's words: ν for EN 1992-1-1, P/(f′c·Ag) otherwise. */
@@ -352,6 +387,8 @@ const loadIdIn = (c: ColumnCheck) => (index: number) => c.results.find((r) => r.
 function barsViewFor(c: ColumnCheckHead, loadId: (index: number) => string | undefined): TableView | string {
   const un = unitsOf(c.units);
   if (c.bars.length === 0) return `Bar proposals: none (${c.barsSkipped ?? 'none found'}).`;
+  // a flags column only where a proposal is flagged (lap-zone ratio, bar too large to lap)
+  const flagged = c.bars.some((p) => p.findings.length > 0);
   const rows = c.bars.map((p) => [
     p.layout,
     f(p.area, 4),
@@ -360,8 +397,9 @@ function barsViewFor(c: ColumnCheckHead, loadId: (index: number) => string | und
     `${f(p.clearSpacing, 3)} ≥ ${f(p.clearSpacingRequired, 3)}`,
     f(p.utilisation, 3),
     loadId(p.governingLoad) ?? '',
+    ...(flagged ? [p.findings.map((x) => (x.rule === 'steel-max-lap' ? `ρg > ${fmt(x.limit ?? 0, 3)} where lapped [${x.clause}]` : `not lap spliced [${x.clause}]`)).join('; ')] : []),
   ]);
-  return { headers: ['bars', `As ${un.area}`, 'ρg', 'γ', `clear ${un.length}`, 'util (all effects)', 'by load'], rows, marked: rows.map(() => false) };
+  return { headers: ['bars', `As ${un.area}`, 'ρg', 'γ', `clear ${un.length}`, 'util (all effects)', 'by load', ...(flagged ? ['flags'] : [])], rows, marked: rows.map(() => false) };
 }
 
 /** An arrangement's name in section lines: its kind, and for unequal four-faces counts the two counts in words. */
@@ -376,7 +414,7 @@ export function sectionLine(c: ColumnCheckFrame): string {
   const un = unitsOf(c.units);
   const b = c.basis;
   const dims = c.shape.kind === 'rectangle' ? `${fmt(c.shape.b)} × ${fmt(c.shape.h)} ${un.length}` : `D = ${fmt(c.shape.diameter)} ${un.length}`;
-  return `${b.title}, ${dims} ${b.transverse}, ${arrangementName(c.arrangement)}, ${b.symbols.concreteStrength} = ${fmt(b.fc)} ${un.stress}, ${b.symbols.steelStrength} = ${fmt(b.fy)} ${un.stress}, γ = ${fmt(c.gamma, 4)} (${c.gammaSource})${c.gammaB !== null ? `, γB = ${fmt(c.gammaB, 4)} (given)` : ''}`;
+  return `${b.title}, ${dims} ${b.transverse}, ${arrangementName(c.arrangement)}, ${b.symbols.concreteStrength} = ${fmt(b.fc)} ${un.stress}, ${b.symbols.steelStrength} = ${fmt(b.fy)} ${un.stress}, γ = ${fmt(c.gamma, 4)} (${c.gammaSource === 'bars' ? 'from the bars' : 'given'})${c.gammaB !== null ? `, γB = ${fmt(c.gammaB, 4)} (given)` : ''}`;
 }
 
 /** Assumptions of the check itself, beside the basis notes. */
@@ -392,7 +430,7 @@ export function checkAssumptions(c: ColumnCheckFrame): string[] {
     `ρg required is solved exactly at the actual γ = ${fmt(c.gamma, 4)} with the bars smeared in the chosen arrangement; the ${b.symbols.designFamily} curve includes the ${s.cap}.`,
     `Chart readings emulate sheets at γ steps of ${c.chart.gammaStep} with curves at ρg ${c.chart.rhos.map((r) => fmt(r, 3)).join(', ')}: linear between curves along the load ray, linear in γ between sheets; the traditional reading takes the next lower sheet and the next curve out.`,
     `ρg limits ${fmt(lim.min, 3)}–${fmt(lim.max, 3)} of Ag at zero axial load; each load uses the basis's limits for its own axial force, chart readings included.`,
-    'Status: ok; FAILS (utilisation above 1); NOT POSSIBLE (more than the maximum ρg); UNSTABLE (the axial load reaches the magnifier’s critical load); OUTSIDE SCOPE (beyond the second-order method’s limit). Exit status 1 when any load is not ok.',
+    'Status: ok; FAILS (utilisation above 1); DETAILING (the given reinforcement breaks a detailing rule of the basis: steel ratio, clear spacing or cover; the rule and clause are named); NOT POSSIBLE (more than the maximum ρg); UNSTABLE (the axial load reaches the magnifier’s critical load); OUTSIDE SCOPE (beyond the second-order method’s limit). Exit status 1 when any load is not ok.',
   ];
   if (c.barSelection) {
     out.push(
@@ -400,7 +438,8 @@ export function checkAssumptions(c: ColumnCheckFrame): string[] {
         ? `Bar proposals: one bar size each, centres at cover + tie + db/2 from the faces (γ recomputed per size); ${b.clearSpacingRule}; ${b.minimumBarRule}; sizes from ${barSet(b.barSet).source}, ${b.units === 'us' ? '#5' : '12 mm'} and up (common practice). Each proposal is re-verified with its discrete bars against every load with every effect (slenderness, minimum moment, both signs, ring orientations, about y alone, exact biaxial).`
         : `Bar proposals: γ was given, so bar centres stay at (1 − γ)·h/2 from the faces for every size and the cover is not checked; ${b.clearSpacingRule}; ${b.minimumBarRule}. Each proposal is re-verified against every load with every effect.`,
     );
-    if (c.barSelection.aggregate === null) out.push('No maximum aggregate size given: the aggregate term of the spacing rule is not checked.');
+    if (c.barSelection.aggregate === null) out.push(`No maximum aggregate size given: the spacing rule assumes ${fmt(c.basis.detailing.defaultAggregate, 4)} ${unitsOf(c.units).length} (--aggregate to change).`);
+    out.push(`Bar proposals are flagged, not refused, above ρg ${fmt(c.basis.detailing.lapZoneRho, 3)} where bars are lapped${Number.isFinite(c.basis.detailing.maxLappedBar) ? ` and for bars larger than ${fmt(c.basis.detailing.maxLappedBar, 4)} ${unitsOf(c.units).length}, which cannot be lap spliced` : ''}.`);
   }
   if (c.slenderness) {
     out.push(`Slenderness: each axis magnified separately for its own member data (non-sway), both axes always (a load without ${s.M}y has ${s.M}y = 0, and kℓu about y defaults to kℓu about x); the magnified moments feed the uniaxial and biaxial checks.`);
@@ -543,6 +582,8 @@ function* textBlocks(src: CheckRows, sizes: TextSizes): Generator<TextBlock> {
   const bars = barsViewFor(c, (i) => src.loadId(i));
   yield '';
   yield typeof bars === 'string' ? bars : textTable(bars);
+  const unmet = barsUnmetLine(c);
+  if (unmet) yield unmet;
 }
 
 function resultsTableLines(src: CheckRows, widths: ColumnWidths): Generator<string> {
@@ -810,6 +851,7 @@ export function resultJson(r: ColumnLoadResult, c: ColumnCheckFrame) {
   };
 }
 
+
 /** The whole check as JSON (stable fields documented in the README). */
 export function checkJson(c: ColumnCheck, generator: string): string {
   return [...checkJsonPieces(rowsOf(c), generator)].join('');
@@ -864,8 +906,11 @@ export function* checkJsonPieces(src: CheckRows, generator: string): Generator<s
       clearSpacingRequired: num(p.clearSpacingRequired),
       utilisation: num(p.utilisation),
       governingLoad: src.loadId(p.governingLoad) ?? null,
+      findings: p.findings.map((x) => findingJson(x, u)),
     })),
     barsNote: c.barsSkipped,
+    barsUnmet: c.barsUnmet,
+    detailing: { findings: c.detailing.findings.map((x) => findingJson(x, u)), aggregate: num(c.detailing.aggregate), aggregateAssumed: c.detailing.aggregateAssumed, rules: c.basis.detailing.rules },
     basis: { parameters: c.basis.parameters, notes: c.basis.notes },
     assumptions: checkAssumptions(c),
     caution: CAUTION,

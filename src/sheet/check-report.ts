@@ -22,7 +22,7 @@ import { COLOURS, TEXT_STYLES, type TextStyle } from '../chart/style.js';
 import { contourPlot } from '../chart/contour-plot.js';
 import { strainClassWord } from '../codes/types.js';
 import type { ColumnCheck, ColumnLoadResult } from '../design/column-check.js';
-import { arrangementName, barsView, biaxialView, noteText, resultsFootnotes, resultsView, slendernessView, STATUS_WORDS, symbolsOf, type TableView } from '../report/check-view.js';
+import { arrangementName, barsUnmetLine, barsView, biaxialView, noteText, resultsFootnotes, resultsView, slendernessView, STATUS_WORDS, symbolsOf, type TableView } from '../report/check-view.js';
 import { cell as f, fmt } from '../report/format.js';
 import { prepareBiaxial } from '../analysis/biaxial.js';
 import type { CapContext } from '../codes/types.js';
@@ -156,6 +156,8 @@ export function buildCheckReport(input: CheckReportInput): CheckReportPage {
   if (bottom.heading('Bar proposals (lightest first, re-verified with the discrete bars against every load and effect)', typeof bars === 'string' ? 0 : Math.min(2, bars.rows.length))) {
     if (typeof bars === 'string') bottom.note(bars, 'body');
     else bottom.table(columns(bars), bars.rows, bars.rows.map((_, i) => i === 0));
+    const unmet = barsUnmetLine(c);
+    if (unmet) bottom.note(unmet, 'body');
   }
   sidePanel(g, L, c, input);
   titleBlock(g, L, c, input);

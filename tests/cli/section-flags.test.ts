@@ -9,7 +9,7 @@ describe('resolveSectionFlags', () => {
   it('derives γ from cover, tie and bar: 24 in, 1.5 in cover, #4 tie, #11 bars → (24 − 2·2.705)/24', () => {
     const s = resolveSectionFlags({ fc: '4', fy: '60', b: '24', h: '24', cover: '1.5', tie: '#4', bar: '#11' });
     expectClose(s.gamma, (24 - 2 * (1.5 + 0.5 + 0.705)) / 24, 1e-12);
-    expect(s.gammaSource).toBe('detailing');
+    expect(s.gammaSource).toBe('bars');
     expect(s.bar).toMatchObject({ name: '#11', diameter: 1.41, area: 1.56 });
     expect(s.capContext.depth).toBe(24);
   });
