@@ -46,7 +46,7 @@ function aciRules(c: AciSlendernessClauses): RuleDef[] {
   return [
     { id: 'slenderness-limit', clause: `${c.neglect}(b)`, title: 'slenderness may be neglected when kℓu/r ≤ 34 + 12(M1/M2) ≤ 40', source: src },
     { id: 'radius-of-gyration', clause: c.radius, title: 'r = 0.30h (rectangle), 0.25D (circle)', source: src },
-    { id: 'end-moment-convention', clause: c.neglect, title: 'M1/M2 negative in single curvature; no end moment given: M1 = −M2 (single curvature)', source: src },
+    { id: 'end-moment-convention', clause: c.neglect, title: 'M1/M2 negative in single curvature; no end moment given or transverse loads: M1/M2 = −1 (single curvature, conservative)', source: src },
     { id: 'magnifier', clause: '6.6.4.5.2', title: 'δ = Cm/(1 − Pu/(0.75·Pc)) ≥ 1.0, Pc = π²(EI)eff/(kℓu)², (EI)eff by 6.6.4.4.4 (a), (b) or (c)', source: 'from memory' },
     { id: 'cm-factor', clause: '6.6.4.5.3', title: 'Cm = 0.6 − 0.4(M1/M2); 1.0 with transverse loads', source: 'from memory' },
     { id: 'min-moment', clause: '6.6.4.5.4', title: 'M2,min = Pu(0.6 + 0.03h) in. (15 + 0.03h mm); Cm = 1.0 where it governs', source: 'from memory' },
@@ -92,7 +92,10 @@ export function aciMomentMagnification(basis: Basis, section: SlendernessSection
   const h = depthOf(shape);
   const { effectiveLength: klu, M1, M2, Pu } = input;
   // no end moment (M2 = 0): the single-curvature default M1/M2 = −1 (README; the most severe case, conservative)
-  const ratio = M2 > 0 ? M1 / M2 : -1;
+  // transverse loads between the ends: the end moments say nothing of the curvature, so −1 too (pmchart's
+  // conservative reading, as EN 1992-1-1 5.8.3.1(1) takes rm = 1 for transverse loading)
+  const singleTaken = !(M2 > 0) || input.transverseLoads === true;
+  const ratio = singleTaken ? -1 : M1 / M2;
 
   const r = shape.kind === 'rectangle' ? 0.3 * h : 0.25 * h;
   steps.push({ key: 'r', clause: cl.radius, label: `r = ${shape.kind === 'rectangle' ? '0.30·h' : '0.25·D'} (${cl.radius})`, value: r, unit: lu });
@@ -101,7 +104,9 @@ export function aciMomentMagnification(basis: Basis, section: SlendernessSection
   steps.push({
     key: 'end-moment-ratio',
     clause: cl.neglect,
-    label: M2 > 0 ? `M1/M2 (negative in single curvature, ${cl.neglect})` : `M1/M2 = −1: no end moment, single curvature taken (${cl.neglect}, conservative)`,
+    label: !singleTaken
+      ? `M1/M2 (negative in single curvature, ${cl.neglect})`
+      : `M1/M2 = −1: ${M2 > 0 ? 'transverse loads between the ends' : 'no end moment'}, single curvature taken (${cl.neglect}, conservative)`,
     value: ratio,
   });
   const limit = Math.min(34 + 12 * ratio, 40);

@@ -20,7 +20,7 @@ import type { Basis } from './types.js';
 export const AS_3600_SLENDERNESS_RULES: readonly RuleDef[] = [
   { id: 'slenderness-limit', clause: '10.3.1(b)', title: 'short braced column: Le/r ≤ 25, or ≤ αc·(38 − f′c/15)·(1 + M1*/M2*)', source: 'from memory' },
   { id: 'radius-of-gyration', clause: '10.5.2', title: 'r = 0.3D (rectangle), 0.25D (circle)', source: 'from memory' },
-  { id: 'end-moment-convention', clause: '10.3.1', title: 'M1*/M2* negative in single curvature; taken as −1 when |M2*| ≤ 0.05·D·N*', source: 'from memory' },
+  { id: 'end-moment-convention', clause: '10.3.1', title: 'M1*/M2* negative in single curvature; taken as −1 when |M2*| ≤ 0.05·D·N* (and with transverse loads, conservative)', source: 'from memory' },
   // the text found is AS 3600-2009's 10.1.2 (the same words are recalled for 2018, not confirmed)
   { id: 'min-moment', clause: '10.1.2', title: 'design moment about each principal axis not less than N*·0.05·D', source: 'from memory' },
   { id: 'magnifier', clause: '10.4.2', title: 'δb = km/(1 − N*/Nc) ≥ 1, km = 0.6 − 0.4·M1*/M2* ≥ 0.4 (1.0 with transverse loads)', source: 'from memory' },
@@ -57,7 +57,8 @@ export function as3600MomentMagnification(basis: Basis, section: SlendernessSect
   const { effectiveLength: Le, M1, M2, Pu: N } = input;
   // 10.3.1, 10.4.2 (from memory): M1*/M2* is taken as −1 when |M2*| ≤ 0.05·D·N* (and with no end moment)
   const smallM2 = !(M2 > 0.05 * D * N);
-  const ratio = smallM2 ? -1 : M1 / M2;
+  // transverse loads between the ends: −1 as well (pmchart's conservative reading; km is 1.0 then anyway)
+  const ratio = smallM2 || input.transverseLoads === true ? -1 : M1 / M2;
   const knownBars = section.positionsOnly ? section.bars.map((b) => ({ ...b, area: 0 })) : section.bars;
   const As = knownBars.reduce((s, b) => s + b.area, 0);
   const Nuo = basis.nominal.squash.concreteStress * (Ag - As) + basis.nominal.squash.steelStress * As;
@@ -67,7 +68,11 @@ export function as3600MomentMagnification(basis: Basis, section: SlendernessSect
   const slenderness = Le / r;
   steps.push({ key: 'klu-over-r', clause: '10.3.1', label: 'Le/r (10.3.1)', value: slenderness });
   steps.push({ key: 'end-moment-ratio', clause: '10.3.1',
-    label: smallM2 ? 'M1*/M2* = −1: |M2*| ≤ 0.05·D·N* (10.3.1, from memory)' : 'M1*/M2* (negative in single curvature, 10.3.1)',
+    label: smallM2
+      ? 'M1*/M2* = −1: |M2*| ≤ 0.05·D·N* (10.3.1, from memory)'
+      : input.transverseLoads === true
+        ? 'M1*/M2* = −1: transverse loads between the ends (conservative)'
+        : 'M1*/M2* (negative in single curvature, 10.3.1)',
     value: ratio,
   });
   steps.push({ key: 'Nuo', clause: '10.6.2.2', label: `Nuo = α1·f′c·(Ag − As) + fsy·As (10.6.2.2)${section.positionsOnly ? ', bars not given: As = 0' : ''}`, value: Nuo, unit: 'N' });

@@ -20,7 +20,7 @@ import type { Basis } from './types.js';
 export const CSA_A23_SLENDERNESS_RULES: readonly RuleDef[] = [
   { id: 'slenderness-limit', clause: '10.15.2', title: 'slenderness may be neglected when kℓu/r ≤ (25 − 10·M1/M2)/√(Pf/(f′c·Ag))', source: 'from memory' },
   { id: 'radius-of-gyration', clause: '10.14.2', title: 'r = 0.3h (rectangle), 0.25D (circle)', source: 'from memory' },
-  { id: 'end-moment-convention', clause: '10.15.3.2', title: 'M1/M2 positive in single curvature; no end moment given: single curvature', source: 'from memory' },
+  { id: 'end-moment-convention', clause: '10.15.3.2', title: 'M1/M2 positive in single curvature; no end moment given or transverse loads: single curvature (conservative)', source: 'from memory' },
   { id: 'min-moment', clause: '10.15.3.1', title: 'M2 ≥ Pf·(15 + 0.03h) mm', source: 'from memory' },
   { id: 'magnifier', clause: '10.15.3.1', title: 'δ = Cm/(1 − Pf/(φm·Pc)) ≥ 1.0, φm = 0.75, EI = 0.4·Ec·Ig/(1 + βd)', source: 'from memory' },
   { id: 'cm-factor', clause: '10.15.3.2', title: 'Cm = 0.6 + 0.4·M1/M2 ≥ 0.4; 1.0 with transverse loads', source: 'from memory' },
@@ -57,7 +57,8 @@ export function csaMomentMagnification(basis: Basis, section: SlendernessSection
   const Ig = grossI(shape);
   const { effectiveLength: klu, Pu: Pf, M2 } = input;
   // CSA sign: positive in single curvature; no end moment (M2 = 0): single curvature, +1 (conservative)
-  const ratio = M2 > 0 ? -input.M1 / M2 : 1;
+  // transverse loads between the ends: single curvature too (pmchart's conservative reading)
+  const ratio = M2 > 0 && input.transverseLoads !== true ? -input.M1 / M2 : 1;
   const r = shape.kind === 'rectangle' ? 0.3 * h : 0.25 * h;
   steps.push({ key: 'r', clause: '10.14.2', label: `r = ${shape.kind === 'rectangle' ? '0.3·h' : '0.25·D'} (10.14.2)`, value: r, unit: 'mm' });
   const slenderness = klu / r;

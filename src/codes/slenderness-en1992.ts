@@ -25,7 +25,7 @@ import { lengthToMm, stressToMPa, systemFactor } from '../units/index.js';
 export const EN_1992_SLENDERNESS_RULES: readonly RuleDef[] = [
   { id: 'slenderness-limit', clause: '5.8.3.1(1)', title: 'second-order effects may be ignored when λ < λlim = 20·A·B·C/√n (A = 0.7 when φef is not known)', source: 'published' },
   { id: 'radius-of-gyration', clause: '5.8.3.2(1)', title: 'λ = l0/i, i of the uncracked gross section', source: 'from memory' },
-  { id: 'end-moment-convention', clause: '5.8.3.1(1)', title: 'rm = M01/M02 positive when both end moments give tension on the same side; no end moments given: rm = 1', source: 'published' },
+  { id: 'end-moment-convention', clause: '5.8.3.1(1)', title: 'rm = M01/M02 positive when both end moments give tension on the same side; no end moments given or transverse loads: rm = 1', source: 'published' },
   { id: 'imperfection', clause: '5.2(7)', title: 'ei = l0/400 (5.2(9) Note, recommended θi)', source: 'from memory' },
   { id: 'min-moment', clause: '6.1(4)', title: 'minimum eccentricity e0 = max(h/30, 20 mm), about each axis separately', source: 'from memory' },
   { id: 'equivalent-moment', clause: '5.8.8.2(2)', title: 'M0e = 0.6·M02 + 0.4·M01 ≥ 0.4·M02', source: 'from memory' },
@@ -89,13 +89,18 @@ export function enNominalCurvature(basis: Basis, section: SlendernessSection, in
     value: omega,
   });
   // no end moment (M02 = 0): equal end moments in single curvature, rm = 1 (the README's default; conservative)
-  const rm = M02 > 0 ? M01 / M02 : 1;
+  // 5.8.3.1(1) (from memory of the published text): rm = 1 for braced members whose first-order moments arise
+  // predominantly from imperfections or transverse loading; then M0e = M02 as well (Eq. 5.32 is for end moments only)
+  const transverse = input.transverseLoads === true;
+  const rm = M02 > 0 && !transverse ? M01 / M02 : 1;
   const A = creepKnown ? 1 / (1 + 0.2 * phiEf) : EN_A_UNKNOWN_CREEP;
   const B = Math.sqrt(1 + 2 * omega);
   const C = 1.7 - rm;
   const lambdaLim = n > 0 ? (20 * A * B * C) / Math.sqrt(n) : Infinity;
   steps.push({ key: 'end-moment-ratio', clause: '5.8.3.1(1)',
-    label: `rm = M01/M02, positive when both end moments have the same sign (5.8.3.1(1)): ${rm > 0 ? 'single' : rm < 0 ? 'double' : 'no'} curvature`,
+    label: transverse
+      ? 'rm = 1: transverse loads between the ends (5.8.3.1(1))'
+      : `rm = M01/M02, positive when both end moments have the same sign (5.8.3.1(1)): ${rm > 0 ? 'single' : rm < 0 ? 'double' : 'no'} curvature`,
     value: rm,
   });
   steps.push({ key: 'A', clause: '5.8.3.1(1)',
@@ -110,8 +115,14 @@ export function enNominalCurvature(basis: Basis, section: SlendernessSection, in
   const e0 = Math.max(h / 30, 20);
   steps.push({ key: 'ei', clause: '5.2(7)', label: 'ei = l0/400 (5.2(7), 5.2(9) Note)', value: ei, unit: 'mm' });
   steps.push({ key: 'e0', clause: '6.1(4)', label: 'e0 = max(h/30, 20 mm) (6.1(4))', value: e0, unit: 'mm' });
-  const M0e = Math.max(0.6 * M02 + 0.4 * M01, 0.4 * M02);
-  steps.push({ key: 'M0e', clause: '5.8.8.2(2)', label: 'M0e = 0.6·M02 + 0.4·M01 ≥ 0.4·M02 (5.8.8.2(2) Eq. 5.32)', value: M0e / 1e6, unit: 'kN·m' });
+  const M0e = transverse ? M02 : Math.max(0.6 * M02 + 0.4 * M01, 0.4 * M02);
+  steps.push({
+    key: 'M0e',
+    clause: '5.8.8.2(2)',
+    label: transverse ? 'M0e = M02: transverse loads between the ends (Eq. 5.32 is for end moments; conservative)' : 'M0e = 0.6·M02 + 0.4·M01 ≥ 0.4·M02 (5.8.8.2(2) Eq. 5.32)',
+    value: M0e / 1e6,
+    unit: 'kN·m',
+  });
   const M0Ed = Math.max(M0e + NEd * ei, NEd * e0);
   steps.push({ key: 'M0Ed', clause: '5.8.8.2(2)', label: 'M0Ed = max(M0e + NEd·ei, NEd·e0) (5.8.8.2(2), 6.1(4))', value: M0Ed / 1e6, unit: 'kN·m' });
   if (neglected) {

@@ -22,7 +22,7 @@ const byKey = (r: { steps: { key: string; value: unknown }[] }, key: string) => 
 };
 
 /** A basis of each code with ordinary materials in its first unit system (common practice values). */
-export function sampleBasis(code: DesignCode): Basis {
+function sampleBasis(code: DesignCode): Basis {
   const units = code.unitSystems[0]!;
   return resolveBasis(code.id, units === 'us' ? { units, fc: 4, fy: 60, transverse: 'tied' } : { units, fc: 35, fy: 400, transverse: 'tied' });
 }

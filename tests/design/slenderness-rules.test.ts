@@ -8,7 +8,7 @@
 import { describe, expect, it } from 'vitest';
 import { prepareBiaxial } from '../../src/analysis/biaxial.js';
 import { runCheck } from '../../src/cli/check.js';
-import { resolveBasis } from '../../src/codes/registry.js';
+import { DESIGN_CODE_LIST, resolveBasis } from '../../src/codes/registry.js';
 import { checkBiaxial } from '../../src/design/biaxial.js';
 import { magnifyLoad } from '../../src/design/column-effects.js';
 import { slendernessCheck, type SlendernessSection } from '../../src/design/slenderness.js';
@@ -151,5 +151,34 @@ describe('EN 1992-1-1 5.8.8.2(4): c = 8 for a constant first-order moment, else 
     const e2 = r.steps.find((s) => s.label.startsWith('e2'))!;
     expect(e2.label).toContain('c = 10');
     expectClose(e2.value as number, 56.3722, 1e-5);
+  });
+});
+
+describe('transverse loads between the ends: the single-curvature end-moment ratio in every basis (conservative)', () => {
+  // With loads between the ends the largest first-order moment is not at an end, so the end-moment ratio says
+  // nothing about curvature. EN 1992-1-1 5.8.3.1(1) (from memory of the published text): rm = 1 (C = 0.7) for braced
+  // members whose first-order moments arise predominantly from imperfections or transverse loading; pmchart takes the
+  // same single-curvature ratio in every basis (M1/M2 = −1; +1 in the same-sign convention), and M0e = M02 for EN.
+  // Given here: end moments in double curvature, M1 = +M2/2, which without the rule would raise the neglect limit.
+  for (const code of DESIGN_CODE_LIST) {
+    it(`${code.id}: the end-moment-ratio step is the single-curvature value`, () => {
+      const units = code.unitSystems[0]!;
+      const basis = resolveBasis(code.id, units === 'us' ? { units, fc: 4, fy: 60, transverse: 'tied' } : { units, fc: 35, fy: 400, transverse: 'tied' });
+      const sq = basis.units === 'us' ? 16 : 400;
+      const shape: Shape = { kind: 'rectangle', b: sq, h: sq };
+      const bars = layoutBars(shape, { kind: 'four-faces', barsPerFace: 3 }, 0.02 * sq * sq, { gamma: 0.7 });
+      const M2 = basis.units === 'us' ? 2400 : 200e6;
+      const P = basis.units === 'us' ? 400 : 2e6;
+      const r = slendernessCheck(basis, { shape, bars }, { effectiveLength: 15 * sq, M1: M2 / 2, M2, Pu: P, betaDns: 0.5, transverseLoads: true, creepRatio: 1 });
+      const single = basis.slenderness!.convention.singleCurvature === 'same-sign' ? 1 : -1;
+      expectClose(r.steps.find((s) => s.key === 'end-moment-ratio')!.value as number, single, 1e-12);
+    });
+  }
+  it('en1992-1-1: M0e = M02 with transverse loads (the given M01 does not lower it)', () => {
+    const basis = resolveBasis('en1992-1-1', { units: 'si', fc: 30, fy: 500, transverse: 'tied' });
+    const shape: Shape = { kind: 'rectangle', b: 400, h: 400 };
+    const bars = layoutBars(shape, { kind: 'four-faces', barsPerFace: 3 }, 8 * 314.159, { gamma: 0.75 });
+    const r = slendernessCheck(basis, { shape, bars }, { effectiveLength: 6000, M1: 30e6, M2: 60e6, Pu: 1.5e6, creepRatio: 1, transverseLoads: true });
+    expectClose(r.steps.find((s) => s.key === 'M0e')!.value as number, 60, 1e-12);
   });
 });
