@@ -169,7 +169,7 @@ function resolveAci(edition: Edition, input: BasisInput): Basis {
     rhoLimits: { min: 0.01, max: 0.08 }, // 10.6.1.1
     steelAreaLimits: (_p: number, ag: number) => ({ min: 0.01 * ag, max: 0.08 * ag }), // 10.6.1.1
     minimumMoment: () => 0, // no minimum eccentricity for short columns; the cap 22.4.2.1 stands in for it
-    // 6.6.4.5.4 M2,min = Pu(0.6 + 0.03h) in. (both editions); 22.2.1, 22.2.2 strain compatibility
+    // 6.6.4.5.4 M2,min = Pu(0.6 + 0.03h) in. (318-19; the same clause number in 318-14 from memory); 22.2.1, 22.2.2 strain compatibility
     checkClauses: { slenderMinimumMoment: '6.6.4.5.4', sectionAnalysis: '22.2.1, 22.2.2' },
     // 25.2.3: clear spacing ≥ max(1.5 in, 1.5·db, 4/3·dagg) for columns; 38 mm in SI.
     minimumClearSpacing: (db: number, dg: number) => Math.max(units === 'us' ? 1.5 : 38, 1.5 * db, (4 / 3) * dg),

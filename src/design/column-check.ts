@@ -504,6 +504,8 @@ interface Demand {
   /** false when an unstable magnifier makes the moments unbounded */
   finiteMoments: boolean;
   Mdesign: number;
+  /** the moment before the section minimum (magnitude; the resultant for a circle with Muy) */
+  Mmag: number;
   raised: boolean;
   /** the moment's sign is free: raised to a minimum, a minimum (accidental) moment governs the slenderness, or Mux = 0 */
   signFree: boolean;
@@ -563,7 +565,7 @@ function demandOf(ctx: ColumnCheckContext, load: FactoredLoad): Demand {
   const signs: (1 | -1)[] = !unsymmetric ? [1] : signFree ? [1, -1] : [Mux < 0 ? -1 : 1];
   const candidates = signs.flatMap((sg) => ctx.variants.map((v): Candidate => ({ v, sign: sg, load: { P: n.P, M: v.info.sign === -1 ? -sg * n.M : sg * n.M } })));
   const y = finiteMoments ? yDemandOf(ctx, load, magnified, Muy) : null;
-  return { magnified, Mux, Muy, finiteMoments, Mdesign, raised, signFree, signs, n, limits: rhoLimitsFor(basis, load.Pu, area), candidates, unsymmetric, y };
+  return { magnified, Mux, Muy, finiteMoments, Mdesign, Mmag, raised, signFree, signs, n, limits: rhoLimitsFor(basis, load.Pu, area), candidates, unsymmetric, y };
 }
 
 /**
@@ -836,7 +838,7 @@ function findingsOf(
   const minimumX = ctx.basis.minimumMoment(load.Pu, ctx.depth);
   // the minimum about x
   if (cl.minimumMoment && minimumX > 0) {
-    out.push({ rule: 'min-moment', clause: cl.minimumMoment, axis: 'x', outcome: d.raised ? 'applied' : 'met', value: d.Mdesign > minimumX && !d.raised ? d.Mdesign : Math.abs(d.Mux), limit: minimumX, quantity: 'moment' });
+    out.push({ rule: 'min-moment', clause: cl.minimumMoment, axis: 'x', outcome: d.raised ? 'applied' : 'met', value: d.Mmag, limit: minimumX, quantity: 'moment' });
   }
   if (cl.slenderMinimumMoment && d.magnified && !d.magnified.x.neglected && mx && mx.firstOrder > 0) {
     out.push({ rule: 'min-moment', clause: cl.slenderMinimumMoment, axis: 'x', outcome: mx.governs ? 'applied' : 'met', value: mx.given, limit: mx.firstOrder, quantity: 'moment' });

@@ -131,7 +131,7 @@ export function axisChecksRows(r: ColumnLoadResult, c: ColumnCheckFrame): string
   const u = c.units;
   const M = (x: number) => f(toDisplay(x, 'moment', u), 5);
   const checked = c.checked !== null;
-  const clauses = (axis: 'x' | 'y', rule: string) => [...new Set(r.findings.filter((x) => x.axis === axis && x.rule === rule).map((x) => x.clause))].join(', ');
+  const clauses = (axis: 'x' | 'y', rule: string) => [...new Set(r.findings.filter((x) => x.axis === axis && x.rule === rule).flatMap((x) => x.clause.split(', ')))].join(', ');
   const gov = (from: MeasureSource) => (r.measureFrom === from ? 'yes' : '');
   const rows: string[][] = [];
   const y = r.yAxis;
