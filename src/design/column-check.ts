@@ -5,7 +5,8 @@
  *        ─▶ 2. uniaxial: normalise, minimum moment, every section variant the sign or orientation
  *              can load (mirrored layout for a negative moment, ring orientations) ─▶ the weakest
  *        ─▶ 3. biaxial (Muy given): exact capacity of the bars, or the exact ρg required
- *        ─▶ 4. status (ok, fails, not possible, unstable, outside the method's scope) and measure
+ *        ─▶ 4. detailing of the given reinforcement (src/design/detailing.ts); status (ok, fails, detailing,
+ *              not possible, unstable, outside the method's scope) and measure
  *   all loads ─▶ 5. governing first ─▶ 6. bar proposals re-verified against every load with every effect
  *             ─▶ 7. summary and exit status
  *
@@ -883,7 +884,7 @@ function biaxialChartFields(ctx: ColumnCheckContext, load: { Pu: number; Mux: nu
 const END_KEYS = ['M1', 'M2', 'M1y', 'M2y', 'M01', 'M02', 'M01y', 'M02y'] as const;
 const endMoments = (l: FactoredLoad): EndMoments => Object.fromEntries(END_KEYS.filter((k) => l[k] !== undefined).map((k) => [k, l[k]!])) as EndMoments;
 
-/** Status from the checks, worst first: unstable, outside the method's scope, not possible, fails. */
+/** Status from the checks, worst first: unstable, outside the method's scope, not possible, detailing (a binding rule broken by the given reinforcement), fails. */
 function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measureValue: number; measureFrom: MeasureSource; notPossible: boolean; finite: boolean; limitsMax: number; detailing: { reason: string; clause: string } | null }): {
   status: LoadStatus;
   statusReason: string;
@@ -1192,7 +1193,8 @@ export function layoutVerifier(
   input: ColumnCheckInput,
   order?: ArrayLike<number>,
 ): (arrangement: Arrangement, area: number, gamma: number, stopAbove?: number) => { utilisation: number; index: number } {
-  const { barSelection: _sel, rho: _rho, layout: _layout, ...rest } = input;
+  // the candidate's own detailing is the proposer's (bar-selection.ts): the given bars' facts do not apply to it
+  const { barSelection: _sel, rho: _rho, layout: _layout, detailingInput: _given, ...rest } = input;
   const indices = order ? Array.from(order) : input.loads.map((_, i) => i);
   return (arrangement, area, gamma, stopAbove = 1 + 1e-9) => {
     const check = prepareColumnCheck({ ...rest, arrangement, gamma, layout: { arrangement, area, gamma, description: '' } }, { readings: false });

@@ -32,7 +32,7 @@ describe("import { checkColumn } from 'pmchart'", () => {
     expect(out.rho).toBeLessThan(0.04);
     expect(out.status).toBe('ok');
     expect(out.frozen).toBe(true);
-    expect(out.statuses).toEqual(['ok', 'fails', 'not-possible', 'unstable', 'outside-scope']);
+    expect(out.statuses).toEqual(['ok', 'fails', 'not-possible', 'unstable', 'outside-scope', 'detailing']);
   });
 
   it('computes a biaxial contour family and reads a load off it (issue 15)', () => {

@@ -167,6 +167,36 @@ describe('ACI 318-19 25.2.3: clear spacing of #14 bars', () => {
   });
 });
 
+describe('the issue\'s case: 1.2 in clear between #14 bars (custom layout)', () => {
+  // 12 × 12 in, four #14 bars at x = ±1.4465 in, y = ±3.6 in (γ = 0.6): centres 2.893 in apart across b,
+  // clear 2.893 − 1.693 = 1.2 in < max(1.5 in, 1.5·1.693 = 2.54 in, 4/3·0.75 = 1.0 in) (ACI 318-19 25.2.3).
+  // Ast = 4·2.25 = 9 in², ρg = 9/144 = 0.0625 (within 10.6.1.1). Before issue 19 this passed as "ok".
+  const x = 1.4465 / 12;
+  const input: ColumnCheckInput = {
+    basis: aci,
+    shape: { kind: 'rectangle', b: 12, h: 12 },
+    arrangement: { kind: 'custom', bars: [{ x, y: 0.3, share: 1 }, { x: -x, y: 0.3, share: 1 }, { x, y: -0.3, share: 1 }, { x: -x, y: -0.3, share: 1 }] },
+    gamma: 0.6,
+    capContext: { depth: 12, leastDimension: 12 },
+    loads: [{ id: 'L1', Pu: 150, Mu: 300 }],
+    rho: 9 / 144,
+    detailingInput: { bar: { name: '#14', diameter: 1.693 } },
+  };
+  it('status detailing, clear spacing 1.2 in < 2.54 in [25.2.3]', () => {
+    const r = checkColumn(input).results[0]!;
+    expect(r.utilisation!).toBeLessThan(1);
+    expect(r.status).toBe('detailing');
+    const f = find(r.findings, 'clear-spacing')!;
+    expectClose(f.value!, 1.2, 1e-9);
+    expectClose(f.limit!, 2.5395, 1e-9);
+  });
+  it('without the bar size the spacing is said to be unchecked, and the load is ok', () => {
+    const r = checkColumn({ ...input, detailingInput: {} }).results[0]!;
+    expect(find(r.findings, 'clear-spacing')!.outcome).toBe('unchecked');
+    expect(r.status).toBe('ok');
+  });
+});
+
 describe('EN 1992-1-1 9.5.2', () => {
   const base: ColumnCheckInput = {
     basis: en,
