@@ -12,6 +12,7 @@ import { biaxialRows, biaxialTemplate, type BiaxialRow, type BiaxialWords } from
 import { biaxialView, chartView, checkFlags, loadsView, PAGE_CAUTION, readingAt, type BiaxialView, type ChartView, type CheckJson, type PageFields, type PageLoads } from './engine.js';
 import type { ColumnCheck } from '../design/column-check.js';
 import { ALL_FIELDS, FIELD_DEFAULTS, fieldForPath } from './fields.js';
+import { DISPLAY_UNITS, type UnitSystem } from '../units/index.js';
 
 interface Presets {
   fields: Record<string, string | boolean>;
@@ -162,7 +163,7 @@ function pointerReading(ev: PointerEvent): void {
   const M = (view.scale('x') as unknown as { invert(v: number): number }).invert(x);
   const P = (view.scale('y') as unknown as { invert(v: number): number }).invert(y);
   const r = readingAt(current, M, P);
-  const su = current.request.section.units === 'us' ? 'ksi' : 'MPa';
+  const su = DISPLAY_UNITS[current.request.section.units].stress;
   const sy = current.request.section.basis.symbols;
   const rho =
     r.reading.position === 'between' ? fmt(r.reading.rho) : r.reading.position === 'inside-lowest' ? `≤ ${fmt(r.reading.rho)}` : `> ${fmt(current.family.curves[current.family.curves.length - 1]?.rho)}`;
@@ -237,11 +238,11 @@ let currentBiaxRows: BiaxialRow[] = [];
 let biaxChosen: string | undefined;
 
 /** The axis and level words of the biaxial panels, in the basis's symbols (as the sheets' axis titles). */
-function biaxialWords(v: BiaxialView, divisor: number, units: 'us' | 'si'): BiaxialWords {
+function biaxialWords(v: BiaxialView, divisor: number, units: UnitSystem): BiaxialWords {
   const sy = v.family.basis.symbols;
   const circle = v.family.shape.kind === 'circle';
   const ns = sy.normalisingStress;
-  const su = units === 'us' ? 'ksi' : 'MPa';
+  const su = DISPLAY_UNITS[units].stress;
   const M = sy.designMoment;
   const axis = (a: 'x' | 'y', d: string) => (divisor === 1 ? `${M}${a} / (Ag · ${d})   (${su})` : `${M}${a} / (${ns} · Ag · ${d})   (dimensionless)`);
   return { levelName: sy.dimensionlessAxial ?? `P/(${ns}·Ag)`, x: axis('x', circle ? 'D' : 'h'), y: axis('y', circle ? 'D' : 'b') };
