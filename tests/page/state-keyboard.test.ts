@@ -90,12 +90,12 @@ describe.sequential('page state, keyboard and CSV in Chromium', () => {
     await page.focus('#chart-wrap');
     await page.keyboard.press('Home');
     const first = await page.locator('#reading').innerText();
-    expect(first).toMatch(/P\/Ag [\d.]+ ksi · M\/\(Ag·h\) [\d.]+ ksi · e\/h [\d.]+ · ρg/);
+    expect(first).toMatch(/P\/Ag -?[\d.]+ ksi · M\/\(Ag·h\) [\d.]+ ksi · e\/h \S+ · ρg/);
     expect(await page.locator('#crosshair').isVisible()).toBe(true);
     await page.keyboard.press('Shift+ArrowUp');
     const up = await page.locator('#reading').innerText();
     // higher on the plot is a larger P/Ag
-    const pOf = (t: string) => Number(/P\/Ag ([\d.]+)/.exec(t)![1]);
+    const pOf = (t: string) => Number(/P\/Ag (-?[\d.]+)/.exec(t)![1]);
     expect(pOf(up)).toBeGreaterThan(pOf(first));
     await page.keyboard.press('Escape');
     expect(await page.locator('#crosshair').isVisible()).toBe(false);
