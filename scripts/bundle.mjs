@@ -13,7 +13,7 @@
 // sources went into which file; a test reads it to check what `--help`, `table` and `check` load.
 // The library build (tsc → dist/index.js + .d.ts) is separate and unchanged.
 import { build } from 'esbuild';
-import { rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, rmSync, writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
@@ -32,7 +32,7 @@ const common = {
   sourcemap: 'linked',
   sourcesContent: false,
   legalComments: 'linked',
-  external: ['canvas', 'esbuild'],
+  external: ['canvas'],
   metafile: true,
   // CommonJS dependencies (commander, fontkit, cli-progress) call require(); ESM output has none of its own
   banner: { js: "import{createRequire as __pmRequire}from'node:module';const require=__pmRequire(import.meta.url);" },
@@ -67,3 +67,42 @@ const vendor = await build({
   mainFields: ['module', 'main'],
 });
 writeFileSync(`${outdir}/meta.json`, JSON.stringify({ outputs: { ...cli.metafile.outputs, ...vendor.metafile.outputs } }));
+
+// The live page's browser code (issue 23): src/page/app.ts with the library it calls, vega, vega-lite and
+// vega-interpreter, one minified IIFE in dist/page/browser.js. `pmchart page` only reads this file and fills
+// in the presets, so an installed pmchart writes pages from any folder without esbuild (a dev dependency).
+// Node-only modules are replaced by the small stand-ins in src/page/ (no-render, virtual-fs, path-shim).
+const pageSrc = `${root}src/page`;
+const pageStubs = /\/(render\/renderer|render\/environment|sheet\/book|sheet\/files|io\/files|sheet\/check-report-file|sheet\/pipeline|cli\/contour-plot)\.(js|ts)$/;
+const page = await build({
+  absWorkingDir: root,
+  entryPoints: [`${pageSrc}/app.ts`],
+  bundle: true,
+  write: false,
+  format: 'iife',
+  platform: 'browser',
+  target: 'es2020',
+  minify: true,
+  legalComments: 'eof',
+  charset: 'utf8',
+  logLevel: 'warning',
+  // the page has no environment: a fixed date comes from its own field
+  define: { 'process.env.NODE_ENV': '"production"', 'process.env.SOURCE_DATE_EPOCH': 'undefined' },
+  // csv-parse's browser build carries its own Buffer; the Node build expects the global one
+  alias: { 'node:fs': `${pageSrc}/virtual-fs.ts`, 'node:path': `${pageSrc}/path-shim.ts`, 'csv-parse/sync': 'csv-parse/browser/esm/sync' },
+  plugins: [
+    {
+      name: 'pmchart-page-stubs',
+      setup(b) {
+        b.onResolve({ filter: /\.(js|ts)$/ }, (args) => {
+          if (!args.path.startsWith('.')) return undefined;
+          const full = new URL(args.path, `file://${args.resolveDir}/`).pathname;
+          return pageStubs.test(full) ? { path: `${pageSrc}/no-render.ts` } : undefined;
+        });
+      },
+    },
+  ],
+});
+mkdirSync(`${root}dist/page`, { recursive: true });
+// `</script` inside the bundle would end the page's script element early
+writeFileSync(`${root}dist/page/browser.js`, page.outputFiles[0].text.replace(/<\/script/gi, '<\\/script'));

@@ -71,7 +71,8 @@ export function pageChartTemplate(t: TemplateParams): VlSpec {
   layers.splice(layers.findIndex((l) => String(l.name).startsWith('curves_')), 0, {
     name: 'sheet_curves',
     data: { name: 'sheetCurves' },
-    mark: { type: 'line', color: COLOURS.faint, strokeWidth: 1.8, opacity: 0.5, strokeJoin: 'round' },
+    // clipped to the plot frame: a bracketing sheet's family can reach past the exact family's axis extents
+    mark: { type: 'line', color: COLOURS.faint, strokeWidth: 1.8, opacity: 0.5, strokeJoin: 'round', clip: true },
     encoding: { x, y, detail: { field: 'curve' }, order: { field: 'i' } },
   });
   const label = (name: string, v: 0 | 1, extra: Record<string, unknown>) => ({

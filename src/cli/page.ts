@@ -60,7 +60,7 @@ export async function runPage(o: PageOptions): Promise<string> {
   }
   const { bundlePage, pageHtml } = await import('../page/build.js');
   const { writeFileAtomic } = await import('../sheet/files.js');
-  const html = pageHtml(await bundlePage(), { fields, grid, date }, CAUTION);
+  const html = pageHtml(bundlePage(), { fields, grid, date }, CAUTION);
   writeFileAtomic(out, html);
   return out;
 }

@@ -12,6 +12,8 @@ import { biaxialRows, biaxialTemplate, type BiaxialRow, type BiaxialWords } from
 import { biaxialView, chartView, checkFlags, loadsView, PAGE_CAUTION, readingAt, type BiaxialView, type ChartView, type CheckJson, type PageFields, type PageLoads } from './engine.js';
 import type { ColumnCheck } from '../design/column-check.js';
 import { ALL_FIELDS, FIELD_DEFAULTS, fieldForPath } from './fields.js';
+import { decodeState, encodeState, loadsCsv } from './state.js';
+import { DISPLAY_UNITS, type UnitSystem } from '../units/index.js';
 
 interface Presets {
   fields: Record<string, string | boolean>;
@@ -26,8 +28,11 @@ const presets = JSON.parse($('pmchart-presets').textContent ?? '{}') as Presets;
 
 const control = (key: string) => $<HTMLInputElement & HTMLSelectElement & HTMLTextAreaElement>(`f-${key}`);
 
+/** The state a link or a reload carries in the URL fragment (over the presets), if any. */
+const restored = decodeState(location.hash, new Set(ALL_FIELDS.map((d) => d.key)), new Set(ALL_FIELDS.filter((d) => d.kind === 'checkbox').map((d) => d.key)));
+
 function fillForm(): void {
-  const values = { ...FIELD_DEFAULTS, ...presets.fields };
+  const values = { ...FIELD_DEFAULTS, ...presets.fields, ...restored?.values };
   for (const d of ALL_FIELDS) {
     const v = values[d.key];
     const el = control(d.key);
@@ -35,7 +40,26 @@ function fillForm(): void {
     else el.value = v === undefined || v === true || v === false ? '' : String(v);
   }
   $<HTMLInputElement>('gamma-slider').value = control('gamma').value;
-  if (presets.grid) $<HTMLSelectElement>('grid').value = String(presets.grid);
+  const g = restored?.grid ?? presets.grid;
+  if (g) $<HTMLSelectElement>('grid').value = String(g);
+}
+
+/** The form's raw values by field key, for the URL fragment. */
+function formValues(): Record<string, string | boolean> {
+  return Object.fromEntries(ALL_FIELDS.map((d) => [d.key, d.kind === 'checkbox' ? control(d.key).checked : control(d.key).value]));
+}
+
+/** Writes the inputs into the URL fragment (no history entry), leaving out pasted loads beyond the cap and saying so. */
+function saveState(): void {
+  const { fragment, loadsLeftOut } = encodeState({ values: formValues(), grid: grid() });
+  try {
+    history.replaceState(null, '', `#${fragment}`);
+  } catch {
+    // some browsers refuse history changes on file:// pages; the page works on without
+  }
+  const note = $('url-note');
+  note.hidden = !loadsLeftOut;
+  note.textContent = loadsLeftOut ? 'The pasted loads are too long for the page’s address: a reload or a shared link keeps the other inputs but not them. Save them as CSV to keep them.' : '';
 }
 
 /** The form as CLI options: empty fields are left out, so the CLI's defaults apply. */
@@ -151,9 +175,37 @@ function pointerReading(ev: PointerEvent): void {
   const live = liveTemplateParams(current.built.template).layout;
   const k = live.page.w / box.width;
   const [ox, oy] = view.origin();
-  const x = (ev.clientX - box.left) * k - ox;
-  const y = (ev.clientY - box.top) * k - oy;
-  const L = live.plot;
+  readAtPlot((ev.clientX - box.left) * k - ox, (ev.clientY - box.top) * k - oy);
+}
+
+/** The keyboard's reading point, in the plot's own units (null: none yet). */
+let keyPoint: { x: number; y: number } | null = null;
+
+/** Arrow keys move a reading point over the plot (Shift: ten times the step); Home puts it mid-plot; Escape hides it. */
+function keyReading(ev: KeyboardEvent): void {
+  if (!view || !current) return;
+  const L = liveTemplateParams(current.built.template).layout.plot;
+  const step = (ev.shiftKey ? 0.1 : 0.01) * Math.min(L.w, L.h);
+  const moves: Record<string, [number, number]> = { ArrowLeft: [-step, 0], ArrowRight: [step, 0], ArrowUp: [0, -step], ArrowDown: [0, step] };
+  if (ev.key === 'Escape') {
+    keyPoint = null;
+    $('crosshair').hidden = true;
+    return;
+  }
+  if (ev.key !== 'Home' && !moves[ev.key]) return;
+  ev.preventDefault();
+  const at = ev.key === 'Home' || !keyPoint ? { x: L.w / 2, y: L.h / 2 } : keyPoint;
+  const [dx, dy] = moves[ev.key] ?? [0, 0];
+  keyPoint = { x: Math.min(L.w, Math.max(0, at.x + dx)), y: Math.min(L.h, Math.max(0, at.y + dy)) };
+  readAtPlot(keyPoint.x, keyPoint.y);
+}
+
+/** The reading at a point of the plot (the view's units, from the plot's top left), with the crosshair on it. */
+function readAtPlot(x: number, y: number): void {
+  if (!view || !current) return;
+  const el = $('chart').querySelector('svg, canvas');
+  if (!el) return;
+  const L = liveTemplateParams(current.built.template).layout.plot;
   const hair = $('crosshair');
   if (x < 0 || y < 0 || x > L.w || y > L.h) {
     hair.hidden = true;
@@ -162,16 +214,20 @@ function pointerReading(ev: PointerEvent): void {
   const M = (view.scale('x') as unknown as { invert(v: number): number }).invert(x);
   const P = (view.scale('y') as unknown as { invert(v: number): number }).invert(y);
   const r = readingAt(current, M, P);
-  const su = current.request.section.units === 'us' ? 'ksi' : 'MPa';
+  const su = DISPLAY_UNITS[current.request.section.units].stress;
   const sy = current.request.section.basis.symbols;
   const rho =
     r.reading.position === 'between' ? fmt(r.reading.rho) : r.reading.position === 'inside-lowest' ? `≤ ${fmt(r.reading.rho)}` : `> ${fmt(current.family.curves[current.family.curves.length - 1]?.rho)}`;
   const d = current.request.section.shape.kind === 'circle' ? 'D' : 'h';
   const chartUnits = current.divisor === 1 ? '' : ` (chart axes: ${fmt(M)}, ${fmt(P)})`;
   $('reading').textContent = `P/Ag ${fmt(r.P)} ${su} · M/(Ag·${d}) ${fmt(r.M)} ${su}${chartUnits} · e/${d} ${fmt(r.eOverH, 3)} · ρg ${rho} (read on the ${sy.designFamily} curves at γ ${fmt(current.family.gamma)})`;
+  // back from the view's units to the page's pixels
+  const box = el.getBoundingClientRect();
   const wrap = $('chart-wrap').getBoundingClientRect();
-  hair.style.left = `${ev.clientX - wrap.left}px`;
-  hair.style.top = `${ev.clientY - wrap.top}px`;
+  const k = liveTemplateParams(current.built.template).layout.page.w / box.width;
+  const [ox, oy] = view.origin();
+  hair.style.left = `${box.left - wrap.left + (x + ox) / k}px`;
+  hair.style.top = `${box.top - wrap.top + (y + oy) / k}px`;
   hair.hidden = false;
 }
 
@@ -237,11 +293,11 @@ let currentBiaxRows: BiaxialRow[] = [];
 let biaxChosen: string | undefined;
 
 /** The axis and level words of the biaxial panels, in the basis's symbols (as the sheets' axis titles). */
-function biaxialWords(v: BiaxialView, divisor: number, units: 'us' | 'si'): BiaxialWords {
+function biaxialWords(v: BiaxialView, divisor: number, units: UnitSystem): BiaxialWords {
   const sy = v.family.basis.symbols;
   const circle = v.family.shape.kind === 'circle';
   const ns = sy.normalisingStress;
-  const su = units === 'us' ? 'ksi' : 'MPa';
+  const su = DISPLAY_UNITS[units].stress;
   const M = sy.designMoment;
   const axis = (a: 'x' | 'y', d: string) => (divisor === 1 ? `${M}${a} / (Ag · ${d})   (${su})` : `${M}${a} / (${ns} · Ag · ${d})   (dimensionless)`);
   return { levelName: sy.dimensionlessAxial ?? `P/(${ns}·Ag)`, x: axis('x', circle ? 'D' : 'h'), y: axis('y', circle ? 'D' : 'b') };
@@ -397,6 +453,7 @@ async function update(): Promise<void> {
   $('loads-table').innerHTML = check ? loadsTable(check) + (effects ? `<pre class="effects">${esc(effects)}</pre>` : '') : `<p class="muted">Type Pu and Mu, or paste a load CSV, with b and h (or D).</p>`;
   $('view-title').textContent = cv.value.set.sheets[0]!.title;
   sheetsNote(cv.value);
+  saveState();
   assumptions(cv.value, check);
   commands(cv.value, fields, loads);
 }
@@ -480,6 +537,11 @@ function wire(): void {
   });
   $('chart').addEventListener('pointermove', pointerReading);
   $('chart').addEventListener('pointerleave', () => ($('crosshair').hidden = true));
+  $('chart-wrap').addEventListener('keydown', keyReading);
+  $('save-loads').addEventListener('click', () => {
+    const loads = readLoads();
+    if (loads) download('pmchart-loads.csv', URL.createObjectURL(new Blob([loadsCsv(loads)], { type: 'text/csv' })));
+  });
   $('export-svg').addEventListener('click', () => {
     void exportSvg().then((svg) => download('pmchart-chart.svg', URL.createObjectURL(new Blob([svg], { type: 'image/svg+xml' }))));
   });

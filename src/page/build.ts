@@ -1,12 +1,13 @@
 /**
- * Writes the live page: one self-contained HTML file. The browser code (app.ts with the library it calls)
- * is bundled with esbuild together with vega, vega-lite and vega-interpreter; node-only modules are
- * replaced by the small stand-ins beside this file. The Content-Security-Policy allows exactly the one
- * inline script and the one inline style by their sha256 hashes, images from data: and blob:, and no
+ * Writes the live page: one self-contained HTML file. The browser code (app.ts with the library it calls,
+ * vega, vega-lite and vega-interpreter) is bundled once by `npm run build` (scripts/bundle.mjs) into
+ * dist/page/browser.js; here it is only read and wrapped with the presets, so an installed pmchart writes
+ * pages from any folder and needs no bundler. The Content-Security-Policy allows exactly the one inline
+ * script and the one inline style by their sha256 hashes, images from data: and blob:, and no
  * connections. Same presets → same bytes.
  */
 import { createHash } from 'node:crypto';
-import { existsSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ERROR_CODES, PmError } from '../errors.js';
@@ -28,52 +29,18 @@ function packageRoot(): string {
   while (!existsSync(join(dir, 'package.json')) && dirname(dir) !== dir) dir = dirname(dir);
   return dir;
 }
-/** A page module, as compiled (dist/page/*.js) or as source (src/page/*.ts under tsx). */
-const sibling = (stem: string): string => {
-  const self = dirname(fileURLToPath(import.meta.url));
-  if (existsSync(join(self, `${stem}.ts`))) return join(self, `${stem}.ts`);
-  return join(packageRoot(), 'dist', 'page', `${stem}.js`);
-};
 
-/** The browser bundle (IIFE), minified. */
-export async function bundlePage(): Promise<string> {
-  let esbuild: typeof import('esbuild');
+/** Where `npm run build` writes the page's browser bundle, relative to the package root. */
+export const PAGE_BUNDLE = 'dist/page/browser.js';
+
+/** The browser bundle (IIFE, minified, `</script` already escaped), as `npm run build` wrote it. */
+export function bundlePage(): string {
+  const file = join(packageRoot(), PAGE_BUNDLE);
   try {
-    esbuild = await import('esbuild');
-  } catch {
-    throw new PmError(ERROR_CODES.environment, 'page', 'needs the esbuild dev dependency; run `npm install` in the pmchart folder', {}, 3);
+    return readFileSync(file, 'utf8');
+  } catch (e) {
+    throw new PmError(ERROR_CODES.environment, 'page', `the page's browser code ${PAGE_BUNDLE} cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'}); run \`npm run build\` in the pmchart folder`, { value: file }, 3);
   }
-  const stubs = /\/(render\/renderer|render\/environment|sheet\/book|sheet\/files|io\/files|sheet\/check-report-file|sheet\/pipeline|cli\/contour-plot)\.(js|ts)$/;
-  const result = await esbuild.build({
-    entryPoints: [sibling('app')],
-    bundle: true,
-    write: false,
-    format: 'iife',
-    platform: 'browser',
-    target: 'es2020',
-    minify: true,
-    legalComments: 'eof',
-    charset: 'utf8',
-    logLevel: 'silent',
-    // the page has no environment: a fixed date comes from its own field
-    define: { 'process.env.NODE_ENV': '"production"', 'process.env.SOURCE_DATE_EPOCH': 'undefined' },
-    // csv-parse's browser build carries its own Buffer; the Node build expects the global one
-    alias: { 'node:fs': sibling('virtual-fs'), 'node:path': sibling('path-shim'), 'csv-parse/sync': 'csv-parse/browser/esm/sync' },
-    plugins: [
-      {
-        name: 'pmchart-page-stubs',
-        setup(b) {
-          b.onResolve({ filter: /\.(js|ts)$/ }, (args) => {
-            if (!args.path.startsWith('.')) return undefined;
-            const full = new URL(args.path, `file://${args.resolveDir}/`).pathname;
-            return stubs.test(full) ? { path: sibling('no-render') } : undefined;
-          });
-        },
-      },
-    ],
-  });
-  // `</script` inside the bundle would end the element early
-  return result.outputFiles[0]!.text.replace(/<\/script/gi, '<\\/script');
 }
 
 const sha256 = (text: string): string => `'sha256-${createHash('sha256').update(text, 'utf8').digest('base64')}'`;

@@ -2,6 +2,7 @@
  * What the page hands back to the command line: `pmchart sheet …` / `pmchart check …` lines that
  * reproduce the view, and a chart-set JSON snippet for `pmchart set`. Formatting only.
  */
+import { DISPLAY_UNITS } from '../units/index.js';
 import type { ChartView, PageFields } from './engine.js';
 
 const kebab = (key: string): string => `--${key.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}`;
@@ -35,7 +36,7 @@ export function chartSetSnippet(view: ChartView, fields: PageFields): string {
   const options: Record<string, number | string> = {};
   for (const k of ['alphaCc', 'gammaC', 'gammaS', 'steelK', 'steelEpsUk'] as const) if (fields[k]) options[k] = Number(fields[k]);
   for (const k of ['concreteLaw', 'steelBranch'] as const) if (fields[k]) options[k] = fields[k]!;
-  const unit = s.units === 'us' ? 'ksi' : 'MPa';
+  const unit = DISPLAY_UNITS[s.units].stress;
   const file = {
     name: 'page-view',
     titleBlock: { office: '', project: '' },

@@ -28,12 +28,13 @@ import { bracketingGammas, readSheet, type SheetReading } from '../design/chart-
 import { isPmError } from '../errors.js';
 import { SHEET_BASE_POINTS } from '../sheet/curves.js';
 import { generatorLabel } from '../version.js';
+import { pageMessage } from './fields.js';
 import { putVirtualFile } from './virtual-fs.js';
 
 /** The page's inputs under the CLI's flag names (commander's camelCase), as the user typed them. */
 export type PageFields = SheetOptions & CheckOptions;
 
-/** A problem with the inputs: the flag (or CSV line) it concerns and the CLI's one-line message. */
+/** A problem with the inputs: the flag (or CSV line) it concerns, and the CLI's one-line message in the page's words (field names, not flags). */
 export interface FieldProblem {
   path: string;
   message: string;
@@ -63,7 +64,7 @@ async function attempt<T>(fn: () => Promise<T> | T): Promise<Outcome<T>> {
   try {
     return { ok: true, value: await fn() };
   } catch (e) {
-    if (isPmError(e)) return { ok: false, problem: { path: e.path, message: e.message } };
+    if (isPmError(e)) return { ok: false, problem: { path: e.path, message: pageMessage(e) } };
     throw e;
   }
 }

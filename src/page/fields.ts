@@ -4,6 +4,11 @@
  * markup (build time) and the browser code.
  */
 import { BASIS_IDS, DESIGN_CODE_LIST } from '../codes/registry.js';
+import { formatError, type ErrorFacts } from '../errors.js';
+import { TRANSVERSE_TYPES } from '../codes/types.js';
+import { CONCRETE_LAWS, STEEL_BRANCHES } from '../input/limits.js';
+import { ARRANGEMENTS, SHAPES } from '../section/types.js';
+import { DISPLAY_UNITS, UNIT_SYSTEMS } from '../units/index.js';
 
 export type FieldKind = 'text' | 'select' | 'int' | 'checkbox';
 
@@ -29,6 +34,13 @@ export interface FieldGroup {
 }
 
 const kebab = (key: string): string => `--${key.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}`;
+/** A select's choices from one of the library's lists: the value, with hyphens as spaces for the words. */
+const choices = (values: readonly string[]): readonly (readonly [string, string])[] => values.map((v) => [v, v.replace(/-/g, ' ')] as const);
+/** The unit systems, each with its units in words: "us (kip, in, ksi)". */
+const unitChoices = UNIT_SYSTEMS.map((u) => [u, `${u.toUpperCase()} (${DISPLAY_UNITS[u].force}, ${DISPLAY_UNITS[u].length}, ${DISPLAY_UNITS[u].stress})`] as const);
+/** The arrangements the page can describe: all but 'custom', which reads a bar file the page has no field for. */
+export const PAGE_ARRANGEMENTS = ARRANGEMENTS.filter((a) => a !== 'custom');
+
 const f = (key: string, label: string, kind: FieldKind, extra: Partial<FieldDef> = {}): FieldDef => ({ key, flag: kebab(key), label, kind, ...extra });
 
 export const FIELD_GROUPS: readonly FieldGroup[] = [
@@ -37,7 +49,7 @@ export const FIELD_GROUPS: readonly FieldGroup[] = [
     title: 'Basis and materials',
     fields: [
       f('code', 'Design basis', 'select', { options: DESIGN_CODE_LIST.map((c) => [c.id, c.title] as const) }),
-      f('units', 'Units', 'select', { options: [['', "basis's first"], ['us', 'US (kip, in, ksi)'], ['si', 'SI (kN, mm, MPa)']] }),
+      f('units', 'Units', 'select', { options: [['', "basis's first"], ...unitChoices] }),
       f('fc', 'f′c (fck)', 'text', { placeholder: 'e.g. 5ksi, 35MPa', hint: 'a stress; a plain number is in the unit system’s stress unit' }),
       f('fy', 'fy (fyk)', 'text', { placeholder: 'e.g. 60ksi, 500MPa' }),
     ],
@@ -46,13 +58,13 @@ export const FIELD_GROUPS: readonly FieldGroup[] = [
     id: 'section',
     title: 'Section',
     fields: [
-      f('shape', 'Shape', 'select', { options: [['rectangle', 'rectangle'], ['circle', 'circle']] }),
+      f('shape', 'Shape', 'select', { options: choices(SHAPES) }),
       f('gamma', 'γ', 'text', { hint: 'outer-row centre spacing ÷ depth, 0.3–0.95' }),
       f('gammaB', 'γB', 'text', { placeholder: 'same cover', hint: 'outer-column centre spacing ÷ width b, 0.3–0.95 (rectangles)' }),
-      f('arrangement', 'Arrangement', 'select', { options: [['two-faces', 'two faces'], ['four-faces', 'four faces'], ['side-faces', 'side faces'], ['ring', 'ring']] }),
+      f('arrangement', 'Arrangement', 'select', { options: choices(PAGE_ARRANGEMENTS) }),
       f('barsPerFace', 'Bars per face', 'text', { placeholder: 'default', hint: 'four faces: one count, or nb,nh (on each b face, on each h face)' }),
       f('bars', 'Bars (ring)', 'int', { placeholder: 'default 8' }),
-      f('transverse', 'Transverse', 'select', { options: [['tied', 'tied'], ['spiral', 'spiral']] }),
+      f('transverse', 'Transverse', 'select', { options: choices(TRANSVERSE_TYPES) }),
     ],
   },
   {
@@ -74,8 +86,8 @@ export const FIELD_GROUPS: readonly FieldGroup[] = [
       f('alphaCc', 'αcc', 'text', { placeholder: 'basis default' }),
       f('gammaC', 'γc', 'text', { placeholder: 'basis default' }),
       f('gammaS', 'γs', 'text', { placeholder: 'basis default' }),
-      f('concreteLaw', 'Concrete law', 'select', { options: [['', 'basis default'], ['parabola-rectangle', 'parabola-rectangle'], ['rectangular-block', 'rectangular block']] }),
-      f('steelBranch', 'Steel branch', 'select', { options: [['', 'basis default'], ['horizontal', 'horizontal'], ['inclined', 'inclined']] }),
+      f('concreteLaw', 'Concrete law', 'select', { options: [['', 'basis default'], ...choices(CONCRETE_LAWS)] }),
+      f('steelBranch', 'Steel branch', 'select', { options: [['', 'basis default'], ...choices(STEEL_BRANCHES)] }),
     ],
   },
   {
@@ -88,7 +100,7 @@ export const FIELD_GROUPS: readonly FieldGroup[] = [
       f('pu', 'Pu', 'text', { placeholder: 'compression +' }),
       f('mu', 'Mu', 'text'),
       f('muy', 'Muy', 'text', { placeholder: 'optional' }),
-      f('loads', 'or paste CSV', 'text', { hint: 'columns id,Pu,Mu (Muy optional), as `pmchart check --loads` reads' }),
+      f('loads', 'or paste CSV', 'text', { hint: 'columns id,Pu,Mu (Muy optional), read as the command line reads a load file' }),
     ],
   },
 ];
@@ -117,4 +129,29 @@ export function fieldForPath(path: string): string | null {
   const flag = path.split(/[\s/]/)[0] ?? '';
   if (flag === '--rho' || flag === '--omega') return 'ratios';
   return ALL_FIELDS.find((d) => d.flag === flag)?.key ?? null;
+}
+
+/**
+ * The page's name for each flag a message can carry: the field's label, or a name of its own where the
+ * label is not a noun. The one place the CLI's flag words become the page's words.
+ */
+const PAGE_NAMES: Readonly<Record<string, string>> = {
+  ...Object.fromEntries(ALL_FIELDS.map((d) => [d.flag, d.label])),
+  '--rho': 'ρg list',
+  '--omega': 'ω list',
+  '--loads': 'pasted loads',
+  '--diameter': 'D',
+  '--grid': 'γ grid',
+  '--chart-gamma-step': 'γ grid',
+};
+
+/** A flag in the page's words: its field name, or the flag without its dashes when the page has no such field. */
+const pageName = (flag: string): string => PAGE_NAMES[flag] ?? flag.slice(2);
+
+/** Replaces every `--flag` in a CLI message by the page's name for it ("--loads line 3 Pu" → "pasted loads line 3 Pu", "give --rho" → "give ρg list"). */
+export const pageWords = (text: string): string => text.replace(/--[a-z][a-z0-9-]*/g, pageName);
+
+/** A problem as the page says it: "<field>: <value> <detail> (allowed: …)", in field names, not flags. */
+export function pageMessage(e: { path: string; detail: string; facts: ErrorFacts }): string {
+  return formatError(pageWords(e.path), pageWords(e.detail), e.facts);
 }

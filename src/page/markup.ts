@@ -28,21 +28,21 @@ export function pageBody(caution: string): string {
       g.id === 'family'
         ? `<div class="row"><label for="grid">Between sheets</label><select id="grid"><option value="0.05">γ grid 0.05</option><option value="0.1">γ grid 0.1</option></select><label class="inline"><input type="checkbox" id="show-sheets" checked> show the bracketing sheets</label></div>`
         : g.id === 'loads'
-          ? `<div class="row"><button type="button" id="clear-loads">Clear loads</button></div>`
+          ? `<div class="row"><button type="button" id="clear-loads">Clear loads</button><button type="button" id="save-loads">Save loads as CSV</button></div><div class="row"><div class="msg" id="url-note" role="status" hidden></div></div>`
           : '';
     const body = `<legend>${esc(g.title)}</legend>${rows}${extra}`;
     return g.folded ? `<details class="group" id="g-${g.id}"><summary>${esc(g.title)}</summary><fieldset>${body}</fieldset></details>` : `<fieldset class="group" id="g-${g.id}">${body}</fieldset>`;
   }).join('');
   return `
-<header><h1>pmchart — live column chart</h1><p class="sub">Computed in this page from the same library as the <code>pmchart</code> command line. Nothing is sent anywhere; the page makes no requests.</p></header>
+<header><h1>pmchart — live column chart</h1><p class="sub">Computed in this page from the same library as the <code>pmchart</code> command line. The page makes no requests; its inputs are kept in its address (after the #), so a reload or a link restores them, and a shared link carries what is in it.</p></header>
 <div class="caution" id="caution"><strong>Caution.</strong> ${esc(caution)}</div>
 <main>
 <form id="inputs" autocomplete="off">${groups}<div class="msg general" id="m-general" role="alert" hidden></div></form>
 <section id="out">
   <div class="toolbar"><button type="button" id="export-svg">Export SVG</button><button type="button" id="export-png">Export PNG</button><button type="button" id="print">Print</button><span id="timing" class="muted"></span></div>
   <h2 id="view-title"></h2>
-  <div id="chart-wrap"><div id="chart"></div><div id="crosshair" hidden></div></div>
-  <div id="reading" class="reading" aria-live="polite">Move the pointer over the chart to read P/Ag, M/(Ag·h), e/h and the interpolated ρg.</div>
+  <div id="chart-wrap" tabindex="0" aria-label="Interaction chart. Arrow keys move a reading point (Shift for larger steps, Home to the middle, Escape to hide); the reading is below the chart." aria-describedby="reading"><div id="chart"></div><div id="crosshair" hidden></div></div>
+  <div id="reading" class="reading" aria-live="polite">Move the pointer over the chart, or focus it and use the arrow keys, to read P/Ag, M/(Ag·h), e/h and the interpolated ρg.</div>
   <div id="sheets-note" class="muted"></div>
   <h2>Loads</h2>
   <div id="loads-table"><p class="muted">Type Pu and Mu, or paste a load CSV, with b and h (or D).</p></div>
@@ -93,6 +93,7 @@ textarea{font-family:"DejaVu Sans Mono",monospace;font-size:12px}
 button{font:inherit;padding:3px 10px;margin-right:6px;border:1px solid var(--accent);background:#fff;color:var(--accent);cursor:pointer}
 .toolbar{margin:8px 0}
 #chart-wrap{position:relative;border:1px solid var(--rule)}
+#chart-wrap:focus-visible{outline:2px solid var(--accent);outline-offset:2px}
 #chart svg,#chart canvas{width:100%;height:auto;display:block}
 #biaxial-wrap{border:1px solid var(--rule);overflow-x:auto}
 #biaxial-chart svg{max-width:100%;height:auto;display:block}

@@ -1,4 +1,4 @@
-/** Stands in for `node:path` in the browser bundle (src/page/build.ts aliases it): the two calls the CLI modules the page reuses make. */
+/** Stands in for `node:path` in the browser bundle (scripts/bundle.mjs aliases it): the two calls the CLI modules the page reuses make. */
 export function extname(p: string): string {
   const base = p.slice(p.lastIndexOf('/') + 1);
   const dot = base.lastIndexOf('.');

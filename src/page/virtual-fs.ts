@@ -1,7 +1,7 @@
 /**
- * Stands in for `node:fs` in the browser bundle only (src/page/build.ts aliases it). The page has no disk:
+ * Stands in for `node:fs` in the browser bundle only (scripts/bundle.mjs aliases it). The page has no disk:
  * text the user pasted is offered under a made-up file name, so the CLI's own readers (which read files)
- * run unchanged on it and nothing is parsed twice. Pasted data never leaves the page.
+ * run unchanged on it and nothing is parsed twice. The page sends nothing; its address keeps the inputs (state.ts).
  * Goes away when the check takes loads as data (issue 9) and the CSV reader is browser-safe (issue 14).
  */
 const files = new Map<string, string>();

@@ -3,6 +3,7 @@
  * plot-only on-screen layout, and the datasets. The bracketing families are checked against the
  * Po/Ag hand value (ACI 318-19 22.4.2.2: Po = 0.85·f′c·(Ag − Ast) + fy·Ast, worked by hand).
  */
+import { compile } from 'vega-lite';
 import { describe, expect, it } from 'vitest';
 import { computeFamily } from '../../src/analysis/family.js';
 import { liveData, liveTemplateParams, pageChartData, pageChartTemplate, SHEET_CURVE_TOLERANCE_PT } from '../../src/chart/page-spec.js';
@@ -24,6 +25,16 @@ describe('page chart spec', () => {
     expect(names.indexOf('sheet_curves')).toBeLessThan(names.indexOf('curves_design'));
     expect(names.indexOf('page_load_governing')).toBeGreaterThan(names.indexOf('curves_design'));
     expect(names.at(-1)).toBe('page_load_governing_label');
+  });
+
+  it('clips the bracketing families to the plot frame (a lower-γ sheet can reach past the exact family’s axes)', () => {
+    const data = pageChartData({ set, built, sheets: [at(0.75), at(0.8)], divisor: 1, loads: [] });
+    const vg = compile({ ...pageChartTemplate(built.template), datasets: data } as never).spec as { marks?: { name?: string; clip?: unknown; marks?: unknown[] }[] };
+    const all = (ms: { name?: string; type?: string; clip?: unknown; marks?: unknown[] }[] = []): { name?: string; type?: string; clip?: unknown }[] => ms.flatMap((m) => [m, ...all(m.marks as never)]);
+    // the lines themselves (vega-lite wraps them in a group per curve, as wide and high as the plot)
+    const marks = all(vg.marks).filter((m) => String(m.name).startsWith('sheet_curves') && m.type === 'line');
+    expect(marks.length).toBeGreaterThan(0);
+    for (const m of marks) expect(m.clip).toBe(true);
   });
 
   it('shows the plot alone on screen at the sheet’s type size, and keeps the decoration for exports', () => {

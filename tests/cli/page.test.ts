@@ -78,4 +78,15 @@ describe('pmchart page (CLI)', () => {
     expect(r.status).toBe(2);
     expect(r.stderr).toMatch(/^pmchart: --loads line 3 Pu: /);
   });
+
+  it('works from any folder: run with the working directory outside the project, it writes the page (no bundling at run time)', () => {
+    // the bug: the page was bundled at run time by esbuild, which resolved from the working directory
+    const elsewhere = mkdtempSync(join(tmpdir(), 'pmchart-page-cwd-'));
+    const r = spawnSync(process.execPath, [bin, 'page', '--out', 'here.html', ...flags], { encoding: 'utf8', cwd: elsewhere });
+    expect(r.stderr).toBe('');
+    expect(r.status).toBe(0);
+    const written = readFileSync(join(elsewhere, 'here.html'), 'utf8');
+    // the same page as written from the project's folder
+    expect(written).toBe(html);
+  });
 });

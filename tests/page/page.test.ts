@@ -159,15 +159,17 @@ describe.sequential('pmchart page in Chromium', () => {
     expect(set.sheets.map((s) => s.gamma)).toEqual([0.8, 20 / 24, 0.85].map((g) => Number(g.toPrecision(6))));
   });
 
-  it('shows bad input inline in the CLI’s words, with no exception, and keeps the last chart', async () => {
+  it('shows bad input inline, the CLI’s message in field names (not flags), with no exception, and keeps the last chart', async () => {
     const draws = await page.evaluate(() => (window as unknown as { pmchartPage: { draws(): number } }).pmchartPage.draws());
     await setField('gamma', '1.2');
     const cliGamma = cli(['table', ...section.map((a) => (a === '0.8' ? '1.2' : a))]).stderr.trim().replace(/^pmchart: /, '');
-    expect((await visibleMessages())['m-gamma']).toBe(cliGamma);
+    expect(cliGamma.startsWith('--gamma: ')).toBe(true);
+    expect((await visibleMessages())['m-gamma']).toBe(cliGamma.replace(/^--gamma: /, 'γ: '));
     await setField('gamma', '0.8');
     await setField('fc', 'abc');
     const cliFc = cli(['table', ...section.map((a) => (a === '4' ? 'abc' : a))]).stderr.trim().replace(/^pmchart: /, '');
-    expect((await visibleMessages())['m-fc']).toBe(cliFc);
+    expect(cliFc.startsWith('--fc: ')).toBe(true);
+    expect((await visibleMessages())['m-fc']).toBe(cliFc.replace(/^--fc: /, 'f′c (fck): '));
     expect(await page.locator('#chart svg').count()).toBe(1);
     expect(await page.evaluate(() => (window as unknown as { pmchartPage: { draws(): number } }).pmchartPage.draws())).toBe(draws + 1);
     expect(problems).toEqual([]);
