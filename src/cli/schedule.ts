@@ -86,6 +86,7 @@ export function prepareSchedule(file: string, o: ScheduleOptions): PreparedSched
   const { entries: kept, missing } = matchMarks(entries, loads, { allowMissing: o.allowMissing === true });
   if (missing.withoutLoads.length > 0) notes.push(`marks of the schedule with no loads, not checked: ${missing.withoutLoads.join(', ')}`);
   if (missing.notInSchedule.length > 0) notes.push(`marks of the loads not in the schedule, ignored: ${missing.notInSchedule.join(', ')}`);
+  if (kept.length === 0) throw new PmError(ERROR_CODES.missing, '--loads', 'has loads for no mark of the schedule');
   const byMark = new Map(rows.map((r) => [r.mark, r]));
   return { rows: kept.map((e) => byMark.get(e.mark)!), loads, proposals, jobs, notes, at };
 }

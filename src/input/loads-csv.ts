@@ -215,9 +215,12 @@ function readLoads(textIn: string, units: UnitSystem, at: string, opts: LoadsCsv
     if (first !== undefined) {
       if (opts.duplicates !== 'number') throw new PmError(ERROR_CODES.conflict, `${at} line ${line} id`, `repeats the id of line ${first}`, { value: JSON.stringify(id) });
       // an export repeats a combination per station: each row is its own load, numbered #2, #3 …
-      const n = (repeats.get(key) ?? 1) + 1;
+      let n = repeats.get(key) ?? 1;
+      // the next number whose id the file does not already use
+      while (ids.has(`${groupValue}\u0000${id} #${++n}`));
       repeats.set(key, n);
       id = `${id} #${n}`;
+      ids.set(`${groupValue}\u0000${id}`, line);
     } else ids.set(key, line);
     // the file's sign of compression made ours (positive); `|| 0` keeps −0 out
     const load: LoadRow = { id, Pu: sign * value('Pu', 'force') || 0, Mu: value('Mu', 'moment') };

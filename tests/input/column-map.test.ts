@@ -101,3 +101,10 @@ describe('a schedule’s loads: bare numbers in each mark’s units', () => {
     expect(loads.get('S1')).toEqual([{ id: 'a', Pu: 100_000, Mu: 10e6 }]);
   });
 });
+
+describe('numbered repeats', () => {
+  it('skips a number the file already uses as an id', () => {
+    const loads = parseLoadsCsv('C,P,M\nA,1,1\nA,2,2\nA #2,3,3\nA,4,4\n', 'us', '--loads', { columns: parseColumnMap('id=C,Pu=P,Mu=M', LOAD_FIELDS), duplicates: 'number' });
+    expect(loads.map((l) => l.id)).toEqual(['A', 'A #2', 'A #2 #2', 'A #3']);
+  });
+});
