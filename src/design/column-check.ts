@@ -378,7 +378,7 @@ function demandOf(ctx: ColumnCheckContext, load: FactoredLoad): Demand {
   if (input.slenderness) {
     // without bars, positions from γ and the arrangement (EN 1992-1-1 5.8.8.3(2) needs d and is before bars are chosen)
     const bars = ctx.checkedBars ?? ctx.positionBars;
-    magnified = magnifyLoad(basis, input.shape, bars, { Pu: load.Pu, Mux: load.Mu, Muy: load.Muy ?? 0, ...endMoments(load) }, input.slenderness, ctx.checkedBars === null);
+    magnified = magnifyLoad(basis, input.shape, bars, { Pu: load.Pu, Mux: load.Mu, Muy: load.Muy ?? 0, ...endMoments(load), ...(load.betaDns !== undefined ? { betaDns: load.betaDns } : {}) }, input.slenderness, ctx.checkedBars === null);
     Mux = magnified.Mux;
     if (load.Muy !== undefined || magnified.y) Muy = magnified.Muy;
   }

@@ -73,21 +73,23 @@ export function magnifyLoad(
   basis: Basis,
   shape: Shape,
   bars: readonly Bar[],
-  load: { Pu: number; Mux: number; Muy: number } & EndMoments,
+  load: { Pu: number; Mux: number; Muy: number; betaDns?: number } & EndMoments,
   req: SlendernessRequest,
   positionsOnly = false,
 ): MagnifiedLoad {
   const sec = { shape, bars, positionsOnly };
+  // a load's own sustained-load ratio replaces the member's (a schedule's loads file may give it per combination)
+  const beta = load.betaDns !== undefined ? { betaDns: load.betaDns } : {};
   const ex = endPair(load.M1, load.M2, load.M01, load.M02);
   const ey = endPair(load.M1y, load.M2y, load.M01y, load.M02y);
   const m2x = ex.M2 ?? Math.abs(load.Mux);
-  const x = slendernessCheck(basis, sec, { ...req.x, Pu: load.Pu, M2: m2x, M1: ex.M1 ?? -m2x });
+  const x = slendernessCheck(basis, sec, { ...req.x, ...beta, Pu: load.Pu, M2: m2x, M1: ex.M1 ?? -m2x });
   const sign = (m: number) => (m < 0 ? -1 : 1);
   let y: SlendernessResult | null = null;
   let Muy = load.Muy;
   if (load.Muy !== 0 || req.y !== undefined || ey.M2 !== undefined) {
     const m2y = ey.M2 ?? Math.abs(load.Muy);
-    y = slendernessCheck(basis, aboutYAxis(sec), { ...(req.y ?? req.x), Pu: load.Pu, M2: m2y, M1: ey.M1 ?? -m2y });
+    y = slendernessCheck(basis, aboutYAxis(sec), { ...(req.y ?? req.x), ...beta, Pu: load.Pu, M2: m2y, M1: ey.M1 ?? -m2y });
     Muy = sign(load.Muy) * y.magnifiedMoment;
   }
   return { Mux: sign(load.Mux) * x.magnifiedMoment, Muy, x, y };

@@ -87,3 +87,18 @@ describe('compareMarks and summariseSchedule', () => {
     expect(summariseSchedule([{ status: 'ok', exitCode: 0 }, { status: 'unstable', exitCode: 1 }]).exitCode).toBe(1);
   });
 });
+
+describe('a load’s own βdns (issue 22: beta_dns per load, the schedule’s value the default)', () => {
+  // 16 × 16 in, 8 #8, klu = 20 ft: the magnifier of ACI 318-19 6.6.4.5 uses (EI)eff = 0.4·Ec·Ig/(1 + βdns) (6.6.4.4.4(a)),
+  // so a larger βdns lowers Pc and raises δ: the load's own βdns must reach the engine.
+  const slender = (beta: number) => ({ x: { effectiveLength: 240, betaDns: beta, eiOption: 'a' as const, transverseLoads: false } });
+  const load = { id: 'L', Pu: 300, Mu: 60 * 12 };
+  it('replaces the member’s βdns for that load', () => {
+    const own = checkColumn({ ...section, slenderness: slender(0.2), loads: [{ ...load, betaDns: 0.9 }] });
+    const member09 = checkColumn({ ...section, slenderness: slender(0.9), loads: [load] });
+    const member02 = checkColumn({ ...section, slenderness: slender(0.2), loads: [load] });
+    expect(own.results[0]!.Mu).toBe(member09.results[0]!.Mu);
+    expect(own.results[0]!.measureValue).toBe(member09.results[0]!.measureValue);
+    expect(member09.results[0]!.Mu).toBeGreaterThan(member02.results[0]!.Mu);
+  });
+});

@@ -108,3 +108,13 @@ describe('numbered repeats', () => {
     expect(loads.map((l) => l.id)).toEqual(['A', 'A #2', 'A #2 #2', 'A #3']);
   });
 });
+
+describe('beta_dns per load', () => {
+  it('reads a ratio 0–1 (empty: the member’s) and names a bad cell', () => {
+    expect(parseLoadsCsv('id,Pu,Mu,beta_dns\nA,1,2,0.5\nB,1,2,\n', 'us')).toEqual([
+      { id: 'A', Pu: 1, Mu: 24, betaDns: 0.5 },
+      { id: 'B', Pu: 1, Mu: 24 },
+    ]);
+    expect(problem(() => parseLoadsCsv('id,Pu,Mu,beta_dns\nA,1,2,1.5\n', 'us'))).toBe('--loads line 2 beta_dns: 1.5 is not a ratio within 0–1');
+  });
+});
