@@ -10,6 +10,10 @@
  * - `;` separates cells when the header has more `;` than `,` (spreadsheets in many locales); decimal
  *   commas are then read as points.
  * - Duplicate columns and duplicate ids are refused with their line numbers; `#` starts a comment line.
+ * - Analysis exports (issue 22, `LoadsCsvOptions`): a header map (`--columns`, src/input/column-map.ts),
+ *   the export's sign of compression, a group column (a schedule's `mark`, bare numbers in each group's
+ *   units) and repeated ids kept as loads numbered #2, #3 …; headers in a basis's action symbols (NEd, Pf,
+ *   N*) name Pu and Mu. An optional `beta_dns` column gives a load its own sustained-load ratio.
  * Every problem is one PmError naming `<at> line N <column>`. Browser-safe: the live page passes
  * pasted text; the CLI passes the file's text.
  */
