@@ -569,8 +569,9 @@ function compareRank(sa: number, ma: number, da: number, ia: number, sb: number,
  * Checks every load of a column and proposes bars: the one entry of the check engine.
  * The result is frozen; views format it and add no figure of their own.
  */
-export function checkColumn(input: ColumnCheckInput): ColumnCheck {
-  const ctx = prepareColumnCheck(input);
+export function checkColumn(input: ColumnCheckInput, opts: { readings?: boolean } = {}): ColumnCheck {
+  // readings: false leaves out the emulated chart readings (rhoFromChart …), which change no status, measure or ranking
+  const ctx = prepareColumnCheck(input, opts);
   const results = [...checkColumnLoads(ctx)].sort(governingOrder).map((r, k) => (k === 0 ? { ...r, governing: true } : r));
   return summarise(ctx, results);
 }

@@ -125,10 +125,10 @@ export function scheduleEntries(rows: readonly ScheduleRow[], loads: ReadonlyMap
 export type MarkRow = ScheduleRowFacts & { code: string; title: string };
 
 /** The rows of `rows` (schedule rows with loads), checked one at a time in the order given; what `--jobs` hands each process. */
-export function* checkRows(rows: readonly ScheduleRow[], loads: ReadonlyMap<string, readonly FactoredLoad[]>, proposals: number, at = 'schedule'): Generator<MarkRow & { check: ColumnCheck }> {
+export function* checkRows(rows: readonly ScheduleRow[], loads: ReadonlyMap<string, readonly FactoredLoad[]>, proposals: number, at = 'schedule', readings = true): Generator<MarkRow & { check: ColumnCheck }> {
   for (const row of rows) {
     const [entry] = scheduleEntries([row], loads, proposals, at);
-    const r = checkMark(entry!, loads.get(row.mark)!);
+    const r = checkMark(entry!, loads.get(row.mark)!, { readings });
     yield { ...rowFacts(r.mark, r.check), code: r.check.basis.code, title: r.check.basis.title, check: r.check };
   }
 }

@@ -102,3 +102,19 @@ describe('a load’s own βdns (issue 22: beta_dns per load, the schedule’s va
     expect(member09.results[0]!.Mu).toBeGreaterThan(member02.results[0]!.Mu);
   });
 });
+
+describe('readings: false', () => {
+  it('gives the same rows as the full check (the readings change no status, measure or ranking)', () => {
+    const loads = new Map<string, FactoredLoad[]>([
+      ['R1', [{ id: 'a', Pu: 300, Mu: 900, Muy: 400 }, { id: 'b', Pu: 150, Mu: -1200 }, { id: 'c', Pu: -50, Mu: 300, Muy: -200 }]],
+    ]);
+    const entry = [{ mark: 'R1', input: { ...section, slenderness: { x: { effectiveLength: 200, betaDns: 0.5, eiOption: 'a' as const, transverseLoads: false } } } }];
+    const full = checkSchedule(entry, loads).columns[0]!;
+    const bare = checkSchedule(entry, loads, { readings: false }).columns[0]!;
+    const { check: _a, ...f } = full;
+    const { check: _b, ...b } = bare;
+    expect(b).toEqual(f);
+    expect(full.check.results.some((r) => r.rhoFromChart !== null)).toBe(true);
+    expect(bare.check.results.every((r) => r.rhoFromChart === null)).toBe(true);
+  });
+});
