@@ -55,7 +55,7 @@ function readText(file: string, flag: string, maxBytes: number): string {
 function wholeOption(flag: string, text: string | undefined, fallback: number, range: readonly [number, number]): number {
   if (text === undefined) return fallback;
   const v = Number(text);
-  if (!/^\s*\d+\s*$/.test(text) || v < range[0] || v > range[1]) throw new PmError(ERROR_CODES.outOfRange, flag, `is not a whole number in ${range[0]}–${range[1]}`, { value: text, allowed: `${range[0]}–${range[1]}` });
+  if (!/^\s*\d+\s*$/.test(text) || v < range[0] || v > range[1]) throw new PmError(ERROR_CODES.outOfRange, flag, `must be a whole number in ${range[0]}–${range[1]}`, { value: text, allowed: `${range[0]}–${range[1]}` });
   return v;
 }
 
