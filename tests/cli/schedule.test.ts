@@ -109,6 +109,22 @@ describe('check --loads with --columns and --compression', () => {
   });
 });
 
+describe('a forgotten --compression negative', () => {
+  it('is named in a note when every axial load reads as tension', async () => {
+    // the export without its one uplift row: every P is negative (compression, as exported)
+    const allNegative = file('all-negative.csv', EXPORT.split('\n').filter((l) => !l.includes(',40,')).join('\n'));
+    const r = await runCli(['schedule', sched, '--loads', allNegative, '--columns', MAP, '--json']);
+    expect(JSON.parse(r.stdout).notes).toContain('--loads: every axial load is tension (negative Pu); if the file gives compression as negative, add --compression negative');
+    const stated = await runCli(['schedule', sched, '--loads', allNegative, '--columns', MAP, '--compression', 'positive', '--json']);
+    expect(JSON.parse(stated.stdout).notes).not.toContain('--loads: every axial load is tension (negative Pu); if the file gives compression as negative, add --compression negative');
+    const c = await runCli(['check', '--fc', '5', '--fy', '60', '--b', '20', '--h', '20', '--gamma', '0.75', '--loads', ownLoads('G2-B')]);
+    expect(c.stderr).toBe('');
+    const neg = file('neg.csv', 'id,Pu,Mu\nA,-100,50\nB,-200,40\n');
+    const n = await runCli(['check', '--fc', '5', '--fy', '60', '--b', '20', '--h', '20', '--gamma', '0.75', '--loads', neg]);
+    expect(n.stderr).toBe('pmchart: note: --loads: every axial load is tension (negative Pu); if the file gives compression as negative, add --compression negative\n');
+  });
+});
+
 describe('check: --columns and --compression need --loads', () => {
   it('refuses them with --pu/--mu, naming the flag', async () => {
     const r = await runCli(['check', '--fc', '5', '--fy', '60', '--b', '20', '--h', '20', '--gamma', '0.75', '--pu', '100', '--mu', '50', '--compression', 'negative']);
