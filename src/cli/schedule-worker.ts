@@ -32,7 +32,7 @@ process.on('message', (msg: ScheduleTask | { type: 'exit' }) => {
   }
   try {
     const rows: MarkRow[] = [];
-    for (const { check: _c, ...row } of checkRows(msg.rows, new Map(msg.loads), msg.proposals, msg.at)) rows.push(row);
+    for (const { check: _c, ...row } of checkRows(msg.rows, new Map(msg.loads), msg.proposals, msg.at, false)) rows.push(row);
     send({ type: 'done', chunk: msg.chunk, rows });
   } catch (e) {
     const err = e as Error;

@@ -55,7 +55,7 @@ function readText(file: string, flag: string, maxBytes: number): string {
 function wholeOption(flag: string, text: string | undefined, fallback: number, range: readonly [number, number]): number {
   if (text === undefined) return fallback;
   const v = Number(text);
-  if (!/^\s*\d+\s*$/.test(text) || v < range[0] || v > range[1]) throw new PmError(ERROR_CODES.outOfRange, flag, `is not a whole number in ${range[0]}–${range[1]}`, { value: text, allowed: `${range[0]}–${range[1]}` });
+  if (!/^\s*\d+\s*$/.test(text) || v < range[0] || v > range[1]) throw new PmError(ERROR_CODES.outOfRange, flag, `must be a whole number in ${range[0]}–${range[1]}`, { value: text, allowed: `${range[0]}–${range[1]}` });
   return v;
 }
 
@@ -86,6 +86,7 @@ export function prepareSchedule(file: string, o: ScheduleOptions): PreparedSched
   const { entries: kept, missing } = matchMarks(entries, loads, { allowMissing: o.allowMissing === true });
   if (missing.withoutLoads.length > 0) notes.push(`marks of the schedule with no loads, not checked: ${missing.withoutLoads.join(', ')}`);
   if (missing.notInSchedule.length > 0) notes.push(`marks of the loads not in the schedule, ignored: ${missing.notInSchedule.join(', ')}`);
+  if (kept.length === 0) throw new PmError(ERROR_CODES.missing, '--loads', 'has loads for no mark of the schedule');
   const byMark = new Map(rows.map((r) => [r.mark, r]));
   return { rows: kept.map((e) => byMark.get(e.mark)!), loads, proposals, jobs, notes, at };
 }
@@ -106,7 +107,8 @@ export async function markRows(p: PreparedSchedule, onMark?: (done: number) => v
     return rowsInChildren(p, onMark);
   }
   const out: MarkRow[] = [];
-  for (const { check: _c, ...row } of checkRows(p.rows, p.loads, p.proposals, p.at)) {
+  // the table and JSON need no chart readings (the sheets of --report do): the same rows, a fraction of the work
+  for (const { check: _c, ...row } of checkRows(p.rows, p.loads, p.proposals, p.at, false)) {
     out.push(row);
     onMark?.(out.length);
   }

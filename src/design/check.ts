@@ -17,6 +17,8 @@ export interface FactoredLoad extends EndMoments {
   Mu: number;
   /** moment about the y axis for the biaxial check; absent: uniaxial */
   Muy?: number;
+  /** this load's sustained ÷ total factored axial load (ACI 318-19 6.6.4.4.4 βdns; AS 3600 and CSA A23.3 βd) for the slenderness check; absent: the member's */
+  betaDns?: number;
 }
 
 /** A given layout to check: discrete bars of total area `area` at `gamma`. */

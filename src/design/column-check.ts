@@ -542,7 +542,7 @@ function demandOf(ctx: ColumnCheckContext, load: FactoredLoad): Demand {
   if (input.slenderness) {
     // without bars, positions from γ and the arrangement (EN 1992-1-1 5.8.8.3(2) needs d and is before bars are chosen)
     const bars = ctx.checkedBars ?? ctx.positionBars;
-    magnified = magnifyLoad(basis, input.shape, bars, { Pu: load.Pu, Mux: load.Mu, Muy: load.Muy ?? 0, ...endMoments(load) }, input.slenderness, ctx.checkedBars === null);
+    magnified = magnifyLoad(basis, input.shape, bars, { Pu: load.Pu, Mux: load.Mu, Muy: load.Muy ?? 0, ...endMoments(load), ...(load.betaDns !== undefined ? { betaDns: load.betaDns } : {}) }, input.slenderness, ctx.checkedBars === null);
     Mux = magnified.Mux;
     // a load without Muy stays uniaxial: its y slenderness feeds the check about y alone
     if (load.Muy !== undefined) Muy = magnified.Muy;
@@ -935,8 +935,9 @@ function compareRank(sa: number, ma: number, da: number, ia: number, sb: number,
  * Checks every load of a column and proposes bars: the one entry of the check engine.
  * The result is frozen; views format it and add no figure of their own.
  */
-export function checkColumn(input: ColumnCheckInput): ColumnCheck {
-  const ctx = prepareColumnCheck(input);
+export function checkColumn(input: ColumnCheckInput, opts: { readings?: boolean } = {}): ColumnCheck {
+  // readings: false leaves out the emulated chart readings (rhoFromChart …), which change no status, measure or ranking
+  const ctx = prepareColumnCheck(input, opts);
   const results = [...checkColumnLoads(ctx)].sort(governingOrder).map((r, k) => (k === 0 ? { ...r, governing: true } : r));
   return summarise(ctx, results);
 }

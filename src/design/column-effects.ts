@@ -89,20 +89,22 @@ export function magnifyLoad(
   basis: Basis,
   shape: Shape,
   bars: readonly Bar[],
-  load: { Pu: number; Mux: number; Muy: number } & EndMoments,
+  load: { Pu: number; Mux: number; Muy: number; betaDns?: number } & EndMoments,
   req: SlendernessRequest,
   positionsOnly = false,
 ): MagnifiedLoad {
   const sec = { shape, bars, positionsOnly };
   const secY = aboutYAxis(sec);
+  // a load's own sustained-load ratio replaces the member's (a schedule's loads file may give it per combination)
+  const beta = load.betaDns !== undefined ? { betaDns: load.betaDns } : {};
   const ex = endPair(load.M1, load.M2, load.M01, load.M02);
   const ey = endPair(load.M1y, load.M2y, load.M01y, load.M02y);
   const m2x = ex.M2 ?? Math.abs(load.Mux);
-  const x = slendernessCheck(basis, sec, { ...req.x, Pu: load.Pu, M2: m2x, M1: ex.M1 ?? -m2x });
+  const x = slendernessCheck(basis, sec, { ...req.x, ...beta, Pu: load.Pu, M2: m2x, M1: ex.M1 ?? -m2x });
   const sign = (m: number) => (m < 0 ? -1 : 1);
   const m2y = ey.M2 ?? Math.abs(load.Muy);
   const memberY = req.y ?? req.x;
-  const y = slendernessCheck(basis, secY, { ...memberY, Pu: load.Pu, M2: m2y, M1: ey.M1 ?? -m2y });
+  const y = slendernessCheck(basis, secY, { ...memberY, ...beta, Pu: load.Pu, M2: m2y, M1: ey.M1 ?? -m2y });
   // the accidental part alone: the same method with no end moments (M1 = M2 = 0)
   const accidental = (r: SlendernessResult, m2: number, run: () => SlendernessResult): AxisMinimum => {
     const z = m2 === 0 ? r : run();
@@ -111,8 +113,8 @@ export function magnifyLoad(
     return { given: m2, firstOrder, moment, governs: moment > 0 && Number.isFinite(r.magnifiedMoment) && moment >= r.magnifiedMoment * (1 - 1e-9) };
   };
   const minimum = {
-    x: accidental(x, m2x, () => slendernessCheck(basis, sec, { ...req.x, Pu: load.Pu, M2: 0, M1: -0 })),
-    y: accidental(y, m2y, () => slendernessCheck(basis, secY, { ...memberY, Pu: load.Pu, M2: 0, M1: -0 })),
+    x: accidental(x, m2x, () => slendernessCheck(basis, sec, { ...req.x, ...beta, Pu: load.Pu, M2: 0, M1: -0 })),
+    y: accidental(y, m2y, () => slendernessCheck(basis, secY, { ...memberY, ...beta, Pu: load.Pu, M2: 0, M1: -0 })),
   };
   return { Mux: sign(load.Mux) * x.magnifiedMoment, Muy: sign(load.Muy) * y.magnifiedMoment, x, y, minimum };
 }

@@ -63,6 +63,11 @@ export interface ScheduleCheck {
 export interface ScheduleOptions {
   /** a mark on one side only is skipped and listed instead of an error */
   allowMissing?: boolean;
+  /**
+   * false: each mark's check leaves out the emulated chart readings (`rhoFromChart` …), most of the work of a
+   * check; statuses, measures, the governing load and ρg required are the same. Default true.
+   */
+  readings?: boolean;
 }
 
 /** Marks in natural order: "C2" before "C10"; digit runs by value, other text by code unit. */
@@ -104,8 +109,8 @@ export function matchMarks(schedule: readonly ScheduleEntry[], loads: ReadonlyMa
 }
 
 /** One mark checked: the engine's check and the figures of its governing load. */
-export function checkMark(entry: ScheduleEntry, loads: readonly FactoredLoad[]): ScheduleMarkResult {
-  const check = checkColumn({ ...entry.input, loads });
+export function checkMark(entry: ScheduleEntry, loads: readonly FactoredLoad[], opts: Pick<ScheduleOptions, 'readings'> = {}): ScheduleMarkResult {
+  const check = checkColumn({ ...entry.input, loads }, { readings: opts.readings ?? true });
   return { ...rowFacts(entry.mark, check), check };
 }
 
@@ -141,8 +146,8 @@ function requiredRho(check: ColumnCheck, g: ColumnLoadResult): number | null {
 }
 
 /** Each mark checked, in mark order, one at a time. */
-export function* scheduleMarks(entries: readonly ScheduleEntry[], loads: ReadonlyMap<string, readonly FactoredLoad[]>): Generator<ScheduleMarkResult> {
-  for (const e of entries) yield checkMark(e, loads.get(e.mark)!);
+export function* scheduleMarks(entries: readonly ScheduleEntry[], loads: ReadonlyMap<string, readonly FactoredLoad[]>, opts: Pick<ScheduleOptions, 'readings'> = {}): Generator<ScheduleMarkResult> {
+  for (const e of entries) yield checkMark(e, loads.get(e.mark)!, opts);
 }
 
 /** Counts by status (every status of the check's list, LOAD_STATUSES) and the exit status. */
@@ -166,7 +171,7 @@ export function summariseSchedule(rows: Iterable<Pick<ScheduleRowFacts, 'status'
  */
 export function checkSchedule(schedule: readonly ScheduleEntry[], loads: ReadonlyMap<string, readonly FactoredLoad[]>, opts: ScheduleOptions = {}): ScheduleCheck {
   const { entries, missing } = matchMarks(schedule, loads, opts);
-  const columns = [...scheduleMarks(entries, loads)];
+  const columns = [...scheduleMarks(entries, loads, opts)];
   const { summary, exitCode } = summariseSchedule(columns);
   return Object.freeze({ columns, summary, exitCode, missing });
 }

@@ -64,6 +64,15 @@ export function parseLoadsCsv(text: string, units: UnitSystem, path = '--loads',
   return readLoadsCsv(text, units, path, opts);
 }
 
+/**
+ * A note when every axial load read is tension and no sign was stated: an export giving compression as
+ * negative read without `--compression negative` turns every compression load into tension (issue 22).
+ */
+export function signNote(loads: readonly FactoredLoad[], compression: string | undefined, at = '--loads'): string | null {
+  if (compression !== undefined || loads.length === 0 || !loads.every((l) => l.Pu < 0)) return null;
+  return `${at}: every axial load is tension (negative Pu); if the file gives compression as negative, add --compression negative`;
+}
+
 /** `--columns` and `--compression` as load-file options (shared by `check --loads` and `schedule`); `fields` adds the schedule's mark. */
 export function exportOptions(o: { columns?: string; compression?: string }, extraFields: readonly string[] = []): LoadsCsvOptions {
   const compression = parseCompression(o.compression);
@@ -106,6 +115,8 @@ export function resolveCheckOptions(o: CheckOptions, given?: { loads: readonly F
       throw new PmError(ERROR_CODES.io, '--loads', `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'})`, { value: o.loads });
     }
     loads = parseLoadsCsv(text, u, '--loads', { ...exportOptions(o), onNote: (n) => notes.push(n) });
+    const sign = signNote(loads, o.compression);
+    if (sign !== null) notes.push(sign);
     if (o.report !== undefined && isDrawn(o.report) && loads.length > MAX_DRAWN_REPORT_LOADS) {
       throw new PmError(ERROR_CODES.outOfRange, '--report', `draws at most ${MAX_DRAWN_REPORT_LOADS} loads and --loads has ${loads.length}; write a .txt or .json report for every load`);
     }

@@ -14,7 +14,7 @@ import { ERROR_CODES, isPmError, PmError } from '../errors.js';
 import { parseGroupedLoadsCsv } from '../input/loads-csv.js';
 import type { UnitSystem } from '../units/index.js';
 import { SCHEDULE_COLUMNS, type ScheduleColumn, type ScheduleRow } from '../input/schedule-csv.js';
-import { exportOptions, resolveCheckOptions, type CheckOptions, type ResolvedCheck } from './check-flags.js';
+import { exportOptions, resolveCheckOptions, signNote, type CheckOptions, type ResolvedCheck } from './check-flags.js';
 
 /** The flag each schedule column stands for: `bars_per_face` → `--bars-per-face`. */
 const flagOfColumn = (c: ScheduleColumn): string => `--${c.replace(/_/g, '-')}`;
@@ -103,6 +103,8 @@ export function readScheduleLoads(
     unitsOf: (mark) => units.get(mark) ?? first,
     ...(onNote ? { onNote } : {}),
   });
+  const sign = signNote(grouped.map((g) => g.load), o.compression, at);
+  if (sign !== null) onNote?.(sign);
   const out = new Map<string, FactoredLoad[]>();
   for (const g of grouped) {
     const list = out.get(g.group);
@@ -125,10 +127,10 @@ export function scheduleEntries(rows: readonly ScheduleRow[], loads: ReadonlyMap
 export type MarkRow = ScheduleRowFacts & { code: string; title: string };
 
 /** The rows of `rows` (schedule rows with loads), checked one at a time in the order given; what `--jobs` hands each process. */
-export function* checkRows(rows: readonly ScheduleRow[], loads: ReadonlyMap<string, readonly FactoredLoad[]>, proposals: number, at = 'schedule'): Generator<MarkRow & { check: ColumnCheck }> {
+export function* checkRows(rows: readonly ScheduleRow[], loads: ReadonlyMap<string, readonly FactoredLoad[]>, proposals: number, at = 'schedule', readings = true): Generator<MarkRow & { check: ColumnCheck }> {
   for (const row of rows) {
     const [entry] = scheduleEntries([row], loads, proposals, at);
-    const r = checkMark(entry!, loads.get(row.mark)!);
+    const r = checkMark(entry!, loads.get(row.mark)!, { readings });
     yield { ...rowFacts(r.mark, r.check), code: r.check.basis.code, title: r.check.basis.title, check: r.check };
   }
 }

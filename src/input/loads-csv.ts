@@ -10,6 +10,10 @@
  * - `;` separates cells when the header has more `;` than `,` (spreadsheets in many locales); decimal
  *   commas are then read as points.
  * - Duplicate columns and duplicate ids are refused with their line numbers; `#` starts a comment line.
+ * - Analysis exports (issue 22, `LoadsCsvOptions`): a header map (`--columns`, src/input/column-map.ts),
+ *   the export's sign of compression, a group column (a schedule's `mark`, bare numbers in each group's
+ *   units) and repeated ids kept as loads numbered #2, #3 …; headers in a basis's action symbols (NEd, Pf,
+ *   N*) name Pu and Mu. An optional `beta_dns` column gives a load its own sustained-load ratio.
  * Every problem is one PmError naming `<at> line N <column>`. Browser-safe: the live page passes
  * pasted text; the CLI passes the file's text.
  */
@@ -20,12 +24,12 @@ import { DISPLAY_UNITS, parseQuantity, splitQuantity, unitSuffixes, type Quantit
 import type { FactoredLoad } from '../design/check.js';
 import { parseOrThrow, quantityText, text } from './fields.js';
 import { ID_JOIN, ignoredNote, planHeader, type ColumnMap, type CompressionSign } from './column-map.js';
-import { LOAD_MAX_ABS, MAX_LOAD_ID_CHARS, MAX_LOAD_ROWS, MAX_LOADS_BYTES } from './limits.js';
+import { LOAD_MAX_ABS, MAX_LOAD_ID_CHARS, MAX_LOAD_ROWS, MAX_LOADS_BYTES, parseDecimal } from './limits.js';
 
 /** A load in internal units: the check engine's own load type. */
 export type LoadRow = FactoredLoad;
 
-const COLUMNS = { id: null, Pu: 'force', Mu: 'moment', Muy: 'moment', M1: 'moment', M2: 'moment', M1y: 'moment', M2y: 'moment', M01: 'moment', M02: 'moment', M01y: 'moment', M02y: 'moment' } as const satisfies Record<string, QuantityKind | null>;
+const COLUMNS = { id: null, Pu: 'force', Mu: 'moment', Muy: 'moment', M1: 'moment', M2: 'moment', M1y: 'moment', M2y: 'moment', M01: 'moment', M02: 'moment', M01y: 'moment', M02y: 'moment', beta_dns: null } as const satisfies Record<string, QuantityKind | null>;
 type Column = keyof typeof COLUMNS;
 const OPTIONAL_MOMENTS = ['Muy', 'M1', 'M2', 'M1y', 'M2y', 'M01', 'M02', 'M01y', 'M02y'] as const;
 
@@ -35,6 +39,20 @@ const RowSchema = z.object({
   Pu: z.string().trim().min(1, { message: 'is empty' }).pipe(quantityText('force')),
   Mu: z.string().trim().min(1, { message: 'is empty' }).pipe(quantityText('moment')),
   ...Object.fromEntries(OPTIONAL_MOMENTS.map((k) => [k, z.string().trim().pipe(z.union([z.literal(''), quantityText('moment')])).optional()])),
+  // a load's own βdns (ACI 318-19 6.6.4.4.4; βd of AS 3600 and CSA A23.3): a plain ratio 0–1, empty for the member's
+  beta_dns: z
+    .string()
+    .trim()
+    .transform((t, ctx) => {
+      if (t === '') return undefined;
+      const v = parseDecimal(t);
+      if (v === undefined || !(v >= 0 && v <= 1)) {
+        ctx.addIssue({ code: 'custom', message: 'is not a ratio within 0–1', input: t });
+        return z.NEVER;
+      }
+      return v;
+    })
+    .optional(),
 }) as unknown as z.ZodType<Partial<Record<Column, string>>>;
 
 interface HeaderColumn {
@@ -215,9 +233,12 @@ function readLoads(textIn: string, units: UnitSystem, at: string, opts: LoadsCsv
     if (first !== undefined) {
       if (opts.duplicates !== 'number') throw new PmError(ERROR_CODES.conflict, `${at} line ${line} id`, `repeats the id of line ${first}`, { value: JSON.stringify(id) });
       // an export repeats a combination per station: each row is its own load, numbered #2, #3 …
-      const n = (repeats.get(key) ?? 1) + 1;
+      let n = repeats.get(key) ?? 1;
+      // the next number whose id the file does not already use
+      while (ids.has(`${groupValue}\u0000${id} #${++n}`));
       repeats.set(key, n);
       id = `${id} #${n}`;
+      ids.set(`${groupValue}\u0000${id}`, line);
     } else ids.set(key, line);
     // the file's sign of compression made ours (positive); `|| 0` keeps −0 out
     const load: LoadRow = { id, Pu: sign * value('Pu', 'force') || 0, Mu: value('Mu', 'moment') };
@@ -227,6 +248,8 @@ function readLoads(textIn: string, units: UnitSystem, at: string, opts: LoadsCsv
       if (cell !== undefined && cell !== '') load[name] = value(name, 'moment');
       else if (name === 'Muy') load.Muy = 0;
     }
+    const beta = (row as Record<string, unknown>).beta_dns;
+    if (typeof beta === 'number') load.betaDns = beta;
     loads.push({ group: groupValue, load, line });
   }
   return loads;

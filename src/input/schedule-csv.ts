@@ -110,6 +110,8 @@ export function parseScheduleCsv(textIn: string, at = 'schedule'): ScheduleRow[]
       throw new PmError(ERROR_CODES.invalidValue, `${at} line ${line}`, `has ${r.length - 1} cells and the header names ${index.size} columns`);
     }
     const row = parseOrThrow(RowSchema, { mark: cells.mark ?? '', ...cells }, (path) => `${at} line ${line}${path.length ? ` ${String(path[0])}` : ''}`, true);
+    // a required cell left empty would fall back to a flag default (two-faces, ACI 318-19): refused instead
+    for (const c of REQUIRED_SCHEDULE_COLUMNS) if (cells[c] === undefined) throw new PmError(ERROR_CODES.missing, `${at} line ${line} ${c}`, 'is empty');
     const first = marks.get(row.mark);
     if (first !== undefined) throw new PmError(ERROR_CODES.conflict, `${at} line ${line} mark`, `repeats the mark of line ${first}`, { value: JSON.stringify(row.mark) });
     marks.set(row.mark, line);

@@ -22,12 +22,12 @@ const file = (name: string, text: string): string => {
   return p;
 };
 
-// three marks: a rectangle with four faces, a circle with a ring, an unequal pair 3x5 with γ given
+// three marks: a slender rectangle with four faces (klu, βdns), a circle with a ring, an unequal pair 3x5 with γ given
 const SCHEDULE = [
-  'mark,code,units,fc,fy,b,h,diameter,arrangement,bars_per_face,bars,bar,cover,tie,transverse,gamma',
-  'G2-A,aci318-19,us,5,60,20,20,,four-faces,4,,#9,1.5,#4,tied,',
-  'G2-B,aci318-19,us,5,60,,,24,ring,,8,#8,1.5,#4,spiral,',
-  'G10-C,aci318-19,us,4ksi,60,16,24,,four-faces,3x5,,#8,,,tied,0.75',
+  'mark,code,units,fc,fy,b,h,diameter,arrangement,bars_per_face,bars,bar,cover,tie,transverse,gamma,klu,beta_dns',
+  'G2-A,aci318-19,us,5,60,20,20,,four-faces,4,,#9,1.5,#4,tied,,20ft,0.6',
+  'G2-B,aci318-19,us,5,60,,,24,ring,,8,#8,1.5,#4,spiral,,,',
+  'G10-C,aci318-19,us,4ksi,60,16,24,,four-faces,3x5,,#8,,,tied,0.75,,',
 ].join('\n');
 // an invented export: compression negative, kip and kip-ft, the combination split over two columns
 const EXPORT = [
@@ -56,7 +56,7 @@ function ownLoads(mark: string): string {
 }
 
 const FLAGS: Record<string, CheckOptions> = {
-  'G2-A': { code: 'aci318-19', units: 'us', fc: '5', fy: '60', b: '20', h: '20', arrangement: 'four-faces', barsPerFace: '4', bar: '#9', cover: '1.5', tie: '#4', transverse: 'tied' },
+  'G2-A': { code: 'aci318-19', units: 'us', fc: '5', fy: '60', b: '20', h: '20', arrangement: 'four-faces', barsPerFace: '4', bar: '#9', cover: '1.5', tie: '#4', transverse: 'tied', klu: '20ft', betaDns: '0.6' },
   'G2-B': { code: 'aci318-19', units: 'us', fc: '5', fy: '60', shape: 'circle', diameter: '24', arrangement: 'ring', bars: '8', bar: '#8', cover: '1.5', tie: '#4', transverse: 'spiral' },
   'G10-C': { code: 'aci318-19', units: 'us', fc: '4ksi', fy: '60', b: '16', h: '24', arrangement: 'four-faces', barsPerFace: '3,5', bar: '#8', gamma: '0.75', transverse: 'tied' },
 };
@@ -82,6 +82,8 @@ describe('schedule --json: each mark as a single check', async () => {
       expect(c.utilisation).toBe(g.measure);
       expect(c.status).toBe(g.status);
       expect(c.rhoProvided).toBe(single.checked.rho);
+      // the slender mark's klu and βdns reach the engine: its governing moment is magnified (ACI 318-19 6.6.4)
+      if (c.mark === 'G2-A') expect(Math.abs(g.Mu)).toBeGreaterThan(Math.abs(g.firstOrder.Mux));
       // ρg required: the uniaxial figure, or at least it where the exact biaxial one is larger (loads with Muy on a rectangle)
       if (c.mark === 'G10-C' || c.mark === 'G2-B') expect(c.rhoRequired).toBe(g.rhoRequired);
       else expect(c.rhoRequired).toBeGreaterThanOrEqual(g.rhoRequired);
@@ -104,6 +106,30 @@ describe('check --loads with --columns and --compression', () => {
     const b = JSON.parse(runCheck({ ...FLAGS['G2-A']!, loads: ownLoads('G2-A'), json: true }));
     expect(a.results).toEqual(b.results);
     process.exitCode = 0;
+  });
+});
+
+describe('a forgotten --compression negative', () => {
+  it('is named in a note when every axial load reads as tension', async () => {
+    // the export without its one uplift row: every P is negative (compression, as exported)
+    const allNegative = file('all-negative.csv', EXPORT.split('\n').filter((l) => !l.includes(',40,')).join('\n'));
+    const r = await runCli(['schedule', sched, '--loads', allNegative, '--columns', MAP, '--json']);
+    expect(JSON.parse(r.stdout).notes).toContain('--loads: every axial load is tension (negative Pu); if the file gives compression as negative, add --compression negative');
+    const stated = await runCli(['schedule', sched, '--loads', allNegative, '--columns', MAP, '--compression', 'positive', '--json']);
+    expect(JSON.parse(stated.stdout).notes).not.toContain('--loads: every axial load is tension (negative Pu); if the file gives compression as negative, add --compression negative');
+    const c = await runCli(['check', '--fc', '5', '--fy', '60', '--b', '20', '--h', '20', '--gamma', '0.75', '--loads', ownLoads('G2-B')]);
+    expect(c.stderr).toBe('');
+    const neg = file('neg.csv', 'id,Pu,Mu\nA,-100,50\nB,-200,40\n');
+    const n = await runCli(['check', '--fc', '5', '--fy', '60', '--b', '20', '--h', '20', '--gamma', '0.75', '--loads', neg]);
+    expect(n.stderr).toBe('pmchart: note: --loads: every axial load is tension (negative Pu); if the file gives compression as negative, add --compression negative\n');
+  });
+});
+
+describe('check: --columns and --compression need --loads', () => {
+  it('refuses them with --pu/--mu, naming the flag', async () => {
+    const r = await runCli(['check', '--fc', '5', '--fy', '60', '--b', '20', '--h', '20', '--gamma', '0.75', '--pu', '100', '--mu', '50', '--compression', 'negative']);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toBe('pmchart: --compression: applies to --loads; --pu is compression positive\n');
   });
 });
 
@@ -136,7 +162,7 @@ describe('errors (exit 2, one line)', () => {
   it('names an unknown schedule column and a repeated mark', async () => {
     const col = file('col.csv', SCHEDULE.replace('transverse,gamma', 'transverse,colour'));
     expect((await runCli(['schedule', col, '--loads', loads])).stderr).toMatch(/^pmchart: col\.csv line 1: has the unknown column "colour"/);
-    const twice = file('twice.csv', `${SCHEDULE}\nG2-A,aci318-19,us,5,60,20,20,,four-faces,4,,#9,1.5,#4,tied,\n`);
+    const twice = file('twice.csv', `${SCHEDULE}\nG2-A,aci318-19,us,5,60,20,20,,four-faces,4,,#9,1.5,#4,tied,,,\n`);
     expect((await runCli(['schedule', twice, '--loads', loads])).stderr).toBe('pmchart: twice.csv line 5 mark: "G2-A" repeats the mark of line 2\n');
   });
 });

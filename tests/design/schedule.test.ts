@@ -87,3 +87,34 @@ describe('compareMarks and summariseSchedule', () => {
     expect(summariseSchedule([{ status: 'ok', exitCode: 0 }, { status: 'unstable', exitCode: 1 }]).exitCode).toBe(1);
   });
 });
+
+describe('a load’s own βdns (issue 22: beta_dns per load, the schedule’s value the default)', () => {
+  // 16 × 16 in, 8 #8, klu = 20 ft: the magnifier of ACI 318-19 6.6.4.5 uses (EI)eff = 0.4·Ec·Ig/(1 + βdns) (6.6.4.4.4(a)),
+  // so a larger βdns lowers Pc and raises δ: the load's own βdns must reach the engine.
+  const slender = (beta: number) => ({ x: { effectiveLength: 240, betaDns: beta, eiOption: 'a' as const, transverseLoads: false } });
+  const load = { id: 'L', Pu: 300, Mu: 60 * 12 };
+  it('replaces the member’s βdns for that load', () => {
+    const own = checkColumn({ ...section, slenderness: slender(0.2), loads: [{ ...load, betaDns: 0.9 }] });
+    const member09 = checkColumn({ ...section, slenderness: slender(0.9), loads: [load] });
+    const member02 = checkColumn({ ...section, slenderness: slender(0.2), loads: [load] });
+    expect(own.results[0]!.Mu).toBe(member09.results[0]!.Mu);
+    expect(own.results[0]!.measureValue).toBe(member09.results[0]!.measureValue);
+    expect(member09.results[0]!.Mu).toBeGreaterThan(member02.results[0]!.Mu);
+  });
+});
+
+describe('readings: false', () => {
+  it('gives the same rows as the full check (the readings change no status, measure or ranking)', () => {
+    const loads = new Map<string, FactoredLoad[]>([
+      ['R1', [{ id: 'a', Pu: 300, Mu: 900, Muy: 400 }, { id: 'b', Pu: 150, Mu: -1200 }, { id: 'c', Pu: -50, Mu: 300, Muy: -200 }]],
+    ]);
+    const entry = [{ mark: 'R1', input: { ...section, slenderness: { x: { effectiveLength: 200, betaDns: 0.5, eiOption: 'a' as const, transverseLoads: false } } } }];
+    const full = checkSchedule(entry, loads).columns[0]!;
+    const bare = checkSchedule(entry, loads, { readings: false }).columns[0]!;
+    const { check: _a, ...f } = full;
+    const { check: _b, ...b } = bare;
+    expect(b).toEqual(f);
+    expect(full.check.results.some((r) => r.rhoFromChart !== null)).toBe(true);
+    expect(bare.check.results.every((r) => r.rhoFromChart === null)).toBe(true);
+  });
+});

@@ -87,3 +87,34 @@ describe('header matching', () => {
     expect(problem(() => parseLoadsCsv('id,Pu,Mu\nA,1,2\nA,3,4\n', 'us'))).toBe('--loads line 3 id: "A" repeats the id of line 2');
   });
 });
+
+describe('a schedule’s loads: bare numbers in each mark’s units', () => {
+  it('reads kip and kip-ft for a US mark and kN and kN·m for an SI mark in one file', async () => {
+    const { parseScheduleCsv } = await import('../../src/input/schedule-csv.js');
+    const { readScheduleLoads } = await import('../../src/flags/schedule-rows.js');
+    const rows = parseScheduleCsv(
+      ['mark,code,units,fc,fy,b,h,arrangement,bars_per_face,bar,cover,tie', 'U1,aci318-19,us,5,60,20,20,four-faces,4,#9,1.5,#4', 'S1,en1992-1-1,si,C30/37,B500B,400,400,four-faces,3,20,35,8'].join('\n'),
+    );
+    const loads = readScheduleLoads('mark,id,Pu,Mu\nU1,a,100,10\nS1,a,100,10\n', rows, {});
+    // US internal units kip and kip-in (10 kip-ft = 120 kip-in); SI internal units N and N·mm
+    expect(loads.get('U1')).toEqual([{ id: 'a', Pu: 100, Mu: 120 }]);
+    expect(loads.get('S1')).toEqual([{ id: 'a', Pu: 100_000, Mu: 10e6 }]);
+  });
+});
+
+describe('numbered repeats', () => {
+  it('skips a number the file already uses as an id', () => {
+    const loads = parseLoadsCsv('C,P,M\nA,1,1\nA,2,2\nA #2,3,3\nA,4,4\n', 'us', '--loads', { columns: parseColumnMap('id=C,Pu=P,Mu=M', LOAD_FIELDS), duplicates: 'number' });
+    expect(loads.map((l) => l.id)).toEqual(['A', 'A #2', 'A #2 #2', 'A #3']);
+  });
+});
+
+describe('beta_dns per load', () => {
+  it('reads a ratio 0–1 (empty: the member’s) and names a bad cell', () => {
+    expect(parseLoadsCsv('id,Pu,Mu,beta_dns\nA,1,2,0.5\nB,1,2,\n', 'us')).toEqual([
+      { id: 'A', Pu: 1, Mu: 24, betaDns: 0.5 },
+      { id: 'B', Pu: 1, Mu: 24 },
+    ]);
+    expect(problem(() => parseLoadsCsv('id,Pu,Mu,beta_dns\nA,1,2,1.5\n', 'us'))).toBe('--loads line 2 beta_dns: 1.5 is not a ratio within 0–1');
+  });
+});
