@@ -136,6 +136,8 @@ export function registerCheck(program: Command, run: (fn: () => Promise<void> | 
     .option('--pu <force>', 'factored axial load, compression positive (default unit kip or kN)')
     .option('--mu <moment>', 'factored moment (default unit kip-ft or kN-m)')
     .option('--loads <file>', 'CSV of load combinations with columns id,Pu,Mu (tension negative Pu)')
+    .option('--ignore-columns <names>', 'comma list of --loads columns to skip (any other column pmchart does not read is an error)')
+    .option('--thousands <dot|none>', 'in a ";" load file with decimal commas, a dot is a thousands separator (dot: 1.500 = 1500) or a decimal point (none)')
     .option('--rho <ratio>', 'given ρg to check (utilisation)')
     .option('--aggregate <length>', 'maximum aggregate size, for the clear-spacing rule')
     .option('--chart-gamma-step <step>', 'γ step of the emulated chart sheets', '0.05')

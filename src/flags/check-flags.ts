@@ -10,7 +10,9 @@ import type { FactoredLoad } from '../design/check.js';
 import { checkColumn, type ColumnCheck, type ColumnCheckInput } from '../design/column-check.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { MAX_DRAWN_REPORT_LOADS } from '../input/limits.js';
-import { parseLoadQuantity, parseLoadsCsv as readLoadsCsv } from '../input/loads-csv.js';
+import { parseLoadQuantity, parseLoadsCsv as readLoadsCsv, THOUSANDS, type LoadsCsvOptions, type Thousands } from '../input/loads-csv.js';
+import { CONTROL_CHARS } from '../input/fields.js';
+import { MAX_LIST, MAX_LOAD_ID_CHARS } from '../input/limits.js';
 import { CHART_AXIAL_STEP_RANGE, CHART_GAMMA_STEP_RANGE } from '../input/limits.js';
 import { barSet } from '../section/bar-tables.js';
 import { barCount } from '../section/arrangements.js';
@@ -24,6 +26,10 @@ export interface CheckOptions extends SectionFlags, EffectsFlags {
   pu?: string;
   mu?: string;
   loads?: string;
+  /** comma list of load-file columns to skip (any other unknown column is an error) */
+  ignoreColumns?: string;
+  /** how a dot reads in a `;` load file with decimal commas: dot (thousands) or none (decimal point) */
+  thousands?: string;
   rho?: string;
   aggregate?: string;
   chartGammaStep?: string;
@@ -53,8 +59,30 @@ export interface ResolvedCheck {
 }
 
 /** Load files are read by src/input/loads-csv.ts (csv-parse; header units, ";" files, duplicates refused). */
-export function parseLoadsCsv(text: string, units: UnitSystem, path = '--loads'): FactoredLoad[] {
-  return readLoadsCsv(text, units, path);
+export function parseLoadsCsv(text: string, units: UnitSystem, path = '--loads', options: LoadsCsvOptions = {}): FactoredLoad[] {
+  return readLoadsCsv(text, units, path, options);
+}
+
+/** `--ignore-columns` and `--thousands` → the load reader's options; both need --loads. */
+export function loadsCsvOptions(o: Pick<CheckOptions, 'loads' | 'ignoreColumns' | 'thousands'>): LoadsCsvOptions {
+  const options: LoadsCsvOptions = {};
+  for (const flag of ['ignoreColumns', 'thousands'] as const) {
+    if (o[flag] !== undefined && o.loads === undefined) throw new PmError(ERROR_CODES.conflict, flag === 'thousands' ? '--thousands' : '--ignore-columns', 'reads a load file; give it with --loads');
+  }
+  if (o.ignoreColumns !== undefined) {
+    const names = o.ignoreColumns.split(',').map((n) => n.trim());
+    if (names.length > MAX_LIST || names.some((n) => n === '' || n.length > MAX_LOAD_ID_CHARS || CONTROL_CHARS.test(n))) {
+      throw new PmError(ERROR_CODES.invalidValue, '--ignore-columns', `is not a comma list of column names (each 1–${MAX_LOAD_ID_CHARS} characters)`);
+    }
+    options.ignoreColumns = names;
+  }
+  if (o.thousands !== undefined) {
+    if (!(THOUSANDS as readonly string[]).includes(o.thousands)) {
+      throw new PmError(ERROR_CODES.invalidValue, '--thousands', 'is not one of the allowed values', { value: JSON.stringify(o.thousands), allowed: THOUSANDS.join(', ') });
+    }
+    options.thousands = o.thousands as Thousands;
+  }
+  return options;
 }
 
 export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
@@ -70,6 +98,7 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
   const { basis } = section;
 
   let loads: FactoredLoad[];
+  loadsCsvOptions(o);
   if (o.loads !== undefined) {
     if (o.pu !== undefined || o.mu !== undefined) throw new PmError(ERROR_CODES.conflict, '--loads', 'and --pu/--mu both give loads; use one of them');
     let text: string;
@@ -78,7 +107,7 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
     } catch (e) {
       throw new PmError(ERROR_CODES.io, '--loads', `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'})`, { value: o.loads });
     }
-    loads = parseLoadsCsv(text, u);
+    loads = parseLoadsCsv(text, u, '--loads', loadsCsvOptions(o));
     if (o.report !== undefined && isDrawn(o.report) && loads.length > MAX_DRAWN_REPORT_LOADS) {
       throw new PmError(ERROR_CODES.outOfRange, '--report', `draws at most ${MAX_DRAWN_REPORT_LOADS} loads and --loads has ${loads.length}; write a .txt or .json report for every load`);
     }

@@ -1,14 +1,18 @@
 /**
  * Load files: CSV with a header naming id, Pu and Mu (any order; Muy and the end moments M1, M2, M1y, M2y (ACI)
- * or M01, M02, M01y, M02y (EN 1992-1-1, CSA) optional;
- * other columns ignored), one row per load combination.
+ * or M01, M02, M01y, M02y (EN 1992-1-1, CSA) optional), one row per load combination.
+ * Every cell is accounted for: a column the reader does not know is an error unless the caller names it
+ * in `ignoreColumns` (`--ignore-columns`); a non-empty cell beyond the header's columns or under a blank
+ * header cell is an error (an unquoted comma in an id shifts a row); in a `;` file with decimal commas a
+ * dot is ambiguous (1.500) and an error unless `thousands` says how to read it.
  *
  *   text ──1 size, separator──▶ csv-parse records ──2 header──▶ columns and units ──3 rows (zod)──▶ loads
  *
  * - A header may carry a unit: `Pu kip`, `Mu [kN·m]`, `Mu (kip-ft)`; bare cells in that column are
  *   read in it and converted to the run's units, as flag suffixes are.
  * - `;` separates cells when the header has more `;` than `,` (spreadsheets in many locales); decimal
- *   commas are then read as points.
+ *   commas are then read as points, and a dot only as `thousands` says: 'dot' (1.234,5 = 1234.5, the dots
+ *   between groups of three digits) or 'none' (a dot is a decimal point too: 1.5 = 1.5).
  * - Duplicate columns and duplicate ids are refused with their line numbers; `#` starts a comment line.
  * Every problem is one PmError naming `<at> line N <column>`. Browser-safe: the live page passes
  * pasted text; the CLI passes the file's text.
@@ -62,11 +66,46 @@ export function detectSeparator(text: string): ',' | ';' {
   return ',';
 }
 
+/** How a `;` file's dots read: thousands separators ('dot') or decimal points ('none'). */
+export const THOUSANDS = ['dot', 'none'] as const;
+export type Thousands = (typeof THOUSANDS)[number];
+
+export interface LoadsCsvOptions {
+  /** header names (any letter case, unit left off) of columns to skip; any other unknown column is an error */
+  ignoreColumns?: readonly string[];
+  /** how a dot reads in a `;` file with decimal commas; absent, a dot there is an error */
+  thousands?: Thousands;
+}
+
+/** A cell of a `;` file (decimal commas) as a plain decimal, or an error naming the cell. */
+function decimalCommaCell(v: string, thousands: Thousands | undefined, where: string): string {
+  if (!v.includes('.')) return v.replace(',', '.');
+  if (thousands === 'none') {
+    if (v.includes(',')) throw new PmError(ERROR_CODES.invalidValue, where, 'has both a decimal comma and a decimal point (--thousands none)', { value: v });
+    return v;
+  }
+  if (thousands === 'dot') {
+    // the number part: sign, groups of three after the first, an optional decimal comma part
+    const m = /^(\s*[-+]?)(\d{1,3}(?:\.\d{3})+)(,\d*)?(\s*[^\d.,\s].*)?$/.exec(v);
+    if (!m) throw new PmError(ERROR_CODES.invalidValue, where, 'is not a number with dots between groups of three digits (--thousands dot)', { value: v });
+    return `${m[1]}${m[2]!.replaceAll('.', '')}${(m[3] ?? '').replace(',', '.')}${m[4] ?? ''}`;
+  }
+  throw new PmError(
+    ERROR_CODES.invalidValue,
+    where,
+    `has a dot in a file with decimal commas (a thousands separator?); say --thousands dot (${v.trim()} = ${v.trim().replaceAll('.', '')}) or --thousands none (${v.trim()} = ${Number(v.trim()) || v.trim()})`,
+    { value: v },
+  );
+}
+
 /** Parses a load file's text; `at` names it in errors (a flag such as --loads, or "pasted loads"). */
-export function parseLoadsCsv(textIn: string, units: UnitSystem, at = '--loads'): LoadRow[] {
+export function parseLoadsCsv(textIn: string, units: UnitSystem, at = '--loads', options: LoadsCsvOptions = {}): LoadRow[] {
   // 1. size and separator, then csv-parse (quotes, CRLF, BOM)
   if (textIn.length > MAX_LOADS_BYTES) throw new PmError(ERROR_CODES.invalidValue, at, `is larger than ${MAX_LOADS_BYTES} bytes`);
   const delimiter = detectSeparator(textIn.replace(/^\uFEFF/, ''));
+  if (options.thousands === 'dot' && delimiter !== ';') {
+    throw new PmError(ERROR_CODES.conflict, '--thousands', `dot applies to files separated by ";" with decimal commas; ${at} is separated by ","`);
+  }
   let lastLine = 0;
   let records: { record: string[]; info: { lines: number } }[];
   try {
@@ -101,16 +140,43 @@ export function parseLoadsCsv(textIn: string, units: UnitSystem, at = '--loads')
   const headLine = head.info.lines;
   const columns = new Map<Column, HeaderColumn>();
   const seen = new Map<string, number>();
+  const ignore = new Map((options.ignoreColumns ?? []).map((n) => [n.trim().toLowerCase(), n.trim()]));
+  const ignoredUsed = new Set<string>();
+  /** columns whose cells must be empty: blank header cells */
+  const blank: number[] = [];
+  /** the first unknown column, reported once id, Pu and Mu are known to be there (else the header is not one) */
+  let unknown: (() => never) | undefined;
+  for (const [key, name] of ignore) {
+    if (key === 'id' || key === 'pu' || key === 'mu') throw new PmError(ERROR_CODES.conflict, '--ignore-columns', `"${name}" names a column every load needs (id, Pu, Mu)`);
+  }
   head.record.forEach((cell, index) => {
     const { name, unit } = headerCell(cell);
     const known = (Object.keys(COLUMNS) as Column[]).find((c) => c.toLowerCase() === name.toLowerCase());
     const key = known ?? cell.trim().toLowerCase();
     const before = seen.get(key);
-    if (before !== undefined) {
+    if (before !== undefined && key !== '') {
       throw new PmError(ERROR_CODES.conflict, `${at} line ${headLine}`, `names the column "${known ?? cell.trim()}" twice (columns ${before + 1} and ${index + 1})`);
     }
     seen.set(key, index);
-    if (!known) return;
+    const skip = [name.toLowerCase(), cell.trim().toLowerCase()].find((k) => ignore.has(k));
+    if (skip !== undefined) {
+      ignoredUsed.add(skip);
+      return;
+    }
+    if (cell.trim() === '') {
+      blank.push(index);
+      return;
+    }
+    if (!known) {
+      unknown ??= () => {
+        throw new PmError(
+        ERROR_CODES.invalidValue,
+        `${at} line ${headLine} column ${index + 1}`,
+        `${JSON.stringify(cell.trim().slice(0, 40))} is not a column pmchart reads (${Object.keys(COLUMNS).join(', ')}); rename it${at.startsWith('--') ? ', or name it in --ignore-columns to skip it' : ''}`,
+        );
+      };
+      return;
+    }
     const kind = COLUMNS[known];
     const u = unit.toLowerCase().replace('·', '-').replace('²', '2');
     if (u !== '' && (kind === null || !unitSuffixes(kind).includes(u))) {
@@ -121,9 +187,13 @@ export function parseLoadsCsv(textIn: string, units: UnitSystem, at = '--loads')
     }
     columns.set(known, { name: known, index, unit: u });
   });
+  for (const [key, name] of ignore) {
+    if (!ignoredUsed.has(key)) throw new PmError(ERROR_CODES.invalidValue, '--ignore-columns', `"${name}" is not a column of the header of ${at}`);
+  }
   if (!columns.has('id') || !columns.has('Pu') || !columns.has('Mu')) {
     throw new PmError(ERROR_CODES.invalidValue, `${at} header`, 'must name the columns id, Pu and Mu', { value: head.record.join(delimiter) });
   }
+  if (unknown) unknown();
   if (records.length === 1) throw new PmError(ERROR_CODES.invalidValue, at, 'has a header but no load rows');
 
   // 3. rows: form by the zod row schema, then units, finiteness and the magnitude cap
@@ -132,10 +202,30 @@ export function parseLoadsCsv(textIn: string, units: UnitSystem, at = '--loads')
   for (let r = 1; r < records.length; r++) {
     const { record, info } = records[r]!;
     const line = info.lines;
+    // every cell accounted for: nothing beyond the header's columns, nothing under a blank header cell
+    for (let k = head.record.length; k < record.length; k++) {
+      if (record[k]!.trim() !== '') {
+        throw new PmError(ERROR_CODES.invalidValue, `${at} line ${line} column ${k + 1}`, `is a cell beyond the ${head.record.length} columns of the header (an unquoted comma in an id? quote the id)`, {
+          value: JSON.stringify(record[k]!.slice(0, 24)).slice(1, -1),
+        });
+      }
+    }
+    for (const k of blank) {
+      if ((record[k] ?? '').trim() !== '') {
+        throw new PmError(ERROR_CODES.invalidValue, `${at} line ${line} column ${k + 1}`, 'is a cell under a blank header cell', { value: JSON.stringify(record[k]!.slice(0, 24)).slice(1, -1) });
+      }
+    }
     const cells: Partial<Record<Column, string>> = {};
     for (const c of columns.values()) {
       const v = record[c.index];
-      cells[c.name] = v === undefined ? (c.name === 'id' || c.name === 'Pu' || c.name === 'Mu' ? '' : undefined) : delimiter === ';' && c.name !== 'id' ? v.replace(',', '.') : v;
+      cells[c.name] =
+        v === undefined
+          ? c.name === 'id' || c.name === 'Pu' || c.name === 'Mu'
+            ? ''
+            : undefined
+          : delimiter === ';' && c.name !== 'id'
+            ? decimalCommaCell(v, options.thousands, `${at} line ${line} ${c.name}`)
+            : v;
     }
     const row = parseOrThrow(RowSchema, cells, (path) => `${at} line ${line}${path.length ? ` ${String(path[0])}` : ''}`, true);
     const value = (name: Column, kind: QuantityKind): number => {
