@@ -10,7 +10,7 @@ import { extname } from 'node:path';
 import type { Command } from 'commander';
 import { checkColumn, describeCheck, prepareColumnCheck, rankColumnCheck, type ColumnCheck } from '../design/column-check.js';
 import { ERROR_CODES, PmError } from '../errors.js';
-import { ioError, writeFileAtomic, writePieces, writePiecesAtomic } from '../io/files.js';
+import { checkFileTarget, ioError, writeFileAtomic, writePieces, writePiecesAtomic } from '../io/files.js';
 import { CAUTION } from '../report/caution.js';
 import { checkAssumptions, checkJson, checkJsonPieces, checkReportPieces, checkReportText, checkText, checkTextPieces, textSizer } from '../report/check-view.js';
 import { generatorLabel } from '../version.js';
@@ -86,6 +86,8 @@ async function runResolvedAsync(o: CheckOptions, rc: ResolvedCheck): Promise<str
  */
 export async function writeCheck(o: CheckOptions, out: NodeJS.WritableStream = process.stdout, streamAbove = STREAM_ABOVE_LOADS): Promise<void> {
   const rc = resolveCheckOptions(o);
+  const report = rc.report;
+  if (report !== undefined) reportError(report, () => checkFileTarget(report));
   if (rc.input.loads.length <= streamAbove || (rc.report !== undefined && isDrawn(rc.report))) {
     await writePieces(out, [await runResolvedAsync(o, rc)]);
     return;

@@ -34,6 +34,8 @@ export async function runPage(o: PageOptions): Promise<string> {
   const grid = o.grid === undefined ? 0.05 : Number(o.grid);
   if (grid !== 0.05 && grid !== 0.1) throw new PmError(ERROR_CODES.invalidValue, '--grid', 'is not one of the allowed values', { value: o.grid, allowed: '0.05, 0.1' });
   const date = reportDate(o.date);
+  const { checkFileTarget } = await import('../io/files.js');
+  checkFileTarget(out, '--out');
   const fields: Record<string, string | boolean> = {};
   for (const [k, v] of Object.entries(o)) if (!NOT_FIELDS.has(k) && v !== undefined) fields[k] = v as string | boolean;
   // presets are checked as `pmchart table`/`sheet` check them, when they describe a whole section
@@ -61,7 +63,7 @@ export async function runPage(o: PageOptions): Promise<string> {
   const { bundlePage, pageHtml } = await import('../page/build.js');
   const { writeFileAtomic } = await import('../sheet/files.js');
   const html = pageHtml(await bundlePage(), { fields, grid, date }, CAUTION);
-  writeFileAtomic(out, html);
+  writeFileAtomic(out, html, '--out');
   return out;
 }
 
