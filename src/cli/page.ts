@@ -3,11 +3,12 @@
  * that works from file:// with no network. The flags preset the page's inputs (the names of
  * `pmchart sheet` and `pmchart check`) and are checked here as those commands check them.
  */
-import { readFileSync } from 'node:fs';
+import { readInputText } from '../io/read.js';
 import { extname, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { reportDate } from './format.js';
+import { MAX_LOADS_BYTES } from '../input/limits.js';
 import { parseLoadsCsv } from './check.js';
 import { designCode } from '../codes/registry.js';
 import { isUnitSystem } from '../units/index.js';
@@ -50,12 +51,7 @@ export async function runPage(o: PageOptions): Promise<string> {
     delete fields.omega;
   }
   if (o.loads !== undefined) {
-    let text: string;
-    try {
-      text = readFileSync(o.loads, 'utf8');
-    } catch (e) {
-      throw new PmError(ERROR_CODES.io, '--loads', `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'})`, { value: o.loads });
-    }
+    const text = readInputText(o.loads, MAX_LOADS_BYTES, '--loads');
     const units = o.units ?? designCode(o.code ?? 'aci318-19').unitSystems[0]!;
     if (isUnitSystem(units)) parseLoadsCsv(text, units);
     fields.loads = text;

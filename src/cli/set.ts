@@ -3,7 +3,7 @@
  * book.pdf, sheets/*.svg|png and tables/*.csv|json. Render modules are imported lazily so other
  * commands never load vega, canvas or pdf-lib.
  */
-import { readFileSync, statSync } from 'node:fs';
+import { readInputText } from '../io/read.js';
 import type { Command } from 'commander';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { MAX_CONFIG_BYTES } from '../input/limits.js';
@@ -24,14 +24,7 @@ export interface SetResult {
 }
 
 export async function runSet(file: string, o: SetOptions = {}, stderr: NodeJS.WriteStream = process.stderr): Promise<SetResult> {
-  let text: string;
-  try {
-    if (statSync(file).size > MAX_CONFIG_BYTES) throw new PmError(ERROR_CODES.invalidValue, file, `is larger than ${MAX_CONFIG_BYTES} bytes`);
-    text = readFileSync(file, 'utf8');
-  } catch (e) {
-    if (e instanceof PmError) throw e;
-    throw new PmError(ERROR_CODES.io, file, `cannot be read (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`);
-  }
+  const text = readInputText(file, MAX_CONFIG_BYTES, file);
   const { readChartSetReport } = await import('../config/read.js');
   const { set, warnings } = readChartSetReport(text, { source: file, ...(process.env.SOURCE_DATE_EPOCH ? { sourceDateEpoch: process.env.SOURCE_DATE_EPOCH } : {}) });
   for (const w of warnings) stderr.write(`pmchart: warning: ${w}\n`);

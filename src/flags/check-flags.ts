@@ -3,7 +3,7 @@
  * reinforcement, bar selection and effects. `computeCheck` then calls the engine; the command and the
  * page both go through here, so they read input alike.
  */
-import { readFileSync } from 'node:fs';
+import { readInputText } from '../io/read.js';
 import { extname } from 'node:path';
 import type { Detailing } from '../design/bar-selection.js';
 import type { FactoredLoad } from '../design/check.js';
@@ -12,7 +12,7 @@ import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { MAX_DRAWN_REPORT_LOADS } from '../input/limits.js';
 import { parseLoadQuantity, parseLoadsCsv as readLoadsCsv, THOUSANDS, type LoadsCsvOptions, type Thousands } from '../input/loads-csv.js';
 import { CONTROL_CHARS } from '../input/fields.js';
-import { MAX_LIST, MAX_LOAD_ID_CHARS } from '../input/limits.js';
+import { MAX_LIST, MAX_LOAD_ID_CHARS, MAX_LOADS_BYTES } from '../input/limits.js';
 import { CHART_AXIAL_STEP_RANGE, CHART_GAMMA_STEP_RANGE } from '../input/limits.js';
 import { barSet } from '../section/bar-tables.js';
 import { barCount } from '../section/arrangements.js';
@@ -101,12 +101,7 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
   loadsCsvOptions(o);
   if (o.loads !== undefined) {
     if (o.pu !== undefined || o.mu !== undefined) throw new PmError(ERROR_CODES.conflict, '--loads', 'and --pu/--mu both give loads; use one of them');
-    let text: string;
-    try {
-      text = readFileSync(o.loads, 'utf8');
-    } catch (e) {
-      throw new PmError(ERROR_CODES.io, '--loads', `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'})`, { value: o.loads });
-    }
+    const text = readInputText(o.loads, MAX_LOADS_BYTES, '--loads');
     loads = parseLoadsCsv(text, u, '--loads', loadsCsvOptions(o));
     if (o.report !== undefined && isDrawn(o.report) && loads.length > MAX_DRAWN_REPORT_LOADS) {
       throw new PmError(ERROR_CODES.outOfRange, '--report', `draws at most ${MAX_DRAWN_REPORT_LOADS} loads and --loads has ${loads.length}; write a .txt or .json report for every load`);
