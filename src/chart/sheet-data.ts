@@ -533,9 +533,17 @@ export const estWidth = (s: string, fontSize: number) => s.length * AVG_CHAR_EM 
 /** Cuts text to width `w` with an ellipsis, by `measure` (default the estimate). */
 export function truncate(s: string, w: number, fs: number, measure: (s: string, fs: number) => number = estWidth): string {
   if (measure(s, fs) <= w) return s;
-  let n = s.length;
-  while (n > 1 && measure(`${s.slice(0, n).trimEnd()}…`, fs) > w) n--;
-  return `${s.slice(0, n).trimEnd()}…`;
+  // the longest prefix that fits with its ellipsis, by bisection (width grows with the prefix): a few dozen
+  // measurements for any length, where one per character took 42 s for a 20,000-character title
+  const cut = (n: number) => `${s.slice(0, n).trimEnd()}…`;
+  let lo = 1;
+  let hi = s.length;
+  while (lo < hi) {
+    const mid = Math.ceil((lo + hi) / 2);
+    if (measure(cut(mid), fs) <= w) lo = mid;
+    else hi = mid - 1;
+  }
+  return cut(lo);
 }
 
 /** Wraps text into lines no wider than `w` by `measure` (default the estimate); a word longer than a line stands alone. */

@@ -8,6 +8,7 @@ import { extname } from 'node:path';
 import type { Command } from 'commander';
 import { squashPoint } from '../analysis/biaxial.js';
 import { checkFileTarget, writeFileAtomic } from '../io/files.js';
+import { checkTitleFlags } from '../input/flags.js';
 import { contourText } from '../report/contour-view.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { DISPLAY_UNITS, parseQuantity, toDisplay } from '../units/index.js';
@@ -84,6 +85,7 @@ export async function runContourPlot(o: ContourOptions): Promise<string> {
   const kind = extname(out).toLowerCase();
   if (!isPlot(out)) throw new PmError(ERROR_CODES.invalidValue, '--out', 'must end in .svg or .pdf for a plot', { value: o.out, allowed: PLOT_FORMATS.join(', ') });
   const date = reportDate(o.date);
+  checkTitleFlags(o);
   checkFileTarget(out, '--out');
   const { section, Pu, bars, sec } = resolveContour(o);
   const u = section.units;

@@ -9,6 +9,7 @@ import type { Command } from 'commander';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { reportDate } from './format.js';
 import { MAX_LOADS_BYTES } from '../input/limits.js';
+import { checkTitleFlags } from '../input/flags.js';
 import { parseLoadsCsv } from './check.js';
 import { designCode } from '../codes/registry.js';
 import { isUnitSystem } from '../units/index.js';
@@ -35,6 +36,7 @@ export async function runPage(o: PageOptions): Promise<string> {
   const grid = o.grid === undefined ? 0.05 : Number(o.grid);
   if (grid !== 0.05 && grid !== 0.1) throw new PmError(ERROR_CODES.invalidValue, '--grid', 'is not one of the allowed values', { value: o.grid, allowed: '0.05, 0.1' });
   const date = reportDate(o.date);
+  checkTitleFlags(o);
   const { checkFileTarget } = await import('../io/files.js');
   checkFileTarget(out, '--out');
   const fields: Record<string, string | boolean> = {};

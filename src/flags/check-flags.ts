@@ -12,6 +12,7 @@ import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { MAX_DRAWN_REPORT_LOADS } from '../input/limits.js';
 import { parseLoadQuantity, parseLoadsCsv as readLoadsCsv, THOUSANDS, type LoadsCsvOptions, type Thousands } from '../input/loads-csv.js';
 import { CONTROL_CHARS } from '../input/fields.js';
+import { checkTitleFlags } from '../input/flags.js';
 import { MAX_LIST, MAX_LOAD_ID_CHARS, MAX_LOADS_BYTES } from '../input/limits.js';
 import { CHART_AXIAL_STEP_RANGE, CHART_GAMMA_STEP_RANGE } from '../input/limits.js';
 import { barSet } from '../section/bar-tables.js';
@@ -93,6 +94,7 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
     }
   }
   if (o.date !== undefined) reportDate(o.date);
+  checkTitleFlags(o);
   const section = resolveSectionFlags(o, true);
   const u = section.units;
   const { basis } = section;
