@@ -4,6 +4,7 @@
  * CSV columns (stable interface): na_angle_deg,na_depth,eps_t,phi,P,Mx,My — forces and moments in the
  * system's display units (kip, kip-ft / kN, kN·m), named in the JSON header.
  */
+import { parseDecimal } from '../input/limits.js';
 import { extname } from 'node:path';
 import type { Command } from 'commander';
 import { squashPoint } from '../analysis/biaxial.js';
@@ -41,7 +42,7 @@ function resolveContour(o: ContourOptions) {
   const section = resolveSectionFlags(o, true);
   if (o.pu === undefined) throw new PmError(ERROR_CODES.missing, '--pu', `is required (the design axial load, default unit ${DISPLAY_UNITS[section.units].force}, compression positive)`);
   const Pu = parseQuantity(o.pu, 'force', section.units, '--pu');
-  const count = o.points === undefined ? 72 : Number(o.points);
+  const count = o.points === undefined ? 72 : (parseDecimal(o.points) ?? NaN);
   if (!Number.isInteger(count)) throw new PmError(ERROR_CODES.invalidValue, '--points', 'is not a whole number', { value: o.points, allowed: '8–3600' });
   requireInRange('--points', count, 8, 3600);
   const bars = actualBars(section, o.rho);

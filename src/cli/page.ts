@@ -8,7 +8,7 @@ import { extname, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { reportDate } from './format.js';
-import { MAX_LOADS_BYTES } from '../input/limits.js';
+import { MAX_LOADS_BYTES, parseDecimal } from '../input/limits.js';
 import { checkTitleFlags } from '../input/flags.js';
 import { parseLoadsCsv } from './check.js';
 import { designCode } from '../codes/registry.js';
@@ -33,7 +33,7 @@ const NOT_FIELDS = new Set(['out', 'grid', 'date', 'loads', 'paper', 'portrait',
 export async function runPage(o: PageOptions): Promise<string> {
   const out = resolve(o.out ?? 'column-charts.html');
   if (extname(out).toLowerCase() !== '.html') throw new PmError(ERROR_CODES.invalidValue, '--out', 'must end in .html', { value: o.out });
-  const grid = o.grid === undefined ? 0.05 : Number(o.grid);
+  const grid = o.grid === undefined ? 0.05 : (parseDecimal(o.grid) ?? NaN);
   if (grid !== 0.05 && grid !== 0.1) throw new PmError(ERROR_CODES.invalidValue, '--grid', 'is not one of the allowed values', { value: o.grid, allowed: '0.05, 0.1' });
   const date = reportDate(o.date);
   checkTitleFlags(o);

@@ -31,7 +31,8 @@ export async function runSet(file: string, o: SetOptions = {}, stderr: NodeJS.Wr
 
   let jobs: number | undefined;
   if (o.jobs !== undefined) {
-    jobs = Number(o.jobs);
+    // decimal digits only: Number("0x2") is 2, Number("") is 0
+    jobs = /^\s*\d{1,3}\s*$/.test(o.jobs) ? Number(o.jobs) : NaN;
     if (!Number.isInteger(jobs) || jobs < 1 || jobs > 64) throw new PmError(ERROR_CODES.outOfRange, '--jobs', 'is outside 1–64', { value: o.jobs, allowed: '1–64' });
   }
   const progress = o.progress === false ? undefined : await makeProgress(stderr, set.sheets.length, set.name);

@@ -19,7 +19,7 @@ export async function runSheet(o: SheetOptions): Promise<string> {
   const { set, capContext } = await sheetSetFromFlags(o);
   const { renderSheet } = await import('../sheet/render-sheet.js');
   const { writeFileAtomic } = await import('../sheet/files.js');
-  writeFileAtomic(out, await renderSheet(set, 0, kind.slice(1) as 'svg' | 'png' | 'pdf', { capContext }), '--out');
+  writeFileAtomic(out, await renderSheet(set, 1, kind.slice(1) as 'svg' | 'png' | 'pdf', { capContext }), '--out');
   return out;
 }
 

@@ -9,7 +9,7 @@ import type { Detailing } from '../design/bar-selection.js';
 import type { FactoredLoad } from '../design/check.js';
 import { checkColumn, type ColumnCheck, type ColumnCheckInput } from '../design/column-check.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
-import { MAX_DRAWN_REPORT_LOADS } from '../input/limits.js';
+import { MAX_DRAWN_REPORT_LOADS, parseDecimal } from '../input/limits.js';
 import { parseLoadQuantity, parseLoadsCsv as readLoadsCsv, THOUSANDS, type LoadsCsvOptions, type Thousands } from '../input/loads-csv.js';
 import { CONTROL_CHARS } from '../input/fields.js';
 import { checkTitleFlags } from '../input/flags.js';
@@ -125,16 +125,16 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
     loads,
   };
   if (o.chartGammaStep !== undefined) {
-    const step = Number(o.chartGammaStep);
+    const step = parseDecimal(o.chartGammaStep) ?? NaN;
     input.chartGammaStep = requireInRange('--chart-gamma-step', Number.isFinite(step) ? step : NaN, ...CHART_GAMMA_STEP_RANGE);
   }
   if (o.chartAxialStep !== undefined) {
-    const step = Number(o.chartAxialStep);
+    const step = parseDecimal(o.chartAxialStep) ?? NaN;
     input.chartAxialStep = requireInRange('--chart-axial-step', Number.isFinite(step) ? step : NaN, ...CHART_AXIAL_STEP_RANGE);
   }
   if (o.rho !== undefined) {
     const lim = basis.rhoLimits;
-    const rho = Number(o.rho);
+    const rho = parseDecimal(o.rho) ?? NaN;
     input.rho = requireInRange('--rho', Number.isFinite(rho) ? rho : NaN, lim.min, lim.max);
   } else if (section.bar && (o.barsPerFace !== undefined || o.bars !== undefined) && section.arrangement.kind !== 'custom') {
     const count = barCount(section.arrangement);
@@ -150,7 +150,7 @@ export function resolveCheckOptions(o: CheckOptions): ResolvedCheck {
   if (o.aggregate !== undefined) {
     aggregate = requireInRange('--aggregate', parseQuantity(o.aggregate, 'length', u, '--aggregate'), u === 'us' ? 0.25 : 5, u === 'us' ? 3 : 75, DISPLAY_UNITS[u].length);
   }
-  const proposals = o.proposals === undefined ? 5 : Number(o.proposals);
+  const proposals = o.proposals === undefined ? 5 : (parseDecimal(o.proposals) ?? NaN);
   if (!Number.isInteger(proposals)) throw new PmError(ERROR_CODES.invalidValue, '--proposals', 'is not a whole number', { value: o.proposals, allowed: '0–20' });
   requireInRange('--proposals', proposals, 0, 20);
   if (proposals > 0) {

@@ -46,6 +46,9 @@ export async function bundlePage(): Promise<string> {
   const stubs = /\/(render\/renderer|render\/environment|sheet\/book|sheet\/files|io\/files|sheet\/check-report-file|sheet\/pipeline|cli\/contour-plot)\.(js|ts)$/;
   const result = await esbuild.build({
     entryPoints: [sibling('app')],
+    // esbuild resolves alias targets (csv-parse's browser build) in the working folder: the package's own,
+    // not the user's (from any other folder the page failed with "Could not resolve csv-parse/browser/esm/sync")
+    absWorkingDir: packageRoot(),
     bundle: true,
     write: false,
     format: 'iife',
