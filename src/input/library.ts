@@ -80,7 +80,7 @@ const circleBars = (r: { shape: { kind: string }; arrangement: { kind: string } 
 };
 
 const LoadSchema = z.looseObject({
-  id: text(MAX_LOAD_ID_CHARS).min(1, { message: 'is empty' }),
+  id: text(MAX_LOAD_ID_CHARS).refine((t) => t.trim() !== '', { message: 'is empty' }),
   Pu: load,
   Mu: load,
   Muy: load.optional(),
