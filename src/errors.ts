@@ -50,12 +50,19 @@ export class PmError extends Error {
 /** A core field key (`alphaCc`, `klu`, `fc`): front ends map it to their own flag or path. */
 export const isFieldKey = (path: string): boolean => /^[a-z][A-Za-z0-9]*$/.test(path);
 
+/** Characters of a value echoed in an error line; longer values are cut with "…" (a 1 MB cell is not echoed). */
+export const MAX_SHOWN_CHARS = 80;
+
+/** Control characters as visible \uXXXX escapes: an error line never carries a terminal escape or a NUL. */
+export const visibleControls = (t: string): string => t.replace(/[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
+
 /** One line: "<path>: <value> <detail> (allowed: …)"; `detail` may already name the range. */
 export function formatError(path: string, detail: string, facts: ErrorFacts): string {
-  const shown = facts.value === undefined ? '' : `${String(facts.value)} `;
+  const value = facts.value === undefined ? '' : String(facts.value);
+  const shown = facts.value === undefined ? '' : `${value.length > MAX_SHOWN_CHARS ? `${value.slice(0, MAX_SHOWN_CHARS)}…` : value} `;
   const allowed = facts.allowed === undefined || detail.includes(facts.allowed) ? '' : ` (allowed: ${facts.allowed})`;
-  const where = path ? `${path}: ` : '';
-  return `${where}${shown}${detail}${allowed}`.replace(/\s+/g, ' ').trim();
+  const where = path ? `${path.length > 4 * MAX_SHOWN_CHARS ? `${path.slice(0, 4 * MAX_SHOWN_CHARS)}…` : path}: ` : '';
+  return visibleControls(`${where}${shown}${detail}${allowed}`.replace(/\s+/g, ' ').trim());
 }
 
 /** Throws an out-of-range error unless lo ≤ value ≤ hi. */

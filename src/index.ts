@@ -19,9 +19,6 @@ export * from './codes/index.js';
 export * from './section/index.js';
 export * from './analysis/index.js';
 export {
-  checkColumn,
-  checkColumnLoads,
-  prepareColumnCheck,
   rankColumnCheck,
   describeCheck,
   layoutVerifier,
@@ -50,6 +47,11 @@ export {
   type ScheduleSummary,
   type ScheduleOptions,
 } from './design/schedule.js';
+import * as core from './design/column-check.js';
+import type { ColumnCheck, ColumnCheckInput } from './design/column-check.js';
+import * as analysis from './analysis/index.js';
+import type { BiaxialFamilyRequest, CurveFamily, FamilyRequest } from './analysis/index.js';
+import { BiaxialRequestSchema, checkGivenRho, checkLibraryInput, CheckInputSchema, FamilyRequestSchema, MakeSetOptionsSchema } from './input/library.js';
 export { BiaxialCharts, DEFAULT_CHART_AXIAL_STEP, type BiaxialChartReading, type BiaxialLevelReading } from './design/biaxial-chart-reading.js';
 export type { SlendernessRequest, AxisMember } from './design/column-effects.js';
 export type { BarProposal, Detailing } from './design/bar-selection.js';
@@ -59,8 +61,45 @@ export { readChartSet, readChartSetReport } from './config/read.js';
 export type { ResolvedChartSet } from './config/types.js';
 export { GENERATOR } from './version.js';
 
+/**
+ * The entry points that take a caller's data check it first with the zod schemas and limits the CLI uses
+ * (src/input/library.ts): a PmError naming the field path, never a result for NaN, a negative size or a
+ * count that would hang; null gives a PmError, not a TypeError.
+ */
+export function checkColumn(input: ColumnCheckInput): ColumnCheck {
+  checkInput(input);
+  return core.checkColumn(input);
+}
+/** The per-load results one at a time (streaming), after the same input check as `checkColumn`. */
+export function checkColumnLoads(...args: Parameters<typeof core.checkColumnLoads>): ReturnType<typeof core.checkColumnLoads> {
+  // a context from prepareColumnCheck was checked when it was made
+  if (args[0] === null || typeof args[0] !== 'object' || !('variants' in args[0])) checkInput(args[0] as ColumnCheckInput);
+  return core.checkColumnLoads(...args);
+}
+/** The check's shared context (for `rankColumnCheck`), after the same input check as `checkColumn`. */
+export function prepareColumnCheck(...args: Parameters<typeof core.prepareColumnCheck>): ReturnType<typeof core.prepareColumnCheck> {
+  checkInput(args[0]);
+  return core.prepareColumnCheck(...args);
+}
+function checkInput(input: ColumnCheckInput): void {
+  checkLibraryInput(CheckInputSchema, input, 'input');
+  // a null input was refused above; the basis passed the schema
+  checkGivenRho(input.rho, input.basis.rhoLimits);
+}
+/** A family of normalised ρg curves (analysis/family.ts), after the library's input check. */
+export function computeFamily(request: FamilyRequest): CurveFamily {
+  checkLibraryInput(FamilyRequestSchema, request, 'request');
+  return analysis.computeFamily(request);
+}
+/** Normalised Mx–My contours per axial level and ρg (analysis/biaxial-family.ts), after the library's input check. */
+export function computeBiaxialFamily(request: BiaxialFamilyRequest): ReturnType<typeof analysis.computeBiaxialFamily> {
+  checkLibraryInput(BiaxialRequestSchema, request, 'request');
+  return analysis.computeBiaxialFamily(request);
+}
+
 /** Builds a chart set on disk (sheets, tables, book); loads the renderer on first use. */
 export async function makeChartSet(...args: Parameters<typeof import('./sheet/pipeline.js').makeChartSet>): ReturnType<typeof import('./sheet/pipeline.js').makeChartSet> {
+  checkLibraryInput(MakeSetOptionsSchema, args[1], 'options');
   const m = await import('./sheet/pipeline.js');
   return m.makeChartSet(...args);
 }

@@ -23,7 +23,7 @@ import { grossArea } from '../section/geometry.js';
 import type { Bar, Shape } from '../section/types.js';
 import { GAUSS_10 } from './gauss.js';
 import { concreteResultant, strainAt } from './section-forces.js';
-import { findRoot } from './solve.js';
+import { findRootOrNaN } from './solve.js';
 import type { StrainProfile } from '../codes/types.js';
 
 export type ModelKind = 'nominal' | 'design';
@@ -231,7 +231,7 @@ function depthForDirection(sec: BiaxialSection, theta: number, omega: number, ki
     const r = biaxialResultant(sec, theta, Math.exp(logC) * depth, kind);
     return Math.atan2(r.P, Math.hypot(r.Mx, r.My)) - omega;
   };
-  const x = findRoot(g, Math.log(C_MIN), Math.log(C_MAX), 1e-12, 200);
+  const x = findRootOrNaN(g, Math.log(C_MIN), Math.log(C_MAX), 1e-12, 200);
   return Number.isNaN(x) ? (g(Math.log(C_MAX)) < 0 ? C_MAX * depth : C_MIN * depth) : Math.exp(x) * depth;
 }
 
@@ -322,7 +322,7 @@ function solveAngle(resid: (theta: number) => { r: number }, psi: number): numbe
     for (const i of [mid - d - 1, mid + d]) {
       if (r(i) === 0) return thetaAt(i);
       if (brackets(i)) {
-        const t = findRoot((x) => resid(x).r, thetaAt(i), thetaAt(i + 1), 1e-11, 100);
+        const t = findRootOrNaN((x) => resid(x).r, thetaAt(i), thetaAt(i + 1), 1e-11, 100);
         return Number.isNaN(t) ? thetaAt(i) : t;
       }
     }
@@ -340,7 +340,7 @@ function solveAngle(resid: (theta: number) => { r: number }, psi: number): numbe
 export function depthForAxial(sec: BiaxialSection, theta: number, P: number, kind: ModelKind = 'design'): number {
   const depth = 2 * extremeCoordinate(sec.shape, theta);
   const g = (logC: number) => surfacePoint(sec, theta, Math.exp(logC) * depth, kind).P - P;
-  const x = findRoot(g, Math.log(C_MIN), Math.log(C_MAX), 1e-12, 200);
+  const x = findRootOrNaN(g, Math.log(C_MIN), Math.log(C_MAX), 1e-12, 200);
   return Number.isNaN(x) ? NaN : Math.exp(x) * depth;
 }
 

@@ -8,7 +8,7 @@ import { layoutBars, mirroredBars, symmetricAboutBendingAxis } from '../section/
 import { sectionDepth } from '../section/geometry.js';
 import type { Arrangement, Bar, Shape } from '../section/types.js';
 import { designAt, nominalAt, prepareSection, R, RESPONSE_SIZE, type PreparedSection } from './prepared-section.js';
-import { findRoot } from './solve.js';
+import { findRootOrNaN } from './solve.js';
 import { tensionStrain } from './section-forces.js';
 
 /** Ends of the sweep: they stand for the limits c → 0 (pure tension) and c → ∞ (pure compression). */
@@ -99,7 +99,7 @@ export function baseGrid(n: number): number[] {
 /** c/h at which the extreme tension bar reaches strain εt (monotone in c; solved numerically for any basis). */
 export function depthForTensionStrain(section: PreparedSection, epsT: number): number {
   const f = (logC: number) => tensionStrain(section.basis.profile(Math.exp(logC), 1, section.dt), section.dt) - epsT;
-  const x = findRoot(f, Math.log(C_OVER_H_MIN), Math.log(C_OVER_H_MAX), 1e-14);
+  const x = findRootOrNaN(f, Math.log(C_OVER_H_MIN), Math.log(C_OVER_H_MAX), 1e-14);
   return Number.isNaN(x) ? NaN : Math.exp(x);
 }
 
@@ -125,7 +125,7 @@ function lawJumpDepths(section: PreparedSection): number[] {
         const p = basis.profile(Math.exp(logC), 1, section.dt);
         return p.top - p.curvature * d - e;
       };
-      const x = findRoot(f, Math.log(C_OVER_H_MIN), Math.log(C_OVER_H_MAX), 1e-14);
+      const x = findRootOrNaN(f, Math.log(C_OVER_H_MIN), Math.log(C_OVER_H_MAX), 1e-14);
       // one depth just either side: at the root itself rounding may put the row on either side of the block edge
       if (Number.isFinite(x)) out.push(Math.exp(x) * (1 - 1e-7), Math.exp(x) * (1 + 1e-7));
     }
@@ -288,7 +288,7 @@ function sweptRoot(section: PreparedSection, sweep: Sweep, rho: number, kind: 'n
     const i = fromHigh ? n - 1 - k : k;
     const gi = at(i);
     if (gi === 0) return cOverH[i]!;
-    if (gi * gPrev < 0) return findRoot(g, Math.min(cOverH[i]!, cOverH[prev]!), Math.max(cOverH[i]!, cOverH[prev]!));
+    if (gi * gPrev < 0) return findRootOrNaN(g, Math.min(cOverH[i]!, cOverH[prev]!), Math.max(cOverH[i]!, cOverH[prev]!));
     prev = i;
     gPrev = gi;
   }

@@ -1,8 +1,27 @@
+import { ERROR_CODES, PmError } from '../errors.js';
+
+/** `findRoot` was given an interval over which f does not change sign (or is NaN at an end): a fault of the caller (exit 3). */
+export class NoSignChangeError extends PmError {
+  constructor(a: number, b: number, fa: number, fb: number) {
+    super(ERROR_CODES.notPossible, 'findRoot', 'was given an interval over which the function does not change sign', { interval: [a, b], ends: [fa, fb] }, 3);
+    this.name = 'NoSignChangeError';
+  }
+}
+
 /**
  * Bracketed root finding by bisection with a secant step where it helps (Illinois variant of
- * regula falsi; Dowell & Jarratt, BIT 11 (1971) 168–174). Returns NaN when [a, b] does not bracket.
+ * regula falsi; Dowell & Jarratt, BIT 11 (1971) 168–174). Throws NoSignChangeError when [a, b] does not
+ * bracket a root (f(a), f(b) of one sign, or NaN); `findRootOrNaN` is for callers that look for a crossing
+ * that may not be there.
  */
 export function findRoot(f: (x: number) => number, a: number, b: number, tol = 1e-12, maxIter = 200): number {
+  const x = findRootOrNaN(f, a, b, tol, maxIter);
+  if (Number.isNaN(x)) throw new NoSignChangeError(a, b, f(a), f(b));
+  return x;
+}
+
+/** As `findRoot`, but NaN when [a, b] does not bracket a root. */
+export function findRootOrNaN(f: (x: number) => number, a: number, b: number, tol = 1e-12, maxIter = 200): number {
   let fa = f(a);
   let fb = f(b);
   if (fa === 0) return a;

@@ -6,7 +6,7 @@
  * no capacity.
  */
 import { ALPHA_SEARCH_MAX, type BiaxialContour, type BiaxialFamily } from '../analysis/biaxial-family.js';
-import { describeArrangement, describeShape, describeTransverse, fmt, levelSymbol, stressText } from '../config/describe.js';
+import { describeArrangement, describeShape, describeTransverse, fmt, levelSymbol, stressText, gammaText } from '../config/describe.js';
 import type { ResolvedChartSet, ResolvedSheet } from '../config/types.js';
 import { RATIO_SYMBOL } from '../config/types.js';
 import { DISPLAY_UNITS } from '../units/index.js';
@@ -428,8 +428,8 @@ function sideColumn(ctx: BiaxialSheetContext, g: Deco, fit: SideFit): number {
   g.rule(xr, yTop, xr, yBot, COLOURS.muted, 0.6);
   g.rule(xr - tick, yTop, xr + tick, yTop, COLOURS.muted, 0.6);
   g.rule(xr - tick, yBot, xr + tick, yBot, COLOURS.muted, 0.6);
-  g.text('dimLeft', xr + 0.8 * u, cy - 1.2 * u, `γh = ${sheet.gamma.toFixed(2)} h`);
-  if (family.gammaX !== undefined) g.text('dimLeft', xr + 0.8 * u, cy + 0.2 * u, `γB·b = ${family.gammaX.toFixed(2)} b`);
+  g.text('dimLeft', xr + 0.8 * u, cy - 1.2 * u, `γh = ${gammaText(sheet.gamma)} h`);
+  if (family.gammaX !== undefined) g.text('dimLeft', xr + 0.8 * u, cy + 0.2 * u, `γB·b = ${gammaText(family.gammaX)} b`);
   // under the box: what is drawn and which way each moment bends
   let y = g.paragraph('caption', box.x, box.y + box.h + 1.1 * u, box.w, `${family.bars.length} bars, drawn at ${RATIO_SYMBOL.rhoG} = ${fmt(rhoShown, 4)}. Mx bends about x (compresses the +y face), My about y (compresses the +x face).`, 1.3);
   y += 1.6 * u;
@@ -454,7 +454,7 @@ function biaxialTitleBlock(ctx: BiaxialSheetContext, g: Deco): void {
   const lv = family.levels;
   const names = axisNames(set, family);
   const curves = `${sy.designFamily} Mx–My · ${RATIO_SYMBOL[set.ratios.kind]} ${fmt(ratios[0]!, 4)}–${fmt(ratios[ratios.length - 1]!, 4)} · ${levelSymbol(sy)} ${lv.map((v) => fmt(v)).join(', ')}`;
-  const gammaText = family.gammaX !== undefined ? `${sheet.gamma.toFixed(2)} · γB ${family.gammaX.toFixed(2)}` : sheet.gamma.toFixed(2);
+  const gammaShown = family.gammaX !== undefined ? `${gammaText(sheet.gamma)} · γB ${gammaText(family.gammaX)}` : gammaText(sheet.gamma);
   const sheetRow: [string, string, number][] = [
     ['office', tb.office, 3],
     ['project', tb.project, 3],
@@ -464,7 +464,7 @@ function biaxialTitleBlock(ctx: BiaxialSheetContext, g: Deco): void {
   const section: [string, string, number][] = [
     ['design basis', basis.title, 1.3],
     ['materials', `${sy.concreteStrength} ${stressText(sheet.fc, set.units)} · ${sy.steelStrength} ${stressText(sheet.fy, set.units)}`, 1.9],
-    ['γ', gammaText, 0.6],
+    ['γ', gammaShown, 0.6],
     ['shape · bars', `${describeShape(sheet.shape)} · ${describeArrangement(sheet.arrangement)}`, 3.7],
   ];
   const people: [string, string, number][] = [

@@ -2,6 +2,7 @@
  * Bars of an actual (sized) section for commands that analyse the real column (contour, check):
  * from `--rho` (ρg·Ag spread over the arrangement) or from the named `--bar` (count × bar area).
  */
+import { parseDecimal } from '../input/limits.js';
 import { prepareBiaxial, type BiaxialSection } from '../analysis/biaxial.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { barCount, layoutBars } from '../section/arrangements.js';
@@ -22,7 +23,7 @@ export function actualBars(section: ResolvedSection, rhoText: string | undefined
   const ag = grossArea(section.shape);
   const opts = { gamma: section.gamma, ...(section.gammaB !== undefined ? { gammaX: section.gammaB } : {}) };
   if (rhoText !== undefined) {
-    const rho = Number(rhoText);
+    const rho = parseDecimal(rhoText) ?? NaN;
     if (!Number.isFinite(rho)) throw new PmError(ERROR_CODES.invalidValue, path, 'is not a number', { value: rhoText, allowed: '0.001–0.1' });
     requireInRange(path, rho, 0.001, 0.1);
     const bars = layoutBars(section.shape, section.arrangement, rho * ag, opts);

@@ -10,7 +10,7 @@ import { extname } from 'node:path';
 import type { Command } from 'commander';
 import { checkColumn, describeCheck, prepareColumnCheck, rankColumnCheck, type ColumnCheck } from '../design/column-check.js';
 import { ERROR_CODES, PmError } from '../errors.js';
-import { ioError, writeFileAtomic, writePieces, writePiecesAtomic } from '../io/files.js';
+import { checkFileTarget, ioError, writeFileAtomic, writePieces, writePiecesAtomic } from '../io/files.js';
 import { CAUTION } from '../report/caution.js';
 import { checkAssumptions, checkJson, checkJsonPieces, checkReportPieces, checkReportText, checkText, checkTextPieces, textSizer } from '../report/check-view.js';
 import { generatorLabel } from '../version.js';
@@ -87,6 +87,8 @@ async function runResolvedAsync(o: CheckOptions, rc: ResolvedCheck): Promise<str
 export async function writeCheck(o: CheckOptions, out: NodeJS.WritableStream = process.stdout, streamAbove = STREAM_ABOVE_LOADS): Promise<void> {
   const rc = resolveCheckOptions(o);
   for (const n of rc.notes) process.stderr.write(`pmchart: note: ${n}\n`);
+  const report = rc.report;
+  if (report !== undefined) reportError(report, () => checkFileTarget(report));
   if (rc.input.loads.length <= streamAbove || (rc.report !== undefined && isDrawn(rc.report))) {
     await writePieces(out, [await runResolvedAsync(o, rc)]);
     return;
@@ -139,6 +141,8 @@ export function registerCheck(program: Command, run: (fn: () => Promise<void> | 
     .option('--loads <file>', 'CSV of load combinations with columns id,Pu,Mu (tension negative Pu)')
     .option('--columns <map>', 'read an analysis export: its headers for our fields, e.g. "id=Story+Combo,Pu=P,Mu=M3,Muy=M2" (other columns ignored, listed in a note)')
     .option('--compression <sign>', 'sign of axial compression in --loads: positive (default) or negative (most frame-analysis exports)')
+    .option('--ignore-columns <names>', 'comma list of --loads columns to skip (any other column pmchart does not read is an error)')
+    .option('--thousands <dot|none>', 'in a ";" load file with decimal commas, a dot is a thousands separator (dot: 1.500 = 1500) or a decimal point (none)')
     .option('--rho <ratio>', 'given ρg to check (utilisation); beyond the basis limits the load status is detailing')
     .option('--aggregate <length>', 'maximum aggregate size for the clear-spacing rule of the given bars and of proposals (default: the basis assumption, 3/4 in or 19–20 mm)')
     .option('--chart-gamma-step <step>', 'γ step of the emulated chart sheets', '0.05')

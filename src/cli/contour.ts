@@ -4,11 +4,12 @@
  * CSV columns (stable interface): na_angle_deg,na_depth,eps_t,phi,P,Mx,My — forces and moments in the
  * system's display units (kip, kip-ft / kN, kN·m), named in the JSON header.
  */
-import { renameSync, rmSync, writeFileSync } from 'node:fs';
+import { parseDecimal } from '../input/limits.js';
 import { extname } from 'node:path';
 import type { Command } from 'commander';
 import { squashPoint } from '../analysis/biaxial.js';
-import { ioError } from '../io/files.js';
+import { checkFileTarget, writeFileAtomic } from '../io/files.js';
+import { checkTitleFlags } from '../input/flags.js';
 import { contourText } from '../report/contour-view.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { DISPLAY_UNITS, parseQuantity, toDisplay } from '../units/index.js';
@@ -41,7 +42,7 @@ function resolveContour(o: ContourOptions) {
   const section = resolveSectionFlags(o, true);
   if (o.pu === undefined) throw new PmError(ERROR_CODES.missing, '--pu', `is required (the design axial load, default unit ${DISPLAY_UNITS[section.units].force}, compression positive)`);
   const Pu = parseQuantity(o.pu, 'force', section.units, '--pu');
-  const count = o.points === undefined ? 72 : Number(o.points);
+  const count = o.points === undefined ? 72 : (parseDecimal(o.points) ?? NaN);
   if (!Number.isInteger(count)) throw new PmError(ERROR_CODES.invalidValue, '--points', 'is not a whole number', { value: o.points, allowed: '8–3600' });
   requireInRange('--points', count, 8, 3600);
   const bars = actualBars(section, o.rho);
@@ -65,17 +66,11 @@ export function runContour(o: ContourOptions): string {
   if (isPlot(o.out)) throw new PmError(ERROR_CODES.invalidValue, '--out', 'is a plot; plots are written by runContourPlot', { value: o.out });
   const format = o.format ?? 'csv';
   if (format !== 'csv' && format !== 'json') throw new PmError(ERROR_CODES.invalidValue, '--format', 'is not one of the allowed values', { value: format, allowed: 'csv, json' });
+  if (o.out) checkFileTarget(o.out, '--out');
   const { section, Pu, count, bars, sec } = resolveContour(o);
   const text = contourText(format, { sec, Pu, count, units: section.units, shape: section.shape, arrangement: section.arrangement, gamma: section.gamma, ...(section.gammaB !== undefined ? { gammaB: section.gammaB } : {}), steel: bars.source, steelArea: bars.steelArea, rhoG: bars.rhoG }, generatorLabel());
   if (o.out) {
-    const tmp = `${o.out}.tmp-${process.pid}`;
-    try {
-      writeFileSync(tmp, text);
-      renameSync(tmp, o.out);
-    } catch (e) {
-      rmSync(tmp, { force: true });
-      throw ioError('--out', e);
-    }
+    writeFileAtomic(o.out, text, '--out');
     return '';
   }
   return text;
@@ -91,6 +86,8 @@ export async function runContourPlot(o: ContourOptions): Promise<string> {
   const kind = extname(out).toLowerCase();
   if (!isPlot(out)) throw new PmError(ERROR_CODES.invalidValue, '--out', 'must end in .svg or .pdf for a plot', { value: o.out, allowed: PLOT_FORMATS.join(', ') });
   const date = reportDate(o.date);
+  checkTitleFlags(o);
+  checkFileTarget(out, '--out');
   const { section, Pu, bars, sec } = resolveContour(o);
   const u = section.units;
   const Mux = o.mu === undefined ? undefined : parseQuantity(o.mu, 'moment', u, '--mu');
@@ -102,12 +99,12 @@ export async function runContourPlot(o: ContourOptions): Promise<string> {
   const { writeFileAtomic } = await import('../sheet/files.js');
   const renderer = await SheetRenderer.create();
   try {
-    if (kind === '.svg') writeFileAtomic(out, await renderer.specSvg(spec));
+    if (kind === '.svg') writeFileAtomic(out, await renderer.specSvg(spec), '--out');
     else {
       const pdf = renderer.pdfPages();
       await pdf.addSpec(spec, W, H);
       const { fixPdfMetadata } = await import('../sheet/book.js');
-      writeFileAtomic(out, await fixPdfMetadata(pdf.toBuffer(), { title, date, generator: generatorLabel(), subject: section.basis.title }));
+      writeFileAtomic(out, await fixPdfMetadata(pdf.toBuffer(), { title, date, generator: generatorLabel(), subject: section.basis.title }), '--out');
     }
   } finally {
     renderer.finalize();

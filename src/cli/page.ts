@@ -3,11 +3,13 @@
  * that works from file:// with no network. The flags preset the page's inputs (the names of
  * `pmchart sheet` and `pmchart check`) and are checked here as those commands check them.
  */
-import { readFileSync } from 'node:fs';
+import { readInputText } from '../io/read.js';
 import { extname, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { reportDate } from './format.js';
+import { MAX_LOADS_BYTES, parseDecimal } from '../input/limits.js';
+import { checkTitleFlags } from '../input/flags.js';
 import { parseLoadsCsv } from './check.js';
 import { BASIS_IDS, designCode } from '../codes/registry.js';
 import { isUnitSystem } from '../units/index.js';
@@ -31,9 +33,12 @@ const NOT_FIELDS = new Set(['out', 'grid', 'date', 'loads', 'paper', 'portrait',
 export async function runPage(o: PageOptions): Promise<string> {
   const out = resolve(o.out ?? 'column-charts.html');
   if (extname(out).toLowerCase() !== '.html') throw new PmError(ERROR_CODES.invalidValue, '--out', 'must end in .html', { value: o.out });
-  const grid = o.grid === undefined ? 0.05 : Number(o.grid);
+  const grid = o.grid === undefined ? 0.05 : (parseDecimal(o.grid) ?? NaN);
   if (grid !== 0.05 && grid !== 0.1) throw new PmError(ERROR_CODES.invalidValue, '--grid', 'is not one of the allowed values', { value: o.grid, allowed: '0.05, 0.1' });
   const date = reportDate(o.date);
+  checkTitleFlags(o);
+  const { checkFileTarget } = await import('../io/files.js');
+  checkFileTarget(out, '--out');
   const fields: Record<string, string | boolean> = {};
   for (const [k, v] of Object.entries(o)) if (!NOT_FIELDS.has(k) && v !== undefined) fields[k] = v as string | boolean;
   // presets are checked as `pmchart table`/`sheet` check them, when they describe a whole section
@@ -48,12 +53,7 @@ export async function runPage(o: PageOptions): Promise<string> {
     delete fields.omega;
   }
   if (o.loads !== undefined) {
-    let text: string;
-    try {
-      text = readFileSync(o.loads, 'utf8');
-    } catch (e) {
-      throw new PmError(ERROR_CODES.io, '--loads', `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'})`, { value: o.loads });
-    }
+    const text = readInputText(o.loads, MAX_LOADS_BYTES, '--loads');
     const units = o.units ?? designCode(o.code ?? BASIS_IDS[0]!).unitSystems[0]!;
     if (isUnitSystem(units)) parseLoadsCsv(text, units);
     fields.loads = text;
@@ -61,7 +61,7 @@ export async function runPage(o: PageOptions): Promise<string> {
   const { bundlePage, pageHtml } = await import('../page/build.js');
   const { writeFileAtomic } = await import('../sheet/files.js');
   const html = pageHtml(bundlePage(), { fields, grid, date }, CAUTION);
-  writeFileAtomic(out, html);
+  writeFileAtomic(out, html, '--out');
   return out;
 }
 

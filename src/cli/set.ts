@@ -3,7 +3,7 @@
  * book.pdf, sheets/*.svg|png and tables/*.csv|json. Render modules are imported lazily so other
  * commands never load vega, canvas or pdf-lib.
  */
-import { readFileSync, statSync } from 'node:fs';
+import { readInputText } from '../io/read.js';
 import type { Command } from 'commander';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { MAX_CONFIG_BYTES } from '../input/limits.js';
@@ -24,21 +24,15 @@ export interface SetResult {
 }
 
 export async function runSet(file: string, o: SetOptions = {}, stderr: NodeJS.WriteStream = process.stderr): Promise<SetResult> {
-  let text: string;
-  try {
-    if (statSync(file).size > MAX_CONFIG_BYTES) throw new PmError(ERROR_CODES.invalidValue, file, `is larger than ${MAX_CONFIG_BYTES} bytes`);
-    text = readFileSync(file, 'utf8');
-  } catch (e) {
-    if (e instanceof PmError) throw e;
-    throw new PmError(ERROR_CODES.io, file, `cannot be read (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`);
-  }
+  const text = readInputText(file, MAX_CONFIG_BYTES, file);
   const { readChartSetReport } = await import('../config/read.js');
   const { set, warnings } = readChartSetReport(text, { source: file, ...(process.env.SOURCE_DATE_EPOCH ? { sourceDateEpoch: process.env.SOURCE_DATE_EPOCH } : {}) });
   for (const w of warnings) stderr.write(`pmchart: warning: ${w}\n`);
 
   let jobs: number | undefined;
   if (o.jobs !== undefined) {
-    jobs = Number(o.jobs);
+    // decimal digits only: Number("0x2") is 2, Number("") is 0
+    jobs = /^\s*\d{1,3}\s*$/.test(o.jobs) ? Number(o.jobs) : NaN;
     if (!Number.isInteger(jobs) || jobs < 1 || jobs > 64) throw new PmError(ERROR_CODES.outOfRange, '--jobs', 'is outside 1–64', { value: o.jobs, allowed: '1–64' });
   }
   const progress = o.progress === false ? undefined : await makeProgress(stderr, set.sheets.length, set.name);

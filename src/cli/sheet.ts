@@ -14,10 +14,12 @@ export async function runSheet(o: SheetOptions): Promise<string> {
   const out = resolve(o.out ?? 'sheet.pdf');
   const kind = extname(out).toLowerCase();
   if (!['.svg', '.png', '.pdf'].includes(kind)) throw new PmError(ERROR_CODES.invalidValue, '--out', 'must end in .svg, .png or .pdf', { value: o.out });
+  const { checkFileTarget } = await import('../io/files.js');
+  checkFileTarget(out, '--out');
   const { set, capContext } = await sheetSetFromFlags(o);
   const { renderSheet } = await import('../sheet/render-sheet.js');
   const { writeFileAtomic } = await import('../sheet/files.js');
-  writeFileAtomic(out, await renderSheet(set, 0, kind.slice(1) as 'svg' | 'png' | 'pdf', { capContext }));
+  writeFileAtomic(out, await renderSheet(set, 1, kind.slice(1) as 'svg' | 'png' | 'pdf', { capContext }), '--out');
   return out;
 }
 

@@ -6,7 +6,10 @@ import { DISPLAY_UNITS, type UnitSystem } from '../units/index.js';
 import type { ResolvedShape, ResolvedSheet } from './types.js';
 
 /** Trims float noise: 0.7500000001 → "0.75". */
-export const fmt = (x: number, digits = 3): string => String(Number(x.toFixed(digits)));
+/** A number in a title or a file name: up to 6 decimals, so that two sheets' values never print alike (4 and 4.0001). */
+export const fmt = (x: number, digits = 6): string => String(Number(x.toFixed(digits)));
+/** γ and γB with two decimals at the least (0.30, 0.75) and every further digit that tells sheets apart (0.305). */
+export const gammaText = (g: number): string => (Number(g.toFixed(2)) === Number(fmt(g)) ? g.toFixed(2) : fmt(g));
 
 export function describeShape(s: ResolvedShape): string {
   if (s.kind === 'circle') return 'circular';
@@ -86,8 +89,8 @@ export function titleFields(s: Omit<ResolvedSheet, 'title' | 'fileStem'>, units:
     fc: stressText(s.fc, units),
     fy: stressText(s.fy, units),
     // γB, when given, travels with γ so that every title pattern states it
-    gamma: s.gammaB === undefined ? s.gamma.toFixed(2) : `${s.gamma.toFixed(2)} (γB ${s.gammaB.toFixed(2)})`,
-    gammaB: s.gammaB === undefined ? '' : s.gammaB.toFixed(2),
+    gamma: s.gammaB === undefined ? gammaText(s.gamma) : `${gammaText(s.gamma)} (γB ${gammaText(s.gammaB)})`,
+    gammaB: s.gammaB === undefined ? '' : gammaText(s.gammaB),
     arrangement: describeArrangement(s.arrangement),
     transverse: describeTransverse(s.transverse),
     family,
@@ -114,7 +117,8 @@ export const DEFAULT_TITLE_PATTERN = '{shape} column, {fcSymbol} {fc}, {fySymbol
 
 /** Fills {field} placeholders; a non-empty {options} the pattern leaves out is appended, so variant sheets always say so. */
 export function fillPattern(pattern: string, fields: Record<string, string>): string {
-  const text = pattern.replace(/\{(\w+)\}/g, (m, k: string) => fields[k] ?? m);
+  // own fields only: {constructor} is not a field (it printed native code through the prototype)
+  const text = pattern.replace(/\{(\w+)\}/g, (m, k: string) => (Object.hasOwn(fields, k) ? fields[k]! : m));
   return fields.options && !pattern.includes('{options}') ? `${text}, ${fields.options}` : text;
 }
 
@@ -124,5 +128,5 @@ export function fileStemFor(s: Omit<ResolvedSheet, 'title' | 'fileStem'>, units:
   const shape = s.shape.kind === 'circle' ? 'circular' : s.shape.aspect === 1 ? 'square' : `rectangular-aspect-${fmt(s.shape.aspect)}`;
   const idx = String(s.index).padStart(String(total).length, '0');
   const variant = basisOptionsSlug(s.variantOptions);
-  return [idx, shape, `fc-${fmt(s.fc)}${su}`, `fy-${fmt(s.fy)}${su}`, `gamma-${s.gamma.toFixed(2)}`, ...(s.gammaB !== undefined ? [`gammab-${s.gammaB.toFixed(2)}`] : []), arrangementSlug(s.arrangement), s.transverse, ...(variant ? [variant] : [])].join('-');
+  return [idx, shape, `fc-${fmt(s.fc)}${su}`, `fy-${fmt(s.fy)}${su}`, `gamma-${gammaText(s.gamma)}`, ...(s.gammaB !== undefined ? [`gammab-${gammaText(s.gammaB)}`] : []), arrangementSlug(s.arrangement), s.transverse, ...(variant ? [variant] : [])].join('-');
 }

@@ -38,7 +38,8 @@ export function readChartSetReport(text: string, opts: ReadOptions = {}): { set:
   // 1. parse
   let json: unknown;
   try {
-    json = JSON.parse(text);
+    // a byte-order mark (editors on Windows write one) is not part of the JSON
+    json = JSON.parse(text.replace(/^\uFEFF/, ''));
   } catch (e) {
     throw new PmError(ERROR_CODES.invalidValue, opts.source ?? 'chart set', `is not valid JSON (${(e as Error).message})`);
   }

@@ -9,7 +9,7 @@
  */
 import { baseGrid, C_OVER_H_MAX, C_OVER_H_MIN, depthForTensionStrain } from '../analysis/family.js';
 import { R, RESPONSE_SIZE, type PreparedSection } from '../analysis/prepared-section.js';
-import { findRoot } from '../analysis/solve.js';
+import { findRootOrNaN } from '../analysis/solve.js';
 import type { StrainClass } from '../codes/types.js';
 
 /** A normalised demand: axial Pu/Ag and moment Mu/(Ag·h) (Ag·D for circles), stress units; M < 0 only for a layout not symmetric about the bending axis. */
@@ -121,7 +121,7 @@ function rayDepth(t: RayTable, rho: number, load: NormalisedLoad, exact: boolean
     t.section.respond(c, r);
     return (r[R.PcD]! + rho * r[R.PsD]!) * m - (r[R.McD]! + rho * r[R.MsD]!) * p;
   };
-  const c = findRoot(f, t.c[lo]!, t.c[hi]!, 1e-11);
+  const c = findRootOrNaN(f, t.c[lo]!, t.c[hi]!, 1e-11);
   return Number.isNaN(c) ? t.c[lo]! : c;
 }
 

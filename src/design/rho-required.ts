@@ -11,7 +11,7 @@
  */
 import { C_OVER_H_MAX, C_OVER_H_MIN } from '../analysis/family.js';
 import { R } from '../analysis/prepared-section.js';
-import { findRoot } from '../analysis/solve.js';
+import { findRoot, findRootOrNaN } from '../analysis/solve.js';
 import { capacityAlongRay, isNegligibleLoad, type NormalisedLoad, type RayTable } from './ray.js';
 
 export type RhoStatus = 'ok' | 'minimum-governs' | 'not-possible';
@@ -87,7 +87,7 @@ function refine(t: RayTable, a: number, b: number, p: number, m: number): number
     const f = r[R.factor]!;
     return (p - f * r[R.PcD]!) * r[R.MsD]! - (m - f * r[R.McD]!) * r[R.PsD]!;
   };
-  const c = findRoot(g, a, b, 1e-11);
+  const c = findRootOrNaN(g, a, b, 1e-11);
   if (Number.isNaN(c)) return NaN;
   t.section.respond(c, r);
   return rhoThrough(r[R.factor]!, r[R.PcD]!, r[R.McD]!, r[R.PsD]!, r[R.MsD]!, p, m);

@@ -3,6 +3,7 @@
  * slenderness member data (`--klu` …, end moments in each basis's own sign convention). Parsing only; the
  * engine applies them (src/design/column-check.ts).
  */
+import { parseDecimal } from '../input/limits.js';
 import type { Command } from 'commander';
 import type { FactoredLoad } from '../design/check.js';
 import type { ColumnCheckInput } from '../design/column-check.js';
@@ -63,7 +64,7 @@ const END_MOMENT_FLAGS = [
 ] as const;
 
 const plain = (path: string, text: string, lo: number, hi: number): number => {
-  const v = Number(text);
+  const v = parseDecimal(text) ?? NaN;
   if (!Number.isFinite(v)) throw new PmError(ERROR_CODES.invalidValue, path, 'is not a number', { value: text, allowed: `${lo}–${hi}` });
   return requireInRange(path, v, lo, hi);
 };

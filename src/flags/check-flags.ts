@@ -3,15 +3,18 @@
  * reinforcement, bar selection and effects. `computeCheck` then calls the engine; the command and the
  * page both go through here, so they read input alike.
  */
-import { readFileSync } from 'node:fs';
+import { readInputText } from '../io/read.js';
 import { extname } from 'node:path';
 import type { Detailing } from '../design/bar-selection.js';
 import type { FactoredLoad } from '../design/check.js';
 import { checkColumn, type ColumnCheck, type ColumnCheckInput } from '../design/column-check.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
-import { MAX_DRAWN_REPORT_LOADS } from '../input/limits.js';
-import { LOAD_FIELDS, parseLoadQuantity, parseLoadsCsv as readLoadsCsv, type LoadsCsvOptions } from '../input/loads-csv.js';
+import { MAX_DRAWN_REPORT_LOADS, parseDecimal } from '../input/limits.js';
+import { LOAD_FIELDS, parseLoadQuantity, parseLoadsCsv as readLoadsCsv, THOUSANDS, type LoadsCsvOptions, type Thousands } from '../input/loads-csv.js';
 import { parseColumnMap, parseCompression } from '../input/column-map.js';
+import { CONTROL_CHARS } from '../input/fields.js';
+import { checkTitleFlags } from '../input/flags.js';
+import { MAX_LIST, MAX_LOAD_ID_CHARS, MAX_LOADS_BYTES } from '../input/limits.js';
 import { CHART_AXIAL_STEP_RANGE, CHART_GAMMA_STEP_RANGE, CHECK_RHO_RANGE } from '../input/limits.js';
 import { barSet } from '../section/bar-tables.js';
 import { barCount } from '../section/arrangements.js';
@@ -29,6 +32,10 @@ export interface CheckOptions extends SectionFlags, EffectsFlags {
   columns?: string;
   /** `--compression`: the load file's sign of axial compression, positive (default) or negative */
   compression?: string;
+  /** comma list of load-file columns to skip (any other unknown column is an error) */
+  ignoreColumns?: string;
+  /** how a dot reads in a `;` load file with decimal commas: dot (thousands) or none (decimal point) */
+  thousands?: string;
   rho?: string;
   aggregate?: string;
   chartGammaStep?: string;
@@ -60,8 +67,30 @@ export interface ResolvedCheck {
 }
 
 /** Load files are read by src/input/loads-csv.ts (csv-parse; header units, ";" files, duplicates refused). */
-export function parseLoadsCsv(text: string, units: UnitSystem, path = '--loads', opts: LoadsCsvOptions = {}): FactoredLoad[] {
-  return readLoadsCsv(text, units, path, opts);
+export function parseLoadsCsv(text: string, units: UnitSystem, path = '--loads', options: LoadsCsvOptions = {}): FactoredLoad[] {
+  return readLoadsCsv(text, units, path, options);
+}
+
+/** `--ignore-columns` and `--thousands` → the load reader's options; both need --loads. */
+export function loadsCsvOptions(o: Pick<CheckOptions, 'loads' | 'ignoreColumns' | 'thousands'>): LoadsCsvOptions {
+  const options: LoadsCsvOptions = {};
+  for (const flag of ['ignoreColumns', 'thousands'] as const) {
+    if (o[flag] !== undefined && o.loads === undefined) throw new PmError(ERROR_CODES.conflict, flag === 'thousands' ? '--thousands' : '--ignore-columns', 'reads a load file; give it with --loads');
+  }
+  if (o.ignoreColumns !== undefined) {
+    const names = o.ignoreColumns.split(',').map((n) => n.trim());
+    if (names.length > MAX_LIST || names.some((n) => n === '' || n.length > MAX_LOAD_ID_CHARS || CONTROL_CHARS.test(n))) {
+      throw new PmError(ERROR_CODES.invalidValue, '--ignore-columns', `is not a comma list of column names (each 1–${MAX_LOAD_ID_CHARS} characters)`);
+    }
+    options.ignoreColumns = names;
+  }
+  if (o.thousands !== undefined) {
+    if (!(THOUSANDS as readonly string[]).includes(o.thousands)) {
+      throw new PmError(ERROR_CODES.invalidValue, '--thousands', 'is not one of the allowed values', { value: JSON.stringify(o.thousands), allowed: THOUSANDS.join(', ') });
+    }
+    options.thousands = o.thousands as Thousands;
+  }
+  return options;
 }
 
 /**
@@ -94,6 +123,7 @@ export function resolveCheckOptions(o: CheckOptions, given?: { loads: readonly F
     }
   }
   if (o.date !== undefined) reportDate(o.date);
+  checkTitleFlags(o);
   const section = resolveSectionFlags(o, true);
   const u = section.units;
   const { basis } = section;
@@ -103,18 +133,14 @@ export function resolveCheckOptions(o: CheckOptions, given?: { loads: readonly F
   if (given === undefined && o.loads === undefined && (o.columns !== undefined || o.compression !== undefined)) {
     throw new PmError(ERROR_CODES.conflict, o.columns !== undefined ? '--columns' : '--compression', 'applies to --loads; --pu is compression positive');
   }
+  const csvOptions = loadsCsvOptions(o);
   if (given !== undefined) {
     // read already (a schedule's loads of one mark)
     loads = given.loads.map((l) => ({ ...l }));
   } else if (o.loads !== undefined) {
     if (o.pu !== undefined || o.mu !== undefined) throw new PmError(ERROR_CODES.conflict, '--loads', 'and --pu/--mu both give loads; use one of them');
-    let text: string;
-    try {
-      text = readFileSync(o.loads, 'utf8');
-    } catch (e) {
-      throw new PmError(ERROR_CODES.io, '--loads', `cannot be read (${(e as NodeJS.ErrnoException).code ?? 'error'})`, { value: o.loads });
-    }
-    loads = parseLoadsCsv(text, u, '--loads', { ...exportOptions(o), onNote: (n) => notes.push(n) });
+    const text = readInputText(o.loads, MAX_LOADS_BYTES, '--loads');
+    loads = parseLoadsCsv(text, u, '--loads', { ...exportOptions(o), ...csvOptions, onNote: (n) => notes.push(n) });
     const sign = signNote(loads, o.compression);
     if (sign !== null) notes.push(sign);
     if (o.report !== undefined && isDrawn(o.report) && loads.length > MAX_DRAWN_REPORT_LOADS) {
@@ -137,16 +163,16 @@ export function resolveCheckOptions(o: CheckOptions, given?: { loads: readonly F
     loads,
   };
   if (o.chartGammaStep !== undefined) {
-    const step = Number(o.chartGammaStep);
+    const step = parseDecimal(o.chartGammaStep) ?? NaN;
     input.chartGammaStep = requireInRange('--chart-gamma-step', Number.isFinite(step) ? step : NaN, ...CHART_GAMMA_STEP_RANGE);
   }
   if (o.chartAxialStep !== undefined) {
-    const step = Number(o.chartAxialStep);
+    const step = parseDecimal(o.chartAxialStep) ?? NaN;
     input.chartAxialStep = requireInRange('--chart-axial-step', Number.isFinite(step) ? step : NaN, ...CHART_AXIAL_STEP_RANGE);
   }
   if (o.rho !== undefined) {
     // beyond the basis's limits the check runs and reports `detailing` (issue 19); only what the maths takes is refused
-    const rho = Number(o.rho);
+    const rho = parseDecimal(o.rho) ?? NaN;
     input.rho = requireInRange('--rho', Number.isFinite(rho) ? rho : NaN, ...CHECK_RHO_RANGE);
   } else if (section.bar && (o.barsPerFace !== undefined || o.bars !== undefined) && section.arrangement.kind !== 'custom') {
     const count = barCount(section.arrangement);
@@ -168,7 +194,7 @@ export function resolveCheckOptions(o: CheckOptions, given?: { loads: readonly F
     ...(section.cover !== undefined ? { cover: section.cover, tieDiameter: section.tieDiameter ?? 0 } : {}),
     ...(aggregate !== undefined ? { aggregate } : {}),
   };
-  const proposals = o.proposals === undefined ? 5 : Number(o.proposals);
+  const proposals = o.proposals === undefined ? 5 : (parseDecimal(o.proposals) ?? NaN);
   if (!Number.isInteger(proposals)) throw new PmError(ERROR_CODES.invalidValue, '--proposals', 'is not a whole number', { value: o.proposals, allowed: '0–20' });
   requireInRange('--proposals', proposals, 0, 20);
   if (proposals > 0) {

@@ -2,7 +2,7 @@
  * The section flags shared by `table`, `sheet` and `check`: code, units, materials, shape, γ (or the
  * detailing it comes from), arrangement and transverse type. Read once, resolved once.
  */
-import { readFileSync, statSync } from 'node:fs';
+import { readInputText } from '../io/read.js';
 import type { Command } from 'commander';
 import { BASIS_IDS, designCode, parseStrength, resolveBasis } from '../codes/registry.js';
 import type { Basis, BasisOptions, CapContext, CodeId, ColumnUse } from '../codes/types.js';
@@ -114,15 +114,7 @@ function barOrDiameter(path: string, text: string, units: UnitSystem, basis: Bas
 }
 
 function readCustomBars(path: string, file: string): CustomBar[] {
-  let text: string;
-  try {
-    if (statSync(file).size > MAX_CUSTOM_BARS_BYTES) throw new PmError(ERROR_CODES.invalidValue, path, `is larger than ${MAX_CUSTOM_BARS_BYTES} bytes`, { value: file });
-    text = readFileSync(file, 'utf8');
-  } catch (e) {
-    if (e instanceof PmError) throw e;
-    throw new PmError(ERROR_CODES.io, path, `cannot be read (${(e as NodeJS.ErrnoException).code ?? (e as Error).message.split('\n')[0]})`, { value: file });
-  }
-  return parseCustomBars(text, path);
+  return parseCustomBars(readInputText(file, MAX_CUSTOM_BARS_BYTES, path), path);
 }
 
 /** Bars per face or ring bars: the ranges chart-set files use (src/input/limits.ts). */

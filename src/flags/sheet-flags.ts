@@ -3,6 +3,7 @@
  * modules stay out (the set's config helpers load lazily).
  */
 import { issueDate } from '../input/limits.js';
+import { checkTitleFlags } from '../input/flags.js';
 import type { ResolvedChartSet } from '../config/types.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
 import { sectionDepth, sectionWidth } from '../section/geometry.js';
@@ -41,6 +42,7 @@ export async function sheetSetFromFlags(o: SheetOptions): Promise<{ set: Resolve
   if (!(FAMILY_CHOICES as readonly string[]).includes(families)) throw new PmError(ERROR_CODES.invalidValue, '--families', 'is not one of the allowed values', { value: families, allowed: FAMILY_CHOICES.join(', ') });
   const size = o.paper ?? (section.units === 'us' ? 'tabloid' : 'a3');
   if (!(PAPER_SIZES as readonly string[]).includes(size)) throw new PmError(ERROR_CODES.invalidValue, '--paper', 'is not one of the allowed values', { value: size, allowed: PAPER_SIZES.join(', ') });
+  checkTitleFlags(o);
   const date = issueDate(o.date, '--date', process.env.SOURCE_DATE_EPOCH);
   const ecc = o.eccentricities === undefined ? [0.1, 0.25, 0.5, 1] : parseNumberList(o.eccentricities);
   if (!ecc) throw new PmError(ERROR_CODES.invalidValue, '--eccentricities', 'is not a comma list of e/h values', { value: o.eccentricities });

@@ -6,7 +6,7 @@ import { computeFamily, type CurveFamily } from '../analysis/family.js';
 import { omegaFromRho, rhoFromOmega } from '../codes/mechanical-ratio.js';
 import type { Basis } from '../codes/types.js';
 import { ERROR_CODES, PmError, requireInRange } from '../errors.js';
-import { RHO_RANGE, TABLE_CURVES_MAX, TABLE_POINTS_RANGE, TABLE_ROWS_MAX } from '../input/limits.js';
+import { RHO_RANGE, TABLE_CURVES_MAX, TABLE_POINTS_RANGE, TABLE_ROWS_MAX, parseDecimal } from '../input/limits.js';
 import { parseNumberList } from './format.js';
 import { resolveSectionFlags, type ResolvedSection, type SectionFlags } from './section-flags.js';
 
@@ -71,7 +71,7 @@ export function resolveTableOptions(o: TableOptions): TableRequest {
   if (format !== 'csv' && format !== 'json') {
     throw new PmError(ERROR_CODES.invalidValue, '--format', 'is not one of the allowed values', { value: format, allowed: 'csv, json' });
   }
-  const basePoints = o.points === undefined ? 400 : Number(o.points);
+  const basePoints = o.points === undefined ? 400 : (parseDecimal(o.points) ?? NaN);
   if (!Number.isInteger(basePoints)) throw new PmError(ERROR_CODES.invalidValue, '--points', 'is not a whole number', { value: o.points });
   requireInRange('--points', basePoints, TABLE_POINTS_RANGE[0], TABLE_POINTS_RANGE[1]);
   if (o.omega !== undefined) {

@@ -36,8 +36,15 @@ export const list = <T extends z.ZodType>(t: T, max = MAX_LIST) =>
     .min(1, { message: 'must hold at least one value' })
     .max(max, { message: `holds more than ${max} values` });
 
-/** Text of at most `max` characters. */
-export const text = (max: number) => z.string().max(max, { message: `is longer than ${max} characters` });
+/** C0 and C1 control characters (and DEL): refused in every text field, so no SVG or terminal line carries them. */
+export const CONTROL_CHARS = /[\u0000-\u001f\u007f-\u009f]/;
+
+/** Text of at most `max` characters, with no control characters (tab and newline included). */
+export const text = (max: number) =>
+  z
+    .string()
+    .max(max, { message: `is longer than ${max} characters` })
+    .regex(/^[^\u0000-\u001f\u007f-\u009f]*$/, { message: 'has a control character (plain text only)' });
 
 /** An issue date YYYY-MM-DD that is a real calendar date. */
 export const calendarDate = () =>
@@ -95,7 +102,7 @@ export function shownInput(i: Issue, raw = false): string | undefined {
     return undefined;
   }
   if (i.code === 'invalid_format' || i.code === 'custom' || (raw && i.code === 'invalid_value')) {
-    if (typeof v === 'string') return v.length > 24 ? `${JSON.stringify(v.slice(0, 12))}…` : raw && v.trim() !== '' && !/\s/.test(v) ? v : JSON.stringify(v);
+    if (typeof v === 'string') return v.length > 24 ? `${JSON.stringify(v.slice(0, 12))}…` : raw && v.trim() !== '' && !/\s/.test(v) && !CONTROL_CHARS.test(v) ? v : JSON.stringify(v);
   }
   return undefined;
 }

@@ -9,7 +9,7 @@ import { z } from 'zod';
 import { COLUMN_USES, TRANSVERSE_TYPES } from '../codes/types.js';
 import { ARRANGEMENTS, SHAPES } from '../section/types.js';
 import { UNIT_SYSTEMS, type QuantityKind } from '../units/index.js';
-import { parseOrThrow, quantityText, ranged, rangedInt } from './fields.js';
+import { parseOrThrow, quantityText, ranged, rangedInt, text } from './fields.js';
 import {
   ALPHA_CC_RANGE,
   CONCRETE_LAWS,
@@ -18,6 +18,7 @@ import {
   GAMMA_RANGE,
   GAMMA_S_RANGE,
   MAX_FLAG_CHARS,
+  MAX_TEXT_CHARS,
   parseDecimal,
   rangeText,
   STEEL_BRANCHES,
@@ -105,6 +106,12 @@ export const SectionFlagsSchema = z.object({
   columnUse: enumFlag(COLUMN_USES).optional(),
 });
 export type CheckedSectionFlags = z.output<typeof SectionFlagsSchema>;
+
+/** Title-block text flags (`--office`, `--project`) of sheet, check, contour and page: the chart-set file's limit (MAX_TEXT_CHARS), plain text. */
+export const TitleFlagsSchema = z.object({ office: text(MAX_TEXT_CHARS).optional(), project: text(MAX_TEXT_CHARS).optional() });
+export const checkTitleFlags = (o: { office?: string | undefined; project?: string | undefined }): void => {
+  parseFlags(TitleFlagsSchema, { office: o.office, project: o.project });
+};
 
 /** Checks flag values; the first problem is one PmError naming the flag. */
 export function parseFlags<T extends z.ZodType>(schema: T, flags: unknown): z.output<T> {

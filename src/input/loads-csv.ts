@@ -1,14 +1,19 @@
 /**
  * Load files: CSV with a header naming id, Pu and Mu (any order; Muy and the end moments M1, M2, M1y, M2y (ACI)
- * or M01, M02, M01y, M02y (EN 1992-1-1, CSA) optional;
- * other columns ignored), one row per load combination.
+ * or M01, M02, M01y, M02y (EN 1992-1-1, CSA) optional), one row per load combination.
+ * Every cell is accounted for: a column the reader does not know is an error unless the caller names it
+ * in `ignoreColumns` (`--ignore-columns`) or maps the file with `columns` (`--columns`, which ignores the
+ * columns it leaves unnamed and lists them in one note); a non-empty cell beyond the header's columns or
+ * under a blank header cell is an error (an unquoted comma in an id shifts a row); in a `;` file with
+ * decimal commas a dot is ambiguous (1.500) and an error unless `thousands` says how to read it.
  *
  *   text ──1 size, separator──▶ csv-parse records ──2 header──▶ columns and units ──3 rows (zod)──▶ loads
  *
  * - A header may carry a unit: `Pu kip`, `Mu [kN·m]`, `Mu (kip-ft)`; bare cells in that column are
  *   read in it and converted to the run's units, as flag suffixes are.
  * - `;` separates cells when the header has more `;` than `,` (spreadsheets in many locales); decimal
- *   commas are then read as points.
+ *   commas are then read as points, and a dot only as `thousands` says: 'dot' (1.234,5 = 1234.5, the dots
+ *   between groups of three digits) or 'none' (a dot is a decimal point too: 1.5 = 1.5).
  * - Duplicate columns and duplicate ids are refused with their line numbers; `#` starts a comment line.
  * - Analysis exports (issue 22, `LoadsCsvOptions`): a header map (`--columns`, src/input/column-map.ts),
  *   the export's sign of compression, a group column (a schedule's `mark`, bare numbers in each group's
@@ -81,6 +86,31 @@ export function detectSeparator(text: string): ',' | ';' {
   return ',';
 }
 
+/** How a `;` file's dots read: thousands separators ('dot') or decimal points ('none'). */
+export const THOUSANDS = ['dot', 'none'] as const;
+export type Thousands = (typeof THOUSANDS)[number];
+
+/** A cell of a `;` file (decimal commas) as a plain decimal, or an error naming the cell. */
+function decimalCommaCell(v: string, thousands: Thousands | undefined, where: string): string {
+  if (!v.includes('.')) return v.replace(',', '.');
+  if (thousands === 'none') {
+    if (v.includes(',')) throw new PmError(ERROR_CODES.invalidValue, where, 'has both a decimal comma and a decimal point (--thousands none)', { value: v });
+    return v;
+  }
+  if (thousands === 'dot') {
+    // the number part: sign, groups of three after the first, an optional decimal comma part
+    const m = /^(\s*[-+]?)(\d{1,3}(?:\.\d{3})+)(,\d*)?(\s*[^\d.,\s].*)?$/.exec(v);
+    if (!m) throw new PmError(ERROR_CODES.invalidValue, where, 'is not a number with dots between groups of three digits (--thousands dot)', { value: v });
+    return `${m[1]}${m[2]!.replaceAll('.', '')}${(m[3] ?? '').replace(',', '.')}${m[4] ?? ''}`;
+  }
+  throw new PmError(
+    ERROR_CODES.invalidValue,
+    where,
+    `has a dot in a file with decimal commas (a thousands separator?); say --thousands dot (${v.trim()} = ${v.trim().replaceAll('.', '')}) or --thousands none (${v.trim()} = ${Number(v.trim()) || v.trim()})`,
+    { value: v },
+  );
+}
+
 /** The fields a load file may fill (for `--columns`), the schedule's `mark` beside them. */
 export const LOAD_FIELDS: readonly string[] = Object.keys(COLUMNS);
 
@@ -98,6 +128,10 @@ export interface LoadsCsvOptions {
   duplicates?: 'refuse' | 'number';
   /** receives the one note on columns a map leaves unread */
   onNote?: (text: string) => void;
+  /** header names (any letter case, unit left off) of columns to skip; any other unknown column is an error (without `columns`) */
+  ignoreColumns?: readonly string[];
+  /** how a dot reads in a `;` file with decimal commas; absent, a dot there is an error */
+  thousands?: Thousands;
 }
 
 /** A load with the group it belongs to (`LoadsCsvOptions.group`). */
@@ -121,6 +155,9 @@ function readLoads(textIn: string, units: UnitSystem, at: string, opts: LoadsCsv
   // 1. size and separator, then csv-parse (quotes, CRLF, BOM)
   if (textIn.length > MAX_LOADS_BYTES) throw new PmError(ERROR_CODES.invalidValue, at, `is larger than ${MAX_LOADS_BYTES} bytes`);
   const delimiter = detectSeparator(textIn.replace(/^\uFEFF/, ''));
+  if (opts.thousands === 'dot' && delimiter !== ';') {
+    throw new PmError(ERROR_CODES.conflict, '--thousands', `dot applies to files separated by ";" with decimal commas; ${at} is separated by ","`);
+  }
   let lastLine = 0;
   let records: { record: string[]; info: { lines: number } }[];
   try {
@@ -157,6 +194,15 @@ function readLoads(textIn: string, units: UnitSystem, at: string, opts: LoadsCsv
   const seen = new Map<string, number>();
   const group = opts.group;
   let groupIndex = -1;
+  const ignore = new Map((opts.ignoreColumns ?? []).map((n) => [n.trim().toLowerCase(), n.trim()]));
+  const ignoredUsed = new Set<string>();
+  /** columns whose cells must be empty: blank header cells */
+  const blank: number[] = [];
+  /** the first unknown column, reported once id, Pu and Mu are known to be there (else the header is not one) */
+  let unknown: (() => never) | undefined;
+  for (const [key, name] of ignore) {
+    if (key === 'id' || key === 'pu' || key === 'mu') throw new PmError(ERROR_CODES.conflict, '--ignore-columns', `"${name}" names a column every load needs (id, Pu, Mu)`);
+  }
   const plan = planHeader(head.record, opts.columns, headerCell, at);
   const note = ignoredNote(plan, at);
   if (note !== null) opts.onNote?.(note);
@@ -173,11 +219,29 @@ function readLoads(textIn: string, units: UnitSystem, at: string, opts: LoadsCsv
     const known = (Object.keys(COLUMNS) as Column[]).find((c) => c.toLowerCase() === name.toLowerCase());
     const key = known ?? cell.trim().toLowerCase();
     const before = seen.get(key);
-    if (before !== undefined) {
+    if (before !== undefined && key !== '') {
       throw new PmError(ERROR_CODES.conflict, `${at} line ${headLine}`, `names the column "${known ?? cell.trim()}" twice (columns ${before + 1} and ${index + 1})`);
     }
     seen.set(key, index);
-    if (!known) return;
+    const skip = [name.toLowerCase(), cell.trim().toLowerCase()].find((k) => ignore.has(k));
+    if (skip !== undefined) {
+      ignoredUsed.add(skip);
+      return;
+    }
+    if (cell.trim() === '') {
+      blank.push(index);
+      return;
+    }
+    if (!known) {
+      unknown ??= () => {
+        throw new PmError(
+          ERROR_CODES.invalidValue,
+          `${at} line ${headLine} column ${index + 1}`,
+          `${JSON.stringify(cell.trim().slice(0, 40))} is not a column pmchart reads (${Object.keys(COLUMNS).join(', ')}); rename it${at.startsWith('--') ? ', name it in --ignore-columns to skip it, or map the file with --columns' : ''}`,
+        );
+      };
+      return;
+    }
     const kind = COLUMNS[known];
     const u = unit.toLowerCase().replace('·', '-').replace('²', '2');
     if (u !== '' && (kind === null || !unitSuffixes(kind).includes(u))) {
@@ -188,10 +252,14 @@ function readLoads(textIn: string, units: UnitSystem, at: string, opts: LoadsCsv
     }
     columns.set(known, { name: known, index, unit: u });
   });
+  for (const [key, name] of ignore) {
+    if (!ignoredUsed.has(key)) throw new PmError(ERROR_CODES.invalidValue, '--ignore-columns', `"${name}" is not a column of the header of ${at}`);
+  }
   if (!columns.has('id') || !columns.has('Pu') || !columns.has('Mu') || (group !== undefined && groupIndex < 0)) {
     const need = `${group !== undefined ? `${group}, ` : ''}id, Pu and Mu`;
     throw new PmError(ERROR_CODES.invalidValue, `${at} header`, `must name the columns ${need}${opts.columns ? ' (through --columns)' : ''}`, { value: head.record.join(delimiter) });
   }
+  if (unknown) unknown();
   if (records.length === 1) throw new PmError(ERROR_CODES.invalidValue, at, 'has a header but no load rows');
 
   // 3. rows: form by the zod row schema, then units, finiteness and the magnitude cap
@@ -202,10 +270,30 @@ function readLoads(textIn: string, units: UnitSystem, at: string, opts: LoadsCsv
   for (let r = 1; r < records.length; r++) {
     const { record, info } = records[r]!;
     const line = info.lines;
+    // every cell accounted for: nothing beyond the header's columns, nothing under a blank header cell
+    for (let k = head.record.length; k < record.length; k++) {
+      if (record[k]!.trim() !== '') {
+        throw new PmError(ERROR_CODES.invalidValue, `${at} line ${line} column ${k + 1}`, `is a cell beyond the ${head.record.length} columns of the header (an unquoted comma in an id? quote the id)`, {
+          value: JSON.stringify(record[k]!.slice(0, 24)).slice(1, -1),
+        });
+      }
+    }
+    for (const k of blank) {
+      if ((record[k] ?? '').trim() !== '') {
+        throw new PmError(ERROR_CODES.invalidValue, `${at} line ${line} column ${k + 1}`, 'is a cell under a blank header cell', { value: JSON.stringify(record[k]!.slice(0, 24)).slice(1, -1) });
+      }
+    }
     const cells: Partial<Record<Column, string>> = {};
     for (const c of columns.values()) {
       const v = record[c.index];
-      cells[c.name] = v === undefined ? (c.name === 'id' || c.name === 'Pu' || c.name === 'Mu' ? '' : undefined) : delimiter === ';' && c.name !== 'id' ? v.replace(',', '.') : v;
+      cells[c.name] =
+        v === undefined
+          ? c.name === 'id' || c.name === 'Pu' || c.name === 'Mu'
+            ? ''
+            : undefined
+          : delimiter === ';' && c.name !== 'id'
+            ? decimalCommaCell(v, opts.thousands, `${at} line ${line} ${c.name}`)
+            : v;
     }
     // an id from several source columns (`id=Story+Combo`), joined
     if (plan.idParts !== null) cells.id = plan.idParts.map((i) => (record[i] ?? '').trim()).join(ID_JOIN);

@@ -4,7 +4,7 @@
  * `<set>.partial-PID` and swapped in at the end; a run that was killed leaves `.partial-PID` and
  * perhaps `.old-PID`, which the next run removes or puts back (`recoverStale`).
  */
-import { closeSync, existsSync, lstatSync, mkdirSync, openSync, readdirSync, renameSync, rmSync, statSync, writeFileSync, writeSync } from 'node:fs';
+import { closeSync, existsSync, fsyncSync, lstatSync, mkdirSync, openSync, readdirSync, realpathSync, renameSync, rmSync, statSync, writeSync, type Stats } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
 import { ERROR_CODES, PmError } from '../errors.js';
 
@@ -37,45 +37,65 @@ export function ioError(path: string, e: unknown, verb = 'cannot be written'): P
   return new PmError(ERROR_CODES.io, path, `${verb} (${why})`, {}, code !== undefined && USER_CODES.has(code) ? 2 : 3);
 }
 
-export function writeFileAtomic(path: string, data: string | Uint8Array): void {
-  const tmp = `${path}.${process.pid}.tmp`;
-  try {
-    mkdirSync(dirname(path), { recursive: true });
-    const fault = injectedFault('write');
-    if (fault !== undefined && path.includes(fault)) {
-      writeFileSync(tmp, data.slice(0, 16));
-      throw errnoError('ENOSPC', 'write', tmp);
-    }
-    writeFileSync(tmp, data);
-    renameSync(tmp, path);
-  } catch (e) {
-    rmSync(tmp, { force: true, recursive: false, maxRetries: 0 });
-    throw ioError(path, e);
-  }
+/** What stands at a path, in words for an error. */
+function kindOf(st: Stats): string {
+  if (st.isDirectory()) return 'a folder';
+  if (st.isFIFO()) return 'a FIFO';
+  if (st.isCharacterDevice()) return 'a character device';
+  if (st.isBlockDevice()) return 'a block device';
+  if (st.isSocket()) return 'a socket';
+  return 'not a regular file';
 }
 
 /**
- * `writeFileAtomic` for a text made in pieces (a check report of 200k loads): the pieces go to the
- * temporary file in chunks as they come, so the whole text is never held; renamed when complete.
+ * The file a write to `path` replaces: `path` itself when absent or a regular file, or the regular file a
+ * symbolic link at `path` names (written through, as a shell's `>` does; the link stays). Anything else at
+ * the target (a folder, a FIFO, a device such as /dev/null, a socket, a link to nothing) is refused with
+ * exit 2 before anything is touched. `at` names the flag in the error.
  */
-export function writePiecesAtomic(path: string, pieces: Iterable<string>): void {
-  const tmp = `${path}.${process.pid}.tmp`;
+export function checkFileTarget(path: string, at = path): string {
+  let st: Stats;
+  try {
+    st = lstatSync(path);
+  } catch (e) {
+    if ((e as NodeJS.ErrnoException).code === 'ENOENT') return path;
+    throw ioError(at, e, 'cannot be read');
+  }
+  let real = path;
+  if (st.isSymbolicLink()) {
+    try {
+      real = realpathSync(path);
+      st = statSync(real);
+    } catch (e) {
+      const code = (e as NodeJS.ErrnoException).code;
+      if (code === 'ENOENT') throw new PmError(ERROR_CODES.conflict, at, 'is a symbolic link to nothing; pmchart writes through a link only to an existing regular file', { value: path }, 2);
+      throw ioError(at, e, 'cannot be read');
+    }
+  }
+  if (!st.isFile()) {
+    const kind = kindOf(st);
+    throw new PmError(ERROR_CODES.conflict, at, `exists and is ${kind === 'not a regular file' ? kind : `${kind}, not a regular file`}; pmchart replaces only a regular file`, { value: path }, 2);
+  }
+  return real;
+}
+
+/**
+ * The one atomic writer: checks the target (`checkFileTarget`), writes a temporary file beside the file it
+ * replaces with `fill`, syncs it to disk, closes it and renames it over the target; on any failure the
+ * temporary file is removed and the target is as it was.
+ */
+function writeAtomic(path: string, at: string | undefined, fill: (fd: number, tmp: string) => void): void {
+  const real = checkFileTarget(path, at ?? path);
+  const tmp = `${real}.${process.pid}.tmp`;
   let fd: number | undefined;
   try {
-    mkdirSync(dirname(path), { recursive: true });
+    mkdirSync(dirname(real), { recursive: true });
     fd = openSync(tmp, 'w');
-    const fault = injectedFault('write');
-    const failing = fault !== undefined && path.includes(fault);
-    for (const chunk of chunked(pieces)) {
-      if (failing) {
-        writeSync(fd, chunk.slice(0, 16));
-        throw errnoError('ENOSPC', 'write', tmp);
-      }
-      writeSync(fd, chunk);
-    }
+    fill(fd, tmp);
+    fsyncSync(fd);
     closeSync(fd);
     fd = undefined;
-    renameSync(tmp, path);
+    renameSync(tmp, real);
   } catch (e) {
     if (fd !== undefined) {
       try {
@@ -85,8 +105,40 @@ export function writePiecesAtomic(path: string, pieces: Iterable<string>): void 
       }
     }
     rmSync(tmp, { force: true, recursive: false, maxRetries: 0 });
-    throw ioError(path, e);
+    throw ioError(at ?? path, e);
   }
+}
+
+/** Writes `data` to `path` atomically (see `writeAtomic`); `at` names the flag in errors (default: the path). */
+export function writeFileAtomic(path: string, data: string | Uint8Array, at?: string): void {
+  writeAtomic(path, at, (fd, tmp) => {
+    const fault = injectedFault('write');
+    if (fault !== undefined && path.includes(fault)) {
+      if (typeof data === 'string') writeSync(fd, data.slice(0, 16));
+      else writeSync(fd, data.subarray(0, 16));
+      throw errnoError('ENOSPC', 'write', tmp);
+    }
+    const bytes = typeof data === 'string' ? Buffer.from(data, 'utf8') : data;
+    for (let off = 0; off < bytes.length; ) off += writeSync(fd, bytes, off, bytes.length - off);
+  });
+}
+
+/**
+ * `writeFileAtomic` for a text made in pieces (a check report of 200k loads): the pieces go to the
+ * temporary file in chunks as they come, so the whole text is never held; renamed when complete.
+ */
+export function writePiecesAtomic(path: string, pieces: Iterable<string>, at?: string): void {
+  writeAtomic(path, at, (fd, tmp) => {
+    const fault = injectedFault('write');
+    const failing = fault !== undefined && path.includes(fault);
+    for (const chunk of chunked(pieces)) {
+      if (failing) {
+        writeSync(fd, chunk.slice(0, 16));
+        throw errnoError('ENOSPC', 'write', tmp);
+      }
+      writeSync(fd, chunk);
+    }
+  });
 }
 
 /** Joins small pieces into chunks of about 64 kB, so that output takes few writes. */

@@ -8,6 +8,7 @@ import { compile } from 'vega-lite';
 import { expressionInterpreter } from 'vega-interpreter';
 import { liveData, liveTemplateParams, pageChartData, pageChartTemplate, type PageChartData, type PageLoad } from '../chart/page-spec.js';
 import { chartSetSnippet, commandLine } from './commands.js';
+import { esc } from './markup.js';
 import { biaxialRows, biaxialTemplate, type BiaxialRow, type BiaxialWords } from './biaxial-spec.js';
 import { biaxialView, chartView, checkFlags, loadsView, PAGE_CAUTION, readingAt, type BiaxialView, type ChartView, type CheckJson, type PageFields, type PageLoads } from './engine.js';
 import type { ColumnCheck } from '../design/column-check.js';
@@ -233,7 +234,6 @@ function readAtPlot(x: number, y: number): void {
 
 // ── tables and text ─────────────────────────────────────────────────────────────────────────────
 
-const esc = (s: string): string => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
 const cell = (v: unknown, d = 4, cls = ''): string =>
   `<td${cls ? ` class="${cls}"` : ''} data-value="${v === null || v === undefined ? '' : esc(String(v))}">${typeof v === 'number' ? fmt(v, d) : v === null || v === undefined ? '—' : esc(String(v))}</td>`;
 

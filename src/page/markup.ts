@@ -4,7 +4,11 @@
  */
 import { FIELD_GROUPS, type FieldDef } from './fields.js';
 
-export const esc = (s: string): string => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
+/**
+ * The page's one escaper, for text and for every attribute value (markup here and the views app.ts builds):
+ * a load id with `"` or `'` cannot leave its attribute (before, app.ts had its own that left `"` alone).
+ */
+export const esc = (s: string): string => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
 
 function control(d: FieldDef): string {
   const id = `f-${d.key}`;

@@ -28,4 +28,23 @@ export const existsSync = (name: string): boolean => files.has(String(name));
 export function statSync(name: string): { size: number } {
   return { size: new TextEncoder().encode(readFileSync(name)).length };
 }
-export default { readFileSync, writeFileSync, renameSync, rmSync, existsSync, statSync };
+/** The bounded reader (src/io/read.ts) opens, reads in chunks and closes: the same over the pasted text's bytes. */
+const open = new Map<number, { bytes: Uint8Array; pos: number }>();
+let nextFd = 3;
+export function openSync(name: string): number {
+  const fd = nextFd++;
+  open.set(fd, { bytes: new TextEncoder().encode(readFileSync(name)), pos: 0 });
+  return fd;
+}
+export function readSync(fd: number, buf: Uint8Array, offset: number, length: number): number {
+  const f = open.get(fd);
+  if (!f) throw Object.assign(new Error('bad file descriptor'), { code: 'EBADF' });
+  const n = Math.min(length, f.bytes.length - f.pos);
+  buf.set(f.bytes.subarray(f.pos, f.pos + n), offset);
+  f.pos += n;
+  return n;
+}
+export function closeSync(fd: number): void {
+  open.delete(fd);
+}
+export default { readFileSync, writeFileSync, renameSync, rmSync, existsSync, statSync, openSync, readSync, closeSync };

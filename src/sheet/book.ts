@@ -7,7 +7,7 @@
 import fontkit from '@pdf-lib/fontkit';
 import { readFileSync } from 'node:fs';
 import { PDFArray, PDFDocument, PDFName, PDFNumber, PDFHexString, rgb, type PDFFont, type PDFPage, type PDFRef, type RGB } from 'pdf-lib';
-import { describeArrangement, describeShape, describeTransverse, fmt, stressText } from '../config/describe.js';
+import { describeArrangement, describeShape, describeTransverse, fmt, stressText, gammaText } from '../config/describe.js';
 import { RATIO_SYMBOL, type ResolvedChartSet } from '../config/types.js';
 import type { BasisSymbols } from '../codes/types.js';
 import { COLOURS } from '../chart/style.js';
@@ -143,7 +143,7 @@ function drawCover(page: PDFPage, input: BookInput, regular: PDFFont, bold: PDFF
   const sheets = set.sheets.length;
   const fcs = [...new Set(set.sheets.map((s) => stressText(s.fc, set.units)))].join(', ');
   const fys = [...new Set(set.sheets.map((s) => stressText(s.fy, set.units)))].join(', ');
-  const gammas = [...new Set(set.sheets.map((s) => s.gamma.toFixed(2)))].join(', ');
+  const gammas = [...new Set(set.sheets.map((s) => gammaText(s.gamma)))].join(', ');
   const facts: [string, string][] = [
     ['Design basis', input.basisTitle],
     ['Sheets', `${sheets} (index on page 2, sheets from page ${front + 1})`],
@@ -233,7 +233,7 @@ function drawIndex(page: PDFPage, input: BookInput, regular: PDFFont, bold: PDFF
     const s = set.sheets[i]!;
     if ((i - from) % 2 === 1) page.drawRectangle({ x: m, y: y - 0.45 * u, width: W - 2 * m, height: 15, color: hex('#f3f5f7') });
     row(
-      [String(s.index), describeShape(s.shape), stressText(s.fc, set.units), stressText(s.fy, set.units), withGammaB ? `${s.gamma.toFixed(2)} · ${s.gammaB === undefined ? '—' : s.gammaB.toFixed(2)}` : s.gamma.toFixed(2), describeArrangement(s.arrangement) + biaxialIndexText(s), describeTransverse(s.transverse), s.fileStem, String(front + i + 1)],
+      [String(s.index), describeShape(s.shape), stressText(s.fc, set.units), stressText(s.fy, set.units), withGammaB ? `${gammaText(s.gamma)} · ${s.gammaB === undefined ? '—' : gammaText(s.gammaB)}` : gammaText(s.gamma), describeArrangement(s.arrangement) + biaxialIndexText(s), describeTransverse(s.transverse), s.fileStem, String(front + i + 1)],
       regular,
       COLOURS.ink,
     );

@@ -6,16 +6,27 @@ import { computeFamily } from '../analysis/family.js';
 import { buildSheet } from '../chart/sheet-data.js';
 import type { CapContext } from '../codes/types.js';
 import type { ResolvedChartSet } from '../config/types.js';
+import { ERROR_CODES, PmError } from '../errors.js';
 import { generatorLabel } from '../version.js';
 import { buildBiaxialSheet } from '../chart/biaxial-sheet.js';
 import { basisForSheet, biaxialFamilyForSheet, SHEET_BASE_POINTS, sheetRhos, sheetShape } from './curves.js';
 
-export type SheetFormat = 'svg' | 'png' | 'pdf';
+export const SHEET_FORMATS = ['svg', 'png', 'pdf'] as const;
+export type SheetFormat = (typeof SHEET_FORMATS)[number];
 
-/** Draws sheet `index` of the set; SVG as text, PNG and PDF as bytes (PDF dates fixed to the set's date). */
-export async function renderSheet(set: ResolvedChartSet, index = 0, format: SheetFormat = 'pdf', opts: { capContext?: CapContext } = {}): Promise<string | Uint8Array> {
-  const sheet = set.sheets[index];
-  if (!sheet) throw new RangeError(`sheet ${index} is not in the set (it has ${set.sheets.length})`);
+/**
+ * Draws sheet number `sheetNumber` of the set, counted from 1 as on the sheet ("sheet 1 of 14") and in
+ * `ResolvedSheet.index`; SVG as text, PNG and PDF as bytes (PDF dates fixed to the set's date). Any other
+ * number (0, 15 of 14, 1.5, NaN) is a PmError naming `sheet`.
+ */
+export async function renderSheet(set: ResolvedChartSet, sheetNumber = 1, format: SheetFormat = 'pdf', opts: { capContext?: CapContext } = {}): Promise<string | Uint8Array> {
+  const count = set?.sheets?.length ?? 0;
+  if (!Number.isInteger(sheetNumber) || sheetNumber < 1 || sheetNumber > count) {
+    throw new PmError(ERROR_CODES.outOfRange, 'sheet', `is not a sheet of the set (sheets are numbered 1–${count})`, { value: sheetNumber, allowed: `1–${count}` });
+  }
+  if (!(SHEET_FORMATS as readonly string[]).includes(format)) throw new PmError(ERROR_CODES.invalidValue, 'format', 'is not one of the allowed values', { value: String(format), allowed: SHEET_FORMATS.join(', ') });
+  const index = sheetNumber - 1;
+  const sheet = set.sheets[index]!;
   const basis = basisForSheet(set, sheet);
   const { SheetRenderer } = await import('../render/renderer.js');
   const renderer = await SheetRenderer.create();

@@ -61,7 +61,7 @@ describe("import { checkColumn } from 'pmchart'", () => {
       import { readFileSync } from 'node:fs';
       import { readChartSet, renderSheet } from 'pmchart';
       const set = readChartSet(readFileSync('charts-config/demo.json', 'utf8'));
-      const svg = await renderSheet(set, 0, 'svg');
+      const svg = await renderSheet(set, 1, 'svg');
       console.log(JSON.stringify({ sheets: set.sheets.length, svg: typeof svg === 'string' && svg.startsWith('<svg'), caution: String(svg).includes('qualified engineers') }));
     `);
     expect(r.stderr).toBe('');

@@ -112,3 +112,25 @@ describe('charts-config/chart-set.schema.json', () => {
     expect(demo.$schema).toBe('./chart-set.schema.json');
   });
 });
+
+describe('chart-set text (issue 25)', () => {
+  it('accepts a byte-order mark (an editor on Windows writes one); before, "Unexpected token" with an invisible character', () => {
+    expect(readChartSet(`\uFEFF${JSON.stringify(minimal)}`).sheets).toHaveLength(1);
+  });
+  it('refuses a control character in a title-block field, so every SVG stays well-formed XML', () => {
+    expect(() => readChartSet(JSON.stringify({ ...minimal, titleBlock: { ...minimal.titleBlock, office: 'Office\u0007' } }))).toThrow(
+      'titleBlock.office: "Office\\u0007" has a control character (plain text only)',
+    );
+  });
+  it('does not echo 1 MB of NUL bytes in the error', () => {
+    let message = '';
+    try {
+      readChartSet('\u0000'.repeat(1 << 20), { source: 'set.json' });
+    } catch (e) {
+      message = (e as Error).message;
+    }
+    expect(message.startsWith('set.json: is not valid JSON')).toBe(true);
+    expect(message.length).toBeLessThan(400);
+    expect(message).not.toMatch(/\u0000/);
+  });
+});

@@ -60,7 +60,7 @@ describe.each([
 
 describe('renderSheet', () => {
   it('draws a biaxial sheet of a set as SVG with its levels', async () => {
-    const svg = (await renderSheet(setOf({ paper: { size: 'letter' } }), 0, 'svg')) as string;
+    const svg = (await renderSheet(setOf({ paper: { size: 'letter' } }), 1, 'svg')) as string;
     expect(svg).toContain('P/(f′c·Ag) = 0.50');
     expect(svg).toContain('Bresler 1960');
   }, 30_000);

@@ -16,7 +16,7 @@ describe('writeFileAtomic', () => {
     } catch (e) {
       err = e as typeof err;
     }
-    expect(err?.message).toMatch(/report\.pdf: cannot be written \((EISDIR|EEXIST|ENOTEMPTY)\)$/);
+    expect(err?.message).toMatch(/report\.pdf: .*report\.pdf exists and is a folder, not a regular file; pmchart replaces only a regular file$/); // issue 25: refused before any write
     expect(err?.exitCode).toBe(2);
     expect(readdirSync(dir)).toEqual(['report.pdf']);
   });
