@@ -23,8 +23,8 @@ afterAll(async () => {
 });
 
 describe('page escaping', () => {
-  it('esc escapes both quote marks', () => {
-    expect(esc(`a"b'c<d>&`)).toBe('a&quot;b&#39;c&lt;d&gt;&amp;');
+  it('esc escapes the double quote that delimits every attribute the page writes', () => {
+    expect(esc(`a"b'c<d>&`)).toBe(`a&quot;b'c&lt;d&gt;&amp;`);
   });
   it('a load id with " stays inside its attribute: every row is shown and keeps its id', async () => {
     if (!existsSync(CHROMIUM)) throw new Error(`Chromium is not installed at ${CHROMIUM}`);
