@@ -267,8 +267,8 @@ const RING_TURNS = 4;
  * orientations over half a pitch, the weakest governs. Any other layout not symmetric about the bending
  * axis meets a negative moment as its mirror image. Symmetric layouts have one variant.
  */
-export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: number, gammaB?: number): Variant[] {
-  if (shape.kind === 'circle' && arrangement.kind === 'ring') {
+export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: number, gammaB?: number, checked?: { readonly arrangement: Arrangement; readonly bars: readonly Bar[] }): Variant[] {
+  if (shape.kind === 'circle' && arrangement.kind === 'ring' && (!checked || checked.arrangement.kind === 'ring')) {
     const pitch = 360 / arrangement.bars;
     return Array.from({ length: RING_TURNS + 1 }, (_, k) => {
       const deg = (k * pitch) / (2 * RING_TURNS);
@@ -276,7 +276,9 @@ export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: n
     });
   }
   const bars = layoutBars(shape, arrangement, 1, layoutOptions(gamma, gammaB));
-  if (symmetricAboutBendingAxis(bars, sectionDepth(shape))) return [{ label: 'as drawn', sign: 0, turnDeg: 0, map: (b) => [...b] }];
+  // the checked bars (a given layout) have their own symmetry: both must be symmetric for one variant
+  const symmetric = symmetricAboutBendingAxis(bars, sectionDepth(shape)) && (!checked || symmetricAboutBendingAxis(checked.bars, sectionDepth(shape)));
+  if (symmetric) return [{ label: 'as drawn', sign: 0, turnDeg: 0, map: (b) => [...b] }];
   return [
     { label: 'branch with compression on the +y face', sign: 1, turnDeg: 0, map: (b) => [...b] },
     { label: 'branch with compression on the −y face', sign: -1, turnDeg: 0, map: mirroredBars },
@@ -301,9 +303,10 @@ const swapAxes = (bars: readonly Bar[]): Bar[] => bars.map((b) => ({ x: b.y, y: 
 const turnedShape = (shape: Shape): Shape => (shape.kind === 'rectangle' ? { ...shape, b: shape.h, h: shape.b } : shape);
 
 /** The variants of the section turned for bending about y (rings: the same orientations; otherwise the ±x faces). */
-function yVariants(shape: Shape, arrangement: Arrangement, unitBars: readonly Bar[]): Variant[] {
-  if (shape.kind === 'circle' && arrangement.kind === 'ring') return sectionVariants(shape, arrangement, 0.8 /* unused for rings */).map((v) => ({ ...v, map: (b) => v.map(swapAxes(b)) }));
-  if (symmetricAboutBendingAxis(swapAxes(unitBars), sectionDepth(turnedShape(shape)))) return [{ label: 'as drawn, about y', sign: 0, turnDeg: 0, map: swapAxes }];
+function yVariants(shape: Shape, arrangement: Arrangement, unitBars: readonly Bar[], checked?: { readonly arrangement: Arrangement; readonly bars: readonly Bar[] }): Variant[] {
+  if (shape.kind === 'circle' && arrangement.kind === 'ring' && (!checked || checked.arrangement.kind === 'ring')) return sectionVariants(shape, arrangement, 0.8 /* unused for rings */).map((v) => ({ ...v, map: (b) => v.map(swapAxes(b)) }));
+  const depthY = sectionDepth(turnedShape(shape));
+  if (symmetricAboutBendingAxis(swapAxes(unitBars), depthY) && (!checked || symmetricAboutBendingAxis(swapAxes(checked.bars), depthY))) return [{ label: 'as drawn, about y', sign: 0, turnDeg: 0, map: swapAxes }];
   return [
     { label: 'branch with compression on the +x face', sign: 1, turnDeg: 0, map: swapAxes },
     { label: 'branch with compression on the −x face', sign: -1, turnDeg: 0, map: (b) => mirroredBars(swapAxes(b)) },
@@ -383,7 +386,9 @@ export function prepareColumnCheck(input: ColumnCheckInput, opts: { readings?: b
   const chartReq = (arrangement: Arrangement) =>
     buildChartSet({ basis, shape, arrangement, gamma: input.gamma, ...(input.gammaB !== undefined ? { gammaB: input.gammaB } : {}), capContext, rhoLimits: basis.rhoLimits, ...(input.chartGammaStep !== undefined ? { gammaStep: input.chartGammaStep } : {}) });
   const charts = readings ? chartReq(input.arrangement) : null;
-  const variants = sectionVariants(shape, input.arrangement, input.gamma, input.gammaB).map((info): PreparedVariant => {
+  // the symmetry of the bars checked, not only of the arrangement the sheets are drawn for
+  const checkedLayout = checkedBars ? { arrangement: input.layout?.arrangement ?? input.arrangement, bars: checkedBars } : undefined;
+  const variants = sectionVariants(shape, input.arrangement, input.gamma, input.gammaB, checkedLayout).map((info): PreparedVariant => {
     const table = tabulate(prepareSection(basis, shape, info.map(unit), capContext), 128);
     const checked = checkedBars ? tabulate(prepareSection(basis, shape, info.map(checkedBars), capContext), 128) : null;
     return { info, table, checked };
@@ -399,7 +404,7 @@ export function prepareColumnCheck(input: ColumnCheckInput, opts: { readings?: b
   const yAxis = (): YAxisContext => {
     if (yAxisCtx) return yAxisCtx;
     const shapeY = turnedShape(shape);
-    const yv = yVariants(shape, input.arrangement, unit).map(
+    const yv = yVariants(shape, input.arrangement, unit, checkedLayout).map(
       (info): PreparedVariant => ({
         info,
         table: tabulate(prepareSection(basis, shapeY, info.map(unit), capContext), 128),
