@@ -63,6 +63,13 @@ describe('a ring turned off a bar or a mid-gap goes through the exact search (EN
     expectClose(f!.limit!, r.utilisation!, 1e-12);
   });
 
+  it('about y alone (the EN 1992-1-1 6.1(4) minimum e0 = max(h/30, 20 mm) about y) the turned ring is searched too', () => {
+    // e0 = max(500/30, 20) = 20 mm: M0,y = 1000 kN · 0.020 m = 20 kN·m about y; a circle turned about y is the same ring
+    const r = probe;
+    expectClose(r.yAxis!.Mdesign, 1000e3 * 20, 1e-9);
+    expectClose(r.yAxis!.exact!.utilisation!, exactOverTurns(0.01, 1000e3, 20e6), 1e-6);
+  });
+
   it('with no reinforcement given, the ρg required is not below the exact one', () => {
     const r = checkColumn({ ...base, loads: [{ id: 'R', Pu: 1000e3 / probe.utilisation!, Mu: 200e6 / probe.utilisation! }] }).results[0]!;
     // the uniaxial ρg required is 0.01 (the load sits on the ρg 0.01 curve); the exact one is higher
