@@ -268,8 +268,8 @@ const RING_TURNS = 4;
  * orientations over half a pitch, the weakest governs. Any other layout not symmetric about the bending
  * axis meets a negative moment as its mirror image. Symmetric layouts have one variant.
  */
-export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: number, gammaB?: number): Variant[] {
-  if (shape.kind === 'circle' && arrangement.kind === 'ring') {
+export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: number, gammaB?: number, checked?: { readonly arrangement: Arrangement; readonly bars: readonly Bar[] }): Variant[] {
+  if (shape.kind === 'circle' && arrangement.kind === 'ring' && (!checked || checked.arrangement.kind === 'ring')) {
     const pitch = 360 / arrangement.bars;
     return Array.from({ length: RING_TURNS + 1 }, (_, k) => {
       const deg = (k * pitch) / (2 * RING_TURNS);
@@ -277,7 +277,9 @@ export function sectionVariants(shape: Shape, arrangement: Arrangement, gamma: n
     });
   }
   const bars = layoutBars(shape, arrangement, 1, layoutOptions(gamma, gammaB));
-  if (symmetricAboutBendingAxis(bars, sectionDepth(shape))) return [{ label: 'as drawn', sign: 0, turnDeg: 0, map: (b) => [...b] }];
+  // the checked bars (a given layout) have their own symmetry: both must be symmetric for one variant
+  const symmetric = symmetricAboutBendingAxis(bars, sectionDepth(shape)) && (!checked || symmetricAboutBendingAxis(checked.bars, sectionDepth(shape)));
+  if (symmetric) return [{ label: 'as drawn', sign: 0, turnDeg: 0, map: (b) => [...b] }];
   return [
     { label: 'branch with compression on the +y face', sign: 1, turnDeg: 0, map: (b) => [...b] },
     { label: 'branch with compression on the −y face', sign: -1, turnDeg: 0, map: mirroredBars },
@@ -302,9 +304,10 @@ const swapAxes = (bars: readonly Bar[]): Bar[] => bars.map((b) => ({ x: b.y, y: 
 const turnedShape = (shape: Shape): Shape => (shape.kind === 'rectangle' ? { ...shape, b: shape.h, h: shape.b } : shape);
 
 /** The variants of the section turned for bending about y (rings: the same orientations; otherwise the ±x faces). */
-function yVariants(shape: Shape, arrangement: Arrangement, unitBars: readonly Bar[]): Variant[] {
-  if (shape.kind === 'circle' && arrangement.kind === 'ring') return sectionVariants(shape, arrangement, 0.8 /* unused for rings */).map((v) => ({ ...v, map: (b) => v.map(swapAxes(b)) }));
-  if (symmetricAboutBendingAxis(swapAxes(unitBars), sectionDepth(turnedShape(shape)))) return [{ label: 'as drawn, about y', sign: 0, turnDeg: 0, map: swapAxes }];
+function yVariants(shape: Shape, arrangement: Arrangement, unitBars: readonly Bar[], checked?: { readonly arrangement: Arrangement; readonly bars: readonly Bar[] }): Variant[] {
+  if (shape.kind === 'circle' && arrangement.kind === 'ring' && (!checked || checked.arrangement.kind === 'ring')) return sectionVariants(shape, arrangement, 0.8 /* unused for rings */).map((v) => ({ ...v, map: (b) => v.map(swapAxes(b)) }));
+  const depthY = sectionDepth(turnedShape(shape));
+  if (symmetricAboutBendingAxis(swapAxes(unitBars), depthY) && (!checked || symmetricAboutBendingAxis(swapAxes(checked.bars), depthY))) return [{ label: 'as drawn, about y', sign: 0, turnDeg: 0, map: swapAxes }];
   return [
     { label: 'branch with compression on the +x face', sign: 1, turnDeg: 0, map: swapAxes },
     { label: 'branch with compression on the −x face', sign: -1, turnDeg: 0, map: (b) => mirroredBars(swapAxes(b)) },
@@ -351,6 +354,12 @@ export interface ColumnCheckContext {
   readonly yAxis: () => YAxisContext;
   /** detailing findings of the given reinforcement that do not depend on the load (empty when none is given) */
   readonly detailing: readonly RuleFinding[];
+  /**
+   * A ring in a circle: the sampled orientations (degrees from a bar at the compression extreme) with neither a
+   * bar nor a mid-gap on the bending plane. Such a turned ring is not symmetric about the bending plane, so each
+   * goes through the exact search; empty for other layouts.
+   */
+  readonly ringTurns: readonly number[];
 }
 
 /** The section as the y-axis check sees it: b and h swapped, bars swapped, its variants. */
@@ -378,7 +387,9 @@ export function prepareColumnCheck(input: ColumnCheckInput, opts: { readings?: b
   const chartReq = (arrangement: Arrangement) =>
     buildChartSet({ basis, shape, arrangement, gamma: input.gamma, ...(input.gammaB !== undefined ? { gammaB: input.gammaB } : {}), capContext, rhoLimits: basis.rhoLimits, ...(input.chartGammaStep !== undefined ? { gammaStep: input.chartGammaStep } : {}) });
   const charts = readings ? chartReq(input.arrangement) : null;
-  const variants = sectionVariants(shape, input.arrangement, input.gamma, input.gammaB).map((info): PreparedVariant => {
+  // the symmetry of the bars checked, not only of the arrangement the sheets are drawn for
+  const checkedLayout = checkedBars ? { arrangement: input.layout?.arrangement ?? input.arrangement, bars: checkedBars } : undefined;
+  const variants = sectionVariants(shape, input.arrangement, input.gamma, input.gammaB, checkedLayout).map((info): PreparedVariant => {
     const table = tabulate(prepareSection(basis, shape, info.map(unit), capContext), 128);
     const checked = checkedBars ? tabulate(prepareSection(basis, shape, info.map(checkedBars), capContext), 128) : null;
     return { info, table, checked };
@@ -387,12 +398,14 @@ export function prepareColumnCheck(input: ColumnCheckInput, opts: { readings?: b
   const planeSymmetric = symmetricAboutBendingPlane(unit, depth) && (checkedBars === null || symmetricAboutBendingPlane(checkedBars, depth));
   const axisSymmetric = variants.every((v) => v.info.sign === 0) && (checkedBars === null || shape.kind === 'circle' || symmetricAboutBendingAxis(checkedBars, depth));
   // the exact surface serves loads with Muy and the exact search of a layout whose neutral axis inclines about x or y
-  const checkedBiaxial = checkedBars && (biaxial || !planeSymmetric || !axisSymmetric) ? prepareBiaxial(basis, shape, checkedBars, capContext) : null;
+  // a ring turned off its symmetric orientations (a bar, or a mid-gap, on the bending plane) inclines its neutral axis
+  const ringTurns = variants.filter((v) => v.info.turnDeg > 1e-9 && shape.kind === 'circle' && input.arrangement.kind === 'ring' && Math.abs(v.info.turnDeg - 180 / input.arrangement.bars) > 1e-9).map((v) => v.info.turnDeg);
+  const checkedBiaxial = checkedBars && (biaxial || !planeSymmetric || !axisSymmetric || ringTurns.length > 0) ? prepareBiaxial(basis, shape, checkedBars, capContext) : null;
   let yAxisCtx: YAxisContext | null = null;
   const yAxis = (): YAxisContext => {
     if (yAxisCtx) return yAxisCtx;
     const shapeY = turnedShape(shape);
-    const yv = yVariants(shape, input.arrangement, unit).map(
+    const yv = yVariants(shape, input.arrangement, unit, checkedLayout).map(
       (info): PreparedVariant => ({
         info,
         table: tabulate(prepareSection(basis, shapeY, info.map(unit), capContext), 128),
@@ -431,7 +444,7 @@ export function prepareColumnCheck(input: ColumnCheckInput, opts: { readings?: b
           checkedRho,
         )
       : [];
-  return { input, basis, area, depth, capContext, variants, charts, biaxialCharts, checkedRho, checkedBars, positionBars, checkedBiaxial, biaxial, planeSymmetric, axisSymmetric, yAxis, detailing };
+  return { input, basis, area, depth, capContext, variants, charts, biaxialCharts, checkedRho, checkedBars, positionBars, checkedBiaxial, biaxial, planeSymmetric, axisSymmetric, yAxis, detailing, ringTurns };
 }
 
 // ───────────────────────────── one load ─────────────────────────────
@@ -644,9 +657,49 @@ function exactAlone(ctx: ColumnCheckContext, Pu: number, axis: 'x' | 'y', M: num
   return { utilisation: null, rhoRequired: rho, rhoStatus: status, signs, neutralAxisAngleDeg: null };
 }
 
-/** The exact searches a load needs: about x where the layout is not symmetric about the bending plane, about y alone where it is not symmetric about the x axis. */
+/**
+ * The exact search of a ring at its turned orientations: the actual ring (a bar at the compression extreme as
+ * drawn) under the moment M in the direction turned by each orientation, the neutral axis free to incline. The ring
+ * is even about a bar and about a mid-gap, so the direction's sign does not matter. Checked reinforcement: the
+ * largest exact utilisation over the turns; else the largest exact ρg required (bars smeared at γ).
+ */
+function exactRing(ctx: ColumnCheckContext, Pu: number, M: number, limits: { min: number; max: number }): ExactUniaxial {
+  const { basis, input } = ctx;
+  const vec = (deg: number) => ({ Mux: M * Math.cos((deg * Math.PI) / 180), Muy: M * Math.sin((deg * Math.PI) / 180) });
+  if (ctx.checkedBiaxial) {
+    let best: { r: ReturnType<typeof biaxialRay>; deg: number } | null = null;
+    for (const deg of ctx.ringTurns) {
+      const m = vec(deg);
+      const r = biaxialRay(ctx.checkedBiaxial, Pu, m.Mux, m.Muy);
+      if (!best || r.utilisation > best.r.utilisation) best = { r, deg };
+    }
+    // inclination of the neutral axis from the turned bending axis, degrees in (−180, 180]
+    const deg = (best!.r.point.theta * 180) / Math.PI - best!.deg;
+    const wrapped = deg - 360 * Math.ceil((deg - 180) / 360);
+    return { utilisation: best!.r.utilisation, rhoRequired: null, rhoStatus: null, signs: [1], neutralAxisAngleDeg: wrapped };
+  }
+  let rho = -Infinity;
+  let status: RhoStatus = 'minimum-governs';
+  for (const deg of ctx.ringTurns) {
+    const r = biaxialRhoRequired(basis, input.shape, input.arrangement, input.gamma, ctx.capContext, { Pu, ...vec(deg) }, limits, input.gammaB);
+    if (r.rho === null) return { utilisation: null, rhoRequired: null, rhoStatus: 'not-possible', signs: [1], neutralAxisAngleDeg: null };
+    if (r.rho > rho) {
+      rho = r.rho;
+      status = r.status;
+    }
+  }
+  return { utilisation: null, rhoRequired: rho, rhoStatus: status, signs: [1], neutralAxisAngleDeg: null };
+}
+
+/**
+ * The exact searches a load needs: about x where the layout is not symmetric about the bending plane, about y alone
+ * where it is not symmetric about the x axis, and about each axis at a ring's turned orientations.
+ */
 function exactSearches(ctx: ColumnCheckContext, Pu: number, d: Demand): { x: ExactUniaxial | null; y: ExactUniaxial | null } {
   if (!d.finiteMoments) return { x: null, y: null };
+  if (ctx.ringTurns.length > 0) {
+    return { x: d.Mdesign > 0 ? exactRing(ctx, Pu, d.Mdesign, d.limits) : null, y: d.y ? exactRing(ctx, Pu, d.y.Mdesign, d.limits) : null };
+  }
   const x = !ctx.planeSymmetric && d.Mdesign > 0 ? exactAlone(ctx, Pu, 'x', d.Mdesign, d.signs, d.limits) : null;
   const y = d.y && !ctx.axisSymmetric ? exactAlone(ctx, Pu, 'y', d.y.Mdesign, [1, -1], d.limits) : null;
   return { x, y };
@@ -740,7 +793,7 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
     };
     if (d.y.raised) notes.push('about y alone: the moment raised to the basis minimum (one axis at a time)');
   }
-  if (ex.x) notes.push('bars not symmetric about the bending plane: exact search with the neutral axis free to incline');
+  if (ex.x) notes.push(ctx.ringTurns.length > 0 ? 'ring turned off a bar or a mid-gap: exact search with the neutral axis free to incline' : 'bars not symmetric about the bending plane: exact search with the neutral axis free to incline');
 
   // 4. status and measure: the largest of every figure
   const utilisation = checked ? g.cap.utilisation : null;
