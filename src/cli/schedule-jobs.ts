@@ -3,11 +3,10 @@
  * (as chart sets spread sheets, src/sheet/pipeline.ts). Rows come back by chunk and are joined in chunk
  * order, so the output does not depend on N. Any child that fails stops the others.
  */
-import { fork } from 'node:child_process';
 import { dirname, extname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { ERROR_CODES, PmError, type ErrorCode } from '../errors.js';
 import type { MarkRow } from '../flags/schedule-rows.js';
+import { runInChildren } from '../io/child-pool.js';
 import type { PreparedSchedule } from './schedule.js';
 import type { ScheduleTask, ScheduleWorkerMessage } from './schedule-worker.js';
 
@@ -21,52 +20,19 @@ export async function rowsInChildren(p: PreparedSchedule, onMark?: (done: number
     tasks.push({ type: 'task', chunk: k, rows, loads: rows.map((r) => [r.mark, p.loads.get(r.mark)!]), proposals: p.proposals, at: p.at });
   }
   const here = fileURLToPath(import.meta.url);
-  const ext = extname(here);
-  const workerPath = join(dirname(here), `schedule-worker${ext}`);
-  const execArgv = ext === '.ts' ? ['--import', 'tsx'] : [];
-  const jobs = Math.min(p.jobs, tasks.length);
-  const results: MarkRow[][] = new Array(tasks.length);
-  let next = 0;
   let done = 0;
-  const children = Array.from({ length: jobs }, () => fork(workerPath, [], { execArgv, stdio: ['ignore', 'inherit', 'inherit', 'ipc'] }));
-  try {
-    await Promise.all(
-      children.map(
-        (child, k) =>
-          new Promise<void>((resolveChild, reject) => {
-            let finished = false;
-            const give = () => {
-              const t = tasks[next++];
-              if (t) child.send(t);
-              else {
-                finished = true;
-                child.send({ type: 'exit' });
-                resolveChild();
-              }
-            };
-            child.on('message', (m: ScheduleWorkerMessage) => {
-              if (m.type === 'done') {
-                results[m.chunk] = m.rows;
-                for (let i = 0; i < m.rows.length; i++) onMark?.(++done);
-                give();
-              } else {
-                const pm = m.error.pm;
-                reject(pm ? new PmError(pm.code as ErrorCode, pm.path, pm.detail, pm.facts, pm.exitCode) : new Error(m.error.message));
-              }
-            });
-            child.on('error', (e) => reject(new PmError(ERROR_CODES.environment, '--jobs', `process ${k + 1} cannot be run (${(e as NodeJS.ErrnoException).code ?? e.message})`, {}, 3)));
-            child.on('exit', (code, signal) => {
-              if (!finished) reject(new PmError(ERROR_CODES.environment, '--jobs', `process ${k + 1} stopped (${signal ?? `exit code ${code}`})`, {}, 3));
-            });
-            give();
-          }),
-      ),
-    );
-  } catch (e) {
-    for (const c of children) if (c.exitCode === null && c.signalCode === null) c.kill('SIGTERM');
-    throw e;
-  } finally {
-    for (const c of children) if (c.connected) c.disconnect();
-  }
+  const results = await runInChildren<ScheduleTask, ScheduleWorkerMessage, MarkRow[]>({
+    workerPath: join(dirname(here), `schedule-worker${extname(here)}`),
+    tasks,
+    jobs: p.jobs,
+    taskMessage: (t) => t,
+    result: (m) => {
+      for (let i = 0; i < m.rows.length; i++) onMark?.(++done);
+      return { chunk: m.chunk, value: m.rows };
+    },
+    label: 'process',
+    failure: { path: '--jobs', exitCode: 3 },
+    keepErrorPath: true,
+  });
   return results.flat();
 }

@@ -4,6 +4,7 @@
  * child → {type:'done', chunk, rows} | {type:'error', error}.
  */
 import { isPmError } from '../errors.js';
+import type { ChildError } from '../io/child-pool.js';
 import type { FactoredLoad } from '../design/check.js';
 import { checkRows, type MarkRow } from '../flags/schedule-rows.js';
 import type { ScheduleRow } from '../input/schedule-csv.js';
@@ -18,7 +19,7 @@ export interface ScheduleTask {
 }
 export type ScheduleWorkerMessage =
   | { type: 'done'; chunk: number; rows: MarkRow[] }
-  | { type: 'error'; error: { message: string; pm?: { code: string; path: string; detail: string; facts: Record<string, unknown>; exitCode: number } } };
+  | { type: 'error'; error: ChildError };
 
 const send = (m: ScheduleWorkerMessage) => {
   if (process.connected) process.send?.(m);

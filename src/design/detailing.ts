@@ -123,6 +123,11 @@ export function findingText(basis: Basis, f: RuleFinding): string {
   const title = detailingRule(basis, f.rule)?.title ?? f.rule;
   const n = (x: number | null | undefined) => (x === null || x === undefined ? '—' : String(Number(x.toPrecision(4))));
   if (f.outcome === 'unchecked') return `${title}: unchecked`;
-  const cmp = f.rule === 'steel-min' || f.rule === 'clear-spacing' || f.rule === 'cover' ? (f.outcome === 'violated' ? '<' : '≥') : f.outcome === 'violated' ? '>' : '≤';
-  return `${title}: ${n(f.value)} ${cmp} ${n(f.limit)}`;
+  return `${title}: ${n(f.value)} ${findingComparison(f)} ${n(f.limit)}`;
+}
+
+/** How a detailing finding's value stands to its limit: rules with a lower limit (steel-min, clear spacing, cover) read ≥ when met, the others ≤. */
+export function findingComparison(f: RuleFinding): '<' | '≥' | '>' | '≤' {
+  const atLeast = f.rule === 'steel-min' || f.rule === 'clear-spacing' || f.rule === 'cover';
+  return atLeast ? (f.outcome === 'violated' ? '<' : '≥') : f.outcome === 'violated' ? '>' : '≤';
 }

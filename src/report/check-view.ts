@@ -10,6 +10,7 @@
 import type { RuleFinding } from '../codes/rules.js';
 import { strainClassWord, type Basis } from '../codes/types.js';
 import type { ColumnCheck, ColumnCheckFrame, ColumnCheckHead, ColumnLoadResult, LoadStatus, MeasureSource } from '../design/column-check.js';
+import { detailingRule, findingComparison } from '../design/detailing.js';
 import type { SlendernessResult } from '../design/slenderness.js';
 import { barSet } from '../section/bar-tables.js';
 import { faceCounts, type Arrangement } from '../section/types.js';
@@ -260,11 +261,10 @@ const OUTCOME_WORDS: Record<RuleFinding['outcome'], string> = { applied: 'applie
 
 /** A finding in words: the rule's title, its clause, the figures compared (display units) and the outcome; a non-binding rule broken is a note. */
 export function findingWords(basis: Basis, f: RuleFinding): string {
-  const rule = basis.detailing.rules.find((r) => r.id === f.rule);
+  const rule = detailingRule(basis, f.rule);
   const un = unitsOf(basis.units);
   const v = (x: number | null | undefined) => (x === null || x === undefined ? '—' : f.quantity === 'length' ? `${fmt(x, 4)} ${un.length}` : fmt(x, 4));
-  const atLeast = f.rule === 'steel-min' || f.rule === 'clear-spacing' || f.rule === 'cover';
-  const figures = f.outcome === 'unchecked' ? '' : ` ${v(f.value)} ${atLeast ? (f.outcome === 'violated' ? '<' : '≥') : f.outcome === 'violated' ? '>' : '≤'} ${v(f.limit)}`;
+  const figures = f.outcome === 'unchecked' ? '' : ` ${v(f.value)} ${findingComparison(f)} ${v(f.limit)}`;
   const outcome = f.outcome === 'violated' && rule && !rule.binding ? 'NOTE' : OUTCOME_WORDS[f.outcome];
   return `${rule?.title ?? f.rule} [${f.clause}${rule?.source === 'from memory' ? ', from memory' : ''}]:${figures} ${outcome}`;
 }

@@ -11,13 +11,13 @@
  * 5. The binder (book.ts) joins the chunk PDFs behind a cover and index, adds the outline and the
  *    fixed metadata. Everything is made in a staging folder that replaces out/<set-name>/ at the end.
  */
-import { fork, type ChildProcess } from 'node:child_process';
+import type { ChildProcess } from 'node:child_process';
 import { mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { dirname, extname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { ResolvedChartSet } from '../config/types.js';
-import { ERROR_CODES, PmError } from '../errors.js';
+import { runInChildren } from '../io/child-pool.js';
 import { SheetRenderer } from '../render/renderer.js';
 import { bindBook } from './book.js';
 import { basisForSheet, groupExtents } from './curves.js';
@@ -144,58 +144,23 @@ async function renderHere(tasks: ChunkTask[], tick: () => void): Promise<(string
  * Chunks handed to `jobs` child processes as they become free (node-canvas cannot run in worker
  * threads). Any child that fails or stops stops the others: the caller then removes the staging folder.
  */
-async function renderInChildren(tasks: ChunkTask[], jobs: number, tick: () => void, rss: { kb: number }, live: Set<ChildProcess>): Promise<(string | undefined)[]> {
+function renderInChildren(tasks: ChunkTask[], jobs: number, tick: () => void, rss: { kb: number }, live: Set<ChildProcess>): Promise<(string | undefined)[]> {
   const here = fileURLToPath(import.meta.url);
-  const ext = extname(here);
-  const workerPath = join(dirname(here), `worker${ext}`);
-  const execArgv = ext === '.ts' ? ['--import', 'tsx'] : [];
-  const results: (string | undefined)[] = new Array(tasks.length);
-  let next = 0;
-  const children = Array.from({ length: jobs }, () => fork(workerPath, [], { execArgv, stdio: ['ignore', 'inherit', 'inherit', 'ipc'] }));
-  for (const c of children) live.add(c);
-  try {
-    await Promise.all(
-      children.map(
-        (child, k) =>
-          new Promise<void>((resolveChild, reject) => {
-            // a child is done only when told to exit; stopping before that, in any way, is a failure
-            let finished = false;
-            const give = () => {
-              const t = tasks[next++];
-              if (t) child.send({ type: 'task', task: t });
-              else {
-                finished = true;
-                child.send({ type: 'exit' });
-                resolveChild();
-              }
-            };
-            child.on('message', (m: WorkerMessage) => {
-              if (m.type === 'sheet') tick();
-              else if (m.type === 'done') {
-                results[m.chunk] = m.pdf;
-                rss.kb = Math.max(rss.kb, m.maxRssKb);
-                give();
-              } else if (m.type === 'error') {
-                const pm = m.error.pm;
-                reject(pm ? new PmError(pm.code as never, '', pm.detail, {}, pm.exitCode) : new Error(m.error.message));
-              }
-            });
-            child.on('error', (e) => reject(new PmError(ERROR_CODES.environment, '', `render process ${k + 1} cannot be run (${(e as NodeJS.ErrnoException).code ?? e.message})`, {}, 1)));
-            child.on('exit', (code, signal) => {
-              live.delete(child);
-              if (!finished) reject(new PmError(ERROR_CODES.environment, '', `render process ${k + 1} stopped (${signal ?? `exit code ${code}`})`, {}, 1));
-            });
-            give();
-          }),
-      ),
-    );
-  } catch (e) {
-    // stop the others before the caller removes the staging folder they write into
-    for (const c of children) if (c.exitCode === null && c.signalCode === null) c.kill('SIGTERM');
-    await Promise.all(children.map((c) => (c.exitCode !== null || c.signalCode !== null ? undefined : new Promise((r) => c.once('exit', r)))));
-    throw e;
-  } finally {
-    for (const c of children) if (c.connected) c.disconnect();
-  }
-  return results;
+  return runInChildren<ChunkTask, WorkerMessage, string | undefined>({
+    workerPath: join(dirname(here), `worker${extname(here)}`),
+    tasks,
+    jobs,
+    taskMessage: (task) => ({ type: 'task', task }),
+    result: (m) => {
+      rss.kb = Math.max(rss.kb, m.maxRssKb);
+      return { chunk: m.chunk, value: m.pdf };
+    },
+    onProgress: (m) => {
+      if (m.type === 'sheet') tick();
+    },
+    live,
+    label: 'render process',
+    failure: { path: '', exitCode: 1 },
+    keepErrorPath: false,
+  });
 }

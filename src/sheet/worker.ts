@@ -4,6 +4,7 @@
  * {type:'done', chunk, pdf} per chunk, {type:'error', error}.
  */
 import { isPmError } from '../errors.js';
+import type { ChildError } from '../io/child-pool.js';
 import { SheetRenderer } from '../render/renderer.js';
 import { injectedFault } from './files.js';
 import { renderChunk, type ChunkTask } from './render-chunk.js';
@@ -11,7 +12,7 @@ import { renderChunk, type ChunkTask } from './render-chunk.js';
 export type WorkerMessage =
   | { type: 'sheet' }
   | { type: 'done'; chunk: number; pdf: string | undefined; maxRssKb: number }
-  | { type: 'error'; error: { message: string; pm?: { code: string; path: string; facts: Record<string, unknown>; exitCode: number; detail: string } } };
+  | { type: 'error'; error: ChildError };
 
 const send = (m: WorkerMessage) => {
   if (process.connected) process.send?.(m);
