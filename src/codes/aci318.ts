@@ -171,12 +171,12 @@ function resolveAci(edition: Edition, input: BasisInput): Basis {
     minimumMoment: () => 0, // no minimum eccentricity for short columns; the cap 22.4.2.1 stands in for it
     // 6.6.4.5.4 M2,min = Pu(0.6 + 0.03h) in. (318-19; the same clause number in 318-14 from memory); 22.2.1, 22.2.2 strain compatibility
     checkClauses: { slenderMinimumMoment: '6.6.4.5.4', sectionAnalysis: '22.2.1, 22.2.2' },
-    // 25.2.3: clear spacing ≥ max(1.5 in, 1.5·db, 4/3·dagg) for columns; 38 mm in SI.
-    minimumClearSpacing: (db: number, dg: number) => Math.max(units === 'us' ? 1.5 : 38, 1.5 * db, (4 / 3) * dg),
+    // 25.2.3: clear spacing ≥ max(1.5 in, 1.5·db, 4/3·dagg) for columns; ACI 318M's SI floor is 40 mm (from memory; 38 mm, the plain conversion, would accept what 318M refuses)
+    minimumClearSpacing: (db: number, dg: number) => Math.max(units === 'us' ? 1.5 : 40, 1.5 * db, (4 / 3) * dg),
     // 10.7.3.1 (from memory): four within rectangular or circular ties, six enclosed by spirals
     minimumBarCount: () => (transverse === 'spiral' ? 6 : 4),
     minimumBarRule: `at least ${transverse === 'spiral' ? 6 : 4} bars (${edition.title} 10.7.3.1, from memory)`,
-    clearSpacingRule: `clear spacing ≥ max(${units === 'us' ? '1.5 in' : '38 mm'}, 1.5·db, 4/3·aggregate) (${edition.title} 25.2.3)`,
+    clearSpacingRule: `clear spacing ≥ max(${units === 'us' ? '1.5 in' : '40 mm'}, 1.5·db, 4/3·aggregate) (${edition.title} 25.2.3)`,
     barSet: units === 'us' ? 'astm-a615' : 'astm-a615m', // ACI in SI: ASTM A615M soft-metric sizes
     factorSummary: `φ ${phiC}–0.90 by εt (${edition.clause}) · Pn,max ${capRatio}·Po (22.4.2.1)`,
     parameters: {

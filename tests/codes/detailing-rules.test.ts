@@ -124,3 +124,13 @@ describe('the reduced effective area for the minimum steel', () => {
     expect(basisOf('as3600-2018').detailing.reducedAreaShare).toBeUndefined();
   });
 });
+
+describe('ACI 318 in SI units: the clear-spacing floor', () => {
+  it('is 40 mm (ACI 318M-19 25.2.3, from memory), not the plain conversion of 1.5 in (38.1 mm)', () => {
+    const si = resolveBasis('aci318-19', { units: 'si', fc: 28, fy: 420, transverse: 'tied' });
+    // small bars, small aggregate: the floor governs; 1.5·20 = 30 mm and 4/3·19 = 25.3 mm are both below it
+    expect(si.minimumClearSpacing(20, 19)).toBe(40);
+    // 1.5·32.3 = 48.45 mm governs for a 32 mm bar
+    expectClose(si.minimumClearSpacing(32.3, 19), 48.45, 1e-12);
+  });
+});
