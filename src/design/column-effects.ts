@@ -42,19 +42,11 @@ export interface EndMoments {
   storeyPc?: number;
 }
 
-/** A sway column's member data (the same for both axes unless `y` gives its own): what the basis's sway method reads. */
-export interface SwayMember {
-  /** stability index Q of the storey (per load: a load's Q replaces it) */
-  stabilityIndex?: number;
-  /** ΣPu and ΣPc of the storey (per load: a load's replace them) */
-  storeyPu?: number;
-  storeyPc?: number;
-  /** kℓu as braced, k ≤ 1, for the check along the length (ACI 318-19 6.6.4.6.4) or δb (AS 3600 10.4.2) */
-  bracedEffectiveLength?: number;
-  /** EN 1992-1-1 5.8.3.2(3) relative flexibilities; with them `effectiveLength` is the clear length ℓ */
-  k1?: number;
-  k2?: number;
-}
+/**
+ * A sway column's member data (the same for both axes unless `y` gives its own): the storey and restraint data
+ * of `SwayInput` without the sway moments, which come per load. A load's Q or storey sums replace the member's.
+ */
+export type SwayMember = Omit<SwayInput, 'M2s' | 'M1s'>;
 
 /** One axis's end moments in the internal (opposite-sign) convention, or undefined where not given. */
 function endPair(M1: number | undefined, M2: number | undefined, M01: number | undefined, M02: number | undefined): { M1?: number; M2?: number } {
