@@ -15,6 +15,7 @@ import {
   type SlendernessSection,
   type SlendernessStep,
 } from './slenderness.js';
+import { swayMagnifierMethod, type SwayMagnifierClauses } from './sway-magnifier.js';
 import type { Basis } from './types.js';
 import type { UnitSystem } from '../units/index.js';
 
@@ -32,14 +33,39 @@ interface AciSlendernessClauses {
   radius: string;
   /** second-order moment ≤ 1.4 × first-order */
   secondOrderLimit: string;
+  /** the sway neglect test kℓu/r ≤ 22 */
+  swayNeglect: string;
   /** where the clause numbers come from */
   source: RuleDef['source'];
 }
 
 /** ACI 318-19 6.2.5.1(b), 6.2.5.2, 6.2.5.3. */
-const ACI_318_19_CLAUSES: AciSlendernessClauses = { edition: 'ACI 318-19', neglect: '6.2.5.1', radius: '6.2.5.2', secondOrderLimit: '6.2.5.3', source: 'from memory' };
+const ACI_318_19_CLAUSES: AciSlendernessClauses = { edition: 'ACI 318-19', neglect: '6.2.5.1', radius: '6.2.5.2', secondOrderLimit: '6.2.5.3', swayNeglect: '6.2.5.1(a)', source: 'from memory' };
 /** ACI 318-14 6.2.5(b), 6.2.5.1, 6.2.6 (from memory; 6.2.6 for the 1.4 limit as the issue's reviewer cites it). */
-const ACI_318_14_CLAUSES: AciSlendernessClauses = { edition: 'ACI 318-14', neglect: '6.2.5', radius: '6.2.5.1', secondOrderLimit: '6.2.6', source: 'from memory' };
+const ACI_318_14_CLAUSES: AciSlendernessClauses = { edition: 'ACI 318-14', neglect: '6.2.5', radius: '6.2.5.1', secondOrderLimit: '6.2.6', swayNeglect: '6.2.5(a)', source: 'from memory' };
+
+/**
+ * ACI 318 6.6.4.6 sway magnification. 318-19: 6.6.4.6.1 M1 = M1ns + δs·M1s, M2 = M2ns + δs·M2s and 6.6.4.6.2
+ * δs by (a) Q, (b) storey sums, only (b) or (c) above 1.5, read against the published text (up.codes, ACI 318-19
+ * 6.6.4.6); 6.2.5.1(a) kℓu/r ≤ 22, 6.6.4.6.4 the check along the length, from memory. 318-14 shares the 6.6.4.6
+ * numbers (from memory), with its neglect test at 6.2.5(a) and the 1.4 limit at 6.2.6.
+ */
+function aciSwayClauses(c: AciSlendernessClauses): SwayMagnifierClauses {
+  return {
+    edition: c.edition,
+    title: `${c.edition} 6.6.4.6 moment magnification (sway)`,
+    P: 'Pu',
+    radius: c.radius,
+    neglect: { clause: c.swayNeglect, limit: 22 },
+    ends: '6.6.4.6.1',
+    fromQ: { clause: '6.6.4.6.2(a)', maxDelta: 1.5 },
+    fromSums: '6.6.4.6.2(b)',
+    alongLength: '6.6.4.6.4',
+    minMoment: '6.6.4.5.4',
+    secondOrderLimit: c.secondOrderLimit,
+    source: 'from memory',
+  };
+}
 
 function aciRules(c: AciSlendernessClauses): RuleDef[] {
   const src = c.source;
@@ -56,14 +82,17 @@ function aciRules(c: AciSlendernessClauses): RuleDef[] {
 }
 
 function aciMethod(c: AciSlendernessClauses): SlendernessMethod {
-  return {
+  const sway = swayMagnifierMethod(aciSwayClauses(c), () => method);
+  const method: SlendernessMethod = {
     id: 'moment-magnification-aci318',
     title: `${c.edition} 6.6.4 moment magnification (non-sway)`,
     convention: { ...OPPOSITE_SIGN_END_MOMENTS, rule: `M1 negative in single curvature (${c.edition} ${c.neglect})` },
     needsSustainedLoadRatio: true,
-    rules: aciRules(c),
+    rules: [...aciRules(c), ...sway.rules],
     check: (basis, section, input) => aciMomentMagnification(basis, section, input, c),
+    sway,
   };
+  return method;
 }
 
 /** The ACI 318-19 rulebook for slender braced columns. */

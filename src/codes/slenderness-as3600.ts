@@ -7,6 +7,7 @@ import type { RuleDef } from './rules.js';
 import {
   AS_END_MOMENTS,
   depthOf,
+  nestedSteps,
   grossA,
   type SlendernessContext,
   type SlendernessInput,
@@ -14,6 +15,8 @@ import {
   type SlendernessResult,
   type SlendernessSection,
   type SlendernessStep,
+  type SwayInput,
+  type SwayMethod,
 } from './slenderness.js';
 import type { Basis } from './types.js';
 
@@ -29,15 +32,91 @@ export const AS_3600_SLENDERNESS_RULES: readonly RuleDef[] = [
   { id: 'scope-slenderness', clause: '10.5.1', title: 'Le/r ≤ 120 for the simplified method', source: 'from memory' },
 ];
 
-/** The AS 3600-2018 rulebook for slender braced columns. */
+/** AS 3600-2018 unbraced columns, from memory throughout (no published text of 10.4.3 found). */
+export const AS_3600_SWAY_RULES: readonly RuleDef[] = [
+  { id: 'sway-slenderness-limit', clause: '10.3.1(a)', title: 'short unbraced column: Le/r ≤ 22', source: 'from memory' },
+  { id: 'sway-magnifier', clause: '10.4.3', title: 'δs = 1/(1 − ΣN*/ΣNc) ≥ 1 over the storey; δ = the larger of δb and δs on M2* (no split into non-sway and sway moments)', source: 'from memory' },
+  { id: 'sway-braced-magnifier', clause: '10.4.2', title: 'δb of an unbraced column with Le as braced (not given: the unbraced Le, conservative)', source: 'from memory' },
+  { id: 'sway-stability-limit', clause: '10.4.3', title: 'ΣN* ≥ ΣNc: unstable', source: 'from memory' },
+];
+
+/** The AS 3600-2018 method for unbraced columns (10.4.3, from memory). */
+export const AS_3600_SWAY: SwayMethod = {
+  title: 'AS 3600-2018 10.4.3 moment magnifier (unbraced)',
+  inputs: { moments: 'none', stabilityIndex: false, storeySums: true, needsStorey: true, bracedLength: true, restraint: false },
+  rules: AS_3600_SWAY_RULES,
+  check: (basis, section, input, ctx) => as3600Unbraced(basis, section, input, ctx),
+};
+
+/** The AS 3600-2018 rulebook for slender columns, braced (10.4.2) and unbraced (10.4.3). */
 export const AS_3600_SLENDERNESS: SlendernessMethod = {
   id: 'moment-magnification-as3600',
   title: 'AS 3600-2018 10.4 moment magnifier (braced)',
   convention: AS_END_MOMENTS,
   needsSustainedLoadRatio: true,
-  rules: AS_3600_SLENDERNESS_RULES,
+  rules: [...AS_3600_SLENDERNESS_RULES, ...AS_3600_SWAY_RULES],
   check: (basis, section, input, ctx) => as3600MomentMagnification(basis, section, input, ctx),
+  sway: AS_3600_SWAY,
 };
+
+/**
+ * AS 3600-2018 unbraced column for one axis (SI), from memory: 10.3.1(a) short when Le/r ≤ 22 (Le unbraced);
+ * 10.4.3 δs = 1/(1 − ΣN* ÷ ΣNc) over the storey; δb by 10.4.2 with Le as braced; δ = max(δb, δs) on
+ * M2* ≥ N*·0.05D (10.1.2); 10.5.1 Le/r ≤ 120 (unbraced Le).
+ */
+export function as3600Unbraced(basis: Basis, section: SlendernessSection, input: SlendernessInput & { sway: SwayInput }, ctx: SlendernessContext): SlendernessResult {
+  const method = AS_3600_SWAY.title;
+  const steps: SlendernessStep[] = [];
+  const warnings: string[] = [];
+  const { shape } = section;
+  const D = depthOf(shape);
+  const { effectiveLength: Le, M2, Pu: N, sway } = input;
+  const r = shape.kind === 'rectangle' ? 0.3 * D : 0.25 * D;
+  steps.push({ key: 'r', clause: '10.5.2', label: `r = ${shape.kind === 'rectangle' ? '0.3·D' : '0.25·D'} (10.5.2)`, value: r, unit: 'mm' });
+  const slenderness = Le / r;
+  steps.push({ key: 'klu-over-r', clause: '10.3.1(a)', label: 'Le/r, Le unbraced (10.3.1(a))', value: slenderness });
+  steps.push({ key: 'limit', clause: '10.3.1(a)', label: 'limit for an unbraced column (10.3.1(a), from memory)', value: 22 });
+  const neglected = slenderness <= 22 * (1 + 1e-12);
+  steps.push({ key: 'neglected', clause: '10.3.1(a)', label: 'short column: slenderness may be neglected (10.3.1(a))', value: neglected });
+  const Mmin = N * 0.05 * D;
+  steps.push({ key: 'M2min', clause: '10.1.2', label: 'M*min = N*·0.05·D (10.1.2)', value: Mmin, unit: 'N·mm' });
+  const M2c = Math.max(M2, Mmin);
+  steps.push({ key: 'M2-used', clause: '10.1.2', label: 'M2* used = max(M2*, N*·0.05·D) (10.1.2)', value: M2c, unit: 'N·mm' });
+  const withinScope = slenderness <= 120 * (1 + 1e-12);
+  steps.push({ key: 'scope', clause: '10.5.1', label: 'Le/r ≤ 120, the scope of the moment magnifier (10.5.1, from memory)', value: withinScope });
+  const scope = withinScope ? {} : { limitClause: 'AS 3600-2018 10.5.1 (Le/r ≤ 120, from memory)' };
+  if (!withinScope) warnings.push('Le/r exceeds 120 (AS 3600-2018 10.5.1, from memory): outside the moment-magnifier method; a rigorous analysis is needed');
+  if (neglected) return { method, neglected, delta: 1, magnifiedMoment: M2c, firstOrderMoment: M2c, ok: withinScope, ...scope, warnings, steps };
+
+  const sumN = sway.storeyPu ?? NaN;
+  const sumNc = sway.storeyPc ?? NaN;
+  steps.push({ key: 'storey-Pu', clause: '10.4.3', label: 'ΣN* of the storey', value: sumN, unit: 'N' });
+  steps.push({ key: 'storey-Pc', clause: '10.4.3', label: 'ΣNc of the storey (each column with its unbraced Le)', value: sumNc, unit: 'N' });
+  const ratio = sumN / sumNc;
+  steps.push({ key: 'storey-ratio', clause: '10.4.3', label: 'ΣN*/ΣNc (10.4.3)', value: ratio });
+  const stable = ratio < 1;
+  const deltaS = stable ? Math.max(1, 1 / (1 - ratio)) : Infinity;
+  steps.push({ key: 'delta-s', clause: '10.4.3', label: 'δs = 1/(1 − ΣN*/ΣNc) ≥ 1 (10.4.3, from memory)', value: deltaS });
+  if (!stable) {
+    warnings.push('ΣN* ≥ ΣNc: the storey is unstable by AS 3600-2018 10.4.3 (from memory); stiffen the frame');
+    return { method, neglected: false, delta: Infinity, magnifiedMoment: Infinity, firstOrderMoment: M2c, ok: false, limitClause: 'AS 3600-2018 10.4.3 (ΣN* ≥ ΣNc)', warnings, steps };
+  }
+  const LeB = sway.bracedEffectiveLength ?? Le;
+  steps.push({ key: 'klu-braced', clause: '10.4.2', label: sway.bracedEffectiveLength !== undefined ? 'Le as braced, for δb (10.4.2)' : 'Le as braced not given: the unbraced Le for δb (conservative)', value: LeB, unit: 'mm' });
+  const { sway: _omit, ...bracedInput } = input;
+  const b = as3600MomentMagnification(basis, section, { ...bracedInput, effectiveLength: LeB }, ctx);
+  steps.push(...nestedSteps(b.steps, 'braced-', 'δb (10.4.2): '));
+  if (!b.ok && !(b.delta < Infinity)) {
+    warnings.push(...b.warnings);
+    return { method, neglected: false, delta: Infinity, magnifiedMoment: Infinity, firstOrderMoment: M2c, ok: false, limitClause: b.limitClause ?? 'AS 3600-2018 10.4.2', warnings, steps };
+  }
+  const deltaB = b.delta;
+  const delta = Math.max(deltaB, deltaS);
+  steps.push({ key: 'delta', clause: '10.4.3', label: 'δ = the larger of δb and δs (10.4.3, from memory)', value: delta });
+  const magnified = delta * M2c;
+  steps.push({ key: 'Mc', clause: '10.4.3', label: 'M* = δ·M2* (10.4.3)', value: magnified, unit: 'N·mm' });
+  return { method, neglected: false, delta, magnifiedMoment: magnified, firstOrderMoment: M2c, ok: withinScope, ...scope, warnings, steps };
+}
 
 /**
  * AS 3600-2018 braced column moment magnifier for one axis (SI: N, mm, N·mm). From memory of the standard:

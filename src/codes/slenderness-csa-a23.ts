@@ -15,6 +15,7 @@ import {
   type SlendernessSection,
   type SlendernessStep,
 } from './slenderness.js';
+import { swayMagnifierMethod, type SwayMagnifierClauses } from './sway-magnifier.js';
 import type { Basis } from './types.js';
 
 export const CSA_A23_SLENDERNESS_RULES: readonly RuleDef[] = [
@@ -27,14 +28,36 @@ export const CSA_A23_SLENDERNESS_RULES: readonly RuleDef[] = [
   { id: 'stability-limit', clause: '10.15.3.1', title: 'Pf < 0.75·Pc, else unstable', source: 'from memory' },
 ];
 
-/** The CSA A23.3-19 rulebook for slender braced columns. */
+/**
+ * CSA A23.3-19 10.16 sway frames (from memory; no published text found): 10.16.2 M1 = M1ns + δs·M1s,
+ * M2 = M2ns + δs·M2s; 10.16.3.1 δs = 1/(1 − ΣPf/(φm·ΣPc)) ≥ 1, φm = 0.75; 10.16.3.2 δs = 1/(1 − Q) while
+ * δs ≤ 1.5; 10.16.4 the column checked along its length by 10.15.3 with those M1, M2 and k as braced.
+ * No sway neglect limit is applied (pmchart's conservative reading); no 1.4 limit (CSA has none in 10.15).
+ */
+const CSA_SWAY_CLAUSES: SwayMagnifierClauses = {
+  edition: 'CSA A23.3-19',
+  title: 'CSA A23.3-19 10.16 moment magnifier (sway)',
+  P: 'Pf',
+  radius: '10.14.2',
+  ends: '10.16.2',
+  fromQ: { clause: '10.16.3.2', maxDelta: 1.5 },
+  fromSums: '10.16.3.1',
+  alongLength: '10.16.4',
+  minMoment: '10.15.3.1',
+  source: 'from memory',
+};
+
+const CSA_SWAY = swayMagnifierMethod(CSA_SWAY_CLAUSES, () => CSA_A23_SLENDERNESS);
+
+/** The CSA A23.3-19 rulebook for slender columns, braced (10.15) and sway (10.16). */
 export const CSA_A23_SLENDERNESS: SlendernessMethod = {
   id: 'moment-magnification-csa-a23',
   title: 'CSA A23.3-19 10.15.3 moment magnifier (non-sway)',
   convention: CSA_END_MOMENTS,
   needsSustainedLoadRatio: true,
-  rules: CSA_A23_SLENDERNESS_RULES,
+  rules: [...CSA_A23_SLENDERNESS_RULES, ...CSA_SWAY.rules],
   check: (basis, section, input) => csaMomentMagnification(basis, section, input),
+  sway: CSA_SWAY,
 };
 
 /** CSA A23.3-19 8.6.2.3 (from memory): Ec = 4500·√f′c MPa for normal-density concrete. */

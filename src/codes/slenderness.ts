@@ -36,6 +36,60 @@ export interface SlendernessInput {
    * curvature factor Kφ (5.8.8.3(4)) uses the φef that A = 0.7 stands for, (1/0.7 − 1)/0.2 = 2.14.
    */
   creepRatio?: number;
+  /** a sway (unbraced) column: the sway parts of the end moments and the storey data; absent: braced */
+  sway?: SwayInput;
+}
+
+/**
+ * A sway (unbraced) column's data for one axis, internal units. The end moments of `SlendernessInput` are
+ * then the non-sway parts (M1ns, M2ns); `effectiveLength` is the unbraced kℓu (EN: l0, or the clear length ℓ
+ * when k1 and k2 are given). Which fields a basis reads is its `SwayMethod`'s business.
+ */
+export interface SwayInput {
+  /**
+   * Sway parts of the end moments at the ends of M2 and M1, in the internal sign of M1 and M2 (ACI 318-19
+   * 6.2.5.1: a moment of the same sign at both ends bends the column in double curvature, as sway does).
+   */
+  M2s: number;
+  M1s: number;
+  /** stability index Q of the storey (ACI 318-19 6.6.4.4.1; CSA A23.3-19 10.16.3, from memory) */
+  stabilityIndex?: number;
+  /** ΣPu (ΣPf, ΣN*) of the storey, with `storeyPc` */
+  storeyPu?: number;
+  /** ΣPc (ΣNc) of the storey */
+  storeyPc?: number;
+  /** effective length for the check along the length as if braced, k ≤ 1 (ACI 318-19 6.6.4.6.4); absent: `effectiveLength` (conservative) */
+  bracedEffectiveLength?: number;
+  /** EN 1992-1-1 5.8.3.2(3) relative flexibilities of the end restraints; with both, `effectiveLength` is the clear length ℓ */
+  k1?: number;
+  k2?: number;
+}
+
+/** What a sway method reads beyond the braced input, for the front ends' checks of what applies. */
+export interface SwayInputs {
+  /** 'split': M = Mns + δs·Ms (the sway parts are required); 'summed': the first-order moment is Mns + Ms; 'none': no split (sway parts refused) */
+  readonly moments: 'split' | 'summed' | 'none';
+  /** the stability index Q is read */
+  readonly stabilityIndex: boolean;
+  /** the storey sums ΣPu, ΣPc are read */
+  readonly storeySums: boolean;
+  /** one of Q or the storey sums is required */
+  readonly needsStorey: boolean;
+  /** an effective length as braced is read (the check along the length, or δb) */
+  readonly bracedLength: boolean;
+  /** the restraint flexibilities k1, k2 with the clear length are read */
+  readonly restraint: boolean;
+}
+
+/** One basis's method for sway (unbraced) columns: part of its slenderness rulebook. */
+export interface SwayMethod {
+  /** e.g. 'ACI 318-19 6.6.4.6 moment magnification (sway)' */
+  readonly title: string;
+  readonly inputs: SwayInputs;
+  /** the rules the method applies, with clause and source (part of the basis's `rules`) */
+  readonly rules: readonly RuleDef[];
+  /** one axis; Pu > 0, `input.sway` present and the input validated */
+  check(basis: Basis, section: SlendernessSection, input: SlendernessInput & { sway: SwayInput }, ctx: SlendernessContext): SlendernessResult;
 }
 
 /**
@@ -184,6 +238,23 @@ export interface SlendernessMethod {
   readonly rules: readonly RuleDef[];
   /** one axis; Pu > 0 and the input already validated */
   check(basis: Basis, section: SlendernessSection, input: SlendernessInput, ctx: SlendernessContext): SlendernessResult;
+  /** the method for sway (unbraced) columns; absent: a sway column is outside what pmchart covers for the basis */
+  readonly sway?: SwayMethod;
+}
+
+/**
+ * End moments of one axis as two signed end values (the internal sign of M1, M2) put back in the form the
+ * braced methods take: M2 the larger in magnitude, given positive, M1 signed relative to it.
+ */
+export function asEndPair(a: number, b: number): { M1: number; M2: number } {
+  const [big, small] = Math.abs(a) >= Math.abs(b) ? [a, b] : [b, a];
+  const s = big < 0 ? -1 : 1;
+  return { M2: Math.abs(big), M1: small * s || 0 };
+}
+
+/** A copy of the steps of an inner run (the check along the length, δb) with keys and labels marked. */
+export function nestedSteps(steps: readonly SlendernessStep[], keyPrefix: string, labelPrefix: string): SlendernessStep[] {
+  return steps.map((st) => ({ ...st, key: `${keyPrefix}${st.key}`, label: `${labelPrefix}${st.label}` }));
 }
 
 export const SLENDERNESS_METHODS = ['moment-magnification-aci318', 'nominal-curvature-en1992', 'moment-magnification-as3600', 'moment-magnification-csa-a23'] as const;

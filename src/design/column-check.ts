@@ -56,7 +56,7 @@ export interface ColumnCheckInput {
   rho?: number;
   /** a given bar layout to check */
   layout?: GivenLayout;
-  /** second-order effects (non-sway); absent: short column */
+  /** second-order effects (braced, or sway where the member data say so); absent: short column */
   slenderness?: SlendernessRequest | null;
   /** chart sheet γ step (default 0.05) */
   chartGammaStep?: number;
@@ -1016,7 +1016,7 @@ function biaxialChartFields(ctx: ColumnCheckContext, load: { Pu: number; Mux: nu
 }
 
 /** End moments in either sign convention (ACI M1/M2; EN and CSA M01/M02), as given. */
-const END_KEYS = ['M1', 'M2', 'M1y', 'M2y', 'M01', 'M02', 'M01y', 'M02y'] as const;
+const END_KEYS = ['M1', 'M2', 'M1y', 'M2y', 'M01', 'M02', 'M01y', 'M02y', 'M2s', 'M1s', 'M2sy', 'M1sy', 'M02s', 'M01s', 'M02sy', 'M01sy', 'Q', 'storeyPu', 'storeyPc'] as const;
 const endMoments = (l: FactoredLoad): EndMoments => Object.fromEntries(END_KEYS.filter((k) => l[k] !== undefined).map((k) => [k, l[k]!])) as EndMoments;
 
 /** Status from the checks, worst first: unstable, outside the method's scope, not possible, detailing (a binding rule broken by the given reinforcement), fails. */

@@ -11,7 +11,7 @@ import type { Basis, CapContext } from '../codes/types.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import type { Bar, Shape } from '../section/types.js';
 import { checkBiaxial, type BiaxialResult } from './biaxial.js';
-import { aboutYAxis, fromSameSign, slendernessCheck, type EiOption, type SlendernessResult } from './slenderness.js';
+import { aboutYAxis, endMomentConvention, fromSameSign, slendernessCheck, type EiOption, type SlendernessInput, type SlendernessResult, type SwayInput } from './slenderness.js';
 
 /**
  * End moments of one load for the slenderness check; each defaults as described in `magnifyLoad`.
@@ -27,7 +27,26 @@ export interface EndMoments {
   M02?: number;
   M01y?: number;
   M02y?: number;
+  /** sway parts of the end moments (a sway column): M2s, M1s in the sign of M1, M2 (ACI 318-19 6.6.4.6.1); M02s, M01s in the sign of M01, M02 */
+  M2s?: number;
+  M1s?: number;
+  M2sy?: number;
+  M1sy?: number;
+  M02s?: number;
+  M01s?: number;
+  M02sy?: number;
+  M01sy?: number;
+  /** this load's storey data (a sway column), replacing the member's: stability index Q, or ΣPu with ΣPc */
+  Q?: number;
+  storeyPu?: number;
+  storeyPc?: number;
 }
+
+/**
+ * A sway column's member data (the same for both axes unless `y` gives its own): the storey and restraint data
+ * of `SwayInput` without the sway moments, which come per load. A load's Q or storey sums replace the member's.
+ */
+export type SwayMember = Omit<SwayInput, 'M2s' | 'M1s'>;
 
 /** One axis's end moments in the internal (opposite-sign) convention, or undefined where not given. */
 function endPair(M1: number | undefined, M2: number | undefined, M01: number | undefined, M02: number | undefined): { M1?: number; M2?: number } {
@@ -45,6 +64,8 @@ export interface AxisMember {
   eiOption?: EiOption;
   transverseLoads?: boolean;
   creepRatio?: number;
+  /** a sway (unbraced) column: `effectiveLength` is then the unbraced kℓu; absent: braced */
+  sway?: SwayMember;
 }
 
 export interface SlendernessRequest {
@@ -100,11 +121,13 @@ export function magnifyLoad(
   const ex = endPair(load.M1, load.M2, load.M01, load.M02);
   const ey = endPair(load.M1y, load.M2y, load.M01y, load.M02y);
   const m2x = ex.M2 ?? Math.abs(load.Mux);
-  const x = slendernessCheck(basis, sec, { ...req.x, ...beta, Pu: load.Pu, M2: m2x, M1: ex.M1 ?? -m2x });
+  const memberY = req.y ?? req.x;
+  const swayX = swayOf(basis, req.x, load, load.M2s, load.M1s, load.M02s, load.M01s, load.M02, '', true);
+  const swayY = swayOf(basis, memberY, load, load.M2sy, load.M1sy, load.M02sy, load.M01sy, load.M02y, 'Y', load.Muy !== 0);
+  const x = slendernessCheck(basis, sec, { ...member(req.x, swayX), ...beta, Pu: load.Pu, M2: m2x, M1: ex.M1 ?? -m2x });
   const sign = (m: number) => (m < 0 ? -1 : 1);
   const m2y = ey.M2 ?? Math.abs(load.Muy);
-  const memberY = req.y ?? req.x;
-  const y = slendernessCheck(basis, secY, { ...memberY, ...beta, Pu: load.Pu, M2: m2y, M1: ey.M1 ?? -m2y });
+  const y = slendernessCheck(basis, secY, { ...member(memberY, swayY), ...beta, Pu: load.Pu, M2: m2y, M1: ey.M1 ?? -m2y });
   // the accidental part alone: the same method with no end moments (M1 = M2 = 0)
   const accidental = (r: SlendernessResult, m2: number, run: () => SlendernessResult): AxisMinimum => {
     const z = m2 === 0 ? r : run();
@@ -112,11 +135,75 @@ export function magnifyLoad(
     const moment = z.neglected ? 0 : z.magnifiedMoment;
     return { given: m2, firstOrder, moment, governs: moment > 0 && Number.isFinite(r.magnifiedMoment) && moment >= r.magnifiedMoment * (1 - 1e-9) };
   };
+  // the accidental part of a sway column: no end moments at all, neither non-sway nor sway
+  const still = (w: SwayInput | undefined): SwayInput | undefined => (w ? { ...w, M2s: 0, M1s: 0 } : undefined);
   const minimum = {
-    x: accidental(x, m2x, () => slendernessCheck(basis, sec, { ...req.x, ...beta, Pu: load.Pu, M2: 0, M1: -0 })),
-    y: accidental(y, m2y, () => slendernessCheck(basis, secY, { ...memberY, ...beta, Pu: load.Pu, M2: 0, M1: -0 })),
+    x: accidental(x, m2x + Math.abs(swayX?.M2s ?? 0), () => slendernessCheck(basis, sec, { ...member(req.x, still(swayX)), ...beta, Pu: load.Pu, M2: 0, M1: -0 })),
+    y: accidental(y, m2y + Math.abs(swayY?.M2s ?? 0), () => slendernessCheck(basis, secY, { ...member(memberY, still(swayY)), ...beta, Pu: load.Pu, M2: 0, M1: -0 })),
   };
   return { Mux: sign(load.Mux) * x.magnifiedMoment, Muy: sign(load.Muy) * y.magnifiedMoment, x, y, minimum };
+}
+
+/** The member data of one axis as the method's input (the sway data replaced by this load's). */
+function member(m: AxisMember, sway: SwayInput | undefined): Omit<SlendernessInput, 'Pu' | 'M1' | 'M2'> {
+  const { sway: _member, ...rest } = m;
+  return { ...rest, ...(sway ? { sway } : {}) };
+}
+
+/**
+ * One axis's sway data for one load: the sway parts in the internal sign and the storey data, the load's
+ * replacing the member's. Sway parts in the same-sign convention (M02s, M01s) are turned with the sign of the
+ * non-sway M02, as `fromSameSign` turns the non-sway pair. Not given, M1s defaults to equal moments in reverse
+ * curvature (M1s = M2s in the internal sign, M01s = −M02s): the shape a storey's sway bends its columns in.
+ * A method that magnifies the sway parts ('split') needs M2s (about y only where the load has a moment about y:
+ * bending about y with no Muy has no sway part); one that has no split takes none.
+ */
+function swayOf(
+  basis: Basis,
+  m: AxisMember,
+  load: EndMoments,
+  M2s: number | undefined,
+  M1s: number | undefined,
+  M02s: number | undefined,
+  M01s: number | undefined,
+  M02: number | undefined,
+  axis: '' | 'Y',
+  required: boolean,
+): SwayInput | undefined {
+  const w = m.sway;
+  if (!w) {
+    const given = [M2s, M1s, M02s, M01s].some((v) => v !== undefined) || load.Q !== undefined || load.storeyPu !== undefined || load.storeyPc !== undefined;
+    if (given) throw new PmError(ERROR_CODES.conflict, 'sway', 'is required for sway moments or storey data (M2s, M02s, Q, storeyPu, storeyPc): the column is braced without it');
+    return undefined;
+  }
+  const conv = endMomentConvention(basis);
+  let m2s: number | undefined;
+  let m1s: number | undefined;
+  if (M02s !== undefined || M01s !== undefined) {
+    if (M02s === undefined) throw new PmError(ERROR_CODES.missing, `m02Sway${axis}`, 'is required with M01s (the sway part at the end of M02)');
+    const s = M02 !== undefined && M02 < 0 ? -1 : 1;
+    m2s = M02s * s;
+    m1s = -(M01s ?? -M02s) * s || 0;
+  } else if (M2s !== undefined || M1s !== undefined) {
+    if (M2s === undefined) throw new PmError(ERROR_CODES.missing, `m2Sway${axis}`, 'is required with M1s (the sway part at the end of M2)');
+    m2s = M2s;
+    m1s = M1s ?? M2s;
+  }
+  const needs = basis.slenderness?.sway?.inputs.moments;
+  if (m2s === undefined && needs === 'split' && required) {
+    throw new PmError(ERROR_CODES.missing, `${conv.largerFlag}Sway${axis}`, `is required with --sway (the sway part of the end moment, 0 where the load has none; a ${conv.largerFlag === 'm2' ? 'M2s' : 'M02s'}${axis === 'Y' ? 'y' : ''} column in --loads)`);
+  }
+  const storey = load.Q !== undefined || load.storeyPu !== undefined || load.storeyPc !== undefined;
+  return {
+    M2s: m2s ?? 0,
+    M1s: m1s ?? 0,
+    ...(storey
+      ? { ...(load.Q !== undefined ? { stabilityIndex: load.Q } : {}), ...(load.storeyPu !== undefined ? { storeyPu: load.storeyPu } : {}), ...(load.storeyPc !== undefined ? { storeyPc: load.storeyPc } : {}) }
+      : { ...(w.stabilityIndex !== undefined ? { stabilityIndex: w.stabilityIndex } : {}), ...(w.storeyPu !== undefined ? { storeyPu: w.storeyPu } : {}), ...(w.storeyPc !== undefined ? { storeyPc: w.storeyPc } : {}) }),
+    ...(w.bracedEffectiveLength !== undefined ? { bracedEffectiveLength: w.bracedEffectiveLength } : {}),
+    ...(w.k1 !== undefined ? { k1: w.k1 } : {}),
+    ...(w.k2 !== undefined ? { k2: w.k2 } : {}),
+  };
 }
 
 /** The actual bars of a checked reinforcement, ready for the biaxial surface. */

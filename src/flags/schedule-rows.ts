@@ -34,6 +34,14 @@ function atRow<T>(at: string, line: number, fn: () => T): T {
   }
 }
 
+/** A yes/no cell (the schedule's `sway`): yes, true, 1 or no, false, 0, any case; else an error naming the column. */
+function yesNo(cell: string): boolean {
+  const t = cell.trim().toLowerCase();
+  if (t === 'yes' || t === 'true' || t === '1') return true;
+  if (t === 'no' || t === 'false' || t === '0') return false;
+  throw new PmError(ERROR_CODES.invalidValue, '--sway', 'is not yes or no', { value: cell, allowed: 'yes, no' });
+}
+
 /** A row's cells as the `check` flags they stand for. */
 export function rowOptions(row: ScheduleRow, proposals: number): CheckOptions {
   const c = row.cells;
@@ -62,6 +70,14 @@ export function rowOptions(row: ScheduleRow, proposals: number): CheckOptions {
     ...(c.gamma_b !== undefined ? { gammaB: c.gamma_b } : {}),
     ...(c.creep !== undefined ? { creep: c.creep } : {}),
     ...(c.aggregate !== undefined ? { aggregate: c.aggregate } : {}),
+    ...(c.sway !== undefined ? { sway: yesNo(c.sway) } : {}),
+    ...(c.klu_braced !== undefined ? { kluBraced: c.klu_braced } : {}),
+    ...(c.lu !== undefined ? { lu: c.lu } : {}),
+    ...(c.k1 !== undefined ? { k1: c.k1 } : {}),
+    ...(c.k2 !== undefined ? { k2: c.k2 } : {}),
+    ...(c.stability_index !== undefined ? { stabilityIndex: c.stability_index } : {}),
+    ...(c.storey_pu !== undefined ? { storeyPu: c.storey_pu } : {}),
+    ...(c.storey_pc !== undefined ? { storeyPc: c.storey_pc } : {}),
   };
   return o;
 }

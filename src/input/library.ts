@@ -22,6 +22,7 @@ import {
   MAX_LOAD_ROWS,
   MAX_SHEETS,
   RHO_RANGE,
+  STABILITY_INDEX_MAX,
   RING_BARS_RANGE,
   TABLE_CURVES_MAX,
   TABLE_POINTS_RANGE,
@@ -88,6 +89,11 @@ const LoadSchema = z.looseObject({
   M2: load.optional(),
   M1y: load.optional(),
   M2y: load.optional(),
+  // a sway column (issue 24): sway parts of the end moments and the storey's data per load
+  ...Object.fromEntries(['M01', 'M02', 'M01y', 'M02y', 'M2s', 'M1s', 'M2sy', 'M1sy', 'M02s', 'M01s', 'M02sy', 'M01sy'].map((k) => [k, load.optional()])),
+  Q: z.number({ message: 'must be a number' }).pipe(ranged([0, STABILITY_INDEX_MAX])).optional(),
+  storeyPu: load.refine((v) => v > 0, { message: 'must be greater than 0' }).optional(),
+  storeyPc: load.refine((v) => v > 0, { message: 'must be greater than 0' }).optional(),
 });
 
 export const CheckInputSchema = z

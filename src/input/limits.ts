@@ -186,3 +186,8 @@ export const MAX_SCHEDULE_MARKS = 20_000;
 export const MAX_MARK_CHARS = 64;
 /** `schedule --jobs`: processes checking marks. */
 export const SCHEDULE_JOBS_RANGE = [1, 64] as const;
+
+/** A sway column's stability index Q (ACI 318-19 6.6.4.4.1): beyond this a typing error; Q ≥ 1 itself is a status (unstable). */
+export const STABILITY_INDEX_MAX = 10;
+/** EN 1992-1-1 5.8.3.2(3) relative flexibilities k1, k2: 0 (rigid) to a pin (common practice: 1000 stands for one). */
+export const RESTRAINT_FLEXIBILITY_MAX = 1000;

@@ -19,6 +19,8 @@
  *   the export's sign of compression, a group column (a schedule's `mark`, bare numbers in each group's
  *   units) and repeated ids kept as loads numbered #2, #3 …; headers in a basis's action symbols (NEd, Pf,
  *   N*) name Pu and Mu. An optional `beta_dns` column gives a load its own sustained-load ratio.
+ * - A sway column (issue 24): the sway parts M2s, M1s (ACI, AS refuses them) or M02s, M01s (EN, CSA), `…y`
+ *   about y, and the storey's Q or storeyPu with storeyPc per load.
  * Every problem is one PmError naming `<at> line N <column>`. Browser-safe: the live page passes
  * pasted text; the CLI passes the file's text.
  */
@@ -29,14 +31,42 @@ import { DISPLAY_UNITS, parseQuantity, splitQuantity, unitSuffixes, type Quantit
 import type { FactoredLoad } from '../design/check.js';
 import { parseOrThrow, quantityText, text } from './fields.js';
 import { ID_JOIN, ignoredNote, planHeader, type ColumnMap, type CompressionSign } from './column-map.js';
-import { LOAD_MAX_ABS, MAX_LOAD_ID_CHARS, MAX_LOAD_ROWS, MAX_LOADS_BYTES, parseDecimal } from './limits.js';
+import { LOAD_MAX_ABS, MAX_LOAD_ID_CHARS, MAX_LOAD_ROWS, MAX_LOADS_BYTES, parseDecimal, STABILITY_INDEX_MAX } from './limits.js';
 
 /** A load in internal units: the check engine's own load type. */
 export type LoadRow = FactoredLoad;
 
-const COLUMNS = { id: null, Pu: 'force', Mu: 'moment', Muy: 'moment', M1: 'moment', M2: 'moment', M1y: 'moment', M2y: 'moment', M01: 'moment', M02: 'moment', M01y: 'moment', M02y: 'moment', beta_dns: null } as const satisfies Record<string, QuantityKind | null>;
+const COLUMNS = {
+  id: null,
+  Pu: 'force',
+  Mu: 'moment',
+  Muy: 'moment',
+  M1: 'moment',
+  M2: 'moment',
+  M1y: 'moment',
+  M2y: 'moment',
+  M01: 'moment',
+  M02: 'moment',
+  M01y: 'moment',
+  M02y: 'moment',
+  beta_dns: null,
+  // a sway column's sway parts of the end moments and its storey's data (issue 24)
+  M2s: 'moment',
+  M1s: 'moment',
+  M2sy: 'moment',
+  M1sy: 'moment',
+  M02s: 'moment',
+  M01s: 'moment',
+  M02sy: 'moment',
+  M01sy: 'moment',
+  Q: null,
+  storeyPu: 'force',
+  storeyPc: 'force',
+} as const satisfies Record<string, QuantityKind | null>;
 type Column = keyof typeof COLUMNS;
-const OPTIONAL_MOMENTS = ['Muy', 'M1', 'M2', 'M1y', 'M2y', 'M01', 'M02', 'M01y', 'M02y'] as const;
+const OPTIONAL_MOMENTS = ['Muy', 'M1', 'M2', 'M1y', 'M2y', 'M01', 'M02', 'M01y', 'M02y', 'M2s', 'M1s', 'M2sy', 'M1sy', 'M02s', 'M01s', 'M02sy', 'M01sy'] as const;
+/** The storey sums of a sway column: forces, greater than 0. */
+const STOREY_FORCES = ['storeyPu', 'storeyPc'] as const;
 
 /** One row's cells by column, as text: the form of each cell is checked here, units after. */
 const RowSchema = z.object({
@@ -58,6 +88,21 @@ const RowSchema = z.object({
       return v;
     })
     .optional(),
+  // a sway column's stability index Q (ACI 318-19 6.6.4.4.1): a plain number from 0 to STABILITY_INDEX_MAX, empty for the member's
+  Q: z
+    .string()
+    .trim()
+    .transform((t, ctx) => {
+      if (t === '') return undefined;
+      const v = parseDecimal(t);
+      if (v === undefined || !(v >= 0 && v <= STABILITY_INDEX_MAX)) {
+        ctx.addIssue({ code: 'custom', message: `is not a stability index within 0–${STABILITY_INDEX_MAX}`, input: t });
+        return z.NEVER;
+      }
+      return v;
+    })
+    .optional(),
+  ...Object.fromEntries(STOREY_FORCES.map((k) => [k, z.string().trim().pipe(z.union([z.literal(''), quantityText('force')])).optional()])),
 }) as unknown as z.ZodType<Partial<Record<Column, string>>>;
 
 interface HeaderColumn {
@@ -338,6 +383,15 @@ function readLoads(textIn: string, units: UnitSystem, at: string, opts: LoadsCsv
     }
     const beta = (row as Record<string, unknown>).beta_dns;
     if (typeof beta === 'number') load.betaDns = beta;
+    const q = (row as Record<string, unknown>).Q;
+    if (typeof q === 'number') load.Q = q;
+    for (const name of STOREY_FORCES) {
+      const cell = row[name];
+      if (!columns.has(name) || cell === undefined || cell === '') continue;
+      const v = value(name, 'force');
+      if (!(v > 0)) throw new PmError(ERROR_CODES.outOfRange, `${at} line ${line} ${name}`, 'must be greater than 0 (a storey sum of compression)', { value: cell });
+      load[name] = v;
+    }
     loads.push({ group: groupValue, load, line });
   }
   return loads;

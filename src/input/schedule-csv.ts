@@ -5,7 +5,8 @@
  * the marks and the size, and keeps each row's line for errors. Browser-safe.
  *
  *   mark, code, units, fc, fy, b, h | diameter, arrangement, bars_per_face | bars, bar, cover, tie
- *   optional: transverse, klu, klu_y, beta_dns, gamma (replaces cover and tie), gamma_b, creep, aggregate
+ *   optional: transverse, klu, klu_y, beta_dns, gamma (replaces cover and tie), gamma_b, creep, aggregate,
+ *   sway (yes/no), klu_braced, lu, k1, k2, stability_index, storey_pu, storey_pc
  */
 import { parse } from 'csv-parse/sync';
 import { z } from 'zod';
@@ -38,6 +39,15 @@ export const SCHEDULE_COLUMNS = [
   'gamma_b',
   'creep',
   'aggregate',
+  // a sway (unbraced) column (issue 24): per column, the storey data as member values (per load in the loads file)
+  'sway',
+  'klu_braced',
+  'lu',
+  'k1',
+  'k2',
+  'stability_index',
+  'storey_pu',
+  'storey_pc',
 ] as const;
 export type ScheduleColumn = (typeof SCHEDULE_COLUMNS)[number];
 /** Columns every schedule names (the others are optional or depend on the shape and detailing). */

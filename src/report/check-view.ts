@@ -424,13 +424,15 @@ export function checkAssumptions(c: ColumnCheckFrame): string[] {
   const s = symbolsOf(c);
   const out = [
     c.slenderness
-      ? `Slender column (non-sway): ${s.M} is the second-order moment of the basis's method; every step is listed per load.`
+      ? c.slenderness.x.sway
+        ? `Slender sway (unbraced) column: ${s.M} is the second-order moment of the basis's sway method (${c.basis.slenderness?.sway?.title ?? 'none in pmchart'}); every step is listed per load with its clause.`
+        : `Slender column (non-sway): ${s.M} is the second-order moment of the basis's method; every step is listed per load.`
       : `Short column: factored ${s.P} and ${s.M} are taken as given (slenderness effects are not added here).`,
     `Moments keep their signs. ${c.variants.length === 1 ? 'The layout is symmetric about the bending axis, so both signs give the same capacity.' : c.variants.map((v) => v.label).join('; ') + ': the weakest governs.'}`,
     `ρg required is solved exactly at the actual γ = ${fmt(c.gamma, 4)} with the bars smeared in the chosen arrangement; the ${b.symbols.designFamily} curve includes the ${s.cap}.`,
     `Chart readings emulate sheets at γ steps of ${c.chart.gammaStep} with curves at ρg ${c.chart.rhos.map((r) => fmt(r, 3)).join(', ')}: linear between curves along the load ray, linear in γ between sheets; the traditional reading takes the next lower sheet and the next curve out.`,
     `ρg limits ${fmt(lim.min, 3)}–${fmt(lim.max, 3)} of Ag at zero axial load; each load uses the basis's limits for its own axial force, chart readings included.`,
-    'Status: ok; FAILS (utilisation above 1); DETAILING (the given reinforcement breaks a detailing rule of the basis: steel ratio, clear spacing or cover; the rule and clause are named); NOT POSSIBLE (more than the maximum ρg); UNSTABLE (the axial load reaches the magnifier’s critical load); OUTSIDE SCOPE (beyond the second-order method’s limit). Exit status 1 when any load is not ok.',
+    'Status: ok; FAILS (utilisation above 1); DETAILING (the given reinforcement breaks a detailing rule of the basis: steel ratio, clear spacing or cover; the rule and clause are named); NOT POSSIBLE (more than the maximum ρg); UNSTABLE (the axial load reaches the magnifier’s critical load; for a sway column also Q ≥ 1 or the storey’s ΣPu ≥ 0.75·ΣPc); OUTSIDE SCOPE (beyond the second-order method’s limit, e.g. δs from Q above 1.5, or a sway column on a basis with no sway method). Exit status 1 when any load is not ok.',
   ];
   if (c.barSelection) {
     out.push(
@@ -442,7 +444,7 @@ export function checkAssumptions(c: ColumnCheckFrame): string[] {
     out.push(`Bar proposals are flagged, not refused, above ρg ${fmt(c.basis.detailing.lapZoneRho, 3)} where bars are lapped${Number.isFinite(c.basis.detailing.maxLappedBar) ? ` and for bars larger than ${fmt(c.basis.detailing.maxLappedBar, 4)} ${unitsOf(c.units).length}, which cannot be lap spliced` : ''}.`);
   }
   if (c.slenderness) {
-    out.push(`Slenderness: each axis magnified separately for its own member data (non-sway), both axes always (a load without ${s.M}y has ${s.M}y = 0, and kℓu about y defaults to kℓu about x); the magnified moments feed the uniaxial and biaxial checks.`);
+    out.push(`Slenderness: each axis magnified separately for its own member data (${c.slenderness.x.sway ? 'sway: the storey data and k1, k2 serve both axes' : 'non-sway'}), both axes always (a load without ${s.M}y has ${s.M}y = 0, and kℓu about y defaults to kℓu about x); the magnified moments feed the uniaxial and biaxial checks.`);
   }
   out.push(
     `Minimum moments act about one axis at a time (ACI 318-19 R6.6.4.5.4; EN 1992-1-1 5.8.9): each load is also checked about y alone at the same ${s.P}, its moment about y raised to the minimum; a governing minimum is an accidental eccentricity, checked in both signs on a layout not symmetric about the axis. A layout not symmetric about the bending plane is checked by the exact search with the neutral axis free to incline (the uniaxial figure never governs lower).`,

@@ -26,7 +26,7 @@ export function scheduleAssumptions(head: ScheduleHead): string[] {
     'Utilisation is the governing load’s measure: the larger of the uniaxial and exact biaxial utilisations of the scheduled bars, every effect included (slenderness where klu is given, minimum moment, both signs, ring orientations); — when the load is unstable or not possible.',
     'ρg required is the governing load’s, solved exactly at the mark’s γ with its bars smeared in its arrangement (the exact biaxial figure where the load has Muy on a rectangle); ρg provided is that of the scheduled bars.',
     'Loads: axial compression positive as read (--compression negative turns an export’s sign); bare numbers are in each mark’s units; repeated combinations of a mark are separate loads (#2, #3 …).',
-    'Short columns unless the schedule gives klu: factored moments are then taken as given (non-sway).',
+    'Short columns unless the schedule gives klu: factored moments are then taken as given (non-sway); a mark with sway = yes is a sway (unbraced) column checked by its basis\'s sway method, its sway moments from the loads file (M2s, M02s) and its storey data from the schedule or per load.',
     head.proposals > 0 ? `Bar proposals: ${head.proposals} per mark, re-verified against every load.` : 'No bar proposals (--proposals N to ask).',
   ];
 }

@@ -487,10 +487,20 @@ function sidePanel(g: Deco, L: ReportLayout, c: ColumnCheck, input: CheckReportI
       const x = b.x + k * colW;
       g.text('valueBold', x, yy, `bending about ${axis}`);
       yy += 1.3 * u;
+      // a sway column has some forty steps: those that do not fit above the assumptions are counted, never drawn over them
+      const stepLimit = limit - 10 * u;
+      let left = 0;
       for (const st of s.steps) {
         const v = typeof st.value === 'number' ? f(st.value, 5) : String(st.value);
-        yy = g.paragraph('dimLeft', x, yy, colW - 0.8 * u, `${st.label} = ${v}${st.unit ? ` ${st.unit}` : ''}`, 1.22);
+        const text = `${st.label} = ${v}${st.unit ? ` ${st.unit}` : ''}`;
+        const h = wrap(text, colW - 0.8 * u, g.size('dimLeft')).length * g.size('dimLeft') * 1.22;
+        if (left > 0 || yy + h > stepLimit) {
+          left++;
+          continue;
+        }
+        yy = g.paragraph('dimLeft', x, yy, colW - 0.8 * u, text, 1.22);
       }
+      if (left > 0) yy = g.paragraph('caption', x, yy + 0.2 * u, colW - 0.8 * u, `${left} more step${left === 1 ? '' : 's'}: the .txt and .json reports list every step with its clause.`, 1.22);
       for (const w of s.warnings) yy = g.paragraph('caption', x, yy, colW - 0.8 * u, `WARNING: ${w}`, 1.22);
       yEnd = Math.max(yEnd, yy);
     });

@@ -20,6 +20,15 @@ const SL_RULES = 'tests/design/slenderness-rules.test.ts';
 const SL_EN = 'tests/design/slenderness-en-terms.test.ts';
 const SL_AS_CSA = 'tests/design/slenderness-as-csa.test.ts';
 const RB = 'tests/codes/rulebooks.test.ts';
+const SW = 'tests/design/slenderness-sway.test.ts';
+const ACI_SWAY_HAND = 'Q = 0.2: δs = 1.25, M2 = 2100, along the length δ = 1.0104, design moment 2121.75 kip·in';
+const aciSway = (edition: string, neglect: string): Record<string, MatrixRow> => ({
+  'sway-slenderness-limit': { file: SW, test: edition === 'ACI 318-19' ? 'kℓu/r = 22 exactly may be neglected (6.2.5.1(a)): the first-order end moment 1800, not magnified' : 'ACI 318-14: the same figures under its own neglect clause 6.2.5(a) and 1.4 limit 6.2.6 (from memory)', source: 'from memory', reference: `${edition} ${neglect}, hand calculation` },
+  'sway-end-moments': { file: SW, test: ACI_SWAY_HAND, source: 'from memory', reference: `${edition} 6.6.4.6.1 (published text, up.codes), M2 = 600 + 1.25·1200 = 2100 by hand` },
+  'sway-magnifier': { file: SW, test: 'storey sums ΣPu = 3000, ΣPc = 16,000 kips: δs = 1/(1 − 3000/12,000) = 1.3333 (6.6.4.6.2(b)); kℓu as braced 144 in is short along the length', source: 'from memory', reference: `${edition} 6.6.4.6.2(a), (b), hand calculation` },
+  'sway-stability-limit': { file: SW, test: 'Q = 1 and ΣPu = 0.75·ΣPc are unstable: δ infinite (6.6.4.6.2)', source: 'from memory', reference: `${edition} 6.6.4.6.2; δs > 1.5 only by (b) or (c) (published text, up.codes)` },
+  'sway-along-length': { file: SW, test: ACI_SWAY_HAND, source: 'from memory', reference: `${edition} 6.6.4.6.4, along the length δ = 1.010359 by hand` },
+});
 const ACI = 'tests/codes/aci318.test.ts';
 
 const ACI19_HAND = 'ACI 318-19 6.6.4 non-sway moment magnification — hand calculation';
@@ -42,6 +51,7 @@ export const CLAUSE_MATRIX: Readonly<Record<string, Readonly<Record<string, Matr
     'min-moment': { file: SL, test: 'the minimum moment governs a small M2 and sets Cm = 1.0 (6.6.4.5.4)', source: 'from memory', reference: 'ACI 318-19 6.6.4.5.4, M2,min = 432 kip·in by hand' },
     'stability-limit': { file: SL, test: 'Pu ≥ 0.75·Pc is unstable: not ok, δ infinite', source: 'from memory', reference: 'ACI 318-19 6.6.4.5.2' },
     'second-order-limit': { file: SL, test: ACI19_HAND, source: 'from memory', reference: 'ACI 318-19 6.2.5.3, options (a), (b) exceed 1.4 by hand' },
+    ...aciSway('ACI 318-19', '6.2.5.1(a)'),
   },
   'aci318-14': {
     'axial-cap': { file: RB, test: 'ACI 318-14: Pn,max = 0.80·Po tied, 0.85·Po spiral (22.4.2.1); load contour α = 1.5 (Bresler, 1960, from memory)', source: 'published', reference: 'ACI 318-14 22.4.2.1' },
@@ -56,6 +66,7 @@ export const CLAUSE_MATRIX: Readonly<Record<string, Readonly<Record<string, Matr
     'min-moment': { file: RB, test: ACI14_HAND, source: 'from memory', reference: 'ACI 318-14 6.6.4.5.4, M2,min = 432 kip·in by hand' },
     'stability-limit': { file: RB, test: 'Pu = 700 kips ≥ 0.75·Pc = 632.5 kips is unstable (6.6.4.5.2)', source: 'from memory', reference: 'ACI 318-14 6.6.4.5.2' },
     'second-order-limit': { file: RB, test: ACI14_HAND, source: 'from memory', reference: 'ACI 318-14 6.2.6' },
+    ...aciSway('ACI 318-14', '6.2.5(a)'),
   },
   'en1992-1-1': {
     'biaxial-method': { file: SL_EN, test: 'NRd = 2383.9 kN and a = 1.48', source: 'from memory', reference: 'EN 1992-1-1 5.8.9(4) Eq. 5.39; Bond et al., Worked Examples to Eurocode 2 (The Concrete Centre), biaxial column check' },
@@ -68,6 +79,10 @@ export const CLAUSE_MATRIX: Readonly<Record<string, Readonly<Record<string, Matr
     'nominal-curvature': { file: SL, test: EN_HAND, source: 'published', reference: 'EN 1992-1-1 5.8.8.3 Eq. 5.34–5.37, hand calculation' },
     'curvature-factor-c': { file: SL_RULES, test: 'M01 = M02 (constant first-order moment): c = 8, e2 = 70.47 mm, MEd = 188.20 kN·m', source: 'published', reference: 'EN 1992-1-1:2004 5.8.8.2(4), published text quoted in the test' },
     magnifier: { file: SL, test: EN_HAND, source: 'from memory', reference: 'EN 1992-1-1 5.8.8.2 Eq. 5.31, 5.33, hand calculation' },
+    'sway-effective-length': { file: SW, test: 'Eq. 5.16 factor: 2.081666 for k1 = 0.5, k2 = 1.0; 2.0 from the second term for k1 = k2 = 1 (√6 = 2.449 is larger)', source: 'from memory', reference: 'EN 1992-1-1 5.8.3.2(3) Eq. 5.16, hand calculation' },
+    'sway-slenderness-limit': { file: SW, test: 'l0 = 8326.66 mm, λ = 72.11 > λlim = 22.11, e2 = 95.93 mm, MEd = 265.11 kN·m', source: 'published', reference: 'EN 1992-1-1:2004 5.8.3.1(1) "rm should be taken as 1,0 … for unbraced members in general" (usingeurocodes.com), λlim = 22.106 by hand' },
+    'sway-imperfection': { file: SW, test: 'l0 = 8326.66 mm, λ = 72.11 > λlim = 22.11, e2 = 95.93 mm, MEd = 265.11 kN·m', source: 'from memory', reference: 'EN 1992-1-1 5.2(7), ei = 20.817 mm by hand' },
+    'sway-end-moments': { file: SW, test: 'l0 = 8326.66 mm, λ = 72.11 > λlim = 22.11, e2 = 95.93 mm, MEd = 265.11 kN·m', source: 'from memory', reference: 'EN 1992-1-1 5.8.8.2, M0Ed = 121.225 kN·m, MEd = 265.115 kN·m by hand' },
   },
   'csa-a23.3-19': {
     'biaxial-method': { file: RB, test: 'CSA biaxial: load contour with Bresler’s α = 1.5 for a rectangle (Bresler, ACI Journal 57(5), 1960, from memory)', source: 'from memory', reference: 'Bresler, ACI Journal 57(5), 1960' },
@@ -78,6 +93,11 @@ export const CLAUSE_MATRIX: Readonly<Record<string, Readonly<Record<string, Matr
     magnifier: { file: SL_AS_CSA, test: CSA_HAND, source: 'from memory', reference: 'CSA A23.3-19 10.15.3.1, δ = 2.2361 by hand' },
     'cm-factor': { file: SL_AS_CSA, test: CSA_HAND, source: 'from memory', reference: 'CSA A23.3-19 10.15.3.2, Cm = 0.8 by hand' },
     'stability-limit': { file: RB, test: 'CSA: Pf = 3500 kN ≥ 0.75·Pc = 3114.1 kN is unstable', source: 'from memory', reference: 'CSA A23.3-19 10.15.3.1' },
+    'sway-slenderness-limit': { file: SW, test: 'Q = 0.1: δs = 1.1111, M2 = 148.89 kN·m, along the length δ = 1.2349, Mc = 183.86 kN·m', source: 'from memory', reference: 'CSA A23.3-19 10.16 (no sway neglect limit applied), hand calculation' },
+    'sway-end-moments': { file: SW, test: 'Q = 0.1: δs = 1.1111, M2 = 148.89 kN·m, along the length δ = 1.2349, Mc = 183.86 kN·m', source: 'from memory', reference: 'CSA A23.3-19 10.16.2, M2 = 148.889 kN·m by hand' },
+    'sway-magnifier': { file: SW, test: 'Q = 0.1: δs = 1.1111, M2 = 148.89 kN·m, along the length δ = 1.2349, Mc = 183.86 kN·m', source: 'from memory', reference: 'CSA A23.3-19 10.16.3, δs = 1.1111 by hand' },
+    'sway-stability-limit': { file: SW, test: 'storey sums: ΣPf = 0.75·ΣPc is unstable (10.16.3.1); δs = 1.5 from Q is within, above is outside', source: 'from memory', reference: 'CSA A23.3-19 10.16.3.1, 10.16.3.2' },
+    'sway-along-length': { file: SW, test: 'Q = 0.1: δs = 1.1111, M2 = 148.89 kN·m, along the length δ = 1.2349, Mc = 183.86 kN·m', source: 'from memory', reference: 'CSA A23.3-19 10.16.4, δ = 1.234882 by hand' },
   },
   'as3600-2018': {
     'biaxial-method': { file: SL_RULES, test: 'AS 3600-2018 10.6.4: load-contour exponent αn = 0.7 + 1.7·N*/(0.6·Nuo), 1 ≤ αn ≤ 2 (from memory)', source: 'from memory', reference: 'AS 3600-2018 10.6.4, hand calculation αn = 1.245' },
@@ -91,5 +111,9 @@ export const CLAUSE_MATRIX: Readonly<Record<string, Readonly<Record<string, Matr
     'buckling-load': { file: SL_AS_CSA, test: AS_HAND, source: 'from memory', reference: 'AS 3600-2018 10.4.4, Nc = 6,657,899 N by hand' },
     'stability-limit': { file: RB, test: 'AS: N* = 7000 kN ≥ Nc = 6,657,899 N (Le = 8 m, the section of slenderness-as-csa.test.ts) is unstable', source: 'from memory', reference: 'AS 3600-2018 10.4.2' },
     'scope-slenderness': { file: SL_RULES, test: 'Le/r = 121 > 120 is outside the moment-magnifier method (10.5.1, from memory): not ok, with the clause', source: 'from memory', reference: 'AS 3600-2018 10.5.1' },
+    'sway-slenderness-limit': { file: SW, test: 'ΣN* = ΣNc is unstable; Le/r = 22 is short (10.3.1(a))', source: 'from memory', reference: 'AS 3600-2018 10.3.1(a)' },
+    'sway-magnifier': { file: SW, test: 'δs = 2.0 governs: M* = 600 kN·m', source: 'from memory', reference: 'AS 3600-2018 10.4.3, δs = 2.0 by hand' },
+    'sway-braced-magnifier': { file: SW, test: 'δb governs a stiff storey: M* = 436.83 kN·m, the braced answer', source: 'from memory', reference: 'AS 3600-2018 10.4.2, δb = 1.4561 by hand' },
+    'sway-stability-limit': { file: SW, test: 'ΣN* = ΣNc is unstable; Le/r = 22 is short (10.3.1(a))', source: 'from memory', reference: 'AS 3600-2018 10.4.3' },
   },
 };

@@ -78,7 +78,7 @@ describe('parseLoadsCsv strictness (issue 25)', () => {
   });
   it('refuses unknown columns, which would otherwise skip a check (My instead of Muy)', () => {
     expect(problem('id,Pu,Mu,My\nA,500,250,250\n')).toBe(
-      '--loads line 1 column 4: "My" is not a column pmchart reads (id, Pu, Mu, Muy, M1, M2, M1y, M2y, M01, M02, M01y, M02y, beta_dns); rename it, name it in --ignore-columns to skip it, or map the file with --columns',
+      '--loads line 1 column 4: "My" is not a column pmchart reads (id, Pu, Mu, Muy, M1, M2, M1y, M2y, M01, M02, M01y, M02y, beta_dns, M2s, M1s, M2sy, M1sy, M02s, M01s, M02sy, M01sy, Q, storeyPu, storeyPc); rename it, name it in --ignore-columns to skip it, or map the file with --columns',
     );
     expect(problem('id,Pu,Mu,Mu_y\nA,500,250,250\n')).toMatch(/^--loads line 1 column 4: "Mu_y" is not a column pmchart reads/);
   });
