@@ -155,7 +155,7 @@ function member(m: AxisMember, sway: SwayInput | undefined): Omit<SlendernessInp
  * replacing the member's. Sway parts in the same-sign convention (M02s, M01s) are turned with the sign of the
  * non-sway M02, as `fromSameSign` turns the non-sway pair. Not given, M1s defaults to equal moments in reverse
  * curvature (M1s = M2s in the internal sign, M01s = −M02s): the shape a storey's sway bends its columns in.
- * A method that magnifies the sway parts ('split') needs M2s (about y only where the load has a moment about y:
+ * A method that takes the sway parts ('split' or 'summed') needs M2s (about y only where the load has a moment about y:
  * bending about y with no Muy has no sway part); one that has no split takes none.
  */
 function swayOf(
@@ -190,7 +190,8 @@ function swayOf(
     m1s = M1s ?? M2s;
   }
   const needs = basis.slenderness?.sway?.inputs.moments;
-  if (m2s === undefined && needs === 'split' && required) {
+  // 'summed' too: the flags say --mu is the non-sway part, so a sway part left out is a wind moment forgotten, not 0
+  if (m2s === undefined && needs !== undefined && needs !== 'none' && required) {
     throw new PmError(ERROR_CODES.missing, `${conv.largerFlag}Sway${axis}`, `is required with --sway (the sway part of the end moment, 0 where the load has none; a ${conv.largerFlag === 'm2' ? 'M2s' : 'M02s'}${axis === 'Y' ? 'y' : ''} column in --loads)`);
   }
   const storey = load.Q !== undefined || load.storeyPu !== undefined || load.storeyPc !== undefined;

@@ -136,6 +136,13 @@ describe('check --sway (EN 1992-1-1: l0 by Eq. 5.16, --m02-sway)', () => {
     expect(q.stderr).toMatch(/^pmchart: --stability-index: does not apply to EN 1992-1-1 5\.8\.8 nominal curvature \(unbraced\)/);
     expect((await runCli([...EN, '--sway', '--klu', '8m', '--k1', '1', '--k2', '-1'])).stderr).toMatch(/^pmchart: --k2: /);
   });
+  it('requires --m02-sway (0 allowed): --mu is the non-sway part, so a sway part left out would be a lateral moment forgotten', async () => {
+    const r = await runCli([...EN, '--sway', '--klu', '8m']);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/^pmchart: --m02-sway: is required with --sway/);
+    const zero = await runCli([...EN, '--sway', '--klu', '8m', '--m02-sway', '0', '--json']);
+    expect(zero.code, zero.stderr).toBeLessThan(2);
+  });
 });
 
 describe('schedule with a sway column', () => {
