@@ -21,7 +21,7 @@ import type { Basis, CapContext, ResistanceModel } from '../codes/types.js';
 import type { ConcreteLaw } from '../materials/types.js';
 import { grossArea } from '../section/geometry.js';
 import type { Bar, Shape } from '../section/types.js';
-import { GAUSS_10, gaussLegendre } from './gauss.js';
+import { GAUSS_10, gaussForDegree } from './gauss.js';
 import { concreteResultant, strainAt } from './section-forces.js';
 import { findRootOrNaN } from './solve.js';
 import type { StrainProfile } from '../codes/types.js';
@@ -88,8 +88,12 @@ export function prepareBiaxial(basis: Basis, shape: Shape, bars: readonly Bar[],
 /** Scratch for rectangleConcrete's cut depths: 2 ends, 4 corners, and room for the laws' breakpoints (single-threaded, never re-entered). */
 const CUTS = new Float64Array(16);
 
+type Resultant3 = { P: number; Mx: number; My: number };
+/** rectangleConcrete's answer, read at once by its one caller (no allocation per evaluation). */
+const RESULT: Resultant3 = { P: 0, Mx: 0, My: 0 };
+
 type Rule = { readonly nodes: Float64Array; readonly weights: Float64Array };
-const RULES = new Map<number, Rule>();
+
 /**
  * The fewest Gauss–Legendre points exact for a law on a rectangle: between breakpoints and corner depths the
  * stress is a polynomial of degree k in depth (strain is linear in depth), the chord width and the moment arm
@@ -97,15 +101,7 @@ const RULES = new Map<number, Rule>();
  * (Abramowitz & Stegun 25.4.29). A law that is no polynomial keeps 10 points.
  */
 function ruleFor(law: ConcreteLaw, reference: boolean): Rule {
-  const k = law.polynomialDegree;
-  if (reference || k === undefined || k > 16) return GAUSS_10;
-  const m = Math.max(2, Math.ceil((k + 3) / 2));
-  let r = RULES.get(m);
-  if (!r) {
-    r = gaussLegendre(m);
-    RULES.set(m, r);
-  }
-  return r;
+  return reference || law.polynomialDegree === undefined ? GAUSS_10 : gaussForDegree(law.polynomialDegree + 2);
 }
 
 /** Half the section's extent along n = (sin θ, cos θ): the extreme compression fibre's coordinate. */
@@ -167,9 +163,15 @@ export function biaxialResultant(sec: BiaxialSection, theta: number, c: number, 
  * Concrete resultant of a b × h rectangle with the neutral axis normal to n = (nx, ny).
  * A point at depth d on the chord: (x, y) = s·n + t·τ with s = sMax − d and τ = (ny, −nx).
  */
-function rectangleConcrete(b: number, h: number, nx: number, ny: number, sMax: number, law: ConcreteLaw, p: StrainProfile, rule: Rule): { P: number; Mx: number; My: number } {
+function rectangleConcrete(b: number, h: number, nx: number, ny: number, sMax: number, law: ConcreteLaw, p: StrainProfile, rule: Rule): Resultant3 {
   const depth = 2 * sMax;
-  if (p.curvature === 0) return { P: law.stress(p.top) * b * h, Mx: 0, My: 0 };
+  const out = RESULT;
+  if (p.curvature === 0) {
+    out.P = law.stress(p.top) * b * h;
+    out.Mx = 0;
+    out.My = 0;
+    return out;
+  }
   // cut depths: the ends, the corners inside, the law's breakpoints; a few values, kept sorted by insertion
   // (Array.prototype.sort with a comparator cost more than the integration itself)
   const cuts = law.breakpoints.length + 6 <= CUTS.length ? CUTS : new Float64Array(law.breakpoints.length + 6);
@@ -238,7 +240,10 @@ function rectangleConcrete(b: number, h: number, nx: number, ny: number, sMax: n
       My += f * (s * nx + tm * ny);
     }
   }
-  return { P, Mx, My };
+  out.P = P;
+  out.Mx = Mx;
+  out.My = My;
+  return out;
 }
 
 /** The factored (or nominal) point at (θ, c): φ·resultant, without the axial cap. */
@@ -383,7 +388,12 @@ function solveAngle(resid: (theta: number) => { r: number }, psi: number): numbe
  */
 export function depthForAxial(sec: BiaxialSection, theta: number, P: number, kind: ModelKind = 'design'): number {
   const depth = 2 * extremeCoordinate(sec.shape, theta);
-  const g = (logC: number) => surfacePoint(sec, theta, Math.exp(logC) * depth, kind).P - P;
+  const g = (logC: number) => {
+    // surfacePoint(…).P without the point: the same product φ·P
+    const r = biaxialResultant(sec, theta, Math.exp(logC) * depth, kind);
+    const phi = kind === 'design' ? sec.basis.design.factor(r.epsT) : 1;
+    return phi * r.P - P;
+  };
   const x = findRootOrNaN(g, Math.log(C_MIN), Math.log(C_MAX), 1e-12, 200);
   return Number.isNaN(x) ? NaN : Math.exp(x) * depth;
 }
