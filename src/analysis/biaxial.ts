@@ -114,6 +114,14 @@ const modelOf = (basis: Basis, kind: ModelKind): ResistanceModel => (kind === 'n
 
 /** Resultant of a model's laws at neutral-axis angle θ and depth c (c = Infinity: uniform compression). */
 export function biaxialResultant(sec: BiaxialSection, theta: number, c: number, kind: ModelKind = 'design'): BiaxialResultant {
+  return resultantInto(sec, theta, c, kind, { P: 0, Mx: 0, My: 0, epsT: 0 });
+}
+
+/** Scratch for the depth searches' inner evaluations (read at once; the searches never nest). */
+const SCRATCH: BiaxialResultant = { P: 0, Mx: 0, My: 0, epsT: 0 };
+
+/** biaxialResultant written into `out` (no allocation in the searches' inner loops). */
+function resultantInto(sec: BiaxialSection, theta: number, c: number, kind: ModelKind, out: BiaxialResultant): BiaxialResultant {
   const model = modelOf(sec.basis, kind);
   const nx = Math.sin(theta);
   const ny = Math.cos(theta);
@@ -127,7 +135,11 @@ export function biaxialResultant(sec: BiaxialSection, theta: number, c: number, 
     // AS 3600-2018 10.6.2.3: straight line from the decompression point (c = dt) to the squash load
     const dec = biaxialResultant(sec, theta, dt, kind);
     const t = Number.isFinite(c) ? 1 - dt / c : 1;
-    return { P: (1 - t) * dec.P + t * sec.squash[kind], Mx: (1 - t) * dec.Mx, My: (1 - t) * dec.My, epsT: -strainAt(p, dt) };
+    out.P = (1 - t) * dec.P + t * sec.squash[kind];
+    out.Mx = (1 - t) * dec.Mx;
+    out.My = (1 - t) * dec.My;
+    out.epsT = -strainAt(p, dt);
+    return out;
   }
 
   let P = 0;
@@ -155,8 +167,11 @@ export function biaxialResultant(sec: BiaxialSection, theta: number, c: number, 
     Mx += f * bar.y;
     My += f * bar.x;
   }
-  const epsT = -strainAt(p, sMax - sMin);
-  return { P, Mx, My, epsT };
+  out.P = P;
+  out.Mx = Mx;
+  out.My = My;
+  out.epsT = -strainAt(p, sMax - sMin);
+  return out;
 }
 
 /**
@@ -275,7 +290,7 @@ function depthForDirection(sec: BiaxialSection, theta: number, omega: number, ki
   const depth = 2 * extremeCoordinate(sec.shape, theta);
   const reference = sec.search === 'reference';
   const g = (logC: number) => {
-    const r = biaxialResultant(sec, theta, Math.exp(logC) * depth, kind);
+    const r = resultantInto(sec, theta, Math.exp(logC) * depth, kind, SCRATCH);
     return Math.atan2(r.P, reference ? Math.hypot(r.Mx, r.My) : Math.sqrt(r.Mx * r.Mx + r.My * r.My)) - omega;
   };
   const lo = Math.log(C_MIN);
@@ -390,7 +405,7 @@ export function depthForAxial(sec: BiaxialSection, theta: number, P: number, kin
   const depth = 2 * extremeCoordinate(sec.shape, theta);
   const g = (logC: number) => {
     // surfacePoint(…).P without the point: the same product φ·P
-    const r = biaxialResultant(sec, theta, Math.exp(logC) * depth, kind);
+    const r = resultantInto(sec, theta, Math.exp(logC) * depth, kind, SCRATCH);
     const phi = kind === 'design' ? sec.basis.design.factor(r.epsT) : 1;
     return phi * r.P - P;
   };
