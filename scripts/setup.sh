@@ -1,13 +1,14 @@
 #!/usr/bin/env bash
 # Installs what pmchart needs on a fresh machine, skipping whatever is already there:
-#   1. Debian packages for node-canvas (built from source), poppler-utils (PDF checks in tests) and
-#      chromium (the live page's browser tests, driven by playwright-core)
+#   1. Debian packages for node-canvas (built from source), poppler-utils (PDF checks in tests),
+#      chromium (the live page's browser tests, driven by playwright-core) and python3-numpy +
+#      python3-matplotlib (the plain plotting script `npm run bench` measures pmchart against)
 #   2. npm dependencies (canvas's install script is allowed by name in package.json/.npmrc)
 #   3. the TypeScript build in dist/
 set -euo pipefail
 cd "$(dirname "$0")/.."
 
-APT_PACKAGES=(libcairo2-dev libpango1.0-dev libjpeg-dev libgif-dev librsvg2-dev pkg-config poppler-utils chromium)
+APT_PACKAGES=(libcairo2-dev libpango1.0-dev libjpeg-dev libgif-dev librsvg2-dev pkg-config poppler-utils chromium python3-numpy python3-matplotlib)
 
 missing=()
 for p in "${APT_PACKAGES[@]}"; do

@@ -21,7 +21,7 @@ import type { Basis, CapContext, ResistanceModel } from '../codes/types.js';
 import type { ConcreteLaw } from '../materials/types.js';
 import { grossArea } from '../section/geometry.js';
 import type { Bar, Shape } from '../section/types.js';
-import { GAUSS_10 } from './gauss.js';
+import { GAUSS_10, gaussForDegree } from './gauss.js';
 import { concreteResultant, strainAt } from './section-forces.js';
 import { findRootOrNaN } from './solve.js';
 import type { StrainProfile } from '../codes/types.js';
@@ -44,6 +44,11 @@ export interface BiaxialSection {
   readonly squash: Readonly<Record<ModelKind, number>>;
   /** axial cap of each model (Infinity where none): capFactor·Po; the design cap includes φ */
   readonly cap: Readonly<Record<ModelKind, number>>;
+  /**
+   * 'reference': every depth search over the whole range and 10 Gauss points per piece, as before the fast path
+   * (issue 21); kept so a property test can compare the fast search with it. Absent: the fast search.
+   */
+  readonly search?: 'reference';
 }
 
 /** Resultant of one model at (θ, c), before φ. */
@@ -67,7 +72,7 @@ export interface SurfacePoint extends BiaxialResultant {
   phi: number;
 }
 
-export function prepareBiaxial(basis: Basis, shape: Shape, bars: readonly Bar[], capContext: CapContext = {}): BiaxialSection {
+export function prepareBiaxial(basis: Basis, shape: Shape, bars: readonly Bar[], capContext: CapContext = {}, opts: { reference?: boolean } = {}): BiaxialSection {
   const ag = grossArea(shape);
   const ast = bars.reduce((s, b) => s + b.area, 0);
   const po = (m: ResistanceModel) => m.squash.concreteStress * (ag - ast) + m.squash.steelStress * ast;
@@ -76,7 +81,27 @@ export function prepareBiaxial(basis: Basis, shape: Shape, bars: readonly Bar[],
     const f = m.capFactor(capContext);
     return Number.isFinite(f) ? f * p : Infinity;
   };
-  return { basis, shape, bars, grossArea: ag, steelArea: ast, squash, cap: { nominal: capOf(basis.nominal, squash.nominal), design: capOf(basis.design, squash.design) } };
+  const cap = { nominal: capOf(basis.nominal, squash.nominal), design: capOf(basis.design, squash.design) };
+  return { basis, shape, bars, grossArea: ag, steelArea: ast, squash, cap, ...(opts.reference ? { search: 'reference' as const } : {}) };
+}
+
+/** Scratch for rectangleConcrete's cut depths: 2 ends, 4 corners, and room for the laws' breakpoints (single-threaded, never re-entered). */
+const CUTS = new Float64Array(16);
+
+type Resultant3 = { P: number; Mx: number; My: number };
+/** rectangleConcrete's answer, read at once by its one caller (no allocation per evaluation). */
+const RESULT: Resultant3 = { P: 0, Mx: 0, My: 0 };
+
+type Rule = { readonly nodes: Float64Array; readonly weights: Float64Array };
+
+/**
+ * The fewest Gauss–Legendre points exact for a law on a rectangle: between breakpoints and corner depths the
+ * stress is a polynomial of degree k in depth (strain is linear in depth), the chord width and the moment arm
+ * are linear, so the integrands have degree ≤ k + 2, which m points integrate exactly when 2m − 1 ≥ k + 2
+ * (Abramowitz & Stegun 25.4.29). A law that is no polynomial keeps 10 points.
+ */
+function ruleFor(law: ConcreteLaw, reference: boolean): Rule {
+  return reference || law.polynomialDegree === undefined ? GAUSS_10 : gaussForDegree(law.polynomialDegree + 2);
 }
 
 /** Half the section's extent along n = (sin θ, cos θ): the extreme compression fibre's coordinate. */
@@ -89,6 +114,14 @@ const modelOf = (basis: Basis, kind: ModelKind): ResistanceModel => (kind === 'n
 
 /** Resultant of a model's laws at neutral-axis angle θ and depth c (c = Infinity: uniform compression). */
 export function biaxialResultant(sec: BiaxialSection, theta: number, c: number, kind: ModelKind = 'design'): BiaxialResultant {
+  return resultantInto(sec, theta, c, kind, { P: 0, Mx: 0, My: 0, epsT: 0 });
+}
+
+/** Scratch for the depth searches' inner evaluations (read at once; the searches never nest). */
+const SCRATCH: BiaxialResultant = { P: 0, Mx: 0, My: 0, epsT: 0 };
+
+/** biaxialResultant written into `out` (no allocation in the searches' inner loops). */
+function resultantInto(sec: BiaxialSection, theta: number, c: number, kind: ModelKind, out: BiaxialResultant): BiaxialResultant {
   const model = modelOf(sec.basis, kind);
   const nx = Math.sin(theta);
   const ny = Math.cos(theta);
@@ -102,7 +135,11 @@ export function biaxialResultant(sec: BiaxialSection, theta: number, c: number, 
     // AS 3600-2018 10.6.2.3: straight line from the decompression point (c = dt) to the squash load
     const dec = biaxialResultant(sec, theta, dt, kind);
     const t = Number.isFinite(c) ? 1 - dt / c : 1;
-    return { P: (1 - t) * dec.P + t * sec.squash[kind], Mx: (1 - t) * dec.Mx, My: (1 - t) * dec.My, epsT: -strainAt(p, dt) };
+    out.P = (1 - t) * dec.P + t * sec.squash[kind];
+    out.Mx = (1 - t) * dec.Mx;
+    out.My = (1 - t) * dec.My;
+    out.epsT = -strainAt(p, dt);
+    return out;
   }
 
   let P = 0;
@@ -115,7 +152,7 @@ export function biaxialResultant(sec: BiaxialSection, theta: number, c: number, 
     Mx = r.M * ny;
     My = r.M * nx;
   } else {
-    const r = rectangleConcrete(sec.shape.b, sec.shape.h, nx, ny, sMax, model.concrete, p);
+    const r = rectangleConcrete(sec.shape.b, sec.shape.h, nx, ny, sMax, model.concrete, p, ruleFor(model.concrete, sec.search === 'reference'));
     P = r.P;
     Mx = r.Mx;
     My = r.My;
@@ -130,38 +167,59 @@ export function biaxialResultant(sec: BiaxialSection, theta: number, c: number, 
     Mx += f * bar.y;
     My += f * bar.x;
   }
-  const epsT = -strainAt(p, sMax - sMin);
-  return { P, Mx, My, epsT };
+  out.P = P;
+  out.Mx = Mx;
+  out.My = My;
+  out.epsT = -strainAt(p, sMax - sMin);
+  return out;
 }
 
 /**
  * Concrete resultant of a b × h rectangle with the neutral axis normal to n = (nx, ny).
  * A point at depth d on the chord: (x, y) = s·n + t·τ with s = sMax − d and τ = (ny, −nx).
  */
-function rectangleConcrete(b: number, h: number, nx: number, ny: number, sMax: number, law: ConcreteLaw, p: StrainProfile): { P: number; Mx: number; My: number } {
+function rectangleConcrete(b: number, h: number, nx: number, ny: number, sMax: number, law: ConcreteLaw, p: StrainProfile, rule: Rule): Resultant3 {
   const depth = 2 * sMax;
-  if (p.curvature === 0) return { P: law.stress(p.top) * b * h, Mx: 0, My: 0 };
-  const cuts: number[] = [0, depth];
-  for (const cx of [-b / 2, b / 2]) {
-    for (const cy of [-h / 2, h / 2]) {
-      const d = sMax - (cx * nx + cy * ny);
-      if (d > 1e-12 * depth && d < depth * (1 - 1e-12)) cuts.push(d);
+  const out = RESULT;
+  if (p.curvature === 0) {
+    out.P = law.stress(p.top) * b * h;
+    out.Mx = 0;
+    out.My = 0;
+    return out;
+  }
+  // cut depths: the ends, the corners inside, the law's breakpoints; a few values, kept sorted by insertion
+  // (Array.prototype.sort with a comparator cost more than the integration itself)
+  const cuts = law.breakpoints.length + 6 <= CUTS.length ? CUTS : new Float64Array(law.breakpoints.length + 6);
+  let n = 0;
+  const add = (d: number): void => {
+    let i = n++;
+    while (i > 0 && cuts[i - 1]! > d) {
+      cuts[i] = cuts[i - 1]!;
+      i--;
     }
+    cuts[i] = d;
+  };
+  add(0);
+  add(depth);
+  for (let corner = 0; corner < 4; corner++) {
+    const cx = corner & 1 ? b / 2 : -b / 2;
+    const cy = corner & 2 ? h / 2 : -h / 2;
+    const d = sMax - (cx * nx + cy * ny);
+    if (d > 1e-12 * depth && d < depth * (1 - 1e-12)) add(d);
   }
   for (const e of law.breakpoints) {
     const d = (p.top - e) / p.curvature;
-    if (d > 0 && d < depth) cuts.push(d);
+    if (d > 0 && d < depth) add(d);
   }
-  cuts.sort((u, v) => u - v);
 
-  const { nodes, weights } = GAUSS_10;
+  const { nodes, weights } = rule;
   const hb = b / 2;
   const hh = h / 2;
   const small = 1e-12;
   let P = 0;
   let Mx = 0;
   let My = 0;
-  for (let k = 0; k + 1 < cuts.length; k++) {
+  for (let k = 0; k + 1 < n; k++) {
     const lo = cuts[k]!;
     const hi = cuts[k + 1]!;
     if (hi - lo <= small * depth) continue;
@@ -197,7 +255,10 @@ function rectangleConcrete(b: number, h: number, nx: number, ny: number, sMax: n
       My += f * (s * nx + tm * ny);
     }
   }
-  return { P, Mx, My };
+  out.P = P;
+  out.Mx = Mx;
+  out.My = My;
+  return out;
 }
 
 /** The factored (or nominal) point at (θ, c): φ·resultant, without the axial cap. */
@@ -227,12 +288,15 @@ const wrap = (a: number): number => {
  */
 function depthForDirection(sec: BiaxialSection, theta: number, omega: number, kind: ModelKind): number {
   const depth = 2 * extremeCoordinate(sec.shape, theta);
+  const reference = sec.search === 'reference';
   const g = (logC: number) => {
-    const r = biaxialResultant(sec, theta, Math.exp(logC) * depth, kind);
-    return Math.atan2(r.P, Math.hypot(r.Mx, r.My)) - omega;
+    const r = resultantInto(sec, theta, Math.exp(logC) * depth, kind, SCRATCH);
+    return Math.atan2(r.P, reference ? Math.hypot(r.Mx, r.My) : Math.sqrt(r.Mx * r.Mx + r.My * r.My)) - omega;
   };
-  const x = findRootOrNaN(g, Math.log(C_MIN), Math.log(C_MAX), 1e-12, 200);
-  return Number.isNaN(x) ? (g(Math.log(C_MAX)) < 0 ? C_MAX * depth : C_MIN * depth) : Math.exp(x) * depth;
+  const lo = Math.log(C_MIN);
+  const hi = Math.log(C_MAX);
+  const x = findRootOrNaN(g, lo, hi, 1e-12, 200);
+  return Number.isNaN(x) ? (g(hi) < 0 ? C_MAX * depth : C_MIN * depth) : Math.exp(x) * depth;
 }
 
 export interface RayCapacity {
@@ -339,7 +403,12 @@ function solveAngle(resid: (theta: number) => { r: number }, psi: number): numbe
  */
 export function depthForAxial(sec: BiaxialSection, theta: number, P: number, kind: ModelKind = 'design'): number {
   const depth = 2 * extremeCoordinate(sec.shape, theta);
-  const g = (logC: number) => surfacePoint(sec, theta, Math.exp(logC) * depth, kind).P - P;
+  const g = (logC: number) => {
+    // surfacePoint(…).P without the point: the same product φ·P
+    const r = resultantInto(sec, theta, Math.exp(logC) * depth, kind, SCRATCH);
+    const phi = kind === 'design' ? sec.basis.design.factor(r.epsT) : 1;
+    return phi * r.P - P;
+  };
   const x = findRootOrNaN(g, Math.log(C_MIN), Math.log(C_MAX), 1e-12, 200);
   return Number.isNaN(x) ? NaN : Math.exp(x) * depth;
 }

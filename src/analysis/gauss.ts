@@ -29,3 +29,20 @@ export function gaussLegendre(n: number): { nodes: Float64Array; weights: Float6
 
 /** The rule the section integrator uses: exact for polynomials to degree 19. */
 export const GAUSS_10 = gaussLegendre(10);
+
+const EXACT_RULES = new Map<number, { nodes: Float64Array; weights: Float64Array }>();
+
+/**
+ * The fewest points exact for a polynomial integrand of degree `degree` (m points are exact to degree
+ * 2m − 1, Abramowitz & Stegun 25.4.29), cached; `undefined` (no polynomial) gives GAUSS_10.
+ */
+export function gaussForDegree(degree: number | undefined): { nodes: Float64Array; weights: Float64Array } {
+  if (degree === undefined || degree > 18) return GAUSS_10;
+  const m = Math.max(1, Math.ceil((degree + 1) / 2));
+  let r = EXACT_RULES.get(m);
+  if (!r) {
+    r = gaussLegendre(m);
+    EXACT_RULES.set(m, r);
+  }
+  return r;
+}

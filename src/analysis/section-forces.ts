@@ -7,7 +7,7 @@ import type { StrainProfile } from '../codes/types.js';
 import type { ConcreteLaw, SteelLaw } from '../materials/types.js';
 import type { Bar, Shape } from '../section/types.js';
 import { sectionDepth } from '../section/geometry.js';
-import { GAUSS_10 } from './gauss.js';
+import { GAUSS_10, gaussForDegree } from './gauss.js';
 
 export interface Resultant {
   P: number;
@@ -20,14 +20,22 @@ export const strainAt = (p: StrainProfile, depth: number): number => p.top - p.c
 /** Depth at which the profile reaches strain ε (Infinity when the curvature is zero). */
 const depthOfStrain = (p: StrainProfile, eps: number): number => (p.curvature === 0 ? Infinity : (p.top - eps) / p.curvature);
 
-/** Split depths in (lo, hi) where the law changes branch, plus the ends, sorted. */
+/** Split depths in (lo, hi) where the law changes branch, plus the ends, sorted (by insertion: a comparator sort of these few values cost more than the integration). */
 function splitDepths(law: ConcreteLaw, p: StrainProfile, lo: number, hi: number): number[] {
   const cuts = [lo, hi];
   for (const e of law.breakpoints) {
     const d = depthOfStrain(p, e);
-    if (d > lo && d < hi) cuts.push(d);
+    if (d > lo && d < hi) {
+      let i = cuts.length;
+      cuts.push(d);
+      while (i > 0 && cuts[i - 1]! > d) {
+        cuts[i] = cuts[i - 1]!;
+        i--;
+      }
+      cuts[i] = d;
+    }
   }
-  return cuts.sort((a, b) => a - b);
+  return cuts;
 }
 
 /**
@@ -36,11 +44,15 @@ function splitDepths(law: ConcreteLaw, p: StrainProfile, lo: number, hi: number)
  * integrand smooth at the edges.
  */
 export function concreteResultant(shape: Shape, law: ConcreteLaw, p: StrainProfile): Resultant {
-  const { nodes, weights } = GAUSS_10;
-  const n = nodes.length;
+  let { nodes, weights } = GAUSS_10;
+  let n = nodes.length;
   let P = 0;
   let M = 0;
   if (shape.kind === 'rectangle') {
+    // constant width: stress of degree k in depth (a polynomial law between breakpoints) times the arm gives
+    // degree k + 1, which the fewest exact points integrate to rounding (issue 21: 1 point for a block)
+    ({ nodes, weights } = gaussForDegree(law.polynomialDegree === undefined ? undefined : law.polynomialDegree + 1));
+    n = nodes.length;
     const h = shape.h;
     if (p.curvature === 0) return { P: law.stress(p.top) * shape.b * h, M: 0 };
     const cuts = splitDepths(law, p, 0, h);

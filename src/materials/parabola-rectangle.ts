@@ -14,5 +14,7 @@ export function parabolaRectangle(fcd: number, epsC2: number, n: number, label?:
     },
     breakpoints: [0, epsC2],
     peakStress: fcd,
+    // 1 − (1 − ε/εc2)^n is a polynomial of degree n only for a whole n (n = 2 up to fck 50 MPa, EN 1992-1-1 Table 3.1)
+    ...(Number.isInteger(n) && n >= 0 ? { polynomialDegree: n } : {}),
   };
 }

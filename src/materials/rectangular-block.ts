@@ -12,5 +12,6 @@ export function rectangularBlock(intensity: number, depthFactor: number, ultimat
     stress: (strain: number) => (strain > 0 && strain >= threshold ? intensity : 0),
     breakpoints: threshold > 0 ? [threshold] : [0],
     peakStress: intensity,
+    polynomialDegree: 0,
   };
 }

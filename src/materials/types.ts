@@ -12,6 +12,11 @@ export interface ConcreteLaw {
   readonly breakpoints: readonly number[];
   /** largest stress the law reaches */
   readonly peakStress: number;
+  /**
+   * degree of stress(ε) as a polynomial in ε between breakpoints (0: constant, 2: parabola); absent when it is
+   * not a polynomial. Integrators use it to take as few Gauss points as are exact for that degree.
+   */
+  readonly polynomialDegree?: number;
 }
 
 export interface SteelLaw {

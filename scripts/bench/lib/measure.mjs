@@ -31,3 +31,24 @@ export function bestOf(n, fn) {
   const best = runs.reduce((a, b) => (b.wall < a.wall ? b : a));
   return { ...best, rssMb: Math.max(...runs.map((r) => r.rssMb)) };
 }
+
+/**
+ * A command run through bash, whose `times` reports the CPU of every process it waited for (children and their
+ * children: the render and schedule worker processes), which process.resourceUsage() of one node process misses.
+ * Returns { wall, cpu, status, stdoutBytes }.
+ */
+export function runTree(args, opts = {}) {
+  const quoted = args.map((a) => `'${String(a).replace(/'/g, `'\\''`)}'`).join(' ');
+  const script = `${quoted} >${opts.stdoutFile ?? '/dev/null'} 2>/dev/null; s=$?; times; exit $s`;
+  const t0 = process.hrtime.bigint();
+  const r = spawnSync('bash', ['-c', script], { encoding: 'utf8', maxBuffer: 1 << 20 });
+  const wall = Number(process.hrtime.bigint() - t0) / 1e9;
+  // `times`: line 1 the shell's user/system, line 2 its children's, as 0m1.234s
+  const lines = r.stdout.trim().split('\n');
+  const sec = (t) => {
+    const m = /^(\d+)m([\d.]+)s$/.exec(t);
+    return m ? Number(m[1]) * 60 + Number(m[2]) : NaN;
+  };
+  const [u, sys] = (lines[lines.length - 1] ?? '').trim().split(/\s+/);
+  return { wall, cpu: sec(u) + sec(sys), status: r.status };
+}
