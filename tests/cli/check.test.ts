@@ -6,9 +6,14 @@ import { execFileSync, spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { parseLoadsCsv, runCheck, type CheckOptions } from '../../src/cli/check.js';
 import { PmError } from '../../src/errors.js';
+import { clearFaults, faults } from '../helpers/fs-faults.mjs';
+import { runCli } from '../helpers/run-cli.js';
+
+// a full disk is injected by a test-only mock of node:fs (tests/helpers/fs-faults.mjs)
+vi.mock('node:fs', async (importOriginal) => (await import('../helpers/fs-faults.mjs')).faultyFs(await importOriginal<typeof import('node:fs')>()));
 
 const base: CheckOptions = { fc: '4', fy: '60', b: '24', h: '24', gamma: String(20 / 24), pu: '900', mu: '600' };
 const dir = mkdtempSync(join(tmpdir(), 'pmchart-check-'));
@@ -146,15 +151,14 @@ describe('check exit status (0 pass, 1 a load does not pass, 2 bad input, 3 I/O 
     expect(r.stderr.trim().split('\n')).toHaveLength(1);
     expect(r.stderr).toContain('--mu');
   });
-  it('3 when the report cannot be written (a full disk, injected), and no temporary file is left', () => {
+  it('3 when the report cannot be written (a full disk, injected), and no temporary file is left', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'pmchart-exit3-'));
     const file = join(dir, 'c.txt');
-    const r = spawnSync(process.execPath, [bin, 'check', ...section, '--pu', '900', '--mu', '600', '--report', file], {
-      encoding: 'utf8',
-      env: { ...process.env, PMCHART_INJECT_FAULT: 'write:c.txt' },
-    });
-    expect(r.status).toBe(3);
-    expect(r.stderr).toContain('--report');
+    faults.write = 'c.txt';
+    const r = await runCli(['check', ...section, '--pu', '900', '--mu', '600', '--report', file]);
+    clearFaults();
+    expect(r.code).toBe(3);
+    expect(r.stderr).toBe(`pmchart: --report: ${file} cannot be written (ENOSPC)\n`);
     expect(readdirSync(dir)).toEqual([]);
   });
 });
