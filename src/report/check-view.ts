@@ -69,7 +69,7 @@ export function symbolsOf(c: Pick<ColumnCheck, 'basis' | 'shape'>) {
 /** The note column of a load's row. */
 export function noteText(r: ColumnLoadResult, c: Pick<ColumnCheck, 'basis' | 'shape'>): string {
   return [
-    r.status !== 'ok' && r.status !== 'fails' ? `${r.statusReason}${r.statusClause ? ` [${r.statusClause}]` : ''}` : '',
+    r.status !== 'ok' && r.status !== 'fails' ? `${statusReasonOf(r, c.basis)}${r.statusClause ? ` [${r.statusClause}]` : ''}` : '',
     r.rhoStatus === 'minimum-governs' && r.status === 'ok' ? 'minimum ρg' : '',
     r.governedBy === 'cap' ? 'cap' : '',
     r.momentRaised ? `${symbolsOf(c).M} raised to minimum` : '',
@@ -96,12 +96,33 @@ const RULE_WORDS: Readonly<Record<string, string>> = {
   'exact-section': 'exact search, neutral axis free to incline',
 };
 
-/** One finding as a line: rule, axis, clause, outcome, and the figures compared (display units). */
-export function findingText(x: RuleFinding, units: UnitSystem): string {
+/**
+ * One finding as a line: rule, axis, clause, outcome, and the figures compared (display units). A detailing
+ * rule of the basis is named by its rulebook title, in the words of `findingWords` (the detailing lines).
+ */
+export function findingText(basis: Basis, x: RuleFinding, units: UnitSystem): string {
+  if (detailingRule(basis, x.rule)) return findingWords(basis, x);
   const v = (n: number | null | undefined) =>
     n === null || n === undefined ? '—' : x.quantity === 'moment' || x.quantity === 'force' ? `${f(toDisplay(n, x.quantity, units), 5)} ${unitsOf(units)[x.quantity]}` : f(n, 4);
   const figures = x.value !== undefined || x.limit !== undefined ? `: ${v(x.value)} against ${v(x.limit)}` : '';
   return `${RULE_WORDS[x.rule] ?? x.rule}${x.axis ? ` about ${x.axis}` : ''} [${x.clause}] ${x.outcome}${figures}`;
+}
+
+/** A detailing finding as the reason of a load's status: the rule's title and the figures compared, internal units to 4 significant digits. */
+export function findingReason(basis: Basis, x: RuleFinding): string {
+  const title = detailingRule(basis, x.rule)?.title ?? x.rule;
+  const n = (v: number | null | undefined) => (v === null || v === undefined ? '—' : String(Number(v.toPrecision(4))));
+  if (x.outcome === 'unchecked') return `${title}: unchecked`;
+  return `${title}: ${n(x.value)} ${findingComparison(x)} ${n(x.limit)}`;
+}
+
+/** Why a load has its status, in words: the engine's reason, or for `detailing` the broken finding in words. */
+export const statusReasonOf = (r: Pick<ColumnLoadResult, 'statusReason' | 'statusFinding'>, basis: Basis): string => (r.statusFinding ? findingReason(basis, r.statusFinding) : r.statusReason);
+
+/** The governing load's reason in words: the engine's `governingWhy`, with a broken detailing finding put in words. */
+export function governingWords(c: Pick<ColumnCheckHead, 'governingWhy' | 'basis'>, gov: ColumnLoadResult | undefined): string {
+  if (!gov?.statusFinding) return c.governingWhy;
+  return `${gov.status} ${findingReason(c.basis, gov.statusFinding)}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`;
 }
 
 /** A finding in JSON: the facts, moments and forces in display units. */
@@ -238,7 +259,7 @@ function footnotesFor(c: ColumnCheckHead, gov: ColumnLoadResult | undefined): st
   const un = unitsOf(c.units);
   const s = symbolsOf(c);
   const out = [
-    `* governing load: ${c.governingWhy}. Loads are ranked by status (unstable, outside scope, not possible, detailing, fails, ok), then by ${c.measure === 'utilisation' ? 'utilisation' : 'ρg required'}.`,
+    `* governing load: ${governingWords(c, gov)}. Loads are ranked by status (unstable, outside scope, not possible, detailing, fails, ok), then by ${c.measure === 'utilisation' ? 'utilisation' : 'ρg required'}.`,
     `${s.M} is the moment checked: after slenderness where asked, ↑ where raised to the basis minimum; signed. Normalised values in ${un.stress}; ${s.epsT} and φ at capacity along the load ray (${c.checked ? 'checked reinforcement' : 'at ρg required'}).`,
   ];
   if (gov && gov.extraSteelRoundedDown !== null && gov.extraSteelRoundedDown > 0) {
@@ -697,7 +718,7 @@ function* detailLines(src: CheckRows): Generator<string> {
     if (r.findings.length === 0) continue;
     if (!findings) yield 'RULE FINDINGS (clauses of the basis)';
     findings = true;
-    for (const x of r.findings) yield `  ${r.id}: ${findingText(x, u)}`;
+    for (const x of r.findings) yield `  ${r.id}: ${findingText(c.basis, x, u)}`;
   }
   if (findings) yield '';
   if (c.biaxial && c.checked) {
@@ -774,7 +795,7 @@ export function resultJson(r: ColumnLoadResult, c: ColumnCheckFrame) {
     capacity: r.capacity === null ? null : { Pu: disp(r.capacity.P, 'force', u), Mu: disp(r.capacity.M, 'moment', u) },
     variant: { label: r.variant.label, sign: r.variant.sign, turnDeg: num(r.variant.turnDeg), checked: r.variantsChecked },
     status: r.status,
-    statusReason: r.statusReason,
+    statusReason: statusReasonOf(r, c.basis),
     statusClause: r.statusClause,
     measure: orNull(r.measureValue),
     governing: r.governing,
@@ -890,7 +911,7 @@ export function* checkJsonPieces(src: CheckRows, generator: string): Generator<s
     checked: c.checked ? { kind: c.checked.kind, rho: num(c.checked.rho), description: c.checked.description } : null,
     governing: c.governingId,
     measure: c.measure,
-    governingWhy: c.governingWhy,
+    governingWhy: governingWords(c, src.governing),
     summary: { total: c.summary.total, ...c.summary.counts, text: c.summary.text },
     exitCode: c.exitCode,
     results: RESULTS_SLOT,
