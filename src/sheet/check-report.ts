@@ -186,14 +186,9 @@ function sectionText(c: ColumnCheck): string {
   return `${dims} ${c.basis.transverse}, ${arrangementName(c.arrangement)}, ${sy.concreteStrength} ${fmt(c.basis.fc)} ${un.stress}, ${sy.steelStrength} ${fmt(c.basis.fy)} ${un.stress}, γ ${fmt(c.gamma, 3)}${c.gammaB !== null ? `, γB ${fmt(c.gammaB, 3)}` : ''}`;
 }
 
-/** Columns of a shared table view for the drawn table: text columns left, figures right. */
+/** Columns of a shared table view for the drawn table: the view's own headings, units and alignment (the first column names the load). */
 function columns(t: TableView): { head: string; unit?: string; align: 'l' | 'r' }[] {
-  const text = new Set(['id', 'strain state', 'status', 'note', 'bars', 'method', 'axis', 'neglected', 'by load']);
-  return t.headers.map((h, i) => {
-    const sp = h.lastIndexOf(' ');
-    const unitLike = sp > 0 && /^[a-zA-Z²·\-]+$/.test(h.slice(sp + 1)) && !text.has(h) && /(kip|kN|in|mm|ft|m|ksi|MPa|psi|²)/.test(h.slice(sp + 1));
-    return { head: h === 'id' ? 'load' : unitLike ? h.slice(0, sp) : h, ...(unitLike ? { unit: h.slice(sp + 1) } : {}), align: i === 0 || text.has(h) ? ('l' as const) : ('r' as const) };
-  });
+  return t.columns.map((c) => ({ head: c.key === 'id' ? 'load' : c.heading, ...(c.unit ? { unit: c.unit } : {}), align: c.align === 'left' ? ('l' as const) : ('r' as const) }));
 }
 
 // ── plot ────────────────────────────────────────────────────────────────────────────────────────

@@ -219,5 +219,5 @@ describe('built binary: --jobs and the report', () => {
     const again = join(dir, 'report2.pdf');
     run(['schedule', sched, '--loads', loads, '--columns', MAP, '--compression', 'negative', '--report', again, '--date', '2026-03-02', '--project', 'Invented Tower']);
     expect(readFileSync(again).equals(readFileSync(pdf))).toBe(true);
-  });
+  }, 180_000);
 });
