@@ -14,11 +14,11 @@
  *  - the flag readers are src/flags/ (shared with the CLI, below it); pasted CSV reaches the load reader
  *    through virtual-fs.ts, offered as a file.
  */
-import { computeBiaxialFamily, type BiaxialFamily } from '../analysis/biaxial-family.js';
+import type { BiaxialFamily } from '../analysis/biaxial-family.js';
+import { checkBiaxialFamily } from '../design/check-curves.js';
 import { computeFamily, type CurveFamily } from '../analysis/family.js';
 import type { ColumnCheck } from '../design/column-check.js';
 import { grossArea, sectionDepth, sectionWidth } from '../section/geometry.js';
-import type { Shape } from '../section/types.js';
 import { buildSheet, type BuiltSheet } from '../chart/sheet-data.js';
 import { computeCheck, type CheckOptions } from '../flags/check-flags.js';
 import { checkJson, effectsText } from '../report/check-view.js';
@@ -165,18 +165,7 @@ export function biaxialView(check: ColumnCheck, id?: string): BiaxialView | null
   const load = readable.find((r) => r.id === id) ?? readable[0];
   if (!load) return null;
   const shape = check.shape;
-  const unit: Shape = shape.kind === 'circle' ? { kind: 'circle', diameter: 1 } : { kind: 'rectangle', b: shape.b / shape.h, h: 1 };
-  const family = computeBiaxialFamily({
-    basis: check.basis,
-    shape: unit,
-    arrangement: check.arrangement,
-    gamma: check.gamma,
-    ...(check.gammaB !== null ? { gammaX: check.gammaB } : {}),
-    rhos: bc.rhos,
-    levels: load.biaxial!.chartLevels.map((l) => l.level),
-    capContext: check.capContext,
-    angleStepDeg: bc.angleStepDeg,
-  });
+  const family = checkBiaxialFamily(check, load.biaxial!.chartLevels.map((l) => l.level))!;
   const ag = grossArea(shape);
   const stress = check.basis.normalisingStress;
   // the moments the sheets were read with: after slenderness and the minimum moment, signed
