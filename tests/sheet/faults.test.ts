@@ -14,6 +14,7 @@ import { join } from 'node:path';
 import { afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
 import type * as ChildPool from '../../src/io/child-pool.js';
 import { makeChartSet } from '../../src/sheet/pipeline.js';
+import { bin, requireFreshBuild } from '../helpers/built.js';
 import { referenceSet } from '../helpers/chart-set.js';
 import { clearFaults, faults } from '../helpers/fs-faults.mjs';
 
@@ -33,7 +34,6 @@ const set = referenceSet({
   sheets: [{ fc: 4, fy: 60, gamma: [0.7, 0.8, 0.9], arrangement: { kind: 'two-faces', barsPerFace: 3 } }],
 });
 const generator = 'pmchart 0.1.0';
-const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
 const root = mkdtempSync(join(tmpdir(), 'pmchart-faults-'));
 const notes: string[] = [];
 type Failure = { message: string; exitCode: number };
@@ -121,6 +121,7 @@ describe('the place the set goes', () => {
 describe('signals and devices (the built CLI)', () => {
   const setFile = join(root, 'set.json');
   beforeAll(() => {
+    requireFreshBuild(); // these run bin/pmchart.js: fail loudly on a missing or stale dist/
     writeFileSync(
       setFile,
       JSON.stringify({
