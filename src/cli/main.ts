@@ -109,3 +109,44 @@ export async function main(argv: string[]): Promise<void> {
     throw e;
   }
 }
+
+/** What one in-process run of the CLI gave: its exit code and what it wrote. */
+export interface CliRun {
+  code: number;
+  stdout: string;
+  stderr: string;
+}
+
+/**
+ * Runs `pmchart <args>` in this process, as bin/pmchart.js does, and returns its exit code and what it
+ * wrote to standard output and standard error (the tests' way in: the source is tested, not a bundle).
+ * It borrows `process.stdout.write`, `process.stderr.write` and `process.exitCode` for the run, so runs
+ * must not overlap.
+ */
+export async function runCli(args: readonly string[]): Promise<CliRun> {
+  const out: string[] = [];
+  const err: string[] = [];
+  const ow = process.stdout.write;
+  const ew = process.stderr.write;
+  const capture =
+    (into: string[]) =>
+    (chunk: string | Uint8Array, enc?: BufferEncoding | ((e?: Error | null) => void), cb?: (e?: Error | null) => void): boolean => {
+      into.push(typeof chunk === 'string' ? chunk : Buffer.from(chunk).toString('utf8'));
+      const done = typeof enc === 'function' ? enc : cb;
+      if (done) queueMicrotask(() => done());
+      return true;
+    };
+  const before = process.exitCode;
+  process.stdout.write = capture(out) as typeof process.stdout.write;
+  process.stderr.write = capture(err) as typeof process.stderr.write;
+  process.exitCode = 0;
+  try {
+    await main(['node', 'pmchart', ...args]);
+  } finally {
+    process.stdout.write = ow;
+    process.stderr.write = ew;
+  }
+  const code = Number(process.exitCode ?? 0);
+  process.exitCode = before;
+  return { code, stdout: out.join(''), stderr: err.join('') };
+}

@@ -13,12 +13,12 @@ import { readFileSync, statSync } from 'node:fs';
 import { basename, extname } from 'node:path';
 import type { Command } from 'commander';
 import type { FactoredLoad } from '../design/check.js';
-import { matchMarks, summariseSchedule } from '../design/schedule.js';
+import { summariseSchedule } from '../design/schedule.js';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { reportDate } from '../flags/format.js';
-import { checkRows, readScheduleLoads, scheduleEntries, type MarkRow } from '../flags/schedule-rows.js';
+import { checkRows, readSchedule, type MarkRow } from '../flags/schedule-rows.js';
 import { MAX_LOADS_BYTES, MAX_SCHEDULE_BYTES, SCHEDULE_JOBS_RANGE } from '../input/limits.js';
-import { parseScheduleCsv, type ScheduleRow } from '../input/schedule-csv.js';
+import type { ScheduleRow } from '../input/schedule-csv.js';
 import { ioError } from '../io/files.js';
 import { scheduleJson, scheduleText, type ScheduleHead } from '../report/schedule-view.js';
 import { generatorLabel } from '../version.js';
@@ -78,17 +78,8 @@ export function prepareSchedule(file: string, o: ScheduleOptions): PreparedSched
   const proposals = wholeOption('--proposals', o.proposals, 0, [0, 20]);
   const jobs = wholeOption('--jobs', o.jobs, 1, SCHEDULE_JOBS_RANGE);
   const at = basename(file);
-  const rows = parseScheduleCsv(readText(file, 'schedule file', MAX_SCHEDULE_BYTES), at);
-  const notes: string[] = [];
-  const loads = readScheduleLoads(readText(o.loads, '--loads', MAX_LOADS_BYTES), rows, o, '--loads', (n) => notes.push(n), at);
-  // each row resolved with its loads: a bad cell or a load column of the wrong convention is an error here
-  const entries = scheduleEntries(rows, loads, proposals, at);
-  const { entries: kept, missing } = matchMarks(entries, loads, { allowMissing: o.allowMissing === true });
-  if (missing.withoutLoads.length > 0) notes.push(`marks of the schedule with no loads, not checked: ${missing.withoutLoads.join(', ')}`);
-  if (missing.notInSchedule.length > 0) notes.push(`marks of the loads not in the schedule, ignored: ${missing.notInSchedule.join(', ')}`);
-  if (kept.length === 0) throw new PmError(ERROR_CODES.missing, '--loads', 'has loads for no mark of the schedule');
-  const byMark = new Map(rows.map((r) => [r.mark, r]));
-  return { rows: kept.map((e) => byMark.get(e.mark)!), loads, proposals, jobs, notes, at };
+  const read = readSchedule(readText(file, 'schedule file', MAX_SCHEDULE_BYTES), () => readText(o.loads!, '--loads', MAX_LOADS_BYTES), { ...o, proposals }, at, '--loads');
+  return { ...read, proposals, jobs, at };
 }
 
 /** Progress lines on standard error for long runs: every tenth of the marks. */

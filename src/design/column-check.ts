@@ -27,7 +27,7 @@ import type { Arrangement, Bar, Shape } from '../section/types.js';
 import type { UnitSystem } from '../units/index.js';
 import { isSelectableKind, proposeBars, type BarProposal, type Detailing } from './bar-selection.js';
 import { checkBiaxial, type BiaxialResult } from './biaxial.js';
-import { aggregateOf, breaksDetailing, findingText, loadSteelDetailing, sectionDetailing, type DetailingInput } from './detailing.js';
+import { aggregateOf, breaksDetailing, loadSteelDetailing, sectionDetailing, type DetailingInput } from './detailing.js';
 import { BiaxialCharts, type BiaxialLevelReading } from './biaxial-chart-reading.js';
 import { rhoLimitsFor, withMinimum, type FactoredLoad, type GivenLayout } from './check.js';
 import { buildChartSet, readCharts, type ChartSet, type SheetReading } from './chart-reading.js';
@@ -132,9 +132,11 @@ export interface ColumnLoadResult {
   /** biaxial results for a load with Muy: exact and approximate utilisations (given reinforcement), and the exact ρg required (none given) */
   readonly biaxial: (Partial<BiaxialResult> & { readonly rhoRequired: number | null; readonly rhoStatus: RhoStatus | null } & BiaxialChartFields) | null;
   readonly status: LoadStatus;
-  /** why, in words, with the clause where there is one */
+  /** why, in words, with the clause where there is one; empty for `detailing`, whose reason is the fact `statusFinding` (the views put it in words) */
   readonly statusReason: string;
   readonly statusClause: string | null;
+  /** the binding detailing finding the given reinforcement breaks (status `detailing`); null otherwise */
+  readonly statusFinding: RuleFinding | null;
   /** the ranking value: max of the uniaxial and exact biaxial figures of `ColumnCheck.measure` (Infinity when not possible) */
   readonly measureValue: number | null;
   readonly governing: boolean;
@@ -908,7 +910,7 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
     notPossible: !checked && !Number.isFinite(measureValue),
     finite: finiteMoments,
     limitsMax: limits.max,
-    detailing: broken ? { reason: findingText(basis, broken), clause: broken.clause } : null,
+    detailing: broken ? { clause: broken.clause } : null,
   });
   const findings = [...findingsOf(ctx, load, d, { bySign, yBySign, exX: ex.x, exY: ex.y, uniX: parts[0]![1], uniY: parts[2]![1] }), ...detailingFindings];
 
@@ -942,6 +944,7 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
     slenderness: magnified,
     biaxial,
     ...st,
+    statusFinding: st.status === 'detailing' ? (broken ?? null) : null,
     // finite or null: a load beyond any capacity is a status, never ∞
     measureValue: Number.isFinite(measureValue) ? measureValue : null,
     governing: false,
@@ -1020,7 +1023,7 @@ const END_KEYS = ['M1', 'M2', 'M1y', 'M2y', 'M01', 'M02', 'M01y', 'M02y', 'M2s',
 const endMoments = (l: FactoredLoad): EndMoments => Object.fromEntries(END_KEYS.filter((k) => l[k] !== undefined).map((k) => [k, l[k]!])) as EndMoments;
 
 /** Status from the checks, worst first: unstable, outside the method's scope, not possible, detailing (a binding rule broken by the given reinforcement), fails. */
-function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measureValue: number; measureFrom: MeasureSource; notPossible: boolean; finite: boolean; limitsMax: number; detailing: { reason: string; clause: string } | null }): {
+function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measureValue: number; measureFrom: MeasureSource; notPossible: boolean; finite: boolean; limitsMax: number; detailing: { clause: string } | null }): {
   status: LoadStatus;
   statusReason: string;
   statusClause: string | null;
@@ -1035,7 +1038,7 @@ function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measur
     if (s && !s.ok) return { status: 'outside-scope', statusReason: `about ${axis}: ${s.warnings[0] ?? "second-order moment beyond the method's limit"}`, statusClause: s.limitClause ?? s.method };
   }
   if (!x.finite || x.notPossible) return { status: 'not-possible', statusReason: `needs more than the maximum ρg = ${fmtRho(x.limitsMax)}: enlarge the section`, statusClause: null };
-  if (x.detailing) return { status: 'detailing', statusReason: x.detailing.reason, statusClause: x.detailing.clause };
+  if (x.detailing) return { status: 'detailing', statusReason: '', statusClause: x.detailing.clause };
   if (x.checked && !(x.measureValue <= 1 + 1e-9)) return { status: 'fails', statusReason: `utilisation ${x.measureValue.toFixed(3)} > 1${MEASURE_WORDS[x.measureFrom] ? ` (${MEASURE_WORDS[x.measureFrom]})` : ''}`, statusClause: null };
   return { status: 'ok', statusReason: '', statusClause: null };
 }
@@ -1178,7 +1181,7 @@ function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult 
   const governingWhy = !gov
     ? 'no loads'
     : gov.status !== 'ok' && gov.status !== 'fails'
-      ? `${gov.status} ${gov.statusReason}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`
+      ? `${gov.status}${gov.statusReason ? ` ${gov.statusReason}` : ''}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`
       : measure === 'utilisation'
         ? `highest utilisation ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(3)} (the larger of the uniaxial and exact biaxial figures${GOVERNING_FROM[gov.measureFrom] ?? ''})`
         : `largest ρg required ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(4)}${ctx.biaxial ? ` (the larger of the uniaxial and exact biaxial figures${GOVERNING_FROM[gov.measureFrom] ?? ''})` : GOVERNING_FROM[gov.measureFrom] ? ` (${GOVERNING_FROM[gov.measureFrom]!.slice(2)})` : ''}`;

@@ -118,14 +118,6 @@ export function breaksDetailing(basis: Basis, f: RuleFinding): boolean {
   return f.outcome === 'violated' && detailingRule(basis, f.rule)?.binding === true;
 }
 
-/** A rule's title and figures in one line, for the status reason (views make their own words from the finding). */
-export function findingText(basis: Basis, f: RuleFinding): string {
-  const title = detailingRule(basis, f.rule)?.title ?? f.rule;
-  const n = (x: number | null | undefined) => (x === null || x === undefined ? '—' : String(Number(x.toPrecision(4))));
-  if (f.outcome === 'unchecked') return `${title}: unchecked`;
-  return `${title}: ${n(f.value)} ${findingComparison(f)} ${n(f.limit)}`;
-}
-
 /** How a detailing finding's value stands to its limit: rules with a lower limit (steel-min, clear spacing, cover) read ≥ when met, the others ≤. */
 export function findingComparison(f: RuleFinding): '<' | '≥' | '>' | '≤' {
   const atLeast = f.rule === 'steel-min' || f.rule === 'clear-spacing' || f.rule === 'cover';

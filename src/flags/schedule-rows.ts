@@ -9,11 +9,11 @@
  */
 import type { FactoredLoad } from '../design/check.js';
 import type { ColumnCheck } from '../design/column-check.js';
-import { checkMark, rowFacts, type ScheduleEntry, type ScheduleRowFacts } from '../design/schedule.js';
+import { checkMark, matchMarks, rowFacts, type ScheduleEntry, type ScheduleRowFacts } from '../design/schedule.js';
 import { ERROR_CODES, isPmError, PmError } from '../errors.js';
 import { parseGroupedLoadsCsv } from '../input/loads-csv.js';
 import type { UnitSystem } from '../units/index.js';
-import { SCHEDULE_COLUMNS, type ScheduleColumn, type ScheduleRow } from '../input/schedule-csv.js';
+import { parseScheduleCsv, SCHEDULE_COLUMNS, type ScheduleColumn, type ScheduleRow } from '../input/schedule-csv.js';
 import { exportOptions, resolveCheckOptions, signNote, type CheckOptions, type ResolvedCheck } from './check-flags.js';
 
 /** The flag each schedule column stands for: `bars_per_face` → `--bars-per-face`. */
@@ -149,4 +149,38 @@ export function* checkRows(rows: readonly ScheduleRow[], loads: ReadonlyMap<stri
     const r = checkMark(entry!, loads.get(row.mark)!, { readings });
     yield { ...rowFacts(r.mark, r.check), code: r.check.basis.code, title: r.check.basis.title, check: r.check };
   }
+}
+
+/** A schedule and its loads read from their texts, marks matched: what a front end checks, mark by mark. */
+export interface ReadSchedule {
+  /** schedule rows with loads, in mark order */
+  rows: ScheduleRow[];
+  loads: Map<string, FactoredLoad[]>;
+  /** notes on how the input was read (ignored export columns, a sign, skipped marks) */
+  notes: string[];
+}
+
+/**
+ * Reads a schedule's text and its loads' text (with the export map and sign convention) and matches the
+ * marks (`loadsText` may be a function, read after the schedule parses); every input error is found here, named at `at` (the schedule) or `loadsAt` (the loads). The one
+ * reader of `pmchart schedule` and the page's schedule panel.
+ */
+export function readSchedule(
+  scheduleText: string,
+  loadsText: string | (() => string),
+  o: { columns?: string; compression?: string; allowMissing?: boolean; proposals: number },
+  at = 'schedule',
+  loadsAt = '--loads',
+): ReadSchedule {
+  const rows = parseScheduleCsv(scheduleText, at);
+  const notes: string[] = [];
+  const loads = readScheduleLoads(typeof loadsText === 'string' ? loadsText : loadsText(), rows, o, loadsAt, (n) => notes.push(n), at);
+  // each row resolved with its loads: a bad cell or a load column of the wrong convention is an error here
+  const entries = scheduleEntries(rows, loads, o.proposals, at);
+  const { entries: kept, missing } = matchMarks(entries, loads, { allowMissing: o.allowMissing === true });
+  if (missing.withoutLoads.length > 0) notes.push(`marks of the schedule with no loads, not checked: ${missing.withoutLoads.join(', ')}`);
+  if (missing.notInSchedule.length > 0) notes.push(`marks of the loads not in the schedule, ignored: ${missing.notInSchedule.join(', ')}`);
+  if (kept.length === 0) throw new PmError(ERROR_CODES.missing, loadsAt, 'has loads for no mark of the schedule');
+  const byMark = new Map(rows.map((r) => [r.mark, r]));
+  return { rows: kept.map((e) => byMark.get(e.mark)!), loads, notes };
 }

@@ -8,24 +8,6 @@ import { closeSync, existsSync, fsyncSync, lstatSync, mkdirSync, openSync, readd
 import { basename, dirname, join } from 'node:path';
 import { ERROR_CODES, PmError } from '../errors.js';
 
-/**
- * Faults a test may inject through PMCHART_INJECT_FAULT (CI runs as root, which ignores a read-only
- * folder's permissions, so failures are injected): `write:<part of a path>` fails that write with
- * ENOSPC, `swap-rename` fails the second rename of the swap, `swap-pause:<ms>` waits between the two
- * renames, `child-crash:<chunk>` kills the render process that starts that chunk (worker.ts).
- */
-export function injectedFault(kind: string): string | undefined {
-  const spec = process.env.PMCHART_INJECT_FAULT;
-  if (!spec) return undefined;
-  for (const part of spec.split(',')) {
-    const [k, ...rest] = part.split(':');
-    if (k === kind) return rest.join(':');
-  }
-  return undefined;
-}
-
-const errnoError = (code: string, op: string, path: string): NodeJS.ErrnoException => Object.assign(new Error(`${code}: injected fault, ${op} '${path}'`), { code });
-
 /** Errors the user can fix by choosing another place (exit 2); others are I/O faults (exit 3). */
 const USER_CODES = new Set(['EACCES', 'EPERM', 'EROFS', 'ENOTDIR', 'EISDIR', 'EEXIST', 'ENOTEMPTY', 'ENAMETOOLONG', 'ENOENT']);
 
@@ -111,13 +93,7 @@ function writeAtomic(path: string, at: string | undefined, fill: (fd: number, tm
 
 /** Writes `data` to `path` atomically (see `writeAtomic`); `at` names the flag in errors (default: the path). */
 export function writeFileAtomic(path: string, data: string | Uint8Array, at?: string): void {
-  writeAtomic(path, at, (fd, tmp) => {
-    const fault = injectedFault('write');
-    if (fault !== undefined && path.includes(fault)) {
-      if (typeof data === 'string') writeSync(fd, data.slice(0, 16));
-      else writeSync(fd, data.subarray(0, 16));
-      throw errnoError('ENOSPC', 'write', tmp);
-    }
+  writeAtomic(path, at, (fd) => {
     const bytes = typeof data === 'string' ? Buffer.from(data, 'utf8') : data;
     for (let off = 0; off < bytes.length; ) off += writeSync(fd, bytes, off, bytes.length - off);
   });
@@ -128,16 +104,8 @@ export function writeFileAtomic(path: string, data: string | Uint8Array, at?: st
  * temporary file in chunks as they come, so the whole text is never held; renamed when complete.
  */
 export function writePiecesAtomic(path: string, pieces: Iterable<string>, at?: string): void {
-  writeAtomic(path, at, (fd, tmp) => {
-    const fault = injectedFault('write');
-    const failing = fault !== undefined && path.includes(fault);
-    for (const chunk of chunked(pieces)) {
-      if (failing) {
-        writeSync(fd, chunk.slice(0, 16));
-        throw errnoError('ENOSPC', 'write', tmp);
-      }
-      writeSync(fd, chunk);
-    }
+  writeAtomic(path, at, (fd) => {
+    for (const chunk of chunked(pieces)) writeSync(fd, chunk);
   });
 }
 
@@ -161,8 +129,6 @@ export function* chunked(pieces: Iterable<string>, size = 1 << 16): Generator<st
 export async function writePieces(out: NodeJS.WritableStream, pieces: Iterable<string>): Promise<void> {
   for (const chunk of chunked(pieces)) if (!out.write(chunk)) await new Promise((r) => out.once('drain', r));
 }
-
-const sleepSync = (ms: number) => Atomics.wait(new Int32Array(new SharedArrayBuffer(4)), 0, 0, ms);
 
 /**
  * Checks the place a set goes before any work: the parent must be a folder (or creatable) and the
@@ -245,9 +211,6 @@ export function swapInFolder(staging: string, target: string): void {
       old = `${target}.old-${process.pid}`;
       renameSync(target, old);
     }
-    const pause = injectedFault('swap-pause');
-    if (pause !== undefined) sleepSync(Number(pause));
-    if (injectedFault('swap-rename') !== undefined) throw errnoError('EIO', 'rename', staging);
     renameSync(staging, target);
   } catch (e) {
     // put the previous set back: a failed swap leaves the user's folder as it was

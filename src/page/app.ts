@@ -10,7 +10,9 @@ import { liveData, liveTemplateParams, pageChartData, pageChartTemplate, type Pa
 import { chartSetSnippet, commandLine } from './commands.js';
 import { esc } from './markup.js';
 import { biaxialRows, biaxialTemplate, type BiaxialRow, type BiaxialWords } from './biaxial-spec.js';
-import { biaxialView, chartView, checkFlags, loadsView, PAGE_CAUTION, readingAt, type BiaxialView, type ChartView, type CheckJson, type PageFields, type PageLoads } from './engine.js';
+import { biaxialView, chartView, checkFlags, loadsView, PAGE_CAUTION, readingAt, scheduleView, type BiaxialView, type ChartView, type CheckJson, type PageFields, type PageLoads, type ScheduleView } from './engine.js';
+import { SCHEDULE_TABLE } from '../report/schedule-view.js';
+import { tableCells } from '../report/view-table.js';
 import type { ColumnCheck } from '../design/column-check.js';
 import { ALL_FIELDS, FIELD_DEFAULTS, fieldForPath } from './fields.js';
 import { decodeState, encodeState, loadsCsv } from './state.js';
@@ -470,6 +472,75 @@ function schedule(): void {
   });
 }
 
+// ── the schedule panel ──────────────────────────────────────────────────────────────────────────
+
+let scheduleSeq = 0;
+let scheduleSettled = 0;
+let currentSchedule: ScheduleView | null = null;
+
+/** The marks as a table (the schedule view's own columns, as `pmchart schedule` prints them), the summary and the notes. */
+function scheduleTable(v: ScheduleView): string {
+  const cells = tableCells(SCHEDULE_TABLE, v.rows);
+  const head = SCHEDULE_TABLE.map((c) => `<th class="${c.align}">${esc(c.heading)}</th>`).join('');
+  const body = cells.map((row, i) => `<tr data-mark="${esc(v.rows[i]!.mark)}" data-status="${esc(v.rows[i]!.status)}">${row.map((x, j) => `<td class="${SCHEDULE_TABLE[j]!.align} ${SCHEDULE_TABLE[j]!.key}">${esc(x)}</td>`).join('')}</tr>`).join('');
+  const notes = v.notes.length ? `<ul class="muted">${v.notes.map((n) => `<li>${esc(n)}</li>`).join('')}</ul>` : '';
+  return `<table id="schedule-results"><thead><tr>${head}</tr></thead><tbody>${body}</tbody></table><p id="schedule-summary">${esc(v.summary.text)}</p>${notes}`;
+}
+
+/** Checks the pasted schedule against its loads; both empty clears the panel. */
+async function updateSchedule(): Promise<void> {
+  const my = ++scheduleSeq;
+  const text = $<HTMLTextAreaElement>('sched-text').value;
+  const loads = $<HTMLTextAreaElement>('sched-loads').value;
+  const msg = $('m-schedule');
+  msg.hidden = true;
+  msg.textContent = '';
+  if (!text.trim() || !loads.trim()) {
+    currentSchedule = null;
+    $('schedule-table').innerHTML = text.trim() || loads.trim() ? '<p class="muted">Give both the schedule and its loads.</p>' : '';
+    return;
+  }
+  const columns = $<HTMLInputElement>('sched-columns').value.trim();
+  const compression = $<HTMLSelectElement>('sched-compression').value;
+  const v = await scheduleView(text, loads, { ...(columns ? { columns } : {}), compression });
+  if (my !== scheduleSeq) return;
+  if (!v.ok) {
+    currentSchedule = null;
+    msg.textContent = v.problem.message;
+    msg.hidden = false;
+    $('schedule-table').innerHTML = '';
+    return;
+  }
+  currentSchedule = v.value;
+  $('schedule-table').innerHTML = scheduleTable(v.value);
+}
+
+function scheduleUpdate(): void {
+  void updateSchedule()
+    .catch(internalError)
+    .finally(() => scheduleSettled++);
+}
+
+/** A file dropped on a schedule box replaces its text. */
+function dropInto(id: string): void {
+  const box = $<HTMLTextAreaElement>(id);
+  box.addEventListener('dragover', (ev) => {
+    ev.preventDefault();
+    box.classList.add('over');
+  });
+  box.addEventListener('dragleave', () => box.classList.remove('over'));
+  box.addEventListener('drop', (ev) => {
+    ev.preventDefault();
+    box.classList.remove('over');
+    const file = ev.dataTransfer?.files[0];
+    if (!file) return;
+    void file.text().then((t) => {
+      box.value = t;
+      scheduleUpdate();
+    });
+  });
+}
+
 function internalError(e: unknown): void {
   const m = $('m-general');
   m.textContent = `internal error: ${e instanceof Error ? e.message : String(e)}`;
@@ -556,6 +627,10 @@ function wire(): void {
     });
   });
   $('print').addEventListener('click', () => window.print());
+  for (const id of ['sched-text', 'sched-loads', 'sched-columns']) $(id).addEventListener('input', scheduleUpdate);
+  $('sched-compression').addEventListener('change', scheduleUpdate);
+  dropInto('sched-text');
+  dropInto('sched-loads');
 }
 
 /** Hooks for the browser tests and the bench (read-only views of what the page holds). */
@@ -598,6 +673,9 @@ window.pmchartPage = {
     el.dispatchEvent(new Event(key === 'biax-load' ? 'change' : 'input', { bubbles: true }));
   },
   update: () => update(),
+  /** the schedule panel's marks as checked (null when empty or refused), and how many of its updates have finished */
+  schedule: () => currentSchedule && { rows: currentSchedule.rows.map((r) => ({ mark: r.mark, status: r.status, utilisation: r.utilisation, governing: r.governing })), summary: currentSchedule.summary, exitCode: currentSchedule.exitCode },
+  scheduleSettled: () => scheduleSettled,
 };
 
 fillForm();

@@ -6,6 +6,7 @@
  *   form fields (flag names, as typed) ─▶ chartView: family · sheet datasets · bracketing sheets
  *                                      └▶ loadsView: the column check, as `pmchart check --json` prints it
  *                                                   └▶ biaxialView: Mx–My contours at the levels the check read
+ *   schedule + loads text (pasted or dropped) ─▶ scheduleView: each mark's status, as `pmchart schedule` prints it
  *
  * Swap points for the integrator:
  *  - the column check: `loadsView` parses the flags with the CLI's `computeCheck`, which calls the engine's
@@ -13,11 +14,11 @@
  *  - the flag readers are src/flags/ (shared with the CLI, below it); pasted CSV reaches the load reader
  *    through virtual-fs.ts, offered as a file.
  */
-import { computeBiaxialFamily, type BiaxialFamily } from '../analysis/biaxial-family.js';
+import type { BiaxialFamily } from '../analysis/biaxial-family.js';
+import { checkBiaxialFamily } from '../design/check-curves.js';
 import { computeFamily, type CurveFamily } from '../analysis/family.js';
 import type { ColumnCheck } from '../design/column-check.js';
 import { grossArea, sectionDepth, sectionWidth } from '../section/geometry.js';
-import type { Shape } from '../section/types.js';
 import { buildSheet, type BuiltSheet } from '../chart/sheet-data.js';
 import { computeCheck, type CheckOptions } from '../flags/check-flags.js';
 import { checkJson, effectsText } from '../report/check-view.js';
@@ -25,7 +26,9 @@ import { sheetSetFromFlags, type SheetOptions } from '../flags/sheet-flags.js';
 import { familyFor, resolveTableOptions, type TableRequest } from '../flags/table-flags.js';
 import type { ResolvedChartSet } from '../config/types.js';
 import { bracketingGammas, readSheet, type SheetReading } from '../design/chart-reading.js';
+import { summariseSchedule, type ScheduleSummary } from '../design/schedule.js';
 import { isPmError } from '../errors.js';
+import { checkRows, readSchedule, type MarkRow } from '../flags/schedule-rows.js';
 import { SHEET_BASE_POINTS } from '../sheet/curves.js';
 import { generatorLabel } from '../version.js';
 import { pageMessage } from './fields.js';
@@ -162,18 +165,7 @@ export function biaxialView(check: ColumnCheck, id?: string): BiaxialView | null
   const load = readable.find((r) => r.id === id) ?? readable[0];
   if (!load) return null;
   const shape = check.shape;
-  const unit: Shape = shape.kind === 'circle' ? { kind: 'circle', diameter: 1 } : { kind: 'rectangle', b: shape.b / shape.h, h: 1 };
-  const family = computeBiaxialFamily({
-    basis: check.basis,
-    shape: unit,
-    arrangement: check.arrangement,
-    gamma: check.gamma,
-    ...(check.gammaB !== null ? { gammaX: check.gammaB } : {}),
-    rhos: bc.rhos,
-    levels: load.biaxial!.chartLevels.map((l) => l.level),
-    capContext: check.capContext,
-    angleStepDeg: bc.angleStepDeg,
-  });
+  const family = checkBiaxialFamily(check, load.biaxial!.chartLevels.map((l) => l.level))!;
   const ag = grossArea(shape);
   const stress = check.basis.normalisingStress;
   // the moments the sheets were read with: after slenderness and the minimum moment, signed
@@ -181,6 +173,33 @@ export function biaxialView(check: ColumnCheck, id?: string): BiaxialView | null
     .filter((r) => r.Muy !== null && Number.isFinite(r.Mu) && Number.isFinite(r.Muy!))
     .map((r) => ({ id: r.id, level: r.Pu / (stress * ag), mx: r.Mu / (ag * sectionDepth(shape)), my: r.Muy! / (ag * sectionWidth(shape)), governing: r.governing }));
   return { id: load.id, level: load.Pu / (stress * ag), family, loads, choices: readable.map((r) => r.id) };
+}
+
+/** Where the schedule panel's problems are placed: the schedule text, its loads. */
+export const SCHEDULE_AT = 'schedule';
+export const SCHEDULE_LOADS_AT = 'schedule loads';
+
+/** A schedule checked as `pmchart schedule` checks it: one row per mark (sorted), the summary and the notes. */
+export interface ScheduleView {
+  rows: MarkRow[];
+  summary: ScheduleSummary;
+  exitCode: 0 | 1;
+  notes: string[];
+}
+
+/**
+ * The schedule panel: a schedule and its loads, as texts pasted or dropped into the page, read by the CLI's
+ * schedule reader (`readSchedule`: the same schema, units, export map and sign) and every mark checked by
+ * the engine, as `pmchart schedule` does without --jobs or --report (no bar proposals).
+ */
+export function scheduleView(scheduleText: string, loadsText: string, o: { columns?: string; compression?: string; allowMissing?: boolean }): Promise<Outcome<ScheduleView>> {
+  return attempt(() => {
+    const read = readSchedule(scheduleText, loadsText, { ...o, proposals: 0 }, SCHEDULE_AT, SCHEDULE_LOADS_AT);
+    const rows: MarkRow[] = [];
+    for (const { check: _c, ...row } of checkRows(read.rows, read.loads, 0, SCHEDULE_AT, false)) rows.push(row);
+    const { summary, exitCode } = summariseSchedule(rows);
+    return { rows, summary, exitCode, notes: read.notes };
+  });
 }
 
 /** The caution every page view and export carries (the CLI's words). */

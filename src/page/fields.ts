@@ -143,6 +143,8 @@ const PAGE_NAMES: Readonly<Record<string, string>> = {
   '--diameter': 'D',
   '--grid': 'γ grid',
   '--chart-gamma-step': 'γ grid',
+  '--columns': 'column map',
+  '--compression': 'compression sign',
 };
 
 /** A flag in the page's words: its field name, or the flag without its dashes when the page has no such field. */

@@ -59,6 +59,18 @@ export function pageBody(caution: string): string {
     <p id="biaxial-note" class="muted"></p>
     <div id="biaxial-table"></div>
   </div>
+  <h2 id="schedule-title">Column schedule</h2>
+  <div id="schedule-panel">
+    <p class="muted">Paste or drop a schedule (mark, code, units, fc, fy, b, h or diameter, arrangement, bars, cover, tie …) and its loads (mark, id, Pu, Mu …): every mark is checked as <code>pmchart schedule</code> checks it.</p>
+    <div class="drops">
+      <label for="sched-text">Schedule (CSV)</label><textarea id="sched-text" rows="5" spellcheck="false" placeholder="mark,code,units,fc,fy,b,h,arrangement,bars_per_face,bar,cover,tie&#10;C1,aci318-19,us,5,60,20,20,four-faces,3,#9,1.5,#4"></textarea>
+      <label for="sched-loads">Loads (CSV)</label><textarea id="sched-loads" rows="5" spellcheck="false" placeholder="mark,id,Pu,Mu&#10;C1,D+L,600,150"></textarea>
+      <label for="sched-columns">Column map</label><input type="text" id="sched-columns" autocomplete="off" spellcheck="false" placeholder="optional, e.g. mark=Column,id=Combo,Pu=P,Mu=M3,Muy=M2">
+      <label for="sched-compression">Compression sign</label><select id="sched-compression"><option value="positive">positive (as pmchart)</option><option value="negative">negative (most analysis exports)</option></select>
+    </div>
+    <div class="msg" id="m-schedule" role="alert" hidden></div>
+    <div id="schedule-table"></div>
+  </div>
   <h2>Basis and assumptions</h2>
   <ul id="assumptions"></ul>
   <h2 id="reproduce">Reproduce this view</h2>
@@ -108,7 +120,11 @@ button{font:inherit;padding:3px 10px;margin-right:6px;border:1px solid var(--acc
 select#biax-load{width:auto;min-width:10em}
 #crosshair{position:absolute;width:9px;height:9px;margin:-5px 0 0 -5px;border:1px solid var(--caution);border-radius:50%;pointer-events:none}
 .reading{margin:6px 0;padding:4px 8px;background:var(--panel);font-variant-numeric:tabular-nums;min-height:1.6em}
-#loads-table{overflow-x:auto}
+#loads-table,#schedule-table{overflow-x:auto}
+.drops{display:grid;grid-template-columns:120px minmax(0,1fr);gap:4px 8px;align-items:start;max-width:760px}
+.drops textarea.over{outline:2px dashed var(--accent)}
+th.left,td.left{text-align:left}
+th.right,td.right{text-align:right}
 table{border-collapse:collapse;font-variant-numeric:tabular-nums}
 th,td{border-bottom:1px solid var(--rule);padding:2px 8px;text-align:right;white-space:nowrap}
 th:first-child,td:first-child,td.status{text-align:left}

@@ -18,13 +18,36 @@ import { DISPLAY_UNITS, toDisplay, type UnitSystem } from '../units/index.js';
 import { CAUTION } from './caution.js';
 import { cell as f, fmt, num } from './format.js';
 
-/** A table as every view shows it: headers, rows of formatted cells, which rows to mark. */
+/**
+ * A column of a view's table: its key, its heading, the unit of its cells (null for words and ratios) and
+ * its alignment. The text table prints `heading unit` as one header; the drawn sheet and the page put the
+ * unit under the heading. Nothing downstream reads a unit or an alignment back out of header text.
+ */
+export interface TableColumn {
+  readonly key: string;
+  readonly heading: string;
+  readonly unit: string | null;
+  readonly align: 'left' | 'right';
+}
+
+/** A column of words (left-aligned, no unit). */
+const wordsCol = (heading: string, key = heading): TableColumn => ({ key, heading, unit: null, align: 'left' });
+/** A column of figures (right-aligned), with the unit of its cells where they have one. */
+const figureCol = (heading: string, unit: string | null = null, key = heading): TableColumn => ({ key, heading, unit, align: 'right' });
+
+/** A column's header in the text table: the heading, then the unit. */
+export const headerText = (c: TableColumn): string => (c.unit ? `${c.heading} ${c.unit}` : c.heading);
+
+/** A table as every view shows it: columns (and their headers as the text table prints them), rows of formatted cells, which rows to mark. */
 export interface TableView {
+  columns: readonly TableColumn[];
   headers: string[];
   rows: string[][];
   /** per row: the governing load */
   marked: boolean[];
 }
+
+const tableView = (columns: readonly TableColumn[], rows: string[][], marked: boolean[]): TableView => ({ columns, headers: columns.map(headerText), rows, marked });
 
 export interface ViewUnits {
   force: string;
@@ -69,7 +92,7 @@ export function symbolsOf(c: Pick<ColumnCheck, 'basis' | 'shape'>) {
 /** The note column of a load's row. */
 export function noteText(r: ColumnLoadResult, c: Pick<ColumnCheck, 'basis' | 'shape'>): string {
   return [
-    r.status !== 'ok' && r.status !== 'fails' ? `${r.statusReason}${r.statusClause ? ` [${r.statusClause}]` : ''}` : '',
+    r.status !== 'ok' && r.status !== 'fails' ? `${statusReasonOf(r, c.basis)}${r.statusClause ? ` [${r.statusClause}]` : ''}` : '',
     r.rhoStatus === 'minimum-governs' && r.status === 'ok' ? 'minimum ρg' : '',
     r.governedBy === 'cap' ? 'cap' : '',
     r.momentRaised ? `${symbolsOf(c).M} raised to minimum` : '',
@@ -96,12 +119,33 @@ const RULE_WORDS: Readonly<Record<string, string>> = {
   'exact-section': 'exact search, neutral axis free to incline',
 };
 
-/** One finding as a line: rule, axis, clause, outcome, and the figures compared (display units). */
-export function findingText(x: RuleFinding, units: UnitSystem): string {
+/**
+ * One finding as a line: rule, axis, clause, outcome, and the figures compared (display units). A detailing
+ * rule of the basis is named by its rulebook title, in the words of `findingWords` (the detailing lines).
+ */
+export function findingText(basis: Basis, x: RuleFinding, units: UnitSystem): string {
+  if (detailingRule(basis, x.rule)) return findingWords(basis, x);
   const v = (n: number | null | undefined) =>
     n === null || n === undefined ? '—' : x.quantity === 'moment' || x.quantity === 'force' ? `${f(toDisplay(n, x.quantity, units), 5)} ${unitsOf(units)[x.quantity]}` : f(n, 4);
   const figures = x.value !== undefined || x.limit !== undefined ? `: ${v(x.value)} against ${v(x.limit)}` : '';
   return `${RULE_WORDS[x.rule] ?? x.rule}${x.axis ? ` about ${x.axis}` : ''} [${x.clause}] ${x.outcome}${figures}`;
+}
+
+/** A detailing finding as the reason of a load's status: the rule's title and the figures compared, internal units to 4 significant digits. */
+export function findingReason(basis: Basis, x: RuleFinding): string {
+  const title = detailingRule(basis, x.rule)?.title ?? x.rule;
+  const n = (v: number | null | undefined) => (v === null || v === undefined ? '—' : String(Number(v.toPrecision(4))));
+  if (x.outcome === 'unchecked') return `${title}: unchecked`;
+  return `${title}: ${n(x.value)} ${findingComparison(x)} ${n(x.limit)}`;
+}
+
+/** Why a load has its status, in words: the engine's reason, or for `detailing` the broken finding in words. */
+export const statusReasonOf = (r: Pick<ColumnLoadResult, 'statusReason' | 'statusFinding'>, basis: Basis): string => (r.statusFinding ? findingReason(basis, r.statusFinding) : r.statusReason);
+
+/** The governing load's reason in words: the engine's `governingWhy`, with a broken detailing finding put in words. */
+export function governingWords(c: Pick<ColumnCheckHead, 'governingWhy' | 'basis'>, gov: ColumnLoadResult | undefined): string {
+  if (!gov?.statusFinding) return c.governingWhy;
+  return `${gov.status} ${findingReason(c.basis, gov.statusFinding)}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`;
 }
 
 /** A finding in JSON: the facts, moments and forces in display units. */
@@ -119,13 +163,16 @@ export function findingJson(x: RuleFinding, units: UnitSystem) {
   };
 }
 
-/** Headers of the table of the checks about each axis alone (the y minimum moment, the exact searches). */
-export function axisChecksHeaders(c: ColumnCheckFrame): string[] {
+/** Columns of the table of the checks about each axis alone (the y minimum moment, the exact searches). */
+export function axisChecksColumns(c: ColumnCheckFrame): TableColumn[] {
   const un = unitsOf(c.units);
   const s = symbolsOf(c);
   const measure = c.checked ? 'util' : 'ρg req';
-  return ['id', 'check', `${s.M} ${un.moment}`, measure, `uniaxial ${measure}`, 'NA angle°', 'clause', 'governs'];
+  return [wordsCol('id'), wordsCol('check'), figureCol(s.M, un.moment, 'M'), figureCol(measure, null, 'measure'), figureCol(`uniaxial ${measure}`, null, 'uniaxialMeasure'), figureCol('NA angle°', null, 'naAngle'), wordsCol('clause'), wordsCol('governs')];
 }
+
+/** Headers of the table of the checks about each axis alone, as the text table prints them. */
+export const axisChecksHeaders = (c: ColumnCheckFrame): string[] => axisChecksColumns(c).map(headerText);
 
 /** One load's rows of that table: about y alone, its exact search, and the exact search about x, where each applies. */
 export function axisChecksRows(r: ColumnLoadResult, c: ColumnCheckFrame): string[][] {
@@ -159,44 +206,47 @@ export function axisChecksView(c: ColumnCheck): TableView | null {
       marked.push(r.governing);
     }
   }
-  return rows.length === 0 ? null : { headers: axisChecksHeaders(c), rows, marked };
+  return rows.length === 0 ? null : tableView(axisChecksColumns(c), rows, marked);
 }
 
 /** The results table: one row per load, governing first. */
 export function resultsView(c: ColumnCheck): TableView {
-  return { headers: resultsHeaders(c), rows: c.results.map((r) => resultRow(r, c)), marked: c.results.map((r) => r.governing) };
+  return tableView(resultsColumns(c), c.results.map((r) => resultRow(r, c)), c.results.map((r) => r.governing));
 }
 
-/** Headers of the results table. */
-export function resultsHeaders(c: ColumnCheckFrame): string[] {
+/** Columns of the results table. */
+export function resultsColumns(c: ColumnCheckFrame): TableColumn[] {
   const un = unitsOf(c.units);
   const s = symbolsOf(c);
   const withUtil = c.checked !== null;
   const biax = c.biaxial;
   return [
-    'id',
-    `${s.P} ${un.force}`,
-    `${s.M} ${un.moment}`,
-    ...(biax ? [`${s.M}y ${un.moment}`] : []),
-    `${s.P}/${s.perArea}`,
-    `${s.M}/${s.perAreaDepth}`,
-    ...(s.nu && s.mu ? [s.nu, s.mu] : []),
-    `e/${s.depth}`,
-    'ρg req',
-    ...(biax && !withUtil ? ['ρg req biax'] : []),
-    'ρg chart',
-    ...(biax ? ['ρg chart biax'] : []),
-    'ρg rounded',
-    `extra ${un.area}`,
-    s.epsT,
-    'φ',
-    'strain state',
-    ...(withUtil ? ['util'] : []),
-    ...(withUtil && biax ? ['util biax'] : []),
-    'status',
-    'note',
+    wordsCol('id'),
+    figureCol(s.P, un.force, 'Pu'),
+    figureCol(s.M, un.moment, 'Mu'),
+    ...(biax ? [figureCol(`${s.M}y`, un.moment, 'Muy')] : []),
+    figureCol(`${s.P}/${s.perArea}`, null, 'normalisedP'),
+    figureCol(`${s.M}/${s.perAreaDepth}`, null, 'normalisedM'),
+    ...(s.nu && s.mu ? [figureCol(s.nu, null, 'nu'), figureCol(s.mu, null, 'mu')] : []),
+    figureCol(`e/${s.depth}`, null, 'eOverH'),
+    figureCol('ρg req', null, 'rhoRequired'),
+    ...(biax && !withUtil ? [figureCol('ρg req biax', null, 'rhoRequiredBiaxial')] : []),
+    figureCol('ρg chart', null, 'rhoFromChart'),
+    ...(biax ? [figureCol('ρg chart biax', null, 'rhoFromChartBiaxial')] : []),
+    figureCol('ρg rounded', null, 'rhoRoundedDown'),
+    figureCol('extra', un.area, 'extraSteelRoundedDown'),
+    figureCol(s.epsT, null, 'epsT'),
+    figureCol('φ', null, 'phi'),
+    wordsCol('strain state', 'strainClass'),
+    ...(withUtil ? [figureCol('util', null, 'utilisation')] : []),
+    ...(withUtil && biax ? [figureCol('util biax', null, 'utilisationBiaxial')] : []),
+    wordsCol('status'),
+    wordsCol('note', 'notes'),
   ];
 }
+
+/** Headers of the results table, as the text table prints them. */
+export const resultsHeaders = (c: ColumnCheckFrame): string[] => resultsColumns(c).map(headerText);
 
 /** One load's row of the results table. */
 export function resultRow(r: ColumnLoadResult, c: ColumnCheckFrame): string[] {
@@ -238,7 +288,7 @@ function footnotesFor(c: ColumnCheckHead, gov: ColumnLoadResult | undefined): st
   const un = unitsOf(c.units);
   const s = symbolsOf(c);
   const out = [
-    `* governing load: ${c.governingWhy}. Loads are ranked by status (unstable, outside scope, not possible, detailing, fails, ok), then by ${c.measure === 'utilisation' ? 'utilisation' : 'ρg required'}.`,
+    `* governing load: ${governingWords(c, gov)}. Loads are ranked by status (unstable, outside scope, not possible, detailing, fails, ok), then by ${c.measure === 'utilisation' ? 'utilisation' : 'ρg required'}.`,
     `${s.M} is the moment checked: after slenderness where asked, ↑ where raised to the basis minimum; signed. Normalised values in ${un.stress}; ${s.epsT} and φ at capacity along the load ray (${c.checked ? 'checked reinforcement' : 'at ρg required'}).`,
   ];
   if (gov && gov.extraSteelRoundedDown !== null && gov.extraSteelRoundedDown > 0) {
@@ -304,14 +354,18 @@ export function slendernessView(c: ColumnCheck): { method: string; table: TableV
       marked.push(r.governing);
     }
   }
-  return { method, table: { headers: slendernessHeaders(c), rows, marked } };
+  return { method, table: tableView(slendernessColumns(c), rows, marked) };
 }
 
-export function slendernessHeaders(c: ColumnCheckFrame): string[] {
+/** Columns of the slenderness table. */
+export function slendernessColumns(c: ColumnCheckFrame): TableColumn[] {
   const un = unitsOf(c.units);
   const s = symbolsOf(c);
-  return ['id', 'axis', 'slenderness', 'limit', 'neglected', 'δ', `${s.firstOrder} ${un.moment}`, `${s.secondOrder} ${un.moment}`, 'note'];
+  return [wordsCol('id'), wordsCol('axis'), figureCol('slenderness'), figureCol('limit'), wordsCol('neglected'), figureCol('δ', null, 'delta'), figureCol(s.firstOrder, un.moment, 'firstOrderMoment'), figureCol(s.secondOrder, un.moment, 'magnifiedMoment'), wordsCol('note')];
 }
+
+/** Headers of the slenderness table, as the text table prints them. */
+export const slendernessHeaders = (c: ColumnCheckFrame): string[] => slendernessColumns(c).map(headerText);
 
 /** One load's rows of the slenderness table: one per axis magnified, with the method of each. */
 export function slendernessRows(r: ColumnLoadResult, c: ColumnCheckFrame): { method: string; cells: string[] }[] {
@@ -346,14 +400,31 @@ const shortWarning = (s: SlendernessResult): string => (s.ok ? '' : s.delta === 
 /** Biaxial methods side by side, with the checked reinforcement; null when no load has Muy or no reinforcement is given. */
 export function biaxialView(c: ColumnCheck): TableView | null {
   if (!c.biaxial || !c.checked) return null;
-  return { headers: biaxialHeaders(c), rows: c.results.map((r) => biaxialRow(r, c)), marked: c.results.map((r) => r.governing) };
+  return tableView(biaxialColumns(c), c.results.map((r) => biaxialRow(r, c)), c.results.map((r) => r.governing));
 }
 
-export function biaxialHeaders(c: ColumnCheckFrame): string[] {
+/** Columns of the biaxial table. */
+export function biaxialColumns(c: ColumnCheckFrame): TableColumn[] {
   const un = unitsOf(c.units);
   const s = symbolsOf(c);
-  return ['id', `${s.P} ${un.force}`, `${s.M}x ${un.moment}`, `${s.M}y ${un.moment}`, 'exact', 'NA angle°', 'reciprocal', 'method', 'contour', 'α', 'exact M@P', 'contour M@P'];
+  return [
+    wordsCol('id'),
+    figureCol(s.P, un.force, 'Pu'),
+    figureCol(`${s.M}x`, un.moment, 'Mux'),
+    figureCol(`${s.M}y`, un.moment, 'Muy'),
+    figureCol('exact'),
+    figureCol('NA angle°', null, 'naAngle'),
+    figureCol('reciprocal'),
+    wordsCol('method'),
+    figureCol('contour'),
+    figureCol('α', null, 'alpha'),
+    figureCol('exact M@P', null, 'exactMomentUtilisation'),
+    figureCol('contour M@P', null, 'contourMomentUtilisation'),
+  ];
 }
+
+/** Headers of the biaxial table, as the text table prints them. */
+export const biaxialHeaders = (c: ColumnCheckFrame): string[] => biaxialColumns(c).map(headerText);
 
 /** One load's row of the biaxial table. */
 export function biaxialRow(r: ColumnLoadResult, c: ColumnCheckFrame): string[] {
@@ -399,7 +470,17 @@ function barsViewFor(c: ColumnCheckHead, loadId: (index: number) => string | und
     loadId(p.governingLoad) ?? '',
     ...(flagged ? [p.findings.map((x) => (x.rule === 'steel-max-lap' ? `ρg > ${fmt(x.limit ?? 0, 3)} where lapped [${x.clause}]` : `not lap spliced [${x.clause}]`)).join('; ')] : []),
   ]);
-  return { headers: ['bars', `As ${un.area}`, 'ρg', 'γ', `clear ${un.length}`, 'util (all effects)', 'by load', ...(flagged ? ['flags'] : [])], rows, marked: rows.map(() => false) };
+  const columns = [
+    wordsCol('bars', 'layout'),
+    figureCol('As', un.area, 'area'),
+    figureCol('ρg', null, 'rho'),
+    figureCol('γ', null, 'gamma'),
+    figureCol('clear', un.length, 'clearSpacing'),
+    figureCol('util (all effects)', null, 'utilisation'),
+    wordsCol('by load', 'governingLoad'),
+    ...(flagged ? [wordsCol('flags')] : []),
+  ];
+  return tableView(columns, rows, rows.map(() => false));
 }
 
 /** An arrangement's name in section lines: its kind, and for unequal four-faces counts the two counts in words. */
@@ -699,7 +780,7 @@ function* detailLines(src: CheckRows): Generator<string> {
     if (r.findings.length === 0) continue;
     if (!findings) yield 'RULE FINDINGS (clauses of the basis)';
     findings = true;
-    for (const x of r.findings) yield `  ${r.id}: ${findingText(x, u)}`;
+    for (const x of r.findings) yield `  ${r.id}: ${findingText(c.basis, x, u)}`;
   }
   if (findings) yield '';
   if (c.biaxial && c.checked) {
@@ -776,7 +857,7 @@ export function resultJson(r: ColumnLoadResult, c: ColumnCheckFrame) {
     capacity: r.capacity === null ? null : { Pu: disp(r.capacity.P, 'force', u), Mu: disp(r.capacity.M, 'moment', u) },
     variant: { label: r.variant.label, sign: r.variant.sign, turnDeg: num(r.variant.turnDeg), checked: r.variantsChecked },
     status: r.status,
-    statusReason: r.statusReason,
+    statusReason: statusReasonOf(r, c.basis),
     statusClause: r.statusClause,
     measure: orNull(r.measureValue),
     governing: r.governing,
@@ -892,7 +973,7 @@ export function* checkJsonPieces(src: CheckRows, generator: string): Generator<s
     checked: c.checked ? { kind: c.checked.kind, rho: num(c.checked.rho), description: c.checked.description } : null,
     governing: c.governingId,
     measure: c.measure,
-    governingWhy: c.governingWhy,
+    governingWhy: governingWords(c, src.governing),
     summary: { total: c.summary.total, ...c.summary.counts, text: c.summary.text },
     exitCode: c.exitCode,
     results: RESULTS_SLOT,

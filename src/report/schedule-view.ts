@@ -8,6 +8,7 @@ import type { ScheduleRowFacts, ScheduleSummary } from '../design/schedule.js';
 import { CAUTION } from './caution.js';
 import { STATUS_WORDS } from './check-view.js';
 import { cell, num } from './format.js';
+import { textTable, type ViewColumn } from './view-table.js';
 
 /** What every schedule view prints around the rows. */
 export interface ScheduleHead {
@@ -31,21 +32,22 @@ export function scheduleAssumptions(head: ScheduleHead): string[] {
   ];
 }
 
-const HEADERS = ['mark', 'governing load', 'status', 'utilisation', 'ρg provided', 'ρg required'];
-
-const rowCells = (r: ScheduleRowFacts): string[] => [r.mark, r.governing, STATUS_WORDS[r.status], cell(r.utilisation, 3), cell(r.rhoProvided, 4), cell(r.rhoRequired, 4)];
+/** The schedule's table, one row per mark: the text table and the page's table render these columns. */
+export const SCHEDULE_TABLE: readonly ViewColumn<ScheduleRowFacts>[] = [
+  { key: 'mark', heading: 'mark', unit: null, align: 'left', cell: (r) => r.mark },
+  { key: 'governing', heading: 'governing load', unit: null, align: 'left', cell: (r) => r.governing },
+  { key: 'status', heading: 'status', unit: null, align: 'left', cell: (r) => STATUS_WORDS[r.status] },
+  { key: 'utilisation', heading: 'utilisation', unit: null, align: 'right', cell: (r) => cell(r.utilisation, 3) },
+  { key: 'rhoProvided', heading: 'ρg provided', unit: null, align: 'right', cell: (r) => cell(r.rhoProvided, 4) },
+  { key: 'rhoRequired', heading: 'ρg required', unit: null, align: 'right', cell: (r) => cell(r.rhoRequired, 4) },
+];
 
 /** The text table: head lines, one row per mark (marks sorted), the summary, notes, assumptions and the caution. */
 export function scheduleText(rows: readonly ScheduleRowFacts[], summary: ScheduleSummary, head: ScheduleHead): string {
-  const cells = rows.map(rowCells);
-  const w = HEADERS.map((h, i) => Math.max(h.length, ...cells.map((c) => c[i]!.length)));
-  const line = (c: readonly string[]) => c.map((x, i) => (i <= 2 ? x.padEnd(w[i]!) : x.padStart(w[i]!))).join('  ').trimEnd();
   const out = [
     `Column schedule: ${head.bases.map((b) => b.title).join('; ')}`,
     '',
-    line(HEADERS),
-    line(w.map((n) => '-'.repeat(n))),
-    ...cells.map(line),
+    ...textTable(SCHEDULE_TABLE, rows),
     '',
     summary.text,
   ];

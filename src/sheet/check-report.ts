@@ -2,7 +2,10 @@
  * `pmchart check --report FILE.pdf|svg`: a one-page calculation sheet.
  *
  *   check outcome ──1──▶ curve family at the actual γ ──2──▶ page (plot + panels) ──3──▶ SVG / PDF bytes
- *                        src/analysis/family.ts             this file, src/chart       src/render
+ *                        src/design/check-curves.ts         this file, src/chart       src/render
+ *
+ * This file computes no figure: the family, the extra curves and the checked section of the contour come
+ * from src/design/check-curves.ts (which the page shares), the tables and words from src/report/check-view.ts.
  *
  * 1. The φ-factored family at the standard ρg steps of the emulated charts, plus the curve at the governing
  *    load's ρg required; every load plotted at its normalised point, labelled, the governing one marked.
@@ -12,8 +15,6 @@
  *    a note: the .txt and .json reports hold every row.
  * 3. The sheet's vega-lite template with its load overlay (src/chart/spec.ts); the contour is an inset.
  */
-import { computeFamily, type CurveFamily } from '../analysis/family.js';
-import { squashPoint } from '../analysis/biaxial.js';
 import { contourSpec } from '../chart/contour-spec.js';
 import type { Box, SheetLayout } from '../chart/layout.js';
 import { LOAD_MARK_WORDS } from '../chart/spec.js';
@@ -24,8 +25,7 @@ import { strainClassWord } from '../codes/types.js';
 import type { ColumnCheck, ColumnLoadResult } from '../design/column-check.js';
 import { arrangementName, barsUnmetLine, barsView, biaxialView, noteText, resultsFootnotes, resultsView, slendernessView, STATUS_WORDS, symbolsOf, type TableView } from '../report/check-view.js';
 import { cell as f, fmt } from '../report/format.js';
-import { prepareBiaxial } from '../analysis/biaxial.js';
-import type { CapContext } from '../codes/types.js';
+import { checkedSection, checkFamily } from '../design/check-curves.js';
 import type { Inset } from '../render/renderer.js';
 import { DISPLAY_UNITS, toDisplay, type UnitSystem } from '../units/index.js';
 import { SHEET_BASE_POINTS } from './curves.js';
@@ -104,7 +104,7 @@ export function buildCheckReport(input: CheckReportInput): CheckReportPage {
   const g = new Deco(L, data);
 
   // 1. the family at the actual γ, the governing curve, the loads
-  const family = computeFamily({ basis: b, shape: c.shape, arrangement: c.arrangement, gamma: c.gamma, ...(c.gammaB !== null ? { gammaX: c.gammaB } : {}), rhos: c.chart.rhos, capContext: c.capContext, basePoints: SHEET_BASE_POINTS });
+  const family = checkFamily(c, SHEET_BASE_POINTS);
   plotLayers(
     { family, set: { referenceLines: { strainStates: true, eccentricities: [0.1, 0.25, 0.5, 1], axialCap: true }, ratios: { kind: 'rhoG', values: [...c.chart.rhos] } } },
     L,
@@ -116,9 +116,9 @@ export function buildCheckReport(input: CheckReportInput): CheckReportPage {
   const gov = c.results[0];
   const req = gov?.rhoRequired ?? null;
   const onStep = (rho: number) => c.chart.rhos.some((r) => Math.abs(r - rho) < 5e-4);
-  if (gov && req !== null && !onStep(req)) extraCurve(family, req, `ρg req ${fmt(req, 4)}`, c.capContext, data, c.gammaB);
+  if (gov && req !== null && !onStep(req)) extraCurve(c, req, `ρg req ${fmt(req, 4)}`, data);
   const checked = c.checked?.rho;
-  if (checked !== undefined && !onStep(checked) && (req === null || Math.abs(checked - req) >= 5e-4)) extraCurve(family, checked, `checked ρg ${fmt(checked, 4)}`, c.capContext, data, c.gammaB);
+  if (checked !== undefined && !onStep(checked) && (req === null || Math.abs(checked - req) >= 5e-4)) extraCurve(c, checked, `checked ρg ${fmt(checked, 4)}`, data);
   const domain = plotDomain(data, c.results);
   placeLoads(L, domain, c.results, data);
 
@@ -186,21 +186,15 @@ function sectionText(c: ColumnCheck): string {
   return `${dims} ${c.basis.transverse}, ${arrangementName(c.arrangement)}, ${sy.concreteStrength} ${fmt(c.basis.fc)} ${un.stress}, ${sy.steelStrength} ${fmt(c.basis.fy)} ${un.stress}, γ ${fmt(c.gamma, 3)}${c.gammaB !== null ? `, γB ${fmt(c.gammaB, 3)}` : ''}`;
 }
 
-/** Columns of a shared table view for the drawn table: text columns left, figures right. */
+/** Columns of a shared table view for the drawn table: the view's own headings, units and alignment (the first column names the load). */
 function columns(t: TableView): { head: string; unit?: string; align: 'l' | 'r' }[] {
-  const text = new Set(['id', 'strain state', 'status', 'note', 'bars', 'method', 'axis', 'neglected', 'by load']);
-  return t.headers.map((h, i) => {
-    const sp = h.lastIndexOf(' ');
-    const unitLike = sp > 0 && /^[a-zA-Z²·\-]+$/.test(h.slice(sp + 1)) && !text.has(h) && /(kip|kN|in|mm|ft|m|ksi|MPa|psi|²)/.test(h.slice(sp + 1));
-    return { head: h === 'id' ? 'load' : unitLike ? h.slice(0, sp) : h, ...(unitLike ? { unit: h.slice(sp + 1) } : {}), align: i === 0 || text.has(h) ? ('l' as const) : ('r' as const) };
-  });
+  return t.columns.map((c) => ({ head: c.key === 'id' ? 'load' : c.heading, ...(c.unit ? { unit: c.unit } : {}), align: c.align === 'left' ? ('l' as const) : ('r' as const) }));
 }
 
 // ── plot ────────────────────────────────────────────────────────────────────────────────────────
 
-function extraCurve(family: CurveFamily, rho: number, label: string, capContext: CapContext, data: SheetData, gammaB: number | null): void {
-  const one = computeFamily({ basis: family.basis, shape: family.shape, arrangement: family.arrangement, gamma: family.gamma, ...(gammaB !== null ? { gammaX: gammaB } : {}), rhos: [rho], capContext, basePoints: SHEET_BASE_POINTS });
-  const c = one.curves[0]!;
+function extraCurve(check: ColumnCheck, rho: number, label: string, data: SheetData): void {
+  const c = checkFamily(check, SHEET_BASE_POINTS, [rho]).curves[0]!;
   const rows = Array.from(c.phiPn, (P, i) => ({ curve: label, i, M: r5(c.phiMn[i]!), P: r5(P) }));
   data.extraCurves!.push(...rows);
   // label on the compression side, clear of the ρg labels on the tension branch
@@ -335,10 +329,9 @@ function contourPanel(g: Deco, L: ReportLayout, c: ColumnCheck, gov: ColumnLoadR
   const vs = symbolsOf(c);
   g.text('heading', b.x, y + 1.0 * u, `Mx–My contour at ${vs.P} of ${gov.id}`);
   y += 1.8 * u;
-  const sec = prepareBiaxial(c.basis, c.shape, c.checked!.bars, c.capContext);
-  const tension = -sec.basis.design.factor(1) * sec.basis.design.steel.yieldStress * sec.steelArea;
+  const { section: sec, minP, maxP } = checkedSection(c)!;
   const bottomLimit = L.bottom.y - 3.6 * u;
-  if (load.Pu > Math.min(sec.cap.design, squashPoint(sec)) || load.Pu <= tension) {
+  if (load.Pu > maxP || load.Pu <= minP) {
     return g.paragraph('body', b.x, y + 1.0 * u, b.w, `${vs.P} = ${f(toDisplay(load.Pu, 'force', c.units), 5)} ${un.force} is outside the axial range of the section: no contour.`) + u;
   }
   const size = Math.max(10 * u, Math.min(b.w, bottomLimit - y));

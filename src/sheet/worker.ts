@@ -6,7 +6,6 @@
 import { isPmError } from '../errors.js';
 import type { ChildError } from '../io/child-pool.js';
 import { SheetRenderer } from '../render/renderer.js';
-import { injectedFault } from './files.js';
 import { renderChunk, type ChunkTask } from './render-chunk.js';
 
 export type WorkerMessage =
@@ -33,7 +32,6 @@ process.on('message', (msg: { type: 'task'; task: ChunkTask } | { type: 'exit' }
   }
   void (async () => {
     try {
-      if (injectedFault('child-crash') === String(msg.task.chunk)) process.kill(process.pid, 'SIGKILL');
       renderer ??= SheetRenderer.create();
       const pdf = await renderChunk(msg.task, await renderer, () => send({ type: 'sheet' }));
       send({ type: 'done', chunk: msg.task.chunk, pdf, maxRssKb: process.resourceUsage().maxRSS });

@@ -1,18 +1,21 @@
 /**
  * The library as another program uses it: `import … from 'pmchart'` through the package.json `exports`
- * map (Node resolves a package's own name from inside it), with no CLI in between.
+ * map (Node resolves a package's own name from inside it), with no CLI in between. It runs the built
+ * dist/, so it fails loudly when dist/ is missing or older than src/ (tests/helpers/built.ts).
  * Loads: the issue-4 hand-check (common practice, worked by hand): 24 × 24 in, f′c = 4 ksi, fy = 60 ksi,
  * ACI 318-19, bars on two faces at γ = 0.75, Pu = 900 kip, Mu = 600 kip-ft → Pu/(b·h) = 1.5625 ksi.
  */
 import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { requireFreshBuild } from '../helpers/built.js';
 
 const root = new URL('../../', import.meta.url).pathname;
 
 const run = (code: string) => spawnSync(process.execPath, ['--input-type=module', '-e', code], { cwd: root, encoding: 'utf8' });
 
 describe("import { checkColumn } from 'pmchart'", () => {
+  beforeAll(requireFreshBuild);
   it('has typings in dist/index.d.ts', () => {
     expect(existsSync(`${root}dist/index.d.ts`)).toBe(true);
   });

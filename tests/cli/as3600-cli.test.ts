@@ -2,7 +2,7 @@
  * `--code as3600-2018` through table, sheet, set and check (AS 3600-2018; invented office and project in
  * tests/fixtures/au-set.json). Values by hand from the AS 3600-2018 formulas (from memory) as cited.
  */
-import { execFileSync, spawnSync } from 'node:child_process';
+import { execFileSync } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -10,10 +10,9 @@ import { describe, expect, it } from 'vitest';
 import { runCheck, runCheckAsync } from '../../src/cli/check.js';
 import { runTable } from '../../src/cli/table.js';
 import { expectClose } from '../helpers/tolerance.js';
+import { cli as inProcess } from '../helpers/run-cli.js';
 
 const root = new URL('../../', import.meta.url).pathname;
-const bin = join(root, 'bin/pmchart.js');
-const built = existsSync(join(root, 'dist', 'cli', 'main.js'));
 const tmp = mkdtempSync(join(tmpdir(), 'pmchart-as3600-'));
 const pdfText = (pdf: string, page: number) => execFileSync('pdftotext', ['-f', String(page), '-l', String(page), '-layout', pdf, '-'], { encoding: 'utf8' });
 
@@ -42,16 +41,16 @@ describe('pmchart with AS 3600-2018', () => {
     expect(page).toContain('AS 3600-2018 10.4 moment magnifier');
     expect(page).toContain('Le/r');
   }, 60_000);
-  it.runIf(built)('sheet and set: γ₂, fsy and φNu on the page', () => {
+  it('sheet and set: γ₂, fsy and φNu on the page', async () => {
     const pdf = join(tmp, 'one.pdf');
-    const r = spawnSync(process.execPath, [bin, 'sheet', '--code', 'as3600-2018', '--fc', '40', '--fy', '500', '--gamma', '0.8', '--rho', '0.01:0.04:0.01', '--out', pdf, '--date', '2026-05-01'], { encoding: 'utf8' });
+    const r = await inProcess(['sheet', '--code', 'as3600-2018', '--fc', '40', '--fy', '500', '--gamma', '0.8', '--rho', '0.01:0.04:0.01', '--out', pdf, '--date', '2026-05-01']);
     expect(r.status, r.stderr).toBe(0);
     const page = pdfText(pdf, 1);
     expect(page).toContain('AS 3600-2018');
     expect(page).toContain('fsy 500 MPa');
     expect(page).toContain('γ₂');
     expect(page).toContain('φNu');
-    const s = spawnSync(process.execPath, [bin, 'set', join(root, 'tests/fixtures/au-set.json'), '--out', tmp, '--no-progress', '--jobs', '1'], { encoding: 'utf8' });
+    const s = await inProcess(['set', join(root, 'tests/fixtures/au-set.json'), '--out', tmp, '--no-progress', '--jobs', '1']);
     expect(s.status, s.stderr).toBe(0);
     const book = join(tmp, 'gumtree-flat-au', 'book.pdf');
     expect(pdfText(book, 1)).toContain('AS 3600-2018');

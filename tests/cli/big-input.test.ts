@@ -10,10 +10,10 @@ import { spawn, spawnSync } from 'node:child_process';
 import { createInterface } from 'node:readline';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { bin, requireFreshBuild } from '../helpers/built.js';
 import { MAX_DRAWN_REPORT_LOADS } from '../../src/input/limits.js';
 
-const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
 const dist = new URL('../../dist/input/loads-csv.js', import.meta.url).pathname;
 const dir = mkdtempSync(join(tmpdir(), 'pmchart-big-'));
 
@@ -43,6 +43,7 @@ function runLines(heapMB: number, args: string[], line: (l: string) => void): Pr
 const CHECK = ['check', '--fc', '4', '--fy', '60', '--b', '20', '--h', '20', '--gamma', '0.8', '--proposals', '0'];
 
 describe('big inputs within the caps', () => {
+  beforeAll(requireFreshBuild);
   it('a 2,000-value ρg table streams under a 48 MB heap, CSV and JSON', () => {
     const rhos = Array.from({ length: 2000 }, (_, i) => Number((0.001 + i * 0.0000495).toFixed(7)));
     for (const format of ['csv', 'json']) {

@@ -8,9 +8,9 @@ import { execFileSync, spawn, spawnSync } from 'node:child_process';
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { bin, requireFreshBuild } from '../helpers/built.js';
 
-const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
 const section = ['--fc', '4', '--fy', '60', '--b', '24', '--h', '24', '--gamma', '0.75'];
 
 /** A FIFO fed with `bytes` spaces by a shell (finite), the CLI run on it. */
@@ -27,6 +27,7 @@ async function throughFifo(bytes: number, args: (fifo: string) => string[]) {
 }
 
 describe('inputs through a pipe stop at their limit', () => {
+  beforeAll(requireFreshBuild);
   it('set: a 2 MB chart set through a FIFO', async () => {
     const r = await throughFifo(2 << 20, (f) => ['set', f, '--out', join(tmpdir(), 'pmchart-bounded-out')]);
     expect(r.status).toBe(2);

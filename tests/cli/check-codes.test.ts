@@ -1,12 +1,11 @@
 /**
- * `pmchart check` with EN 1992-1-1 and CSA A23.3-19 end to end (runCheck, no parser, and the built binary).
+ * `pmchart check` with EN 1992-1-1 and CSA A23.3-19 end to end (runCheck, no parser, and the CLI in-process).
  * Every expected number is worked by hand below from the clause it cites.
  */
-import { execFileSync } from 'node:child_process';
-import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { runCheck, type CheckOptions } from '../../src/cli/check.js';
+import { cli as inProcess } from '../helpers/run-cli.js';
 
 const en: CheckOptions = { code: 'en1992-1-1', fc: '30', fy: '500', arrangement: 'four-faces', barsPerFace: '3', gamma: '0.8', json: true };
 
@@ -98,13 +97,12 @@ describe('check --code csa-a23.3-19', () => {
   });
 });
 
-describe('the built binary', () => {
-  const bin = join(process.cwd(), 'bin', 'pmchart.js');
-  it.runIf(existsSync(join(process.cwd(), 'dist', 'cli', 'main.js')))('runs check with both codes', () => {
-    const a = JSON.parse(execFileSync('node', [bin, 'check', '--code', 'en1992-1-1', '--fc', '30', '--fy', '500', '--b', '400', '--h', '400', '--gamma', '0.8', '--pu', '2000kN', '--mu', '10kN-m', '--json'], { encoding: 'utf8' }));
+describe('the CLI', () => {
+  it('runs check with both codes', async () => {
+    const a = JSON.parse((await inProcess(['check', '--code', 'en1992-1-1', '--fc', '30', '--fy', '500', '--b', '400', '--h', '400', '--gamma', '0.8', '--pu', '2000kN', '--mu', '10kN-m', '--json'])).stdout);
     expect(a.code).toBe('en1992-1-1');
     expect(a.results[0].normalised.M).toBeCloseTo(0.625, 6);
-    const b = JSON.parse(execFileSync('node', [bin, 'check', '--code', 'csa-a23.3-19', '--fc', '35', '--fy', '400', '--b', '400', '--h', '400', '--gamma', '0.75', '--pu', '3000kN', '--mu', '150kN-m', '--json'], { encoding: 'utf8' }));
+    const b = JSON.parse((await inProcess(['check', '--code', 'csa-a23.3-19', '--fc', '35', '--fy', '400', '--b', '400', '--h', '400', '--gamma', '0.75', '--pu', '3000kN', '--mu', '150kN-m', '--json'])).stdout);
     expect(b.code).toBe('csa-a23.3-19');
     expect(b.results[0].normalised.M).toBeCloseTo(150e6 / 64e6, 6);
   });

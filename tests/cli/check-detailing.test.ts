@@ -1,13 +1,12 @@
 /**
- * `pmchart check` and the detailing status (issue 19 U4), through runCheck and the built binary run from
+ * `pmchart check` and the detailing status (issue 19 U4), through runCheck and the CLI (in-process) run from
  * another directory. Hand calculations beside each case.
  */
-import { spawnSync } from 'node:child_process';
-import { existsSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { runCheck, type CheckOptions } from '../../src/cli/check.js';
+import { cli as inProcess } from '../helpers/run-cli.js';
 
 const base: CheckOptions = { fc: '4', fy: '60', b: '16', h: '16', arrangement: 'four-faces', barsPerFace: '3', gamma: '0.7', pu: '300', mu: '25', proposals: '0', json: true };
 
@@ -64,10 +63,9 @@ describe('a bar layout from cover, tie and bar', () => {
     expect(f.outcome).toBe('met');
   });
 
-  const bin = join(process.cwd(), 'bin', 'pmchart.js');
-  it.runIf(existsSync(join(process.cwd(), 'dist', 'bundle')))('the built binary, run from another directory, exits 1 with status detailing', () => {
+  it('the CLI, run from another directory, exits 1 with status detailing', async () => {
     const args = ['check', '--fc', '4', '--fy', '60', '--b', '16', '--h', '24', '--cover', '1.5', '--tie', '#4', '--bar', '#14', '--bars-per-face', '4', '--pu', '400', '--mu', '100', '--proposals', '0', '--json'];
-    const r = spawnSync(process.execPath, [bin, ...args], { encoding: 'utf8', cwd: tmpdir() });
+    const r = await inProcess([...args], { cwd: tmpdir() });
     expect(r.status).toBe(1);
     expect(JSON.parse(r.stdout).results[0].status).toBe('detailing');
   });

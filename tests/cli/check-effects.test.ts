@@ -13,9 +13,9 @@ import { runCheck, type CheckOptions } from '../../src/cli/check.js';
 import { ACI_318_19 } from '../../src/codes/aci318.js';
 import { layoutBars } from '../../src/section/arrangements.js';
 import { expectClose } from '../helpers/tolerance.js';
+import { cli as inProcess } from '../helpers/run-cli.js';
 
-const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
-const cli = (args: string[]) => spawnSync(process.execPath, [bin, ...args], { encoding: 'utf8' });
+const cli = (args: string[]) => inProcess(args);
 const base: CheckOptions = { fc: '5', fy: '60', b: '18', h: '24', arrangement: 'four-faces', barsPerFace: '4', gamma: '0.75', rho: '0.025', proposals: '0', json: true };
 const json = (o: CheckOptions) => JSON.parse(runCheck(o));
 
@@ -46,8 +46,8 @@ describe('check --muy: biaxial fields', () => {
     expect(out.governing).toBe('high');
     expect(out.results[0].biaxial.exact).toBeGreaterThan(out.results[1].biaxial.exact);
   });
-  it('--muy with --loads is a one-line conflict, exit 2', () => {
-    const r = cli(['check', '--fc', '5', '--fy', '60', '--b', '18', '--h', '24', '--gamma', '0.75', '--loads', '/dev/null', '--muy', '10']);
+  it('--muy with --loads is a one-line conflict, exit 2', async () => {
+    const r = await cli(['check', '--fc', '5', '--fy', '60', '--b', '18', '--h', '24', '--gamma', '0.75', '--loads', '/dev/null', '--muy', '10']);
     expect(r.status).toBe(2);
     expect(r.stderr.trim().split('\n').length).toBe(1);
   });
@@ -85,12 +85,12 @@ describe('check --klu: slenderness fields and the magnified moment feeding the c
     expect(body).toMatch(/BIAXIAL METHODS/);
     expect(body).toMatch(/qualified engineers/);
   });
-  it('missing --beta-dns or a bad --ei-option: one line, exit 2', () => {
+  it('missing --beta-dns or a bad --ei-option: one line, exit 2', async () => {
     const args = ['check', '--fc', '4', '--fy', '60', '--b', '16', '--h', '16', '--gamma', '0.7', '--pu', '400', '--mu', '200', '--klu', '240in'];
-    const a = cli(args);
+    const a = await cli(args);
     expect(a.status).toBe(2);
     expect(a.stderr).toMatch(/--beta-dns/);
-    const b = cli([...args, '--beta-dns', '0.6', '--ei-option', 'z']);
+    const b = await cli([...args, '--beta-dns', '0.6', '--ei-option', 'z']);
     expect(b.status).toBe(2);
     expect(b.stderr).toMatch(/--ei-option/);
   });

@@ -17,10 +17,10 @@ import { CAUTION } from '../../src/cli/table.js';
 import { buildCheckReport } from '../../src/sheet/check-report.js';
 import { expectClose } from '../helpers/tolerance.js';
 import { markGroup } from '../helpers/svg.js';
+import { cli as inProcess } from '../helpers/run-cli.js';
 
 const root = new URL('../../', import.meta.url).pathname;
-const bin = join(root, 'bin/pmchart.js');
-const cli = (args: string[]) => spawnSync(process.execPath, [bin, ...args], { encoding: 'utf8' });
+const cli = (args: string[]) => inProcess(args);
 const dir = mkdtempSync(join(tmpdir(), 'pmchart-report-'));
 const hand: CheckOptions = { fc: '4', fy: '60', b: '24', h: '24', gamma: String(20 / 24), pu: '900', mu: '600', date: '2026-03-01', project: 'Quillon Street Depot (invented)' };
 const pdftotext = (file: string) => spawnSync('pdftotext', ['-layout', file, '-'], { encoding: 'utf8' }).stdout;
@@ -104,24 +104,24 @@ describe('bad report input', () => {
     expect(() => runCheck({ ...hand, report: join(dir, 'x.docx') })).toThrow(/--report/);
   });
 
-  it.runIf(existsSync(join(root, 'dist/cli/main.js')))('exits 2 with one line and leaves no file for a bad extension or date', () => {
+  it('exits 2 with one line and leaves no file for a bad extension or date', async () => {
     const args = ['check', '--fc', '4', '--fy', '60', '--b', '24', '--h', '24', '--gamma', '0.8', '--pu', '900', '--mu', '600'];
     const bad = join(dir, 'bad.docx');
-    const r = cli([...args, '--report', bad]);
+    const r = await cli([...args, '--report', bad]);
     expect(r.status).toBe(2);
     expect(r.stderr).toMatch(/^pmchart: --report: .*bad\.docx has an unknown extension/);
     expect(r.stderr.trim().split('\n')).toHaveLength(1);
     expect(existsSync(bad)).toBe(false);
     const pdf = join(dir, 'bad-date.pdf');
-    const d = cli([...args, '--report', pdf, '--date', '2026-13-45']);
+    const d = await cli([...args, '--report', pdf, '--date', '2026-13-45']);
     expect(d.status).toBe(2);
     expect(d.stderr).toMatch(/^pmchart: --date/);
     expect(existsSync(pdf)).toBe(false);
   });
 
-  it.runIf(existsSync(join(root, 'dist/cli/main.js')))('writes a PDF report from the binary, exit 0', () => {
+  it('writes a PDF report through the CLI, exit 0', async () => {
     const out = join(dir, 'bin.pdf');
-    const r = cli(['check', '--fc', '4', '--fy', '60', '--b', '24', '--h', '24', '--gamma', '0.8', '--pu', '900', '--mu', '600', '--report', out, '--date', '2026-03-01']);
+    const r = await cli(['check', '--fc', '4', '--fy', '60', '--b', '24', '--h', '24', '--gamma', '0.8', '--pu', '900', '--mu', '600', '--report', out, '--date', '2026-03-01']);
     expect(r.stderr).toBe('');
     expect(r.status).toBe(0);
     expect(readFileSync(out).subarray(0, 5).toString()).toBe('%PDF-');

@@ -11,8 +11,12 @@ import { mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Writable } from 'node:stream';
-import { afterEach, describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
 import { runCheck, writeCheck, type CheckOptions } from '../../src/cli/check.js';
+import { clearFaults, faults } from '../helpers/fs-faults.mjs';
+
+// a full disk is injected by a test-only mock of node:fs (tests/helpers/fs-faults.mjs)
+vi.mock('node:fs', async (importOriginal) => (await import('../helpers/fs-faults.mjs')).faultyFs(await importOriginal<typeof import('node:fs')>()));
 
 const dir = mkdtempSync(join(tmpdir(), 'pmchart-stream-'));
 const csv = (name: string, text: string) => {
@@ -36,7 +40,7 @@ async function streamed(o: CheckOptions): Promise<string> {
 
 afterEach(() => {
   process.exitCode = 0;
-  delete process.env.PMCHART_INJECT_FAULT;
+  clearFaults();
 });
 
 // Invented load sets: repeated rows (ties broken by input order), tension, a zero load, and loads beyond the section.
@@ -85,7 +89,7 @@ describe('writeCheck streams the very bytes of the held check', () => {
     const report = join(sub, 'streamed-fault.json');
     await streamed({ ...o, report });
     const before = readFileSync(report, 'utf8');
-    process.env.PMCHART_INJECT_FAULT = 'write:streamed-fault';
+    faults.write = 'streamed-fault';
     const e = await streamed({ ...o, report }).then(
       () => ({ message: 'no error', exitCode: 0 }),
       (x: unknown) => x as { message: string; exitCode: number },

@@ -1,14 +1,19 @@
 /**
- * `pmchart check` through runCheck (no parser) and through the built binary for exit codes.
+ * `pmchart check` through runCheck (no parser) and through the CLI in-process (runCli) for exit codes; the built binary is smoke-tested in built-binary.test.ts.
  * Loads: the issue-4 hand-check (common practice, worked by hand).
  */
-import { execFileSync, spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { parseLoadsCsv, runCheck, type CheckOptions } from '../../src/cli/check.js';
 import { PmError } from '../../src/errors.js';
+import { clearFaults, faults } from '../helpers/fs-faults.mjs';
+import { runCli } from '../helpers/run-cli.js';
+import { cli as inProcess } from '../helpers/run-cli.js';
+
+// a full disk is injected by a test-only mock of node:fs (tests/helpers/fs-faults.mjs)
+vi.mock('node:fs', async (importOriginal) => (await import('../helpers/fs-faults.mjs')).faultyFs(await importOriginal<typeof import('node:fs')>()));
 
 const base: CheckOptions = { fc: '4', fy: '60', b: '24', h: '24', gamma: String(20 / 24), pu: '900', mu: '600' };
 const dir = mkdtempSync(join(tmpdir(), 'pmchart-check-'));
@@ -107,54 +112,51 @@ describe('bad input', () => {
     expect(() => runCheck(opts as CheckOptions)).toThrow(re);
   });
 
-  const bin = join(process.cwd(), 'bin', 'pmchart.js');
-  it.runIf(existsSync(join(process.cwd(), 'dist', 'cli', 'main.js')))('exits 2 with one line and no stack trace from the binary', () => {
-    const r = spawnSync('node', [bin, 'check', '--fc', '4', '--fy', '60', '--b', '24', '--h', '24', '--gamma', '0.8', '--pu', '900', '--mu', '600', '--rho', '0.5'], { encoding: 'utf8' });
+  it('exits 2 with one line and no stack trace', async () => {
+    const r = await inProcess(['check', '--fc', '4', '--fy', '60', '--b', '24', '--h', '24', '--gamma', '0.8', '--pu', '900', '--mu', '600', '--rho', '0.5']);
     expect(r.status).toBe(2);
     expect(r.stderr.trim().split('\n')).toHaveLength(1);
     expect(r.stderr).toMatch(/^pmchart: --rho/);
-    const ok = execFileSync('node', [bin, 'check', '--fc', '4', '--fy', '60', '--b', '24', '--h', '24', '--gamma', '0.8', '--pu', '900', '--mu', '600', '--json'], { encoding: 'utf8' });
+    const ok = (await inProcess(['check', '--fc', '4', '--fy', '60', '--b', '24', '--h', '24', '--gamma', '0.8', '--pu', '900', '--mu', '600', '--json'])).stdout;
     expect(JSON.parse(ok).results[0]).toHaveProperty('rhoFromChart');
   });
 });
 
 describe('check exit status (0 pass, 1 a load does not pass, 2 bad input, 3 I/O error)', () => {
-  const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
-  const run = (args: string[]) => spawnSync(process.execPath, [bin, 'check', ...args], { encoding: 'utf8' });
+  const run = (args: string[]) => inProcess(['check', ...args]);
   // issue-4 hand-check section (common practice, worked by hand): 24 × 24 in, f′c 4 ksi, fy 60 ksi, γ 0.75
   const section = ['--fc', '4', '--fy', '60', '--b', '24', '--h', '24', '--gamma', '0.75', '--bars-per-face', '2', '--proposals', '0'];
-  it('0 when every load passes, with the summary line', () => {
-    const r = run([...section, '--pu', '900', '--mu', '600', '--rho', '0.04']);
+  it('0 when every load passes, with the summary line', async () => {
+    const r = await run([...section, '--pu', '900', '--mu', '600', '--rho', '0.04']);
     expect(r.status).toBe(0);
     expect(r.stdout).toContain('Summary: all 1 load pass');
   });
-  it('1 when a load fails, and the row says FAILS', () => {
-    const r = run([...section, '--pu', '900', '--mu', '600', '--rho', '0.01']);
+  it('1 when a load fails, and the row says FAILS', async () => {
+    const r = await run([...section, '--pu', '900', '--mu', '600', '--rho', '0.01']);
     expect(r.status).toBe(1);
     expect(r.stdout).toMatch(/FAILS/);
     expect(r.stdout).toContain('1 of 1 load does not pass (1 fails)');
   });
-  it('1 when a load is unstable (ACI 318-19 6.6.4.5.2: Pu ≥ 0.75·Pc, Pc = 373 kip by hand)', () => {
-    const r = run(['--fc', '6', '--fy', '60', '--b', '20', '--h', '20', '--cover', '1.5', '--tie', '#4', '--bar', '#10', '--arrangement', 'four-faces', '--bars-per-face', '3', '--pu', '700', '--mu', '180', '--m1', '-90', '--klu', '52ft', '--beta-dns', '0.6']);
+  it('1 when a load is unstable (ACI 318-19 6.6.4.5.2: Pu ≥ 0.75·Pc, Pc = 373 kip by hand)', async () => {
+    const r = await run(['--fc', '6', '--fy', '60', '--b', '20', '--h', '20', '--cover', '1.5', '--tie', '#4', '--bar', '#10', '--arrangement', 'four-faces', '--bars-per-face', '3', '--pu', '700', '--mu', '180', '--m1', '-90', '--klu', '52ft', '--beta-dns', '0.6']);
     expect(r.status).toBe(1);
     expect(r.stdout).toContain('UNSTABLE');
     expect(r.stdout).not.toContain('not possible (ρg');
   });
-  it('2 for bad input, one line naming the flag', () => {
-    const r = run([...section, '--pu', '900', '--mu', 'abc']);
+  it('2 for bad input, one line naming the flag', async () => {
+    const r = await run([...section, '--pu', '900', '--mu', 'abc']);
     expect(r.status).toBe(2);
     expect(r.stderr.trim().split('\n')).toHaveLength(1);
     expect(r.stderr).toContain('--mu');
   });
-  it('3 when the report cannot be written (a full disk, injected), and no temporary file is left', () => {
+  it('3 when the report cannot be written (a full disk, injected), and no temporary file is left', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'pmchart-exit3-'));
     const file = join(dir, 'c.txt');
-    const r = spawnSync(process.execPath, [bin, 'check', ...section, '--pu', '900', '--mu', '600', '--report', file], {
-      encoding: 'utf8',
-      env: { ...process.env, PMCHART_INJECT_FAULT: 'write:c.txt' },
-    });
-    expect(r.status).toBe(3);
-    expect(r.stderr).toContain('--report');
+    faults.write = 'c.txt';
+    const r = await runCli(['check', ...section, '--pu', '900', '--mu', '600', '--report', file]);
+    clearFaults();
+    expect(r.code).toBe(3);
+    expect(r.stderr).toBe(`pmchart: --report: ${file} cannot be written (ENOSPC)\n`);
     expect(readdirSync(dir)).toEqual([]);
   });
 });

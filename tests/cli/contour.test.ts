@@ -1,14 +1,13 @@
-/** `pmchart contour`: the runner and the built CLI (npm test builds first). */
+/** `pmchart contour`: the runner and the CLI in-process. */
 import { mkdtempSync, readdirSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { spawnSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
 import { runContour } from '../../src/cli/contour.js';
 import { expectClose } from '../helpers/tolerance.js';
+import { cli as inProcess } from '../helpers/run-cli.js';
 
-const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
-const cli = (args: string[]) => spawnSync(process.execPath, [bin, ...args], { encoding: 'utf8' });
+const cli = (args: string[]) => inProcess(args);
 const flags = { fc: '4', fy: '60', b: '20', h: '20', arrangement: 'four-faces', barsPerFace: '4', gamma: '0.75', rho: '0.02', pu: '300' };
 
 describe('runContour', () => {
@@ -42,20 +41,20 @@ describe('runContour', () => {
 });
 
 describe('pmchart contour (CLI)', () => {
-  it('exits 0 and prints CSV', () => {
-    const r = cli(['contour', '--fc', '4', '--fy', '60', '--b', '16', '--h', '24', '--gamma', '0.75', '--rho', '0.02', '--pu', '250', '--points', '16']);
+  it('exits 0 and prints CSV', async () => {
+    const r = await cli(['contour', '--fc', '4', '--fy', '60', '--b', '16', '--h', '24', '--gamma', '0.75', '--rho', '0.02', '--pu', '250', '--points', '16']);
     expect(r.status).toBe(0);
     expect(r.stdout.trim().split('\n').length).toBe(17);
   });
-  it('a load above the cap: one line naming --pu and the range, exit 2', () => {
-    const r = cli(['contour', '--fc', '4', '--fy', '60', '--b', '20', '--h', '20', '--gamma', '0.75', '--rho', '0.02', '--pu', '3000']);
+  it('a load above the cap: one line naming --pu and the range, exit 2', async () => {
+    const r = await cli(['contour', '--fc', '4', '--fy', '60', '--b', '20', '--h', '20', '--gamma', '0.75', '--rho', '0.02', '--pu', '3000']);
     expect(r.status).toBe(2);
     expect(r.stderr.trim().split('\n').length).toBe(1);
     expect(r.stderr).toMatch(/--pu: 3000 is outside .* kip/);
   });
-  it('without a size or a ρg: exit 2 naming the flag', () => {
-    expect(cli(['contour', '--fc', '4', '--fy', '60', '--gamma', '0.75', '--rho', '0.02', '--pu', '300']).stderr).toMatch(/--b\/--h/);
-    const r = cli(['contour', '--fc', '4', '--fy', '60', '--b', '20', '--h', '20', '--gamma', '0.75', '--pu', '300']);
+  it('without a size or a ρg: exit 2 naming the flag', async () => {
+    expect((await cli(['contour', '--fc', '4', '--fy', '60', '--gamma', '0.75', '--rho', '0.02', '--pu', '300'])).stderr).toMatch(/--b\/--h/);
+    const r = await cli(['contour', '--fc', '4', '--fy', '60', '--b', '20', '--h', '20', '--gamma', '0.75', '--pu', '300']);
     expect(r.status).toBe(2);
     expect(r.stderr).toMatch(/--rho/);
   });

@@ -7,24 +7,11 @@
  * One pack serves every case. A missing or stale dist/ fails here, loudly: the build is the thing tested.
  */
 import { execFileSync, spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, realpathSync, statSync, symlinkSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, realpathSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
-
-const root = realpathSync(new URL('../../', import.meta.url).pathname);
-/** What `npm run build` writes and the package needs at run time. */
-const BUILT = ['dist/index.js', 'dist/bundle/pmchart.js', 'dist/bundle/worker.js', 'dist/page/browser.js'];
-
-/** The newest modification time of any file under `dir`. */
-function newest(dir: string): number {
-  let t = 0;
-  for (const e of readdirSync(dir, { withFileTypes: true })) {
-    const p = join(dir, e.name);
-    t = Math.max(t, e.isDirectory() ? newest(p) : statSync(p).mtimeMs);
-  }
-  return t;
-}
+import { BUILT, requireFreshBuild, root } from '../helpers/built.js';
 
 const tmp = mkdtempSync(join(tmpdir(), 'pmchart-installed-'));
 /** where the package is installed, as npm would place it for a project in tmp/app */
@@ -38,10 +25,7 @@ const pmchart = (args: string[]) => spawnSync(process.execPath, [join(pkg, 'bin'
 
 describe('the packed package, installed elsewhere (npm pack)', () => {
   beforeAll(() => {
-    const missing = BUILT.filter((f) => !existsSync(join(root, f)));
-    if (missing.length) throw new Error(`dist/ is incomplete (${missing.join(', ')}); run \`npm run build\` before this test`);
-    const built = Math.min(...BUILT.map((f) => statSync(join(root, f)).mtimeMs));
-    if (newest(join(root, 'src')) > built) throw new Error('dist/ is older than src/; run `npm run build` before this test');
+    requireFreshBuild();
     const packed = JSON.parse(
       execFileSync('npm', ['pack', '--json', '--ignore-scripts', '--pack-destination', tmp], { cwd: root, encoding: 'utf8', env: { ...process.env, npm_config_offline: 'true', npm_config_audit: 'false', npm_config_fund: 'false' } }),
     ) as { filename: string }[];

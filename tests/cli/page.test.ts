@@ -1,25 +1,28 @@
 /**
- * `pmchart page` through the built CLI: one self-contained HTML file, deterministic, with a CSP that
+ * `pmchart page` through the CLI in-process (it reads the page bundle `npm run build` writes): one self-contained HTML file, deterministic, with a CSP that
  * allows exactly its own inline script and style by hash; bad presets exit 2 and leave no file.
  * (The page in a browser: tests/page/page.test.ts.)
  */
 import { createHash } from 'node:crypto';
-import { spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { cli as inProcess, type CliResult } from '../helpers/run-cli.js';
 
-const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
-const cli = (args: string[]) => spawnSync(process.execPath, [bin, ...args], { encoding: 'utf8' });
+const cli = (args: string[]) => inProcess(args);
 const dir = mkdtempSync(join(tmpdir(), 'pmchart-page-cli-'));
 const flags = ['--fc', '7ksi', '--fy', '80ksi', '--gamma', '0.78', '--arrangement', 'four-faces', '--bars-per-face', '4', '--date', '2026-03-02'];
 const hash = (s: string) => `'sha256-${createHash('sha256').update(s, 'utf8').digest('base64')}'`;
 
 describe('pmchart page (CLI)', () => {
   const a = join(dir, 'a.html');
-  const first = cli(['page', '--out', a, ...flags]);
-  const html = existsSync(a) ? readFileSync(a, 'utf8') : '';
+  let first: CliResult;
+  let html = '';
+  beforeAll(async () => {
+    first = await cli(['page', '--out', a, ...flags]);
+    html = existsSync(a) ? readFileSync(a, 'utf8') : '';
+  });
 
   it('writes one HTML file holding its script and style, and nothing it loads from elsewhere', () => {
     expect(first.status).toBe(0);
@@ -47,42 +50,42 @@ describe('pmchart page (CLI)', () => {
     expect(html).toContain('For use by qualified engineers only.');
   });
 
-  it('gives the same bytes for the same presets', () => {
+  it('gives the same bytes for the same presets', async () => {
     const b = join(dir, 'b.html');
-    expect(cli(['page', '--out', b, ...flags]).status).toBe(0);
+    expect((await cli(['page', '--out', b, ...flags])).status).toBe(0);
     expect(readFileSync(b, 'utf8')).toBe(html);
   });
 
-  it('checks presets as `pmchart table` does: bad input exits 2 with one line and writes nothing', () => {
+  it('checks presets as `pmchart table` does: bad input exits 2 with one line and writes nothing', async () => {
     const bad = join(dir, 'bad.html');
     for (const [args, message] of [
       [['--gamma', '1.2', '--fc', '4', '--fy', '60'], 'pmchart: --gamma: 1.2 is outside 0.3–0.95\n'],
       [['--gamma', '0.8', '--fc', 'abc', '--fy', '60'], null],
       [['--grid', '0.2'], 'pmchart: --grid: 0.2 is not one of the allowed values (allowed: 0.05, 0.1)\n'],
     ] as const) {
-      const r = cli(['page', '--out', bad, ...args]);
+      const r = await cli(['page', '--out', bad, ...args]);
       expect(r.status).toBe(2);
       expect(r.stderr.split('\n')).toHaveLength(2);
       if (message) expect(r.stderr).toBe(message);
       expect(existsSync(bad)).toBe(false);
     }
-    const txt = cli(['page', '--out', join(dir, 'x.txt')]);
+    const txt = await cli(['page', '--out', join(dir, 'x.txt')]);
     expect(txt.status).toBe(2);
     expect(txt.stderr).toContain('--out');
   });
 
-  it('reads a load CSV as `pmchart check --loads` does, naming the line of a bad cell', () => {
+  it('reads a load CSV as `pmchart check --loads` does, naming the line of a bad cell', async () => {
     const csv = join(dir, 'loads.csv');
     writeFileSync(csv, 'id,Pu,Mu\nC1,900,600\nC2,abc,100\n');
-    const r = cli(['page', '--out', join(dir, 'l.html'), ...flags, '--loads', csv]);
+    const r = await cli(['page', '--out', join(dir, 'l.html'), ...flags, '--loads', csv]);
     expect(r.status).toBe(2);
     expect(r.stderr).toMatch(/^pmchart: --loads line 3 Pu: /);
   });
 
-  it('works from any folder: run with the working directory outside the project, it writes the page (no bundling at run time)', () => {
+  it('works from any folder: run with the working directory outside the project, it writes the page (no bundling at run time)', async () => {
     // the bug: the page was bundled at run time by esbuild, which resolved from the working directory
     const elsewhere = mkdtempSync(join(tmpdir(), 'pmchart-page-cwd-'));
-    const r = spawnSync(process.execPath, [bin, 'page', '--out', 'here.html', ...flags], { encoding: 'utf8', cwd: elsewhere });
+    const r = await inProcess(['page', '--out', 'here.html', ...flags], { cwd: elsewhere });
     expect(r.stderr).toBe('');
     expect(r.status).toBe(0);
     const written = readFileSync(join(elsewhere, 'here.html'), 'utf8');

@@ -10,9 +10,10 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import fc from 'fast-check';
 import { PDFDict, PDFDocument, PDFHexString, PDFName, PDFNumber } from 'pdf-lib';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { runCheck, type CheckOptions } from '../../src/cli/check.js';
 import { runSchedule } from '../../src/cli/schedule.js';
+import { bin, requireFreshBuild } from '../helpers/built.js';
 import { runCli } from '../helpers/run-cli.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'pmchart-schedule-'));
@@ -188,11 +189,10 @@ describe('row order changes nothing (property)', () => {
 });
 
 describe('built binary: --jobs and the report', () => {
-  const bin = resolve('bin/pmchart.js');
-  const built = existsSync(resolve('dist/bundle/pmchart.js')) && existsSync(resolve('dist/bundle/schedule-worker.js'));
+  beforeAll(requireFreshBuild);
   const run = (args: string[]) => spawnSync(process.execPath, [bin, ...args], { cwd: tmpdir(), encoding: 'utf8' });
 
-  it.runIf(built)('gives the same bytes with --jobs 1 and --jobs 3, run from /tmp', () => {
+  it('gives the same bytes with --jobs 1 and --jobs 3, run from /tmp', () => {
     const common = ['schedule', sched, '--loads', loads, '--columns', MAP, '--compression', 'negative'];
     const one = run([...common, '--json', '--jobs', '1']);
     const three = run([...common, '--json', '--jobs', '3']);
@@ -202,7 +202,7 @@ describe('built binary: --jobs and the report', () => {
     expect(run([...common, '--jobs', '3']).stdout).toBe(run(common).stdout);
   });
 
-  it.runIf(built)('writes a bound report: a summary page, a sheet per mark, a bookmark per mark, fixed dates', async () => {
+  it('writes a bound report: a summary page, a sheet per mark, a bookmark per mark, fixed dates', async () => {
     const pdf = join(dir, 'report.pdf');
     const r = run(['schedule', sched, '--loads', loads, '--columns', MAP, '--compression', 'negative', '--report', pdf, '--date', '2026-03-02', '--project', 'Invented Tower']);
     expect([0, 1]).toContain(r.status);
@@ -219,5 +219,5 @@ describe('built binary: --jobs and the report', () => {
     const again = join(dir, 'report2.pdf');
     run(['schedule', sched, '--loads', loads, '--columns', MAP, '--compression', 'negative', '--report', again, '--date', '2026-03-02', '--project', 'Invented Tower']);
     expect(readFileSync(again).equals(readFileSync(pdf))).toBe(true);
-  });
+  }, 180_000);
 });

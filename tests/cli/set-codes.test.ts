@@ -1,25 +1,24 @@
 /**
- * `pmchart set` with the other bases through the built CLI: the European demo (EN 1992-1-1, ω families,
+ * `pmchart set` with the other bases through the CLI in-process: the European demo (EN 1992-1-1, ω families,
  * an αcc variant) and a CSA A23.3-19 fixture (tests/fixtures/csa-set.json, invented office and project).
  * Checks the book's front matter and sheets say what the basis is (pdftotext), and the ω-keyed tables.
  */
-import { execFileSync, spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { PDFDocument } from 'pdf-lib';
 import { describe, expect, it } from 'vitest';
+import { cli as inProcess } from '../helpers/run-cli.js';
 
 const root = new URL('../../', import.meta.url).pathname;
-const bin = join(root, 'bin/pmchart.js');
-const built = existsSync(join(root, 'dist', 'cli', 'main.js'));
 const tmp = mkdtempSync(join(tmpdir(), 'pmchart-set-codes-'));
-const set = (file: string) => spawnSync(process.execPath, [bin, 'set', file, '--out', tmp, '--no-progress', '--jobs', '1'], { encoding: 'utf8' });
+const set = (file: string) => inProcess(['set', file, '--out', tmp, '--no-progress', '--jobs', '1']);
 const pdfText = (pdf: string, first: number, last = first) => execFileSync('pdftotext', ['-f', String(first), '-l', String(last), '-layout', pdf, '-'], { encoding: 'utf8' });
 
-describe.runIf(built)('pmchart set with EN 1992-1-1 and CSA A23.3-19', () => {
+describe('pmchart set with EN 1992-1-1 and CSA A23.3-19', () => {
   it('makes the European demo book: fck/fyk, factors per sheet group, ν/μ, ω families', async () => {
-    const r = set(join(root, 'charts-config/demo-eu.json'));
+    const r = await set(join(root, 'charts-config/demo-eu.json'));
     expect(r.status, r.stderr).toBe(0);
     const dir = join(tmp, 'kaiserhafen-lofts-block-d');
     const pdf = join(dir, 'book.pdf');
@@ -46,7 +45,7 @@ describe.runIf(built)('pmchart set with EN 1992-1-1 and CSA A23.3-19', () => {
   }, 60_000);
 
   it('makes a CSA book with f′c/fy, φc, φs, α1, β1 and Pr in the title block', async () => {
-    const r = set(join(root, 'tests/fixtures/csa-set.json'));
+    const r = await set(join(root, 'tests/fixtures/csa-set.json'));
     expect(r.status, r.stderr).toBe(0);
     const pdf = join(tmp, 'birchwater-depot-csa', 'book.pdf');
     const sheet = pdfText(pdf, 3);

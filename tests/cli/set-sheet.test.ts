@@ -1,28 +1,27 @@
-/** `pmchart set` and `pmchart sheet` through the built CLI (npm test builds first), and the lazy-import rule. */
-import { spawnSync } from 'node:child_process';
+/** `pmchart set` and `pmchart sheet` through the CLI in-process, and the lazy-import rule. */
 import { existsSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { cli as inProcess } from '../helpers/run-cli.js';
 
 const root = new URL('../../', import.meta.url).pathname;
-const bin = join(root, 'bin/pmchart.js');
-const cli = (args: string[], env: Record<string, string> = {}) => spawnSync(process.execPath, [bin, ...args], { encoding: 'utf8', env: { ...process.env, ...env } });
+const cli = (args: string[], env: Record<string, string> = {}) => inProcess(args, { env });
 const tmp = mkdtempSync(join(tmpdir(), 'pmchart-cli-'));
 
 describe('pmchart set', () => {
-  it('rejects a bad set with one line naming the field, exit 2, and writes nothing', () => {
+  it('rejects a bad set with one line naming the field, exit 2, and writes nothing', async () => {
     const demo = JSON.parse(readFileSync(join(root, 'charts-config/demo.json'), 'utf8'));
     demo.sheets[0].gamma = { from: 0.7, to: 1.2, step: 0.25 };
     const file = join(tmp, 'bad.json');
     writeFileSync(file, JSON.stringify(demo));
-    const r = cli(['set', file, '--out', join(tmp, 'out')]);
+    const r = await cli(['set', file, '--out', join(tmp, 'out')]);
     expect(r.status).toBe(2);
     expect(r.stderr).toBe('pmchart: sheets[0].gamma.to: 1.2 is outside 0.3–0.95\n'); // the schema names the field of the range (issue 14)
     expect(existsSync(join(tmp, 'out'))).toBe(false);
   });
 
-  it('makes a small set with plain progress lines when stderr is not a terminal', () => {
+  it('makes a small set with plain progress lines when stderr is not a terminal', async () => {
     const file = join(tmp, 'small.json');
     writeFileSync(
       file,
@@ -37,7 +36,7 @@ describe('pmchart set', () => {
         sheets: [{ fc: '35MPa', fy: '420MPa', gamma: [0.7, 0.8], arrangement: { kind: 'four-faces', barsPerFace: 3 } }],
       }),
     );
-    const r = cli(['set', file, '--out', join(tmp, 'out2')]);
+    const r = await cli(['set', file, '--out', join(tmp, 'out2')]);
     expect(r.stderr).toBe('pmchart: small-set: 1/2 sheets\npmchart: small-set: 2/2 sheets\n');
     expect(r.status).toBe(0);
     expect(r.stdout).toContain('small-set: 2 sheets');
@@ -47,9 +46,9 @@ describe('pmchart set', () => {
 });
 
 describe('pmchart sheet', () => {
-  it('writes one sheet from the section flags (SVG by extension)', () => {
+  it('writes one sheet from the section flags (SVG by extension)', async () => {
     const out = join(tmp, 'one.svg');
-    const r = cli(['sheet', '--fc', '4', '--fy', '60', '--gamma', '0.8', '--bars-per-face', '3', '--rho', '0.01,0.02', '--office', 'Tamsin Yard Engineers (invented)', '--out', out]);
+    const r = await cli(['sheet', '--fc', '4', '--fy', '60', '--gamma', '0.8', '--bars-per-face', '3', '--rho', '0.01,0.02', '--office', 'Tamsin Yard Engineers (invented)', '--out', out]);
     expect(r.stderr).toBe('');
     expect(r.status).toBe(0);
     const svg = readFileSync(out, 'utf8');
@@ -57,20 +56,20 @@ describe('pmchart sheet', () => {
     expect(svg).toContain('Tamsin Yard Engineers (invented)');
   });
 
-  it('rejects flags out of range with the flag name', () => {
-    const r = cli(['sheet', '--fc', '4', '--fy', '60', '--gamma', '1.2', '--out', join(tmp, 'x.pdf')]);
+  it('rejects flags out of range with the flag name', async () => {
+    const r = await cli(['sheet', '--fc', '4', '--fy', '60', '--gamma', '1.2', '--out', join(tmp, 'x.pdf')]);
     expect(r.status).toBe(2);
     expect(r.stderr).toBe('pmchart: --gamma: 1.2 is outside 0.3–0.95\n');
-    const r2 = cli(['sheet', '--fc', '4', '--fy', '60', '--gamma', '0.8', '--out', join(tmp, 'x.jpg')]);
+    const r2 = await cli(['sheet', '--fc', '4', '--fy', '60', '--gamma', '0.8', '--out', join(tmp, 'x.jpg')]);
     expect(r2.stderr).toMatch(/^pmchart: --out: .*x\.jpg must end in \.svg, \.png or \.pdf\n$/);
   });
 
-  it('gives a deterministic PDF with SOURCE_DATE_EPOCH', () => {
+  it('gives a deterministic PDF with SOURCE_DATE_EPOCH', async () => {
     const a = join(tmp, 'a.pdf');
     const b = join(tmp, 'b.pdf');
     const args = ['sheet', '--fc', '5', '--fy', '60', '--gamma', '0.75', '--shape', 'circle', '--arrangement', 'ring', '--bars', '8', '--transverse', 'spiral', '--rho', '0.02'];
-    expect(cli([...args, '--out', a], { SOURCE_DATE_EPOCH: '1767225600' }).status).toBe(0);
-    expect(cli([...args, '--out', b], { SOURCE_DATE_EPOCH: '1767225600' }).status).toBe(0);
+    expect((await cli([...args, '--out', a], { SOURCE_DATE_EPOCH: '1767225600' })).status).toBe(0);
+    expect((await cli([...args, '--out', b], { SOURCE_DATE_EPOCH: '1767225600' })).status).toBe(0);
     expect(Buffer.compare(readFileSync(a), readFileSync(b))).toBe(0);
   });
 });
@@ -104,8 +103,8 @@ describe('pmchart sheet --omega', () => {
     const rhos = sheetRhos(set, basis);
     expect(rhos[1]!).toBeCloseTo((0.4 * 40) / (500 / 1.15), 10);
   });
-  it('refuses --omega with --rho, one line, exit 2', () => {
-    const r = cli(['sheet', '--fc', '4', '--fy', '60', '--gamma', '0.8', '--omega', '0.1', '--rho', '0.01', '--out', join(tmp, 'x.pdf')]);
+  it('refuses --omega with --rho, one line, exit 2', async () => {
+    const r = await cli(['sheet', '--fc', '4', '--fy', '60', '--gamma', '0.8', '--omega', '0.1', '--rho', '0.01', '--out', join(tmp, 'x.pdf')]);
     expect(r.status).toBe(2);
     expect(r.stderr).toBe('pmchart: --omega: and --rho both set the curves; give one of them\n');
     expect(existsSync(join(tmp, 'x.pdf'))).toBe(false);

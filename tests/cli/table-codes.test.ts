@@ -1,11 +1,10 @@
 /** `pmchart table` with the EN 1992-1-1 and CSA A23.3-19 bases, and the --omega families. */
-import { spawnSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
 import { runTable } from '../../src/cli/table.js';
 import { expectClose } from '../helpers/tolerance.js';
+import { cli as inProcess } from '../helpers/run-cli.js';
 
-const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
-const cli = (args: string[]) => spawnSync(process.execPath, [bin, ...args], { encoding: 'utf8' });
+const cli = (args: string[]) => inProcess(args);
 const ec2 = { code: 'en1992-1-1', units: 'si', fc: '30', fy: '500', gamma: '0.8' };
 
 interface Kp {
@@ -50,8 +49,8 @@ describe('pmchart table --code en1992-1-1 (source: EN 1992-1-1:2004, first princ
     expect(() => runTable({ ...ec2, omega: '0.2', rho: '0.01' })).toThrowError(/^--omega: and --rho both set the families/);
     expect(() => runTable({ ...ec2, omega: '3' })).toThrowError('--omega: 3 is outside 0.0217–2.17');
   });
-  it('exits 2 with one line when asked for US units', () => {
-    const r = cli(['table', '--code', 'en1992-1-1', '--units', 'us', '--fc', '4', '--fy', '60', '--gamma', '0.8']);
+  it('exits 2 with one line when asked for US units', async () => {
+    const r = await cli(['table', '--code', 'en1992-1-1', '--units', 'us', '--fc', '4', '--fy', '60', '--gamma', '0.8']);
     expect(r.status).toBe(2);
     expect(r.stderr).toBe('pmchart: --units: us is not available for EN 1992-1-1:2004 (allowed: si)\n');
     expect(r.stdout).toBe('');

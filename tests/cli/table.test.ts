@@ -1,16 +1,15 @@
-/** `pmchart table` end to end through the built CLI (npm test builds first), against first-principles chart points (ACI 318-19 22.2 strain compatibility, hand calculation: f′c 4 ksi, fy 60 ksi, γ 0.80, two faces). */
-import { execFileSync, spawnSync } from 'node:child_process';
+/** `pmchart table` end to end through the CLI in-process, against first-principles chart points (ACI 318-19 22.2 strain compatibility, hand calculation: f′c 4 ksi, fy 60 ksi, γ 0.80, two faces). */
 import { describe, expect, it } from 'vitest';
 import { runTable } from '../../src/cli/table.js';
 import { expectClose } from '../helpers/tolerance.js';
+import { cli as inProcess } from '../helpers/run-cli.js';
 
-const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
-const cli = (args: string[]) => spawnSync(process.execPath, [bin, ...args], { encoding: 'utf8' });
+const cli = (args: string[]) => inProcess(args);
 const base = ['table', '--code', 'aci318-19', '--units', 'us', '--fc', '4', '--fy', '60', '--shape', 'rectangle', '--gamma', '0.8', '--arrangement', 'two-faces'];
 
 describe('pmchart table (CLI)', () => {
-  it('prints CSV with the fixed leading columns and ≥ 400 rows per ρg', () => {
-    const r = cli([...base, '--rho', '0.01:0.02:0.01', '--format', 'csv']);
+  it('prints CSV with the fixed leading columns and ≥ 400 rows per ρg', async () => {
+    const r = await cli([...base, '--rho', '0.01:0.02:0.01', '--format', 'csv']);
     expect(r.status).toBe(0);
     const lines = r.stdout.trim().split('\n');
     expect(lines[0]).toBe('rho_g,c_over_h,eps_t,phi,Pn_norm,Mn_norm,phiPn_norm,phiMn_norm');
@@ -23,8 +22,8 @@ describe('pmchart table (CLI)', () => {
     expectClose(bal[5]!, 0.8876, 0.001);
     expectClose(bal[3]!, 0.65, 1e-9);
   });
-  it('prints JSON with metadata and key points per ρg', () => {
-    const out = JSON.parse(execFileSync(process.execPath, [bin, ...base, '--rho', '0.04', '--format', 'json'], { encoding: 'utf8' }));
+  it('prints JSON with metadata and key points per ρg', async () => {
+    const out = JSON.parse((await inProcess([...base, '--rho', '0.04', '--format', 'json'])).stdout);
     expect(out.code).toBe('aci318-19');
     expect(out.units).toBe('us');
     expect(out.normalisation.unit).toBe('ksi');
@@ -42,7 +41,7 @@ describe('pmchart table (CLI)', () => {
   it('gives identical bytes on two runs', () => {
     expect(runTable({ fc: '4', fy: '60', gamma: '0.8' })).toBe(runTable({ fc: '4', fy: '60', gamma: '0.8' }));
   });
-  it('rejects bad input with one line naming the flag and range, exit 2, no stack trace', () => {
+  it('rejects bad input with one line naming the flag and range, exit 2, no stack trace', async () => {
     for (const [args, msg] of [
       [['--gamma', '1.2'], '--gamma: 1.2 is outside 0.3–0.95'],
       [['--fc', '30'], '--fc: 30 ksi is outside 2.5–20 ksi'],
@@ -57,7 +56,7 @@ describe('pmchart table (CLI)', () => {
         if (at >= 0) merged[at + 1] = args[i + 1]!;
         else merged.push(args[i]!, args[i + 1]!);
       }
-      const r = cli(merged);
+      const r = await cli(merged);
       expect(r.status).toBe(2);
       expect(r.stderr).toBe(`pmchart: ${msg}\n`);
       expect(r.stdout).toBe('');

@@ -11,9 +11,10 @@ import { join } from 'node:path';
 import { chromium, type Browser } from 'playwright-core';
 import { afterAll, describe, expect, it } from 'vitest';
 import { esc } from '../../src/page/markup.js';
+import { requireFreshBuild } from '../helpers/built.js';
+import { cli as inProcess } from '../helpers/run-cli.js';
 
 const CHROMIUM = process.env.PMCHART_CHROMIUM ?? '/usr/bin/chromium';
-const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
 const dir = mkdtempSync(join(tmpdir(), 'pmchart-page-esc-'));
 const crafted = `B" hidden data-x="`;
 let browser: Browser | undefined;
@@ -27,12 +28,13 @@ describe('page escaping', () => {
     expect(esc(`a"b'c<d>&`)).toBe(`a&quot;b'c&lt;d&gt;&amp;`);
   });
   it('a load id with " stays inside its attribute: every row is shown and keeps its id', async () => {
+    requireFreshBuild(); // the page's browser code is dist/page/browser.js, built from src/page
     if (!existsSync(CHROMIUM)) throw new Error(`Chromium is not installed at ${CHROMIUM}`);
     const loads = join(dir, 'loads.csv');
     // the id quoted as CSV quotes it ("" for ")
     writeFileSync(loads, `id,Pu,Mu\nA,100,50\n"${crafted.replaceAll('"', '""')}",900,700\n`);
     const file = join(dir, 'page.html');
-    const r = spawnSync(process.execPath, [bin, 'page', '--out', file, '--fc', '4', '--fy', '60', '--b', '24', '--h', '24', '--gamma', '0.8', '--loads', loads, '--date', '2026-01-05'], { encoding: 'utf8', cwd: tmpdir() });
+    const r = await inProcess(['page', '--out', file, '--fc', '4', '--fy', '60', '--b', '24', '--h', '24', '--gamma', '0.8', '--loads', loads, '--date', '2026-01-05'], { cwd: tmpdir() });
     expect(r.stderr).toBe('');
     browser = await chromium.launch({ executablePath: CHROMIUM, args: process.getuid?.() === 0 ? ['--no-sandbox'] : [] });
     const page = await browser.newPage();

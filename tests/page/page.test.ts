@@ -15,12 +15,13 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readChartSet } from '../../src/config/read.js';
 import { runCli } from '../helpers/run-cli.js';
 import { expectClose } from '../helpers/tolerance.js';
+import { requireFreshBuild } from '../helpers/built.js';
+import { cli as inProcess } from '../helpers/run-cli.js';
 
 const CHROMIUM = process.env.PMCHART_CHROMIUM ?? '/usr/bin/chromium';
 const INSTALL = 'sudo apt-get update && sudo apt-get install -y chromium';
-const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
-const cli = (args: string[]) => spawnSync(process.execPath, [bin, ...args], { encoding: 'utf8' });
-const cliJson = (args: string[]) => JSON.parse(execFileSync(process.execPath, [bin, ...args], { encoding: 'utf8' }));
+const cli = (args: string[]) => inProcess(args);
+const cliJson = async (args: string[]) => JSON.parse((await inProcess(args)).stdout);
 
 const dir = mkdtempSync(join(tmpdir(), 'pmchart-page-'));
 const file = join(dir, 'column-charts.html');
@@ -49,10 +50,11 @@ const visibleMessages = () =>
 
 describe.sequential('pmchart page in Chromium', () => {
   beforeAll(async () => {
+    requireFreshBuild(); // the page's browser code is dist/page/browser.js, built from src/page
     if (!existsSync(CHROMIUM)) {
       throw new Error(`Chromium is not installed at ${CHROMIUM}; the page tests need it. Install it with: ${INSTALL}`);
     }
-    const r = cli(['page', '--out', file, ...section, '--date', '2026-01-05']);
+    const r = await cli(['page', '--out', file, ...section, '--date', '2026-01-05']);
     expect(r.stderr).toBe('');
     expect(r.status).toBe(0);
     browser = await chromium.launch({ executablePath: CHROMIUM, args: process.getuid?.() === 0 ? ['--no-sandbox'] : [] });
@@ -94,7 +96,7 @@ describe.sequential('pmchart page in Chromium', () => {
     await setField('gamma', '0.78');
     expect(await visibleMessages()).toEqual({});
     const fam = (await page.evaluate(() => (window as unknown as { pmchartPage: { family(): unknown } }).pmchartPage.family())) as PageFamily;
-    const table = cliJson(['table', '--format', 'json', ...section.map((a) => (a === '4' ? '7ksi' : a === '0.8' ? '0.78' : a))]);
+    const table = await cliJson(['table', '--format', 'json', ...section.map((a) => (a === '4' ? '7ksi' : a === '0.8' ? '0.78' : a))]);
     expect(fam.gamma).toBe(0.78);
     expect(fam.curves.map((c) => c.rho)).toEqual(table.curves.map((c: { rho_g: number }) => c.rho_g));
     fam.curves.forEach((c, j) => {
@@ -132,7 +134,7 @@ describe.sequential('pmchart page in Chromium', () => {
     await setField('h', '24');
     await setField('loads', csv);
     expect(await visibleMessages()).toEqual({});
-    const out = cliJson(['check', '--json', ...section.map((a) => (a === '0.8' ? gamma : a)), '--b', '24', '--h', '24', '--loads', loadsFile]);
+    const out = await cliJson(['check', '--json', ...section.map((a) => (a === '0.8' ? gamma : a)), '--b', '24', '--h', '24', '--loads', loadsFile]);
     const cells = await page.$$eval('#results tbody tr', (rows) =>
       rows.map((r) => ({ id: r.getAttribute('data-id'), ...Object.fromEntries([...r.querySelectorAll('td[class]')].map((td) => [td.className, td.getAttribute('data-value')])) })),
     );
@@ -162,12 +164,12 @@ describe.sequential('pmchart page in Chromium', () => {
   it('shows bad input inline, the CLI’s message in field names (not flags), with no exception, and keeps the last chart', async () => {
     const draws = await page.evaluate(() => (window as unknown as { pmchartPage: { draws(): number } }).pmchartPage.draws());
     await setField('gamma', '1.2');
-    const cliGamma = cli(['table', ...section.map((a) => (a === '0.8' ? '1.2' : a))]).stderr.trim().replace(/^pmchart: /, '');
+    const cliGamma = (await cli(['table', ...section.map((a) => (a === '0.8' ? '1.2' : a))])).stderr.trim().replace(/^pmchart: /, '');
     expect(cliGamma.startsWith('--gamma: ')).toBe(true);
     expect((await visibleMessages())['m-gamma']).toBe(cliGamma.replace(/^--gamma: /, 'γ: '));
     await setField('gamma', '0.8');
     await setField('fc', 'abc');
-    const cliFc = cli(['table', ...section.map((a) => (a === '4' ? 'abc' : a))]).stderr.trim().replace(/^pmchart: /, '');
+    const cliFc = (await cli(['table', ...section.map((a) => (a === '4' ? 'abc' : a))])).stderr.trim().replace(/^pmchart: /, '');
     expect(cliFc.startsWith('--fc: ')).toBe(true);
     expect((await visibleMessages())['m-fc']).toBe(cliFc.replace(/^--fc: /, 'f′c (fck): '));
     expect(await page.locator('#chart svg').count()).toBe(1);
@@ -191,7 +193,7 @@ describe.sequential('pmchart page in Chromium', () => {
     await setField('mu', '600');
     await setField('muy', '300');
     const note = await page.locator('#loads-table pre.effects').innerText();
-    const text = cli(['check', ...section, '--b', '24', '--h', '24', '--pu', '900', '--mu', '600', '--muy', '300', '--proposals', '0']).stdout;
+    const text = (await cli(['check', ...section, '--b', '24', '--h', '24', '--pu', '900', '--mu', '600', '--muy', '300', '--proposals', '0'])).stdout;
     expect(note).toContain('exact biaxial ρg required');
     expect(text).toContain(note.trim());
     expect(problems).toEqual([]);

@@ -11,9 +11,10 @@ import { join } from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { FRAGMENT_CAP } from '../../src/page/state.js';
+import { requireFreshBuild } from '../helpers/built.js';
+import { cli as inProcess } from '../helpers/run-cli.js';
 
 const CHROMIUM = process.env.PMCHART_CHROMIUM ?? '/usr/bin/chromium';
-const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
 const dir = mkdtempSync(join(tmpdir(), 'pmchart-page-state-'));
 const file = join(dir, 'state.html');
 const section = ['--fc', '4', '--fy', '60', '--gamma', '0.8', '--arrangement', 'two-faces', '--bars-per-face', '3', '--b', '24', '--h', '24'];
@@ -33,8 +34,9 @@ async function setField(key: string, value: string): Promise<void> {
 
 describe.sequential('page state, keyboard and CSV in Chromium', () => {
   beforeAll(async () => {
+    requireFreshBuild(); // the page's browser code is dist/page/browser.js, built from src/page
     if (!existsSync(CHROMIUM)) throw new Error(`Chromium is not installed at ${CHROMIUM}; install it with: sudo apt-get update && sudo apt-get install -y chromium`);
-    const r = spawnSync(process.execPath, [bin, 'page', '--out', file, ...section, '--date', '2026-01-05'], { encoding: 'utf8' });
+    const r = await inProcess(['page', '--out', file, ...section, '--date', '2026-01-05']);
     expect(r.stderr).toBe('');
     expect(r.status).toBe(0);
     browser = await chromium.launch({ executablePath: CHROMIUM, args: process.getuid?.() === 0 ? ['--no-sandbox'] : [] });
@@ -81,7 +83,7 @@ describe.sequential('page state, keyboard and CSV in Chromium', () => {
     const csv = join(dir, 'saved.csv');
     await download.saveAs(csv);
     expect(readFileSync(csv, 'utf8').split('\n')[1]).toBe('C0,500,100');
-    const r = spawnSync(process.execPath, [bin, 'check', ...section, '--loads', csv, '--json'], { encoding: 'utf8' });
+    const r = await inProcess(['check', ...section, '--loads', csv, '--json']);
     expect(r.stderr).toBe('');
     expect(JSON.parse(r.stdout).results).toHaveLength(150);
   });

@@ -5,7 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import { resolveBasis } from '../../src/codes/registry.js';
 import { checkColumn, type ColumnCheckInput } from '../../src/design/column-check.js';
-import { checkJson, checkText, findingWords } from '../../src/report/check-view.js';
+import { checkJson, checkReportText, checkText, findingWords } from '../../src/report/check-view.js';
 import { barSet } from '../../src/section/bar-tables.js';
 import { gammaFromCover } from '../../src/section/geometry.js';
 
@@ -41,6 +41,18 @@ describe('the detailing status in the views', () => {
     expect(t).toMatch(/γ = 0\.7628 \(from the bars\)/);
     expect(t).toMatch(/maximum aggregate size of 0\.75 in \(assumed; --aggregate to change\)/);
     expect(t).toMatch(/Summary: 1 of 1 load does not pass \(1 detailing\)/);
+  });
+
+  it('the engine gives the broken rule as a fact, the views put it in words: JSON statusReason and governingWhy, and the findings list names detailing rules by title (they were shown as raw ids)', () => {
+    const r = c.results[0]!;
+    expect(r.statusFinding).toMatchObject({ rule: 'clear-spacing', clause: '25.2.3', outcome: 'violated' });
+    expect(r.statusReason).toBe('');
+    const j = JSON.parse(checkJson(c, 'test'));
+    expect(j.results[0].statusReason).toBe('clear spacing ≥ max(1.5 in, 1.5·db, 4/3·dagg): 1.743 < 2.54');
+    expect(j.governingWhy).toBe('detailing clear spacing ≥ max(1.5 in, 1.5·db, 4/3·dagg): 1.743 < 2.54 [25.2.3]');
+    const findings = checkReportText(c, 'test').split('RULE FINDINGS')[1]!;
+    expect(findings).toContain('C-1: clear spacing ≥ max(1.5 in, 1.5·db, 4/3·dagg) [25.2.3]: 1.743 in < 2.54 in BROKEN');
+    expect(findings).not.toMatch(/C-1: (clear-spacing|steel-min|steel-max|cover|bar-size-lap) /);
   });
 
   it('the JSON: status, findings, summary count, section-level detailing and gammaSource "bars"', () => {

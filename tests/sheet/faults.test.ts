@@ -2,16 +2,31 @@
  * Failure and recovery of `pmchart set` (issue 14): a failing write or rename, a render process
  * that dies, a killed parent, SIGTERM, a file where the set folder goes, stale folders of killed
  * runs, and standard output on a full device. Each time the previous book is intact and nothing is
- * left behind. Faults are injected (PMCHART_INJECT_FAULT, src/sheet/files.ts): CI runs as root,
- * which ignores read-only permissions.
+ * left behind. Faults are injected by test-only means (CI runs as root, which ignores read-only
+ * permissions): `node:fs` is mocked here (tests/helpers/fs-faults.mjs), the child pool is handed a test-only
+ * render worker that kills itself (tests/helpers/crashing-render-worker.ts), and a spawned CLI loads the
+ * fs faults with `node --import`. Shipped code reads no switch for any of them.
  */
 import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, mkdtempSync, openSync, readdirSync, readFileSync, renameSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
+import type * as ChildPool from '../../src/io/child-pool.js';
 import { makeChartSet } from '../../src/sheet/pipeline.js';
+import { bin, requireFreshBuild } from '../helpers/built.js';
 import { referenceSet } from '../helpers/chart-set.js';
+import { clearFaults, faults } from '../helpers/fs-faults.mjs';
+
+const crash = vi.hoisted(() => ({ worker: false }));
+vi.mock('node:fs', async (importOriginal) => (await import('../helpers/fs-faults.mjs')).faultyFs(await importOriginal<typeof import('node:fs')>()));
+// the child pool runs the test-only worker that kills itself on chunk 2, when a test asks for it
+vi.mock('../../src/io/child-pool.js', async (importOriginal) => {
+  const real = await importOriginal<typeof ChildPool>();
+  const crashing = new URL('../helpers/crashing-render-worker.ts', import.meta.url).pathname;
+  return { ...real, runInChildren: ((o) => real.runInChildren(crash.worker ? { ...o, workerPath: crashing } : o)) as typeof real.runInChildren };
+});
+const preload = new URL('../helpers/fs-faults-preload.mjs', import.meta.url).pathname;
 
 const set = referenceSet({
   rhoG: [0.01, 0.04],
@@ -19,7 +34,6 @@ const set = referenceSet({
   sheets: [{ fc: 4, fy: 60, gamma: [0.7, 0.8, 0.9], arrangement: { kind: 'two-faces', barsPerFace: 3 } }],
 });
 const generator = 'pmchart 0.1.0';
-const bin = new URL('../../bin/pmchart.js', import.meta.url).pathname;
 const root = mkdtempSync(join(tmpdir(), 'pmchart-faults-'));
 const notes: string[] = [];
 type Failure = { message: string; exitCode: number };
@@ -40,14 +54,15 @@ const intact = (r: { out: string; target: string; book: Buffer }) => {
 };
 
 afterEach(() => {
-  delete process.env.PMCHART_INJECT_FAULT;
+  clearFaults();
+  crash.worker = false;
   notes.length = 0;
 });
 
 describe('faults inside the run', () => {
   it('a write that fails (ENOSPC on book.pdf): exit 3, one line, previous book intact', async () => {
     const r = await withBook();
-    process.env.PMCHART_INJECT_FAULT = 'write:book.pdf';
+    faults.write = 'book.pdf';
     const e = await failure(make(r.out));
     expect(e.message).toMatch(/book\.pdf: cannot be written \(ENOSPC\)$/);
     expect(e.exitCode).toBe(3);
@@ -55,7 +70,7 @@ describe('faults inside the run', () => {
   }, 60_000);
   it('a rename that fails during the swap: the previous set is put back', async () => {
     const r = await withBook();
-    process.env.PMCHART_INJECT_FAULT = 'swap-rename';
+    faults.swapRename = true;
     const e = await failure(make(r.out));
     expect(e.message).toMatch(/reference: cannot be written \(EIO\)$/);
     expect(e.exitCode).toBe(3);
@@ -63,7 +78,7 @@ describe('faults inside the run', () => {
   }, 60_000);
   it('a render process that dies after its sibling finished: one line, exit 1, others stopped, staging removed', async () => {
     const r = await withBook();
-    process.env.PMCHART_INJECT_FAULT = 'child-crash:2';
+    crash.worker = true;
     const e = await failure(make(r.out, { jobs: 2, chunkSize: 1 }));
     expect(e.message).toMatch(/^render process [12] stopped \(SIGKILL\)$/);
     expect(e.exitCode).toBe(1);
@@ -95,7 +110,7 @@ describe('the place the set goes', () => {
     renameSync(r.target, `${r.target}.old-${dead}`);
     mkdirSync(`${r.target}.partial-${dead}`);
     writeFileSync(join(`${r.target}.partial-${dead}`, 'half.svg'), '<svg');
-    process.env.PMCHART_INJECT_FAULT = 'write:book.pdf';
+    faults.write = 'book.pdf';
     await make(r.out).catch(() => undefined);
     expect(notes.some((t) => t.startsWith(`restored ${r.target} from reference.old-${dead}`))).toBe(true);
     expect(notes.some((t) => t.startsWith(`removed ${r.target}.partial-${dead}`))).toBe(true);
@@ -106,6 +121,7 @@ describe('the place the set goes', () => {
 describe('signals and devices (the built CLI)', () => {
   const setFile = join(root, 'set.json');
   beforeAll(() => {
+    requireFreshBuild(); // these run bin/pmchart.js: fail loudly on a missing or stale dist/
     writeFileSync(
       setFile,
       JSON.stringify({
@@ -168,12 +184,12 @@ describe('signals and devices (the built CLI)', () => {
     const out = join(root, 'swap-kill');
     expect(spawnSync(process.execPath, [bin, 'set', setFile, '--out', out, '--no-progress', '--jobs', '1'], { encoding: 'utf8' }).status).toBe(0);
     const book = readFileSync(join(out, 'signals', 'book.pdf'));
-    const child = spawn(process.execPath, [bin, 'set', setFile, '--out', out, '--no-progress', '--jobs', '1'], { env: { ...process.env, PMCHART_INJECT_FAULT: 'swap-pause:60000' }, stdio: 'ignore' });
+    const child = spawn(process.execPath, ['--import', preload, bin, 'set', setFile, '--out', out, '--no-progress', '--jobs', '1'], { env: { ...process.env, TEST_FS_FAULTS: JSON.stringify({ swapPauseMs: 60_000 }) }, stdio: 'ignore' });
     expect(await until(() => readdirSync(out).some((f) => f.startsWith('signals.old-')), 120_000)).toBe(true);
     child.kill('SIGKILL');
     await new Promise((r) => child.once('exit', r));
     expect(existsSync(join(out, 'signals'))).toBe(false);
-    const next = spawnSync(process.execPath, [bin, 'set', setFile, '--out', out, '--no-progress', '--jobs', '1'], { encoding: 'utf8', env: { ...process.env, PMCHART_INJECT_FAULT: 'write:book.pdf' } });
+    const next = spawnSync(process.execPath, ['--import', preload, bin, 'set', setFile, '--out', out, '--no-progress', '--jobs', '1'], { encoding: 'utf8', env: { ...process.env, TEST_FS_FAULTS: JSON.stringify({ write: 'book.pdf' }) } });
     expect(next.stderr).toMatch(/^pmchart: restored .*signals from signals\.old-\d+/m);
     expect(next.status).toBe(3);
     expect(readdirSync(out)).toEqual(['signals']);
