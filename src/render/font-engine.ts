@@ -1,0 +1,121 @@
+/**
+ * The one font engine of sheets and books: DejaVu Sans (regular and bold) read by fontkit. It measures
+ * every text that vega lays out (`installTextMetrics`) and that the label pass places
+ * (`SheetRenderer.measureText`), and it turns text into the glyph ids and advances the PDF writer
+ * (pdf-writer.ts) puts on the page, so the widths a sheet is laid out with are the widths it is drawn with.
+ * node-canvas (cairo) draws PNG only.
+ */
+import fontkit from '@pdf-lib/fontkit';
+import type { Font } from '@pdf-lib/fontkit';
+import { readFileSync } from 'node:fs';
+import { fontPaths } from './environment.js';
+
+export type FontKey = 'regular' | 'bold';
+
+/** A laid-out run: glyph ids (the font's own, before subsetting), each glyph's text, and advances in font units. */
+export interface TextRun {
+  gids: readonly number[];
+  /** the characters each glyph stands for (ToUnicode) */
+  chars: readonly string[];
+  /** the advance the layout gives each glyph (kerning included) */
+  advances: readonly number[];
+  /** each glyph's own advance width (the PDF /W entry) */
+  widths: readonly number[];
+  /** sum of advances, font units */
+  total: number;
+}
+
+export interface FontFace {
+  readonly key: FontKey;
+  readonly font: Font;
+  readonly bytes: Uint8Array;
+  readonly unitsPerEm: number;
+}
+
+/** Runs kept per face; cleared past this many distinct strings (memory stays flat on long books). */
+const RUN_CACHE_LIMIT = 50_000;
+
+export class FontEngine {
+  private readonly runs: Record<FontKey, Map<string, TextRun>> = { regular: new Map(), bold: new Map() };
+
+  private constructor(readonly faces: Record<FontKey, FontFace>) {}
+
+  private static shared: FontEngine | undefined;
+
+  /** The process's engine (fonts are read once). */
+  static get(): FontEngine {
+    if (!FontEngine.shared) {
+      const paths = fontPaths();
+      const face = (key: FontKey, path: string): FontFace => {
+        const bytes = new Uint8Array(readFileSync(path));
+        const font = fontkit.create(bytes as unknown as Buffer) as Font;
+        return { key, font, bytes, unitsPerEm: font.unitsPerEm };
+      };
+      FontEngine.shared = new FontEngine({ regular: face('regular', paths.regular), bold: face('bold', paths.bold) });
+    }
+    return FontEngine.shared;
+  }
+
+  /** The laid-out run of `text` in one face (fontkit shaping with its default features, kerning included). */
+  run(text: string, key: FontKey): TextRun {
+    const cache = this.runs[key];
+    let r = cache.get(text);
+    if (r) return r;
+    const { font } = this.faces[key];
+    const laid = font.layout(text);
+    const gids: number[] = [];
+    const chars: string[] = [];
+    const advances: number[] = [];
+    const widths: number[] = [];
+    let total = 0;
+    laid.glyphs.forEach((g, i) => {
+      gids.push(g.id);
+      chars.push(String.fromCodePoint(...g.codePoints));
+      const adv = laid.positions[i]!.xAdvance;
+      advances.push(adv);
+      widths.push(g.advanceWidth);
+      total += adv;
+    });
+    r = { gids, chars, advances, widths, total };
+    if (cache.size >= RUN_CACHE_LIMIT) cache.clear();
+    cache.set(text, r);
+    return r;
+  }
+
+  /** Width of `text` at `size` (points or pixels alike). */
+  width(text: string, size: number, bold: boolean): number {
+    if (!text || size <= 0) return 0;
+    const key: FontKey = bold ? 'bold' : 'regular';
+    return (this.run(text, key).total * size) / this.faces[key].unitsPerEm;
+  }
+}
+
+/** A CSS weight is bold from 600 up, as a browser picks the bold face of a two-face family. */
+export function isBoldWeight(weight: unknown): boolean {
+  if (weight === undefined || weight === null || weight === '') return false;
+  if (typeof weight === 'number') return weight >= 600;
+  const w = String(weight).trim().toLowerCase();
+  if (w === 'bold' || w === 'bolder') return true;
+  const n = Number(w);
+  return Number.isFinite(n) && n >= 600;
+}
+
+interface VegaTextItem {
+  fontSize?: number | string;
+  fontWeight?: number | string;
+  limit?: number;
+}
+
+/**
+ * Makes vega measure text with this engine instead of its canvas (vega-scenegraph's documented
+ * `textMetrics.width` hook, as vl-convert uses it). A `limit` caps the width the way vega's
+ * truncation does (vega truncates through this same function, so it must not truncate itself).
+ */
+export function installTextMetrics(textMetrics: { width: (item: never, text: unknown) => number }, engine: FontEngine): void {
+  textMetrics.width = ((item: VegaTextItem, text: unknown): number => {
+    const size = item.fontSize != null ? +item.fontSize || 0 : 11;
+    const s = text == null ? '' : String(text).trim();
+    const w = engine.width(s, size, isBoldWeight(item.fontWeight));
+    return item.limit !== undefined && item.limit > 0 ? Math.min(w, item.limit) : w;
+  }) as never;
+}
