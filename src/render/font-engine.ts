@@ -62,20 +62,24 @@ export class FontEngine {
     let r = cache.get(text);
     if (r) return r;
     const { font } = this.faces[key];
-    const laid = font.layout(text);
     const gids: number[] = [];
     const chars: string[] = [];
     const advances: number[] = [];
     const widths: number[] = [];
     let total = 0;
-    laid.glyphs.forEach((g, i) => {
-      gids.push(g.id);
-      chars.push(String.fromCodePoint(...g.codePoints));
-      const adv = laid.positions[i]!.xAdvance;
-      advances.push(adv);
-      widths.push(g.advanceWidth);
-      total += adv;
-    });
+    // one shaping run per script, as pango/HarfBuzz itemise text for cairo (a Greek φ must not make the
+    // Latin text after it lose its kerning); no kerning across runs
+    for (const part of scriptRuns(text)) {
+      const laid = font.layout(part);
+      laid.glyphs.forEach((g, i) => {
+        gids.push(g.id);
+        chars.push(String.fromCodePoint(...g.codePoints));
+        const adv = laid.positions[i]!.xAdvance;
+        advances.push(adv);
+        widths.push(g.advanceWidth);
+        total += adv;
+      });
+    }
     r = { gids, chars, advances, widths, total };
     if (cache.size >= RUN_CACHE_LIMIT) cache.clear();
     cache.set(text, r);
@@ -88,6 +92,36 @@ export class FontEngine {
     const key: FontKey = bold ? 'bold' : 'regular';
     return (this.run(text, key).total * size) / this.faces[key].unitsPerEm;
   }
+}
+
+type Script = 'latin' | 'greek' | 'cyrillic' | undefined;
+
+function scriptOf(cp: number): Script {
+  if ((cp >= 0x41 && cp <= 0x5a) || (cp >= 0x61 && cp <= 0x7a) || (cp >= 0xc0 && cp <= 0x24f && cp !== 0xd7 && cp !== 0xf7) || (cp >= 0x1e00 && cp <= 0x1eff)) return 'latin';
+  if ((cp >= 0x370 && cp <= 0x3ff && cp !== 0x37e && cp !== 0x387) || (cp >= 0x1f00 && cp <= 0x1fff)) return 'greek';
+  if (cp >= 0x400 && cp <= 0x52f) return 'cyrillic';
+  return undefined; // common: digits, spaces, punctuation, symbols
+}
+
+/**
+ * Splits text where its script changes (Unicode Standard Annex #24: characters of the Common script
+ * take the script of the text before them, or at the start the script after them).
+ */
+export function scriptRuns(text: string): string[] {
+  const runs: string[] = [];
+  let cur = '';
+  let script: Script;
+  for (const ch of text) {
+    const s = scriptOf(ch.codePointAt(0)!);
+    if (s !== undefined && script !== undefined && s !== script) {
+      runs.push(cur);
+      cur = '';
+    }
+    if (s !== undefined) script = s;
+    cur += ch;
+  }
+  if (cur) runs.push(cur);
+  return runs;
 }
 
 /** A CSS weight is bold from 600 up, as a browser picks the bold face of a two-face family. */
