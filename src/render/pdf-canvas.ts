@@ -11,6 +11,7 @@
  * the stream (`PageContent`), so render processes can send pages to the parent, which writes fonts once.
  */
 import { createHash } from 'node:crypto';
+import { createRequire } from 'node:module';
 import { deflateSync } from 'node:zlib';
 import { FontEngine, isBoldWeight, type FontKey } from './font-engine.js';
 
@@ -152,14 +153,23 @@ function parseFont(font: string): { size: number; key: FontKey } {
   return f;
 }
 
-/** Image bytes as drawn: node-canvas keeps an image's source (a data URL or a Buffer) in `src`. */
-function pngBytes(image: unknown): Uint8Array {
+/** Pixels per point an image that is not a PNG (an SVG logo) is rasterised at: 288 dpi. */
+const RASTER_SCALE = 4;
+
+/**
+ * PNG bytes of an image as drawn: node-canvas keeps an image's source (a data URL or a Buffer) in `src`;
+ * a PNG goes in as it is, anything else node-canvas loaded (SVG, JPEG) is rasterised at 288 dpi.
+ */
+function pngBytes(image: unknown, w: number, h: number): Uint8Array {
   const src = (image as { src?: unknown }).src;
   let bytes: Uint8Array | undefined;
   if (src instanceof Uint8Array) bytes = src;
   else if (typeof src === 'string' && src.startsWith('data:image/png;base64,')) bytes = Buffer.from(src.slice('data:image/png;base64,'.length), 'base64');
-  if (!bytes || bytes[1] !== 0x50 || bytes[2] !== 0x4e || bytes[3] !== 0x47) throw new Error('PDF writer: an image mark must be a PNG (a data: URL or bytes)');
-  return bytes;
+  if (bytes && bytes[1] === 0x50 && bytes[2] === 0x4e && bytes[3] === 0x47) return bytes;
+  const { createCanvas } = createRequire(import.meta.url)('canvas') as typeof import('canvas');
+  const c = createCanvas(Math.max(1, Math.ceil(w * RASTER_SCALE)), Math.max(1, Math.ceil(h * RASTER_SCALE)));
+  c.getContext('2d').drawImage(image as import('canvas').Image, 0, 0, c.width, c.height);
+  return c.toBuffer('image/png');
 }
 
 export class PdfCanvas {
@@ -612,10 +622,10 @@ export class PdfCanvas {
 
   // ── images ─────────────────────────────────────────────────────────
   drawImage(image: unknown, x: number, y: number, w?: number, h?: number): void {
-    const bytes = pngBytes(image);
     const iw = w ?? (image as { width: number }).width;
     const ih = h ?? (image as { height: number }).height;
     if (!(iw > 0 && ih > 0)) return;
+    const bytes = pngBytes(image, iw, ih);
     const key = createHash('sha1').update(bytes).digest('hex').slice(0, 16);
     this.images.set(key, bytes);
     this.setAlpha(this.s.globalAlpha);

@@ -157,6 +157,49 @@ describe('PDF writer against the canvas drawing of the same scenegraph', () => {
   });
 });
 
+describe('image marks (a title-block logo)', () => {
+  it('embeds a PNG once however often it is drawn, and rasterises an SVG at 288 dpi (pdfimages)', async () => {
+    const { createCanvas } = await import('canvas');
+    const c = createCanvas(40, 20);
+    const g = c.getContext('2d');
+    g.fillStyle = '#2c7a7b';
+    g.fillRect(0, 0, 40, 20);
+    const png = `data:image/png;base64,${c.toBuffer('image/png').toString('base64')}`;
+    const svg = `data:image/svg+xml;base64,${Buffer.from('<svg xmlns="http://www.w3.org/2000/svg" width="40" height="20"><rect width="40" height="20" fill="#b4533a"/></svg>').toString('base64')}`;
+    const spec = {
+      $schema: 'https://vega.github.io/schema/vega-lite/v5.json',
+      width: 200,
+      height: 100,
+      autosize: 'none',
+      data: { values: [{ x: 10, y: 10, u: png }, { x: 10, y: 60, u: png }, { x: 100, y: 30, u: svg }] },
+      mark: { type: 'image', width: 80, height: 40, align: 'left', baseline: 'top' },
+      encoding: { x: { field: 'x', type: 'quantitative', scale: null }, y: { field: 'y', type: 'quantitative', scale: null }, url: { field: 'u' } },
+    };
+    const view = await renderer.specView(spec as never);
+    const canvas = (await view.toCanvas(2)) as unknown as import('canvas').Canvas;
+    view.finalize();
+    const pdf = renderer.pdfPages();
+    await pdf.addSpec(spec as never, canvas.width / 2, canvas.height / 2);
+    const file = join(dir, 'images.pdf');
+    writeFileSync(file, await pdf.toBytes());
+    const rows = execFileSync('pdfimages', ['-list', file], { encoding: 'utf8' }).trim().split('\n').slice(2).map((r) => r.trim().split(/\s+/));
+    // one row per drawing (page num type width height color comp bpc enc interp object …): the PNG twice at
+    // its own 40 × 20 px from one object, the SVG at 80 × 40 pt × 4
+    expect(rows.map((r) => [r[3], r[4]])).toEqual([
+      ['40', '20'],
+      ['40', '20'],
+      ['320', '160'],
+    ]);
+    expect(rows[0]![10]).toBe(rows[1]![10]);
+    expect(rows[2]![10]).not.toBe(rows[0]![10]);
+    // where the canvas draws the logos, the PDF does too (poppler covers an image's partial edge pixels, one
+    // pixel more than cairo: up to ~18 levels in a corner tile; a logo missing would differ by ~150)
+    execFileSync('pdftoppm', ['-r', '144', '-png', '-singlefile', file, join(dir, 'images')]);
+    const d = compare(await grey(readFileSync(join(dir, 'images.png'))), await grey(canvas.toBuffer('image/png')));
+    expect(d.tile).toBeLessThan(24);
+  });
+});
+
 describe('PdfCanvas details', () => {
   it('writes numbers with at most 3 decimals, no exponent and no negative zero', () => {
     expect([num(1 / 3), num(-0.0001), num(1e-9), num(12.5), num(-2.0004)]).toEqual(['0.333', '0', '0', '12.5', '-2']);
