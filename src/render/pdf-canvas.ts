@@ -9,18 +9,23 @@
  *
  * What the page needs from the book (fonts, transparency states, images) is recorded and returned with
  * the stream (`PageContent`), so render processes can send pages to the parent, which writes fonts once.
+ *
+ * Each mark vega draws (not its groups) is a segment (`beginSegment`/`endSegment`): it sets every state it
+ * uses itself, so the book writer can draw a segment that recurs on other pages (frames, title-block rules
+ * and labels, notes, the caution) once as a form XObject (ISO 32000-1 §8.10) and refer to it.
  */
 import { createHash } from 'node:crypto';
 import { createRequire } from 'node:module';
-import { deflateSync } from 'node:zlib';
 import { FontEngine, isBoldWeight, type FontKey } from './font-engine.js';
 
 /** One page as a render process hands it to the book writer (plain data: it crosses process boundaries). */
 export interface PageContent {
   width: number;
   height: number;
-  /** the content stream, deflated (FlateDecode), base64 */
+  /** the content stream, uncompressed; a segment stands in it as SEGMENT_MARK + key + SEGMENT_MARK */
   stream: string;
+  /** the segments' own content, by key (a hash of the content) */
+  segments: Record<string, string>;
   /** glyphs drawn, per face: [glyph id, the text it stands for], ascending ids */
   glyphs: Record<FontKey, [number, string][]>;
   /** constant alphas used (ExtGState /GaN, N = alpha × 1000) */
@@ -29,10 +34,14 @@ export interface PageContent {
   images: { key: string; png: string }[];
 }
 
+/** Marks a segment's place in a page stream (NUL never occurs in content operators). */
+export const SEGMENT_MARK = '\u0000';
+
 /** Resource names a content stream refers to. */
 export const FONT_RESOURCE: Record<FontKey, string> = { regular: 'FR', bold: 'FB' };
 export const alphaResource = (milli: number): string => `Ga${milli}`;
 export const imageResource = (key: string): string => `Im${key}`;
+export const formResource = (key: string): string => `Fx${key}`;
 
 type Matrix = [number, number, number, number, number, number];
 const IDENTITY: Matrix = [1, 0, 0, 1, 0, 0];
@@ -129,6 +138,8 @@ interface PdfState {
 }
 
 const PDF_DEFAULT: PdfState = { fill: '0 0 0 rg', stroke: '0 0 0 RG', alpha: 1000, lineWidth: '1', cap: 0, join: 0, miter: '10', dash: '[] 0 d' };
+/** A segment knows nothing of the state around it: its first use of each value writes it. */
+const PDF_UNKNOWN: PdfState = { fill: '', stroke: '', alpha: -1, lineWidth: '', cap: -1, join: -1, miter: '', dash: '' };
 const CAP: Record<string, number> = { butt: 0, round: 1, square: 2 };
 const JOIN: Record<string, number> = { miter: 0, round: 1, bevel: 2 };
 
@@ -202,6 +213,8 @@ export class PdfCanvas {
   private readonly glyphs: Record<FontKey, Map<number, string>> = { regular: new Map(), bold: new Map() };
   private readonly alphas = new Set<number>();
   private readonly images = new Map<string, Uint8Array>();
+  private readonly segments = new Map<string, string>();
+  private segment: { start: number; outer: PdfState; depth: number } | undefined;
   /** vega reads it when it clips to dirty bounds */
   readonly pixelRatio = 1;
   imageSmoothingEnabled = true;
@@ -633,15 +646,39 @@ export class PdfCanvas {
     this.out.push(`q ${m.map(num).join(' ')} cm /${imageResource(key)} Do Q`);
   }
 
+  /** Starts a mark's drawing: what follows sets all the state it uses (see the file comment). */
+  beginSegment(): void {
+    if (this.segment) return;
+    this.segment = { start: this.out.length, outer: this.pdf, depth: this.stack.length };
+    this.pdf = { ...PDF_UNKNOWN };
+  }
+
+  /** Ends a mark's drawing: its operators leave the page stream for a keyed segment. */
+  endSegment(): void {
+    const seg = this.segment;
+    if (!seg) return;
+    this.segment = undefined;
+    if (this.stack.length !== seg.depth) throw new Error('PDF writer: a mark left a save() without its restore()');
+    this.pdf = seg.outer;
+    const ops = this.out.splice(seg.start);
+    if (ops.length === 0) return;
+    const body = ops.join('\n');
+    const key = createHash('sha1').update(body).digest('hex').slice(0, 16);
+    this.segments.set(key, body);
+    this.out.push(`${SEGMENT_MARK}${key}${SEGMENT_MARK}`);
+  }
+
   /** The page as data for the book writer. */
   finish(): PageContent {
+    this.endSegment();
     while (this.stack.length > 0) this.restore();
-    const stream = deflateSync(Buffer.from(this.out.join('\n'), 'latin1')).toString('base64');
+    const stream = this.out.join('\n');
     const glyphs = (k: FontKey) => [...this.glyphs[k]].sort((a, b) => a[0] - b[0]);
     return {
       width: this.width,
       height: this.height,
       stream,
+      segments: Object.fromEntries([...this.segments].sort((a, b) => (a[0] < b[0] ? -1 : 1))),
       glyphs: { regular: glyphs('regular'), bold: glyphs('bold') },
       alphas: [...this.alphas].sort((a, b) => a - b),
       images: [...this.images].sort((a, b) => (a[0] < b[0] ? -1 : 1)).map(([key, b]) => ({ key, png: Buffer.from(b).toString('base64') })),

@@ -5,6 +5,9 @@
  * §9.7.4.2), so pages written in other processes, before the book knew its glyphs, need no rewriting.
  * /ToUnicode CMaps (§9.10.3) keep the text searchable and copyable.
  *
+ * A mark's drawing (a segment, see pdf-canvas.ts) that occurs more than once in the document is written
+ * once as a form XObject and drawn by reference; one that occurs once stays in its page's stream.
+ *
  * The bytes depend only on the pages and their order: glyph sets are unions sorted by id, resources
  * are named from their values, and the subset tag is a hash of the subset.
  */
@@ -12,7 +15,7 @@ import { createHash } from 'node:crypto';
 import { deflateSync } from 'node:zlib';
 import { PDFDocument, PDFName, PDFNumber, PDFString, type PDFPage, type PDFRef, type RGB } from 'pdf-lib';
 import { FontEngine, type FontKey } from './font-engine.js';
-import { alphaResource, FONT_RESOURCE, imageResource, PdfCanvas, type PageContent } from './pdf-canvas.js';
+import { alphaResource, FONT_RESOURCE, formResource, imageResource, PdfCanvas, SEGMENT_MARK, type PageContent } from './pdf-canvas.js';
 
 const FACES: readonly FontKey[] = ['regular', 'bold'];
 
@@ -20,6 +23,10 @@ export class PdfWriter {
   private readonly glyphs: Record<FontKey, Map<number, string>> = { regular: new Map(), bold: new Map() };
   private readonly alphas = new Set<number>();
   private readonly images = new Map<string, string>();
+  /** segments by key, and how often the pages draw each */
+  private readonly segments = new Map<string, { body: string; uses: number }>();
+  /** page streams waiting for the segment counts */
+  private readonly streams: { ref: PDFRef; stream: string }[] = [];
   private readonly fontRefs: Record<FontKey, PDFRef>;
   private readonly resourcesRef: PDFRef;
   private finished = false;
@@ -41,10 +48,17 @@ export class PdfWriter {
     if (this.finished) throw new Error('PdfWriter: pages added after the fonts were written');
     const page = this.doc.addPage([p.width, p.height]);
     const ctx = this.doc.context;
-    const bytes = Buffer.from(p.stream, 'base64');
-    const stream = ctx.stream(bytes, { Filter: 'FlateDecode' });
-    page.node.set(PDFName.of('Contents'), ctx.register(stream));
+    const ref = ctx.nextRef();
+    this.streams.push({ ref, stream: p.stream });
+    page.node.set(PDFName.of('Contents'), ref);
     page.node.set(PDFName.of('Resources'), this.resourcesRef);
+    const parts = p.stream.split(SEGMENT_MARK);
+    for (let i = 1; i < parts.length; i += 2) {
+      const key = parts[i]!;
+      const seg = this.segments.get(key);
+      if (seg) seg.uses++;
+      else this.segments.set(key, { body: p.segments[key]!, uses: 1 });
+    }
     for (const k of FACES) {
       const used = this.glyphs[k];
       for (const [g, ch] of p.glyphs[k]) {
@@ -80,6 +94,22 @@ export class PdfWriter {
         const img = await this.doc.embedPng(Buffer.from(png, 'base64'));
         xo[imageResource(key)] = img.ref;
       }
+      // recurring marks: one form XObject each, in the page's coordinates (vega's, under the page's flip)
+      for (const [key, seg] of [...this.segments].sort((x, y) => (x[0] < y[0] ? -1 : 1))) {
+        if (seg.uses < 2) continue;
+        xo[formResource(key)] = ctx.register(
+          ctx.stream(deflateSync(Buffer.from(seg.body, 'latin1')), { Type: 'XObject', Subtype: 'Form', BBox: [-1e4, -1e4, 1e4, 1e4], Resources: this.resourcesRef, Filter: 'FlateDecode' } as never),
+        );
+      }
+      for (const { ref, stream } of this.streams) {
+        const parts = stream.split(SEGMENT_MARK);
+        for (let i = 1; i < parts.length; i += 2) {
+          const seg = this.segments.get(parts[i]!)!;
+          parts[i] = seg.uses < 2 ? `q\n${seg.body}\nQ` : `/${formResource(parts[i]!)} Do`;
+        }
+        ctx.assign(ref, ctx.stream(deflateSync(Buffer.from(parts.join(''), 'latin1')), { Filter: 'FlateDecode' } as never));
+      }
+      this.streams.length = 0;
       const res: Record<string, unknown> = { ProcSet: ['PDF', 'Text', 'ImageB', 'ImageC', 'ImageI'] };
       if (Object.keys(fonts).length) res.Font = ctx.obj(fonts);
       if (Object.keys(gs).length) res.ExtGState = ctx.obj(gs as never);

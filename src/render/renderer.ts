@@ -155,7 +155,9 @@ export class SheetRenderer {
 export class PdfPages {
   private readonly done: PageContent[] = [];
 
-  constructor(private readonly renderer: SheetRenderer) {}
+  constructor(private readonly renderer: SheetRenderer) {
+    markSegments(renderer.env.vega);
+  }
 
   get count(): number {
     return this.done.length;
@@ -203,4 +205,26 @@ export class PdfPages {
     meta?.(writer.doc);
     return writer.save();
   }
+}
+
+/**
+ * Each mark vega draws into a PdfCanvas becomes a segment (pdf-canvas.ts), which the writer can share
+ * between pages as a form XObject. vega's canvas renderer draws every mark through `draw`; a PNG's cairo
+ * context passes through untouched.
+ */
+function markSegments(vega: RenderEnvironment['vega']): void {
+  type Draw = (this: unknown, ctx: unknown, scene: { marktype: string }, ...rest: unknown[]) => void;
+  const proto = (vega as unknown as { CanvasRenderer: { prototype: { draw: Draw; pmchartSegments?: true } } }).CanvasRenderer.prototype;
+  if (proto.pmchartSegments) return;
+  const draw = proto.draw;
+  proto.draw = function (this: unknown, ctx, scene, ...rest) {
+    if (!(ctx instanceof PdfCanvas) || scene.marktype === 'group') return draw.call(this, ctx, scene, ...rest);
+    ctx.beginSegment();
+    try {
+      draw.call(this, ctx, scene, ...rest);
+    } finally {
+      ctx.endSegment();
+    }
+  };
+  proto.pmchartSegments = true;
 }
