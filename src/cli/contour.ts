@@ -104,7 +104,7 @@ export async function runContourPlot(o: ContourOptions): Promise<string> {
       const pdf = renderer.pdfPages();
       await pdf.addSpec(spec, W, H);
       const { fixPdfMetadata } = await import('../sheet/book.js');
-      writeFileAtomic(out, await fixPdfMetadata(pdf.toBuffer(), { title, date, generator: generatorLabel(), subject: section.basis.title }), '--out');
+      writeFileAtomic(out, await fixPdfMetadata(pdf, { title, date, generator: generatorLabel(), subject: section.basis.title }), '--out');
     }
   } finally {
     renderer.finalize();

@@ -1,7 +1,7 @@
 /**
- * The rendering environment: node-canvas with DejaVu Sans registered, then vega and vega-lite.
- * Order matters: vega-scenegraph makes its text-measuring canvas when it loads, so the font is
- * registered first. Without node-canvas vega would silently measure text roughly; we refuse instead.
+ * The rendering environment: node-canvas with DejaVu Sans registered (it draws PNG pages), then vega
+ * and vega-lite, whose text measuring is switched to the font engine (font-engine.ts) that the PDF
+ * writer draws with. Without node-canvas there would be no PNG; we refuse instead.
  */
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
@@ -54,5 +54,8 @@ async function load(): Promise<RenderEnvironment> {
   canvas.registerFont(fonts.bold, { family: FONT_FAMILY, weight: 'bold' });
   const vega = await import('vega');
   const vegaLite = await import('vega-lite');
+  // vega lays text out with the widths the PDF writer draws it with (font-engine.ts)
+  const { FontEngine, installTextMetrics } = await import('./font-engine.js');
+  installTextMetrics((vega as unknown as { textMetrics: never }).textMetrics, FontEngine.get());
   return { canvas, vega, vegaLite, fonts };
 }

@@ -1,13 +1,17 @@
 /**
  * Spec → bytes. One compiled vega View per distinct template; each sheet only swaps its datasets
- * (compiling costs ~45 ms, a data swap a few). Vector PDF pages go into one node-canvas PDF surface
- * through `externalContext`, with text kept as glyphs so the PDF stays searchable.
+ * (compiling costs ~45 ms, a data swap a few). PDF pages are written by our own writer: vega's canvas
+ * renderer draws the scenegraph into a PdfCanvas (pdf-canvas.ts) through `externalContext`, and
+ * pdf-writer.ts binds the pages with each font subset once. SVG is vega's SVG renderer; node-canvas
+ * draws PNG only.
  */
 import type { View } from 'vega';
 import { datasetNames, sheetTemplate, type VlSpec } from '../chart/spec.js';
 import type { SheetData, TemplateParams } from '../chart/sheet-data.js';
 import { renderEnvironment, type RenderEnvironment } from './environment.js';
-import { FONT_FAMILY } from '../chart/style.js';
+import { FontEngine } from './font-engine.js';
+import { PdfCanvas, type PageContent } from './pdf-canvas.js';
+import { PdfWriter } from './pdf-writer.js';
 
 type Row = Record<string, string | number>;
 interface ViewEntry {
@@ -44,13 +48,9 @@ export class SheetRenderer {
     return new SheetRenderer(await renderEnvironment());
   }
 
-  private measureCtx: import('canvas').CanvasRenderingContext2D | undefined;
-  /** Text widths in points with the sheet typeface, as vega measures them (chart/ labels.ts MeasureText). */
-  readonly measureText = (text: string, fontSize: number, bold: boolean): number => {
-    this.measureCtx ??= this.env.canvas.createCanvas(10, 10).getContext('2d');
-    this.measureCtx.font = `${bold ? 'bold ' : ''}${fontSize}px "${FONT_FAMILY}"`;
-    return this.measureCtx.measureText(text).width;
-  };
+  private readonly engine = FontEngine.get();
+  /** Text widths in points with the sheet typeface, as vega measures and the PDF writer draws them (chart/ labels.ts MeasureText). */
+  readonly measureText = (text: string, fontSize: number, bold: boolean): number => this.engine.width(text, fontSize, bold);
 
   /** Runs the view of this template on this sheet's data. */
   async show(page: SheetPage): Promise<View> {
@@ -148,32 +148,23 @@ export class SheetRenderer {
 }
 
 /**
- * Many sheets on one node-canvas PDF surface: each page is drawn through `externalContext` between
- * save/restore, with text kept as glyphs so the PDF stays searchable. Metadata is left to the binder
- * (src/sheet/book.ts), which fixes the dates for deterministic output.
+ * Vector pages from vega views: each page is vega's scenegraph drawn into a PdfCanvas (our writer's
+ * Canvas 2D front). `pages()` hands the pages on as data (a render process sends them to the book
+ * writer); `toBytes()` writes them as one PDF, fonts subset once. Metadata is left to the caller.
  */
 export class PdfPages {
-  private canvas: import('canvas').Canvas | undefined;
-  private ctx: import('canvas').CanvasRenderingContext2D | undefined;
-  count = 0;
+  private readonly done: PageContent[] = [];
 
-  constructor(private readonly renderer: SheetRenderer) {}
+  constructor(private readonly renderer: SheetRenderer) {
+    markSegments(renderer.env.vega);
+  }
 
-  private newPage(w: number, h: number): import('canvas').CanvasRenderingContext2D {
-    if (!this.canvas || !this.ctx) {
-      this.canvas = this.renderer.env.canvas.createCanvas(w, h, 'pdf');
-      this.ctx = this.canvas.getContext('2d');
-      skipRepeatedCompositeMode(this.ctx);
-    } else {
-      (this.ctx as unknown as { addPage(w: number, h: number): void }).addPage(w, h);
-    }
-    this.ctx.textDrawingMode = 'glyph';
-    this.count++;
-    return this.ctx;
+  get count(): number {
+    return this.done.length;
   }
 
   /** Draws a view at (x, y): vega scales and translates an external context from its current transform. */
-  private async draw(ctx: import('canvas').CanvasRenderingContext2D, view: View, x = 0, y = 0): Promise<void> {
+  private async draw(ctx: PdfCanvas, view: View, x = 0, y = 0): Promise<void> {
     ctx.save();
     if (x !== 0 || y !== 0) ctx.translate(x, y);
     await view.toCanvas(1, { externalContext: ctx } as never);
@@ -182,52 +173,58 @@ export class PdfPages {
 
   async add(page: SheetPage, insets: readonly Inset[] = []): Promise<void> {
     const { w, h } = page.template.layout.page;
-    const ctx = this.newPage(w, h);
+    const ctx = new PdfCanvas(w, h);
     await this.draw(ctx, await this.renderer.show(page));
     for (const inset of insets) {
       const view = await this.renderer.specView(inset.spec);
       await this.draw(ctx, view, inset.x, inset.y);
       view.finalize();
     }
+    this.done.push(ctx.finish());
   }
 
   /** A page holding one standalone spec of the given size. */
   async addSpec(spec: VlSpec, w: number, h: number): Promise<void> {
-    const ctx = this.newPage(w, h);
+    const ctx = new PdfCanvas(w, h);
     const view = await this.renderer.specView(spec);
     await this.draw(ctx, view);
     view.finalize();
+    this.done.push(ctx.finish());
   }
 
-  toBuffer(): Buffer {
-    if (!this.canvas) throw new Error('PdfPages: no page was added');
-    return this.canvas.toBuffer('application/pdf');
+  /** The pages drawn so far, as data. */
+  pages(): PageContent[] {
+    return [...this.done];
+  }
+
+  /** The pages as one PDF document (fonts once); `meta` sets its fixed metadata. */
+  async toBytes(meta?: (doc: PdfWriter['doc']) => void): Promise<Uint8Array> {
+    if (this.done.length === 0) throw new Error('PdfPages: no page was added');
+    const writer = await PdfWriter.create();
+    for (const p of this.done) writer.addPage(p);
+    meta?.(writer.doc);
+    return writer.save();
   }
 }
 
 /**
- * vega sets globalCompositeOperation before every item it draws; on a cairo context each set costs a
- * native call. Sheets never blend, so repeated sets of the same value are skipped.
+ * Each mark vega draws into a PdfCanvas becomes a segment (pdf-canvas.ts), which the writer can share
+ * between pages as a form XObject. vega's canvas renderer draws every mark through `draw`; a PNG's cairo
+ * context passes through untouched.
  */
-function skipRepeatedCompositeMode(ctx: object): void {
-  const proto = Object.getPrototypeOf(ctx) as object;
-  const desc = Object.getOwnPropertyDescriptor(proto, 'globalCompositeOperation');
-  if (!desc?.set || !desc.get) return;
-  let current: unknown = desc.get.call(ctx);
-  Object.defineProperty(ctx, 'globalCompositeOperation', {
-    configurable: true,
-    get: () => current,
-    set(v: unknown) {
-      if (v === current) return;
-      current = v;
-      desc.set!.call(ctx, v);
-    },
-  });
-  // restore() brings back the saved mode inside cairo; read it back so the cache stays true
-  const c = ctx as { restore(): void };
-  const restore = c.restore.bind(ctx);
-  c.restore = () => {
-    restore();
-    current = desc.get!.call(ctx);
+function markSegments(vega: RenderEnvironment['vega']): void {
+  type Draw = (this: unknown, ctx: unknown, scene: { marktype: string }, ...rest: unknown[]) => void;
+  const proto = (vega as unknown as { CanvasRenderer: { prototype: { draw: Draw; pmchartSegments?: true } } }).CanvasRenderer.prototype;
+  if (proto.pmchartSegments) return;
+  const draw = proto.draw;
+  proto.draw = function (this: unknown, ctx, scene, ...rest) {
+    if (!(ctx instanceof PdfCanvas) || scene.marktype === 'group') return draw.call(this, ctx, scene, ...rest);
+    ctx.beginSegment();
+    try {
+      draw.call(this, ctx, scene, ...rest);
+    } finally {
+      ctx.endSegment();
+    }
   };
+  proto.pmchartSegments = true;
 }

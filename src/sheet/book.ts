@@ -1,12 +1,13 @@
 /**
- * Binding a book with pdf-lib: a cover, an index of every sheet with its parameters and page
- * number, the sheet pages (copied from the chunk PDFs in order), one outline entry per sheet,
- * and fixed metadata so that the same set gives the same bytes.
- * pdf-lib's standard fonts cannot encode φ or ρ, so DejaVu Sans is embedded (subset).
+ * Binding a book with our PDF writer (src/render/pdf-writer.ts, on pdf-lib): a cover, an index of every
+ * sheet with its parameters and page number, the sheet pages (page contents from the render chunks, in
+ * order), one outline entry per sheet, and fixed metadata so that the same set gives the same bytes.
+ * DejaVu Sans (regular and bold) is embedded once for the whole book, subset to the glyphs of every page.
  */
-import fontkit from '@pdf-lib/fontkit';
-import { readFileSync } from 'node:fs';
-import { PDFArray, PDFDocument, PDFName, PDFNumber, PDFHexString, rgb, type PDFFont, type PDFPage, type PDFRef, type RGB } from 'pdf-lib';
+import { PDFArray, PDFDocument, PDFName, PDFNumber, PDFHexString, rgb, type PDFPage, type PDFRef, type RGB } from 'pdf-lib';
+import type { PageContent } from '../render/pdf-canvas.js';
+import type { PdfPages } from '../render/renderer.js';
+import type { Painter, PainterFont } from '../render/pdf-writer.js';
 import { describeArrangement, describeShape, describeTransverse, fmt, stressText, gammaText } from '../config/describe.js';
 import { RATIO_SYMBOL, type ResolvedChartSet } from '../config/types.js';
 import type { BasisSymbols } from '../codes/types.js';
@@ -15,9 +16,8 @@ import { wrap } from '../chart/sheet-data.js';
 
 export interface BookInput {
   set: ResolvedChartSet;
-  /** chunk PDFs in sheet order */
-  chunks: Uint8Array[];
-  fonts: { regular: string; bold: string };
+  /** the sheet pages in sheet order (from the render chunks) */
+  pages: readonly PageContent[];
   generator: string;
   /** basis title and notes for the cover (from the first sheet's basis) */
   basisTitle: string;
@@ -28,30 +28,6 @@ export interface BookInput {
   factorGroups: readonly { summary: string; sheets: readonly number[] }[];
   /** how values are normalised (first sheet), e.g. "ν = NRd/(fcd·Ag), μ = MRd/(fcd·Ag·h), fcd = 40 MPa" */
   normalisation: string;
-}
-
-/**
- * fontkit shapes a string again for every width and every drawText (GSUB/GPOS lookups), and the index
- * asks for each cell's width at least twice before drawing it. The shaped run of each string is kept
- * for the book (same glyphs, so the same bytes): binding a 200-sheet book shapes 479 strings instead
- * of 5,565.
- */
-function memoiseLayout(font: PDFFont): PDFFont {
-  type Layout = (text: string, features?: unknown) => unknown;
-  const ft = (font as unknown as { embedder?: { font?: { layout?: Layout } } }).embedder?.font;
-  if (!ft?.layout) return font;
-  const layout: Layout = ft.layout.bind(ft);
-  const runs = new Map<string, unknown>();
-  ft.layout = (text: string, features?: unknown) => {
-    if (features !== undefined) return layout(text, features);
-    let run = runs.get(text);
-    if (run === undefined) {
-      run = layout(text);
-      runs.set(text, run);
-    }
-    return run;
-  };
-  return font;
 }
 
 /** "1–10, 12" from sorted sheet numbers. */
@@ -77,29 +53,25 @@ export function frontMatterPages(set: ResolvedChartSet): number {
 
 export async function bindBook(input: BookInput): Promise<Uint8Array> {
   const { set } = input;
-  const doc = await PDFDocument.create({ updateMetadata: false });
-  doc.registerFontkit(fontkit);
-  const regular = memoiseLayout(await doc.embedFont(readFileSync(input.fonts.regular), { subset: true }));
-  const bold = memoiseLayout(await doc.embedFont(readFileSync(input.fonts.bold), { subset: true }));
+  const { PdfWriter } = await import('../render/pdf-writer.js');
+  const writer = await PdfWriter.create();
+  const doc = writer.doc;
   const W = set.paper.widthPt;
   const H = set.paper.heightPt;
   const front = frontMatterPages(set);
 
-  const cover = doc.addPage([W, H]);
-  drawCover(cover, input, regular, bold, front);
+  const coverPainter = writer.painter(W, H);
+  drawCover(coverPainter, input, coverPainter.regular, coverPainter.bold, front);
+  const cover = coverPainter.finish();
   const rowsPerPage = INDEX_ROWS_PER_PAGE(H);
   const indexPages: PDFPage[] = [];
   for (let start = 0, p = 0; start < set.sheets.length; start += rowsPerPage, p++) {
-    const page = doc.addPage([W, H]);
-    indexPages.push(page);
-    drawIndex(page, input, regular, bold, start, Math.min(set.sheets.length, start + rowsPerPage), front, p + 2, front);
+    const page = writer.painter(W, H);
+    drawIndex(page, input, page.regular, page.bold, start, Math.min(set.sheets.length, start + rowsPerPage), front, p + 2, front);
+    indexPages.push(page.finish());
   }
 
-  const sheetPages: PDFPage[] = [];
-  for (const bytes of input.chunks) {
-    const src = await PDFDocument.load(bytes, { updateMetadata: false });
-    for (const p of await doc.copyPages(src, src.getPageIndices())) sheetPages.push(doc.addPage(p));
-  }
+  const sheetPages: PDFPage[] = input.pages.map((p) => writer.addPage(p));
   if (sheetPages.length !== set.sheets.length) throw new Error(`book: ${sheetPages.length} sheet pages for ${set.sheets.length} sheets`);
 
   addOutline(doc, [
@@ -114,13 +86,13 @@ export async function bindBook(input: BookInput): Promise<Uint8Array> {
   doc.setSubject(`Normalised P–M interaction charts, ${input.basisTitle}, ${set.sheets.length} sheets`);
   doc.setKeywords(['interaction chart', 'reinforced concrete column', input.basisTitle, set.name]);
   doc.setCreator(input.generator);
-  doc.setProducer(`${input.generator} (pdf-lib, node-canvas)`);
+  doc.setProducer(`${input.generator} (pdf-lib)`);
   doc.setCreationDate(date);
   doc.setModificationDate(date);
-  return doc.save({ useObjectStreams: true });
+  return writer.save();
 }
 
-function drawCover(page: PDFPage, input: BookInput, regular: PDFFont, bold: PDFFont, front: number): void {
+function drawCover(page: Painter, input: BookInput, regular: PainterFont, bold: PainterFont, front: number): void {
   const { set } = input;
   const { width: W, height: H } = page.getSize();
   const u = Math.min(W, H) / 100 + 0.8;
@@ -128,7 +100,7 @@ function drawCover(page: PDFPage, input: BookInput, regular: PDFFont, bold: PDFF
   const tb = set.titleBlock;
   page.drawRectangle({ x: 0, y: 0, width: 2.2 * u, height: H, color: hex(COLOURS.accent) });
   let y = H - m - 3 * u;
-  const line = (text: string, size: number, font: PDFFont, colour: string = COLOURS.ink, gap = 1.5) => {
+  const line = (text: string, size: number, font: PainterFont, colour: string = COLOURS.ink, gap = 1.5) => {
     for (const l of wrap(text, W - 2 * m - 4 * u, size)) {
       page.drawText(l, { x: m + 2 * u, y, size, font, color: hex(colour) });
       y -= size * gap;
@@ -183,7 +155,7 @@ function drawCover(page: PDFPage, input: BookInput, regular: PDFFont, bold: PDFF
   }
 }
 
-function drawIndex(page: PDFPage, input: BookInput, regular: PDFFont, bold: PDFFont, from: number, to: number, front: number, pageNo: number, frontCount: number): void {
+function drawIndex(page: Painter, input: BookInput, regular: PainterFont, bold: PainterFont, from: number, to: number, front: number, pageNo: number, frontCount: number): void {
   const { set } = input;
   const { width: W, height: H } = page.getSize();
   const u = Math.min(W, H) / 100 + 0.8;
@@ -214,7 +186,7 @@ function drawIndex(page: PDFPage, input: BookInput, regular: PDFFont, bold: PDFF
   const scale = (W - 2 * m) / total;
   const size = 0.95 * u;
   let y = H - m - 8 * u;
-  const row = (cells: string[], font: PDFFont, colour: string) => {
+  const row = (cells: string[], font: PainterFont, colour: string) => {
     let x = m;
     cells.forEach((t, k) => {
       const [, w, al] = cols[k]!;
@@ -261,17 +233,17 @@ export function addOutline(doc: PDFDocument, entries: { title: string; page: PDF
   doc.catalog.set(PDFName.of('PageMode'), PDFName.of('UseOutlines'));
 }
 
-/** Fixes the metadata of a single-sheet PDF made by node-canvas (its own dates are the clock's). */
-export async function fixPdfMetadata(bytes: Uint8Array, m: { title: string; subject: string; date: string; generator: string }): Promise<Uint8Array> {
-  const doc = await PDFDocument.load(bytes, { updateMetadata: false });
-  const date = new Date(`${m.date}T00:00:00Z`);
-  doc.setTitle(m.title);
-  doc.setSubject(m.subject);
-  doc.setCreator(m.generator);
-  doc.setProducer(`${m.generator} (pdf-lib, node-canvas)`);
-  doc.setCreationDate(date);
-  doc.setModificationDate(date);
-  return doc.save({ useObjectStreams: true });
+/** Writes drawn pages as one PDF with fixed metadata (the dates are the set's, never the clock's). */
+export async function fixPdfMetadata(pdf: PdfPages, m: { title: string; subject: string; date: string; generator: string }): Promise<Uint8Array> {
+  return pdf.toBytes((doc: PDFDocument) => {
+    const date = new Date(`${m.date}T00:00:00Z`);
+    doc.setTitle(m.title);
+    doc.setSubject(m.subject);
+    doc.setCreator(m.generator);
+    doc.setProducer(`${m.generator} (pdf-lib)`);
+    doc.setCreationDate(date);
+    doc.setModificationDate(date);
+  });
 }
 
 /** The cover's line about biaxial sheets, where the set has any: how many, and that they show factored Mx–My contours. */

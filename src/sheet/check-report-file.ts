@@ -17,7 +17,7 @@ export async function writeCheckReport(file: string, input: CheckReportInput): P
     const pdf = renderer.pdfPages();
     await pdf.add(sheet, page.insets);
     const b = input.check.basis;
-    writeFileAtomic(file, await fixPdfMetadata(pdf.toBuffer(), { title: page.title, subject: `Column check, ${b.title}`, date: input.date, generator: input.generator }));
+    writeFileAtomic(file, await fixPdfMetadata(pdf, { title: page.title, subject: `Column check, ${b.title}`, date: input.date, generator: input.generator }));
   } finally {
     renderer.finalize();
   }

@@ -7,18 +7,21 @@
  *
  * 1. The caller reads and resolves the config (src/config/read.ts) — defaults, units, rule checks.
  * 2–4. Sheets are made in fixed-size chunks (render-chunk.ts), in this process or in child
- *      processes (worker.ts); each chunk writes its tables, SVG and PNG files and one chunk PDF.
- * 5. The binder (book.ts) joins the chunk PDFs behind a cover and index, adds the outline and the
- *    fixed metadata. Everything is made in a staging folder that replaces out/<set-name>/ at the end.
+ *      processes (worker.ts); each chunk writes its tables, SVG and PNG files and returns its PDF
+ *      pages as content streams with the glyphs they use.
+ * 5. The binder (book.ts) writes those pages behind a cover and index with each font once, adds the
+ *    outline and the fixed metadata. Everything is made in a staging folder that replaces
+ *    out/<set-name>/ at the end.
  */
 import type { ChildProcess } from 'node:child_process';
-import { mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { mkdirSync, rmSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { dirname, extname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { ResolvedChartSet } from '../config/types.js';
 import { runInChildren } from '../io/child-pool.js';
 import { SheetRenderer } from '../render/renderer.js';
+import type { PageContent } from '../render/pdf-canvas.js';
 import { bindBook } from './book.js';
 import { basisForSheet, groupExtents } from './curves.js';
 import { normalisationText, primaryFamily } from '../chart/sheet-data.js';
@@ -80,12 +83,11 @@ export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions):
     const tick = () => opts.onSheet?.(++done, set.sheets.length);
     const jobs = Math.max(1, Math.min(opts.jobs ?? Math.min(4, availableParallelism()), tasks.length));
     const childRss = { kb: 0 };
-    const pdfs = jobs === 1 ? await renderHere(tasks, tick) : await renderInChildren(tasks, jobs, tick, childRss, children);
+    const chunks = jobs === 1 ? await renderHere(tasks, tick) : await renderInChildren(tasks, jobs, tick, childRss, children);
 
     // 5: bind the book
     let book: string | undefined;
     if (set.outputs.pdf) {
-      const { fontPaths } = await import('../render/environment.js');
       const bases = set.sheets.map((s) => basisForSheet(set, s));
       const basis = bases[0]!;
       const factorGroups: { summary: string; sheets: number[] }[] = [];
@@ -98,8 +100,7 @@ export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions):
       const design = primaryFamily(set) === 'design';
       const bytes = await bindBook({
         set,
-        chunks: pdfs.map((p) => readFileSync(p!)),
-        fonts: fontPaths(),
+        pages: chunks.flatMap((c) => c ?? []),
         generator: opts.generator,
         basisTitle: basis.title,
         basisNotes: basis.notes,
@@ -107,7 +108,6 @@ export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions):
         factorGroups,
         normalisation: normalisationText(set, sy, design ? sy.designAxial : sy.nominalAxial, design ? sy.designMoment : sy.nominalMoment, basis.normalisingStress),
       });
-      for (const p of pdfs) if (p) rmSync(p, { force: true });
       writeFileAtomic(join(staging, 'book.pdf'), bytes);
       book = join(target, 'book.pdf');
     }
@@ -129,10 +129,10 @@ export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions):
   }
 }
 
-async function renderHere(tasks: ChunkTask[], tick: () => void): Promise<(string | undefined)[]> {
+async function renderHere(tasks: ChunkTask[], tick: () => void): Promise<(PageContent[] | undefined)[]> {
   const renderer = await SheetRenderer.create();
   try {
-    const out: (string | undefined)[] = [];
+    const out: (PageContent[] | undefined)[] = [];
     for (const t of tasks) out.push(await renderChunk(t, renderer, tick));
     return out;
   } finally {
@@ -144,16 +144,16 @@ async function renderHere(tasks: ChunkTask[], tick: () => void): Promise<(string
  * Chunks handed to `jobs` child processes as they become free (node-canvas cannot run in worker
  * threads). Any child that fails or stops stops the others: the caller then removes the staging folder.
  */
-function renderInChildren(tasks: ChunkTask[], jobs: number, tick: () => void, rss: { kb: number }, live: Set<ChildProcess>): Promise<(string | undefined)[]> {
+function renderInChildren(tasks: ChunkTask[], jobs: number, tick: () => void, rss: { kb: number }, live: Set<ChildProcess>): Promise<(PageContent[] | undefined)[]> {
   const here = fileURLToPath(import.meta.url);
-  return runInChildren<ChunkTask, WorkerMessage, string | undefined>({
+  return runInChildren<ChunkTask, WorkerMessage, PageContent[] | undefined>({
     workerPath: join(dirname(here), `worker${extname(here)}`),
     tasks,
     jobs,
     taskMessage: (task) => ({ type: 'task', task }),
     result: (m) => {
       rss.kb = Math.max(rss.kb, m.maxRssKb);
-      return { chunk: m.chunk, value: m.pdf };
+      return { chunk: m.chunk, value: m.pages };
     },
     onProgress: (m) => {
       if (m.type === 'sheet') tick();

@@ -1,9 +1,11 @@
 /**
- * Stages "curves → chart spec → bytes → files" for a run of sheets. A chunk's sheets share one
- * vector PDF surface; the binder joins the chunk PDFs in order. Chunks are a fixed size so the book's
- * bytes do not depend on how many processes made it.
+ * Stages "curves → chart spec → bytes → files" for a run of sheets. A chunk's sheets are drawn as PDF
+ * page contents (streams and the glyphs they use, src/render/pdf-canvas.ts); the binder writes them in
+ * order with the fonts once. Chunks are a fixed size and start from fresh views, so the book's bytes do
+ * not depend on how many processes made it.
  */
 import { join } from 'node:path';
+import type { PageContent } from '../render/pdf-canvas.js';
 import { tableCsv } from '../chart/lookup-table.js';
 import { buildSheet, primaryFamily, type SheetData, type TemplateParams } from '../chart/sheet-data.js';
 import type { ResolvedChartSet } from '../config/types.js';
@@ -15,7 +17,7 @@ import { biaxialFamilyForSheet, familyForSheet } from './curves.js';
 import { writeFileAtomic } from './files.js';
 import { biaxialTableJson, tableJson } from './tables.js';
 
-/** Sheets per chunk PDF. */
+/** Sheets per chunk. */
 export const CHUNK_SIZE = 50;
 
 export interface ChunkTask {
@@ -39,10 +41,8 @@ export function chunksOf(set: ResolvedChartSet, staging: string, generator: stri
   return tasks;
 }
 
-export const chunkPdfPath = (staging: string, chunk: number): string => join(staging, `.chunk-${String(chunk).padStart(4, '0')}.pdf`);
-
-/** Renders one chunk; returns the path of its PDF (when the set asks for a book). */
-export async function renderChunk(task: ChunkTask, renderer: SheetRenderer, onSheet?: () => void): Promise<string | undefined> {
+/** Renders one chunk; returns its PDF pages (when the set asks for a book). */
+export async function renderChunk(task: ChunkTask, renderer: SheetRenderer, onSheet?: () => void): Promise<PageContent[] | undefined> {
   const { set, staging, generator } = task;
   const out = set.outputs;
   // Every chunk starts from fresh vega views. A reused view keeps the scene items of earlier sheets
@@ -80,8 +80,5 @@ export async function renderChunk(task: ChunkTask, renderer: SheetRenderer, onSh
     if (pdf) await pdf.add(page);
     onSheet?.();
   }
-  if (!pdf) return undefined;
-  const path = chunkPdfPath(staging, task.chunk);
-  writeFileAtomic(path, pdf.toBuffer());
-  return path;
+  return pdf?.pages();
 }

@@ -45,7 +45,7 @@ export async function renderSheet(set: ResolvedChartSet, sheetNumber = 1, format
     const pdf = renderer.pdfPages();
     await pdf.add(page);
     const { fixPdfMetadata } = await import('./book.js');
-    return await fixPdfMetadata(pdf.toBuffer(), { title: sheet.title, date: set.titleBlock.date, generator: generatorLabel(), subject: basis.title });
+    return await fixPdfMetadata(pdf, { title: sheet.title, date: set.titleBlock.date, generator: generatorLabel(), subject: basis.title });
   } finally {
     renderer.finalize();
   }

@@ -2,15 +2,13 @@
  * `pmchart schedule --report FILE.pdf` (issue 22): a bound report of a column schedule.
  *
  *   marks (each with its check) ──1──▶ each mark's calculation sheet (the check's own, check-report.ts)
- *                               ──2──▶ summary pages (pdf-lib): one row per mark with its page
+ *                               ──2──▶ summary pages (our PDF writer, fonts shared with the sheets): one row per mark with its page
  *                               ──3──▶ one PDF: summary, then the sheets; one bookmark per mark; fixed metadata
  *
  * Every figure is read from the marks' rows and checks (the report computes nothing). The summary page
  * carries the basis editions, the schedule's assumptions and the caution; each sheet carries its own.
  */
-import fontkit from '@pdf-lib/fontkit';
-import { readFileSync } from 'node:fs';
-import { PDFDocument, rgb, type PDFFont, type PDFPage, type RGB } from 'pdf-lib';
+import { rgb, type PDFPage, type RGB } from 'pdf-lib';
 import { wrap } from '../chart/sheet-data.js';
 import { COLOURS } from '../chart/style.js';
 import type { ColumnCheck } from '../design/column-check.js';
@@ -20,6 +18,8 @@ import { checkAssumptions, STATUS_WORDS } from '../report/check-view.js';
 import { cell } from '../report/format.js';
 import { scheduleAssumptions, type ScheduleHead } from '../report/schedule-view.js';
 import { SheetRenderer } from '../render/renderer.js';
+import type { PageContent } from '../render/pdf-canvas.js';
+import { PdfWriter, type Painter, type PainterFont } from '../render/pdf-writer.js';
 import { addOutline } from './book.js';
 import { buildCheckReport, reportPaper } from './check-report.js';
 import { writeFileAtomic } from './files.js';
@@ -53,7 +53,7 @@ export async function writeScheduleReport<R extends ScheduleRowFacts>(
 ): Promise<(R & { code: string; title: string })[]> {
   const rows: (R & { code: string; title: string })[] = [];
   const renderer = await SheetRenderer.create();
-  let sheets: Uint8Array;
+  let sheets: PageContent[];
   let paper = reportPaper('us');
   try {
     const pdf = renderer.pdfPages();
@@ -73,30 +73,24 @@ export async function writeScheduleReport<R extends ScheduleRowFacts>(
       rows.push(row as unknown as R & { code: string; title: string });
       onMark?.(rows.length);
     }
-    sheets = pdf.toBuffer();
+    sheets = pdf.pages();
   } finally {
     renderer.finalize();
   }
   const head = headOf(rows);
-  const doc = await PDFDocument.create({ updateMetadata: false });
-  doc.registerFontkit(fontkit);
-  const { fontPaths } = await import('../render/environment.js');
-  const fonts = fontPaths();
-  const regular = await doc.embedFont(readFileSync(fonts.regular), { subset: true });
-  const bold = await doc.embedFont(readFileSync(fonts.bold), { subset: true });
+  const writer = await PdfWriter.create();
+  const doc = writer.doc;
   const first = firstPageRows(paper.h);
   const other = otherPageRows(paper.h);
   const spans: [number, number][] = [[0, Math.min(rows.length, first)]];
   for (let start = first; start < rows.length; start += other) spans.push([start, Math.min(rows.length, start + other)]);
   const summaryPages: PDFPage[] = [];
   spans.forEach(([from, to], k) => {
-    const page = doc.addPage([paper.w, paper.h]);
-    summaryPages.push(page);
-    drawSummary(page, { rows, head, meta, from, to, pageNo: k + 1, pages: spans.length + rows.length, first: spans.length + 1 }, regular, bold);
+    const page = writer.painter(paper.w, paper.h);
+    drawSummary(page, { rows, head, meta, from, to, pageNo: k + 1, pages: spans.length + rows.length, first: spans.length + 1 }, page.regular, page.bold);
+    summaryPages.push(page.finish());
   });
-  const src = await PDFDocument.load(sheets, { updateMetadata: false });
-  const sheetPages: PDFPage[] = [];
-  for (const p of await doc.copyPages(src, src.getPageIndices())) sheetPages.push(doc.addPage(p));
+  const sheetPages: PDFPage[] = sheets.map((p) => writer.addPage(p));
   if (sheetPages.length !== rows.length) throw new Error(`schedule report: ${sheetPages.length} sheet pages for ${rows.length} marks`);
   addOutline(doc, [
     { title: 'Summary', page: summaryPages[0]! },
@@ -107,10 +101,10 @@ export async function writeScheduleReport<R extends ScheduleRowFacts>(
   if (meta.office !== undefined) doc.setAuthor(meta.office);
   doc.setSubject(`Column schedule check, ${head.bases.map((b) => b.title).join('; ')}, ${rows.length} marks`);
   doc.setCreator(meta.generator);
-  doc.setProducer(`${meta.generator} (pdf-lib, node-canvas)`);
+  doc.setProducer(`${meta.generator} (pdf-lib)`);
   doc.setCreationDate(date);
   doc.setModificationDate(date);
-  writeFileAtomic(file, await doc.save({ useObjectStreams: true }));
+  writeFileAtomic(file, await writer.save());
   return rows;
 }
 
@@ -126,7 +120,7 @@ interface SummaryPage<R extends ScheduleRowFacts> {
   first: number;
 }
 
-function drawSummary<R extends ScheduleRowFacts>(page: PDFPage, s: SummaryPage<R>, regular: PDFFont, bold: PDFFont): void {
+function drawSummary<R extends ScheduleRowFacts>(page: Painter, s: SummaryPage<R>, regular: PainterFont, bold: PainterFont): void {
   const { width: W, height: H } = page.getSize();
   const u = Math.min(W, H) / 100 + 0.8;
   const m = 4 * u;
@@ -151,7 +145,7 @@ function drawSummary<R extends ScheduleRowFacts>(page: PDFPage, s: SummaryPage<R
   const total = cols.reduce((a, c) => a + c[1], 0);
   const scale = (W - 2 * m) / total;
   const size = 0.95 * u;
-  const row = (cells: string[], font: PDFFont, colour: string) => {
+  const row = (cells: string[], font: PainterFont, colour: string) => {
     let x = m;
     cells.forEach((t, k) => {
       const [, w, al] = cols[k]!;
@@ -175,7 +169,7 @@ function drawSummary<R extends ScheduleRowFacts>(page: PDFPage, s: SummaryPage<R
   if (s.pageNo !== 1) return;
   // the first page also holds the summary, the notes, the assumptions and the caution
   y -= 1.2 * u;
-  const line = (text: string, sz: number, font: PDFFont, colour: string = COLOURS.ink) => {
+  const line = (text: string, sz: number, font: PainterFont, colour: string = COLOURS.ink) => {
     for (const l of wrap(text, W - 2 * m, sz)) {
       page.drawText(l, { x: m, y, size: sz, font, color: hex(colour) });
       y -= sz * 1.4;

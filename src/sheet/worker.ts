@@ -1,16 +1,18 @@
 /**
  * Child process for rendering chunks (node-canvas crashes in worker threads, so sets parallelise
  * across processes). Messages: parent → {type:'task', task}; child → {type:'sheet'} per sheet,
- * {type:'done', chunk, pdf} per chunk, {type:'error', error}.
+ * {type:'done', chunk, pages} per chunk (the PDF page contents; the parent writes the fonts once),
+ * {type:'error', error}.
  */
 import { isPmError } from '../errors.js';
 import type { ChildError } from '../io/child-pool.js';
+import type { PageContent } from '../render/pdf-canvas.js';
 import { SheetRenderer } from '../render/renderer.js';
 import { renderChunk, type ChunkTask } from './render-chunk.js';
 
 export type WorkerMessage =
   | { type: 'sheet' }
-  | { type: 'done'; chunk: number; pdf: string | undefined; maxRssKb: number }
+  | { type: 'done'; chunk: number; pages: PageContent[] | undefined; maxRssKb: number }
   | { type: 'error'; error: ChildError };
 
 const send = (m: WorkerMessage) => {
@@ -33,8 +35,8 @@ process.on('message', (msg: { type: 'task'; task: ChunkTask } | { type: 'exit' }
   void (async () => {
     try {
       renderer ??= SheetRenderer.create();
-      const pdf = await renderChunk(msg.task, await renderer, () => send({ type: 'sheet' }));
-      send({ type: 'done', chunk: msg.task.chunk, pdf, maxRssKb: process.resourceUsage().maxRSS });
+      const pages = await renderChunk(msg.task, await renderer, () => send({ type: 'sheet' }));
+      send({ type: 'done', chunk: msg.task.chunk, pages, maxRssKb: process.resourceUsage().maxRSS });
     } catch (e) {
       const err = e as Error;
       send({
