@@ -926,7 +926,7 @@ function cellValue(g: Deco, x: number, y: number, rowH: number, w: number, val: 
 }
 
 /** Wraps at spaces, and breaks a word longer than the width after "-", "_", "·" or anywhere: every character is kept. */
-function breakLines(g: Deco, style: TextStyle, text: string, w: number): string[] {
+export function breakLines(g: Deco, style: TextStyle, text: string, w: number): string[] {
   const fits = (s: string) => g.width(style, s) <= w;
   const out: string[] = [];
   for (const line of wrap(text, w, g.size(style), (s, f) => g.measure(s, f, TEXT_STYLES[style].weight === 'bold'))) {

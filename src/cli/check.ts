@@ -19,6 +19,7 @@ import { addSectionOptions, withFlagNames } from '../flags/section-flags.js';
 import { addEffectsOptions } from '../flags/check-effects.js';
 import { isDrawn, resolveCheckOptions, type CheckOptions, type ResolvedCheck } from '../flags/check-flags.js';
 export * from '../flags/check-flags.js';
+import { addOfficeOptions } from '../flags/office-flags.js';
 
 /**
  * Above this many loads the command ranks the loads first and then prints (and writes .txt and .json
@@ -66,13 +67,21 @@ async function runResolvedAsync(o: CheckOptions, rc: ResolvedCheck): Promise<str
   const check = withFlagNames(() => checkColumn(rc.input));
   const date = reportDate(o.date);
   const { writeCheckReport } = await import('../sheet/check-report-file.js');
+  const { logoRef } = await import('../sheet/logo.js');
+  const of = rc.office;
+  const logo = of.logo ? await logoRef(of.logo, o.logo !== undefined ? '--logo' : '--office-file logo') : undefined;
   await writeCheckReport(rc.report, {
     check,
     assumptions: checkAssumptions(check),
     caution: CAUTION,
     date,
     ...(o.project !== undefined ? { project: o.project } : {}),
-    ...(o.office !== undefined ? { office: o.office } : {}),
+    ...(of.office !== undefined ? { office: of.office } : {}),
+    ...(o.mark !== undefined ? { mark: o.mark } : {}),
+    ...(of.preparedBy !== undefined ? { preparedBy: of.preparedBy } : {}),
+    ...(of.checkedBy !== undefined ? { checkedBy: of.checkedBy } : {}),
+    ...(of.revision !== undefined ? { revision: of.revision } : {}),
+    ...(logo ? { logo } : {}),
     generator: generatorLabel(),
   });
   return finish(rc, check);
@@ -153,5 +162,6 @@ export function registerCheck(program: Command, run: (fn: () => Promise<void> | 
     .option('--project <text>', 'project name for the title block of a PDF/SVG report')
     .option('--office <text>', 'office name for the title block of a PDF/SVG report')
     .option('--date <yyyy-mm-dd>', 'date of a PDF/SVG report and its PDF metadata (default SOURCE_DATE_EPOCH, else today)')
-    .action((opts: CheckOptions) => run(() => writeCheck(opts)));
+    .option('--mark <text>', 'column mark for the title block of a PDF/SVG report, e.g. C-14');
+  addOfficeOptions(cmd, 'a PDF/SVG report').action((opts: CheckOptions) => run(() => writeCheck(opts)));
 }
