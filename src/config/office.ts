@@ -30,7 +30,7 @@ export function readOfficeFile(files: FileAccess, path: string, relativeTo: stri
   } catch (e) {
     throw new PmError(ERROR_CODES.invalidValue, at, `is not valid JSON (${(e as Error).message})`, { value: path });
   }
-  const file = parseOrThrow(OfficeFileSchema, json, (p) => `${at} ${formatPath(p)}`);
+  const file = parseOrThrow(OfficeFileSchema, json, (p) => (p.length > 0 ? `${at} ${formatPath(p)}` : at));
   const logoAt = `${at} logo`;
   return { file, ...(file.logo !== undefined ? { logo: readLogo(files, file.logo, dir, logoAt) } : {}) };
 }
