@@ -21,7 +21,7 @@ import { barCount } from '../section/arrangements.js';
 import { faceCounts, type Arrangement } from '../section/types.js';
 import { DISPLAY_UNITS, parseQuantity, systemFactor, type UnitSystem } from '../units/index.js';
 import { reportDate } from './format.js';
-import { resolveOfficeFlags, withOfficeSection, type OfficeFlags, type ResolvedOffice } from './office-flags.js';
+import type { OfficeFlags } from './office-flags.js';
 import { resolveSectionFlags, withFlagNames, type ResolvedSection, type SectionFlags } from './section-flags.js';
 import { resolveEffects, type EffectsFlags } from './check-effects.js';
 
@@ -67,8 +67,6 @@ export interface ResolvedCheck {
   report?: string;
   /** notes on how the input was read (columns a --columns map leaves unread), for standard error */
   notes: string[];
-  /** the drawn report's title block: flags over the --office-file */
-  office: ResolvedOffice;
 }
 
 /** Load files are read by src/input/loads-csv.ts (csv-parse; header units, ";" files, duplicates refused). */
@@ -130,9 +128,7 @@ export function resolveCheckOptions(given0: CheckOptions, given?: { loads: reado
   }
   if (o0.date !== undefined) reportDate(o0.date);
   checkTitleFlags(o0);
-  // the office file under the flags: the report's title block and logo, and units and basis code where unset
-  const office = resolveOfficeFlags(given0);
-  const o = withOfficeSection(given0, office.file, false);
+  const o = given0;
   const section = resolveSectionFlags(o, true);
   const u = section.units;
   const { basis } = section;
@@ -221,7 +217,7 @@ export function resolveCheckOptions(given0: CheckOptions, given?: { loads: reado
   const fx = resolveEffects(o, section, input, given === undefined && o.loads === undefined);
   input.loads = fx.loads;
   if (fx.slenderness) input.slenderness = fx.slenderness;
-  return { section, input, json: o.json === true, ...(o.report !== undefined ? { report: o.report } : {}), notes, office };
+  return { section, input, json: o.json === true, ...(o.report !== undefined ? { report: o.report } : {}), notes };
 }
 
 /** " (3 on each b face, 5 on each h face)" for unequal four-faces counts; "" otherwise. */

@@ -10,7 +10,7 @@ import { sectionDepth, sectionWidth } from '../section/geometry.js';
 import { parseNumberList } from './format.js';
 import { resolveSectionFlags, type SectionFlags } from './section-flags.js';
 import { parseOmegaList, parseRhoList } from './table-flags.js';
-import { resolveOfficeFlags, withOfficeSection, type OfficeFlags } from './office-flags.js';
+import type { OfficeFlags, ResolvedOffice } from './office-flags.js';
 
 export interface SheetOptions extends SectionFlags, OfficeFlags {
   rho?: string;
@@ -27,10 +27,12 @@ export interface SheetOptions extends SectionFlags, OfficeFlags {
 }
 
 /** Builds a one-sheet chart set from section flags (pure apart from reading --custom-bars). */
-export async function sheetSetFromFlags(given: SheetOptions): Promise<{ set: ResolvedChartSet; basis: ReturnType<typeof resolveSectionFlags>['basis']; capContext: ReturnType<typeof resolveSectionFlags>['capContext'] }> {
-  // the office file under the flags: title block, logo, and units, basis code and paper where no flag gives them
-  const office = resolveOfficeFlags(given);
-  const o = withOfficeSection(given, office.file);
+/**
+ * `office`: the title block and logo with the flags over the --office-file (office-flags.ts resolveOfficeFlags, which
+ * the command line applies first, with the office file's units, code and paper under the flags: the live page reads
+ * no office file).
+ */
+export async function sheetSetFromFlags(o: SheetOptions, office: ResolvedOffice = {}): Promise<{ set: ResolvedChartSet; basis: ReturnType<typeof resolveSectionFlags>['basis']; capContext: ReturnType<typeof resolveSectionFlags>['capContext'] }> {
   const section = resolveSectionFlags(o);
   if (section.arrangement.kind === 'custom') {
     throw new PmError(ERROR_CODES.invalidValue, '--arrangement', 'custom is not available for sheets yet', { value: 'custom', allowed: 'two-faces, four-faces, side-faces, ring' });
