@@ -59,6 +59,9 @@ export type { BarProposal, Detailing } from './design/bar-selection.js';
 export { checkJson, checkText, checkReportText, checkJsonPieces, checkTextPieces, checkReportPieces, textSizer } from './report/check-view.js';
 export { CAUTION } from './report/caution.js';
 export { readChartSet, readChartSetReport } from './config/read.js';
+/** file access for readChartSet's `files` option: the office file and logo a chart set names, relative to `baseDir` */
+export { nodeFileAccess } from './io/read.js';
+export { cleanSvg } from './config/logo.js';
 export type { ResolvedChartSet } from './config/types.js';
 export { GENERATOR } from './version.js';
 

@@ -14,7 +14,7 @@ import { roundStep, tickFormat, type AxisExtent, type AxisScale } from './axes.j
 import { biaxialTable, type BiaxialTable } from './biaxial-table.js';
 import { centredBox, estimateText, LabelPlacer, type MeasureText, type Segment } from './labels.js';
 import { sheetLayout, type Box, type SheetLayout } from './layout.js';
-import { curveKeyText, Deco, drawTitleBlock, fitSideColumn, notesAndCaution, type SideFit, header, wrap, type SheetData, type TemplateParams } from './sheet-data.js';
+import { curveKeyText, Deco, drawTitleBlock, logoInner, type LogoRef, fitSideColumn, notesAndCaution, type SideFit, header, wrap, type SheetData, type TemplateParams } from './sheet-data.js';
 import { COLOURS, curveColour } from './style.js';
 
 export interface BiaxialSheetContext {
@@ -27,6 +27,8 @@ export interface BiaxialSheetContext {
   measureText?: MeasureText;
   /** the extent the panels must cover (mx in M, my in P, chart units): the group's envelope in a book; default this sheet's contours */
   extent?: AxisExtent;
+  /** the office logo; absent: none */
+  logo?: LogoRef;
 }
 
 export interface BuiltBiaxialSheet {
@@ -100,6 +102,7 @@ export function buildBiaxialSheet(ctx: BiaxialSheetContext): BuiltBiaxialSheet {
   const omegas = set.ratios.kind === 'omega' ? set.ratios.values : undefined;
   const table = biaxialTable(family, divisor, omegas);
   const data: SheetData = { curves: [], curveLabels: [], refs: [], refLabels: [], frame: [], texts: [], rects: [], rules: [], dots: [], rings: [] };
+  if (ctx.logo) template.logo = logoInner(L);
   const g = new Deco(L, data, ctx.measureText ?? estimateText);
   header(ctx, g);
   panels(ctx, g, divisor);
@@ -481,5 +484,5 @@ function biaxialTitleBlock(ctx: BiaxialSheetContext, g: Deco): void {
   ];
   const rows: [string, string, number][][] =
     (g.L.titleRows ?? 3) >= 5 ? [[sheetRow[0]!, sheetRow[1]!, people[2]!, people[3]!, sheetRow[3]!], [sheetRow[2]!], section, [people[0]!, people[1]!, people[4]!, norm[1]!], [...factors, norm[0]!]] : [sheetRow, [...section, ...people], [...factors, ...norm]];
-  drawTitleBlock(g, rows);
+  drawTitleBlock(g, rows, ctx.logo);
 }

@@ -4,7 +4,7 @@
  * compiled view serves any number of panels. Same datasets as P–M sheets (spec.ts DATASET_NAMES).
  */
 import type { TemplateParams } from './sheet-data.js';
-import type { VlSpec } from './spec.js';
+import { logoLayer, type VlSpec } from './spec.js';
 import { chartConfig, COLOURS, pageFrame, round2, TEXT_STYLES, textLayer, type TextStyle } from './style.js';
 
 const raw = (field: string) => ({ field, type: 'quantitative' as const, scale: null });
@@ -32,6 +32,7 @@ export function panelTemplate(t: TemplateParams): VlSpec {
       { name: 'rings', data: { name: 'rings' }, mark: { type: 'point', shape: 'circle', filled: false, strokeWidth: 1.1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), stroke: lit('fill'), order: z } },
       { name: 'dots', data: { name: 'dots' }, mark: { type: 'point', shape: 'circle', filled: true, opacity: 1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), fill: lit('fill'), order: z } },
       ...(Object.keys(TEXT_STYLES) as TextStyle[]).map((s) => textLayer(s, u)),
+      ...logoLayer(t),
     ],
   };
 }

@@ -30,6 +30,8 @@ export interface SheetContext {
   measureText?: MeasureText;
   /** the extent the axes must cover: the envelope of the sheet's group in a book; default this sheet's curves */
   extent?: AxisExtent;
+  /** the office logo (src/sheet/logo.ts makes it from the set's titleBlock.logo); absent: none */
+  logo?: LogoRef;
 }
 
 export interface CurveRow { curve: string; family: FamilyKind; i: number; M: number; P: number; colour: string }
@@ -47,6 +49,8 @@ export interface LoadMarkRow { id: string; M: number; P: number; governing: 0 | 
 export interface LoadLabelRow { x: number; y: number; text: string; governing: 0 | 1; z: number }
 /** Further curves on a report plot (chart units), e.g. the curve at the governing load's ρg required. */
 export interface ExtraCurveRow { curve: string; i: number; M: number; P: number }
+/** An image centred at (x, y), points from the plot origin (the office logo): `url` in SVG output, `raster` on canvas. */
+export interface ImageRow { x: number; y: number; url: string; raster: string; z: number }
 
 /**
  * Rows of decoration datasets carry `z`, their drawing order (the vega-lite `order` channel), so the
@@ -67,6 +71,8 @@ export interface SheetData {
   loadMarks?: LoadMarkRow[];
   loadLabels?: LoadLabelRow[];
   extraCurves?: ExtraCurveRow[];
+  /** the office logo in the title block (TemplateParams.logo) */
+  images?: ImageRow[];
 }
 
 /** Set-wide choices the template depends on (a change compiles a new view). */
@@ -87,6 +93,8 @@ export interface TemplateParams {
    * the panels area and curve rows hold points from its origin. Absent on P–M sheets.
    */
   panels?: boolean;
+  /** the office logo's image size in points (its box in the title block less a margin); absent: no logo */
+  logo?: { w: number; h: number };
 }
 
 export interface BuiltSheet {
@@ -148,6 +156,7 @@ export function buildSheet(ctx: SheetContext): BuiltSheet {
   const axes = axesFor(ctx.extent ? envelope([ctx.extent, own]) : own, L.plot, ctx.sheet.axes);
   template.axes = axes;
 
+  if (ctx.logo) template.logo = logoInner(L);
   const deco = new Deco(L, data, measure);
   const legend = template.families.length > 1 ? familyLegend(ctx, deco) : undefined;
   plotLayers(ctx, L, template.families, primary, divisor, data, { axes, measure, rayValues: 'border', ...(legend ? { reserved: [legend] } : {}) });
@@ -575,11 +584,16 @@ export function header(ctx: Pick<SheetContext, 'sheet' | 'sheetNumber' | 'sheetC
   if (g.width('sheetTitle', title) <= room) g.text('sheetTitle', b.x + 1.8 * u, b.y + b.h * 0.66, title);
   else if (g.width('sheetTitleMid', title) <= room) g.text('sheetTitleMid', b.x + 1.8 * u, b.y + b.h * 0.62, title);
   else {
-    const lines = wrap(title, room, g.size('sheetTitleSmall'), (t, f) => g.measure(t, f, true));
-    const fs = g.size('sheetTitleSmall');
-    const top = b.y + b.h / 2 - (fs * 1.15 * (Math.min(2, lines.length) - 1)) / 2 + 0.35 * fs;
-    const shown = lines.length > 2 ? [lines[0]!, lines.slice(1).join(' ')] : lines;
-    shown.forEach((l, i) => g.text('sheetTitleSmall', b.x + 1.8 * u, top + i * fs * 1.15, l, room));
+    // two lines of the small title size, else as many lines of body type as it takes: never cut
+    let style: TextStyle = 'sheetTitleSmall';
+    let lines = wrap(title, room, g.size(style), (t, f) => g.measure(t, f, true));
+    if (lines.length > 2) {
+      style = 'valueBoldSmall';
+      lines = breakLines(g, style, title, room);
+    }
+    const fs = g.size(style);
+    const top = b.y + b.h / 2 - (fs * 1.12 * (lines.length - 1)) / 2 + 0.35 * fs;
+    lines.forEach((l, i) => g.text(style, b.x + 1.8 * u, top + i * fs * 1.12, l));
   }
   g.rule(b.x, b.y + b.h + 0.6 * u, b.x + b.w, b.y + b.h + 0.6 * u, COLOURS.rule, 0.8);
 }
@@ -812,28 +826,120 @@ function titleBlock(ctx: SheetContext, g: Deco): void {
   // narrow pages: the crowded rows split in two, so no value is cut
   const rows: [string, string, number][][] =
     (g.L.titleRows ?? 3) >= 5 ? [[sheetRow[0]!, sheetRow[1]!, people[2]!, people[3]!, sheetRow[3]!], [sheetRow[2]!], section, [people[0]!, people[1]!, people[4]!, norm[1]!], [...factors, norm[0]!]] : [sheetRow, [...section, ...people], [...factors, ...norm]];
-  drawTitleBlock(g, rows);
+  drawTitleBlock(g, rows, ctx.logo);
 }
 
-/** Title-block cells [caption, value, width weight] row by row, in the sheet layout's title-block box. */
-export function drawTitleBlock(g: Deco, rows: [string, string, number][][]): void {
-  const { titleBlock: b, u } = g.L;
-  g.rect(b, COLOURS.paper, COLOURS.ink, 0.9);
+/** A logo for a title block: `url` for SVG output (cleaned SVG or PNG as a data URI), `raster` a PNG data URI for canvas outputs. */
+export interface LogoRef {
+  url: string;
+  raster: string;
+}
+
+/**
+ * Title-block cells [caption, value, width weight] row by row, in the sheet layout's title-block box; with a
+ * logo, its fixed box (`logoBox`) at the right end first. Captions are never upper-cased (γ would become Γ, ρg
+ * "ΡG"). No value is cut: a row's cells first lend width to a neighbour whose value is too long, then a value
+ * goes to the smaller size, then to two or three lines in the smallest size.
+ */
+export function drawTitleBlock(g: Deco, rows: [string, string, number][][], logo?: LogoRef): void {
+  const { titleBlock: whole, u } = g.L;
+  g.rect(whole, COLOURS.paper, COLOURS.ink, 0.9);
+  const b = logo ? { ...whole, w: whole.w - logoBox(g.L).w } : whole;
+  if (logo) {
+    const lb = logoBox(g.L);
+    g.rule(lb.x, lb.y, lb.x, lb.y + lb.h, COLOURS.ink, 0.5);
+    drawLogo(g, logo, lb);
+  }
   const rowH = b.h / rows.length;
   rows.forEach((cells, r) => {
     const y = b.y + r * rowH;
     if (r > 0) g.rule(b.x, y, b.x + b.w, y, COLOURS.ink, 0.5);
-    const total = cells.reduce((s, c) => s + c[2], 0);
+    const widths = cellWidths(g, cells, b.w);
     let x = b.x;
-    cells.forEach(([cap, val, wgt], k) => {
-      const w = (b.w * wgt) / total;
+    cells.forEach(([cap, val], k) => {
+      const w = widths[k]!;
       if (k > 0) g.rule(x, y, x, y + rowH, COLOURS.ink, 0.5);
-      g.text('caption', x + 0.7 * u, y + 1.05 * u, cap.toUpperCase(), w - 1.4 * u);
+      g.text('caption', x + 0.7 * u, y + 1.05 * u, cap, w - 1.4 * u);
       const bold = cap === 'office' || cap === 'project' || cap === 'sheet';
-      // a smaller size before any cut
-      const fits = g.width(bold ? 'valueBold' : 'value', val) <= w - 1.4 * u;
-      g.text(fits ? (bold ? 'valueBold' : 'value') : bold ? 'valueBoldSmall' : 'valueSmall', x + 0.7 * u, y + rowH - 0.9 * u, val, w - 1.4 * u);
+      cellValue(g, x + 0.7 * u, y, rowH, w - 1.4 * u, val, bold);
       x += w;
     });
   });
+}
+
+/** The fixed box of the office logo: the right end of the title block, full height. */
+export function logoBox(L: SheetLayout): Box {
+  const b = L.titleBlock;
+  const w = Math.min(0.13 * b.w, 2.6 * b.h);
+  return { x: b.x + b.w - w, y: b.y, w, h: b.h };
+}
+
+/** The logo centred in `box` (inside a margin), as large as its aspect allows (vega image mark, `aspect: true`). */
+export function drawLogo(g: Deco, logo: LogoRef, box: Box): void {
+  (g.out.images ??= []).push({ x: round(box.x + box.w / 2 - g.L.plot.x), y: round(box.y + box.h / 2 - g.L.plot.y), url: logo.url, raster: logo.raster, z: g.out.images.length });
+}
+
+/** Inner size of the logo's box (the image mark's width and height). */
+export const logoInner = (L: SheetLayout): { w: number; h: number } => {
+  const b = logoBox(L);
+  return { w: round(b.w - 1.4 * L.u), h: round(b.h - 1.4 * L.u) };
+};
+
+/**
+ * Cell widths of a title-block row: by weight, then cells whose value (at full size) or caption does not fit
+ * take width from cells with room to spare, in proportion to that room.
+ */
+function cellWidths(g: Deco, cells: [string, string, number][], total: number): number[] {
+  const u = g.L.u;
+  const sum = cells.reduce((s, c) => s + c[2], 0);
+  const w = cells.map((c) => (total * c[2]) / sum);
+  const need = cells.map(([cap, val]) => Math.max(g.width('caption', cap), g.width(cap === 'office' || cap === 'project' || cap === 'sheet' ? 'valueBold' : 'value', val)) + 1.6 * u);
+  const short = cells.map((_, k) => Math.max(0, need[k]! - w[k]!));
+  const spare = cells.map((_, k) => Math.max(0, w[k]! - need[k]!));
+  const want = short.reduce((a, v) => a + v, 0);
+  const have = spare.reduce((a, v) => a + v, 0);
+  if (want === 0 || have === 0) return w;
+  const moved = Math.min(want, have);
+  return w.map((v, k) => v + (moved * short[k]!) / want - (moved * spare[k]!) / have);
+}
+
+/** One title-block value, whole: full size, smaller, or wrapped into two or three lines of smaller type. */
+function cellValue(g: Deco, x: number, y: number, rowH: number, w: number, val: string, bold: boolean): void {
+  const u = g.L.u;
+  const full: TextStyle = bold ? 'valueBold' : 'value';
+  const small: TextStyle = bold ? 'valueBoldSmall' : 'valueSmall';
+  if (g.width(full, val) <= w) return g.text(full, x, y + rowH - 0.9 * u, val);
+  if (g.width(small, val) <= w) return g.text(small, x, y + rowH - 0.9 * u, val);
+  // lines from the cell's foot upwards, the top line clear of the caption
+  const top = y + 1.05 * u + 0.35 * u;
+  for (const style of [small, 'bodyTiny'] as TextStyle[]) {
+    const fs = g.size(style);
+    const lines = breakLines(g, style, val, w);
+    const lead = fs * 1.08;
+    const base = y + rowH - 0.45 * u;
+    const firstBase = base - (lines.length - 1) * lead;
+    if (firstBase - 0.75 * fs >= top || style === 'bodyTiny') {
+      lines.forEach((l, i) => g.text(style, x, firstBase + i * lead, l));
+      return;
+    }
+  }
+}
+
+/** Wraps at spaces, and breaks a word longer than the width after "-", "_", "·" or anywhere: every character is kept. */
+export function breakLines(g: Deco, style: TextStyle, text: string, w: number): string[] {
+  const fits = (s: string) => g.width(style, s) <= w;
+  const out: string[] = [];
+  for (const line of wrap(text, w, g.size(style), (s, f) => g.measure(s, f, TEXT_STYLES[style].weight === 'bold'))) {
+    let rest = line;
+    while (!fits(rest) && rest.length > 1) {
+      let n = rest.length - 1;
+      while (n > 1 && !fits(rest.slice(0, n))) n--;
+      const soft = Math.max(rest.lastIndexOf('-', n - 1), rest.lastIndexOf('_', n - 1), rest.lastIndexOf('·', n - 1));
+      const cut = soft > n / 2 ? soft + 1 : n;
+      out.push(rest.slice(0, cut));
+      rest = rest.slice(cut).trimStart();
+    }
+    if (rest) out.push(rest);
+  }
+  return out;
 }

@@ -16,7 +16,26 @@ export const OVERLAY_DATASET_NAMES = ['extraCurves', 'loadMarks', 'loadLabels'] 
 
 /** The datasets a template reads. */
 export function datasetNames(t: TemplateParams): readonly (keyof SheetData)[] {
-  return t.overlay ? [...DATASET_NAMES, ...OVERLAY_DATASET_NAMES] : DATASET_NAMES;
+  const names: (keyof SheetData)[] = t.overlay ? [...DATASET_NAMES, ...OVERLAY_DATASET_NAMES] : [...DATASET_NAMES];
+  if (t.logo) names.push('images');
+  return names;
+}
+
+/**
+ * The office logo (TemplateParams.logo): one image mark centred in its title-block box, as large as its
+ * aspect allows. Rows carry `url` (SVG output: the cleaned SVG or the PNG as a data URI) and `raster` (a
+ * PNG at print resolution, which the canvas outputs draw: src/render/renderer.ts swaps it in).
+ */
+export function logoLayer(t: TemplateParams): Record<string, unknown>[] {
+  if (!t.logo) return [];
+  return [
+    {
+      name: 'logo',
+      data: { name: 'images' },
+      mark: { type: 'image', width: t.logo.w, height: t.logo.h, align: 'center', baseline: 'middle', aspect: true, aria: false },
+      encoding: { x: raw('x'), y: raw('y'), url: { field: 'url', type: 'nominal' }, order: z },
+    },
+  ];
 }
 
 const q = (field: string, title?: string) => ({ field, type: 'quantitative' as const, ...(title !== undefined ? { title } : {}) });
@@ -87,6 +106,7 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
     { name: 'rings', data: { name: 'rings' }, mark: { type: 'point', shape: 'circle', filled: false, strokeWidth: 1.1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), stroke: lit('fill'), order: z } },
     { name: 'dots', data: { name: 'dots' }, mark: { type: 'point', shape: 'circle', filled: true, opacity: 1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), fill: lit('fill'), order: z } },
     ...(Object.keys(TEXT_STYLES) as TextStyle[]).map((s) => textLayer(s, u)),
+    ...logoLayer(t),
   );
   if (o) layers.splice(layers.findIndex((l) => l.name === 'rules'), 0, ...overlayLayers(x, y, u, o.loadRays !== false));
 

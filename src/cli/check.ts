@@ -19,6 +19,13 @@ import { addSectionOptions, withFlagNames } from '../flags/section-flags.js';
 import { addEffectsOptions } from '../flags/check-effects.js';
 import { isDrawn, resolveCheckOptions, type CheckOptions, type ResolvedCheck } from '../flags/check-flags.js';
 export * from '../flags/check-flags.js';
+import { addOfficeOptions, resolveOfficeFlags, withOfficeSection, type ResolvedOffice } from '../flags/office-flags.js';
+
+/** The office file under the flags: the report's title block and logo, and --units and --code where not given. */
+function withOffice(o: CheckOptions): { o: CheckOptions; office: ResolvedOffice } {
+  const office = resolveOfficeFlags(o);
+  return { o: withOfficeSection(o, office.file, false), office };
+}
 
 /**
  * Above this many loads the command ranks the loads first and then prints (and writes .txt and .json
@@ -44,7 +51,7 @@ export function runCheck(o: CheckOptions): string {
   if (o.report !== undefined && isDrawn(o.report)) {
     throw new PmError(ERROR_CODES.invalidValue, '--report', 'is a drawn report; write PDF and SVG reports with runCheckAsync', { value: o.report });
   }
-  return runResolved(resolveCheckOptions(o));
+  return runResolved(resolveCheckOptions(withOffice(o).o));
 }
 
 function runResolved(rc: ResolvedCheck): string {
@@ -57,22 +64,30 @@ function runResolved(rc: ResolvedCheck): string {
 }
 
 /** The command with every report format, the drawn ones through the lazily imported renderer; returns what it prints. */
-export async function runCheckAsync(o: CheckOptions): Promise<string> {
-  return runResolvedAsync(o, resolveCheckOptions(o));
+export async function runCheckAsync(given: CheckOptions): Promise<string> {
+  const { o, office } = withOffice(given);
+  return runResolvedAsync(o, resolveCheckOptions(o), office);
 }
 
-async function runResolvedAsync(o: CheckOptions, rc: ResolvedCheck): Promise<string> {
+async function runResolvedAsync(o: CheckOptions, rc: ResolvedCheck, of: ResolvedOffice): Promise<string> {
   if (rc.report === undefined || !isDrawn(rc.report)) return runResolved(rc);
   const check = withFlagNames(() => checkColumn(rc.input));
   const date = reportDate(o.date);
   const { writeCheckReport } = await import('../sheet/check-report-file.js');
+  const { logoRef } = await import('../sheet/logo.js');
+  const logo = of.logo ? await logoRef(of.logo, o.logo !== undefined ? '--logo' : '--office-file logo') : undefined;
   await writeCheckReport(rc.report, {
     check,
     assumptions: checkAssumptions(check),
     caution: CAUTION,
     date,
     ...(o.project !== undefined ? { project: o.project } : {}),
-    ...(o.office !== undefined ? { office: o.office } : {}),
+    ...(of.office !== undefined ? { office: of.office } : {}),
+    ...(o.mark !== undefined ? { mark: o.mark } : {}),
+    ...(of.preparedBy !== undefined ? { preparedBy: of.preparedBy } : {}),
+    ...(of.checkedBy !== undefined ? { checkedBy: of.checkedBy } : {}),
+    ...(of.revision !== undefined ? { revision: of.revision } : {}),
+    ...(logo ? { logo } : {}),
     generator: generatorLabel(),
   });
   return finish(rc, check);
@@ -84,13 +99,14 @@ async function runResolvedAsync(o: CheckOptions, rc: ResolvedCheck): Promise<str
  * result computed again, in chunks that wait for the reader; drawn reports (at most
  * MAX_DRAWN_REPORT_LOADS loads, src/input/limits.ts) need the whole result and take the held path.
  */
-export async function writeCheck(o: CheckOptions, out: NodeJS.WritableStream = process.stdout, streamAbove = STREAM_ABOVE_LOADS): Promise<void> {
+export async function writeCheck(given: CheckOptions, out: NodeJS.WritableStream = process.stdout, streamAbove = STREAM_ABOVE_LOADS): Promise<void> {
+  const { o, office } = withOffice(given);
   const rc = resolveCheckOptions(o);
   for (const n of rc.notes) process.stderr.write(`pmchart: note: ${n}\n`);
   const report = rc.report;
   if (report !== undefined) reportError(report, () => checkFileTarget(report));
   if (rc.input.loads.length <= streamAbove || (rc.report !== undefined && isDrawn(rc.report))) {
-    await writePieces(out, [await runResolvedAsync(o, rc)]);
+    await writePieces(out, [await runResolvedAsync(o, rc, office)]);
     return;
   }
   const ctx = withFlagNames(() => prepareColumnCheck(rc.input));
@@ -153,5 +169,6 @@ export function registerCheck(program: Command, run: (fn: () => Promise<void> | 
     .option('--project <text>', 'project name for the title block of a PDF/SVG report')
     .option('--office <text>', 'office name for the title block of a PDF/SVG report')
     .option('--date <yyyy-mm-dd>', 'date of a PDF/SVG report and its PDF metadata (default SOURCE_DATE_EPOCH, else today)')
-    .action((opts: CheckOptions) => run(() => writeCheck(opts)));
+    .option('--mark <text>', 'column mark for the title block of a PDF/SVG report, e.g. C-14');
+  addOfficeOptions(cmd, 'a PDF/SVG report').action((opts: CheckOptions) => run(() => writeCheck(opts)));
 }

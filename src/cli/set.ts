@@ -3,7 +3,8 @@
  * book.pdf, sheets/*.svg|png and tables/*.csv|json. Render modules are imported lazily so other
  * commands never load vega, canvas or pdf-lib.
  */
-import { readInputText } from '../io/read.js';
+import { dirname } from 'node:path';
+import { nodeFileAccess, readInputText } from '../io/read.js';
 import type { Command } from 'commander';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { MAX_CONFIG_BYTES } from '../input/limits.js';
@@ -26,7 +27,7 @@ export interface SetResult {
 export async function runSet(file: string, o: SetOptions = {}, stderr: NodeJS.WriteStream = process.stderr): Promise<SetResult> {
   const text = readInputText(file, MAX_CONFIG_BYTES, file);
   const { readChartSetReport } = await import('../config/read.js');
-  const { set, warnings } = readChartSetReport(text, { source: file, ...(process.env.SOURCE_DATE_EPOCH ? { sourceDateEpoch: process.env.SOURCE_DATE_EPOCH } : {}) });
+  const { set, warnings } = readChartSetReport(text, { source: file, files: nodeFileAccess, baseDir: dirname(file), ...(process.env.SOURCE_DATE_EPOCH ? { sourceDateEpoch: process.env.SOURCE_DATE_EPOCH } : {}) });
   for (const w of warnings) stderr.write(`pmchart: warning: ${w}\n`);
 
   let jobs: number | undefined;

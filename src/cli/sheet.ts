@@ -7,6 +7,7 @@ import type { Command } from 'commander';
 import { ERROR_CODES, PmError } from '../errors.js';
 import { addSectionOptions } from '../flags/section-flags.js';
 import { sheetSetFromFlags, type SheetOptions } from '../flags/sheet-flags.js';
+import { addOfficeOptions, resolveOfficeFlags, withOfficeSection } from '../flags/office-flags.js';
 export * from '../flags/sheet-flags.js';
 
 /** Writes the sheet; returns the path written. */
@@ -16,7 +17,11 @@ export async function runSheet(o: SheetOptions): Promise<string> {
   if (!['.svg', '.png', '.pdf'].includes(kind)) throw new PmError(ERROR_CODES.invalidValue, '--out', 'must end in .svg, .png or .pdf', { value: o.out });
   const { checkFileTarget } = await import('../io/files.js');
   checkFileTarget(out, '--out');
-  const { set, capContext } = await sheetSetFromFlags(o);
+  // the office file under the flags: title block, logo, and units, basis code and paper where no flag gives them
+  const office = resolveOfficeFlags(o);
+  const { set, capContext } = await sheetSetFromFlags(withOfficeSection(o, office.file), office);
+  const { checkLogo } = await import('../sheet/logo.js');
+  await checkLogo(set.titleBlock.logo, o.logo !== undefined ? '--logo' : '--office-file logo');
   const { renderSheet } = await import('../sheet/render-sheet.js');
   const { writeFileAtomic } = await import('../sheet/files.js');
   writeFileAtomic(out, await renderSheet(set, 1, kind.slice(1) as 'svg' | 'png' | 'pdf', { capContext }), '--out');
@@ -35,7 +40,8 @@ export function registerSheet(program: Command, run: (fn: () => Promise<void> | 
     .option('--portrait', 'portrait instead of landscape')
     .option('--office <text>', 'office name for the title block')
     .option('--project <text>', 'project name for the title block')
-    .option('--date <yyyy-mm-dd>', 'date for the title block and PDF metadata (default SOURCE_DATE_EPOCH, else today)')
+    .option('--date <yyyy-mm-dd>', 'date for the title block and PDF metadata (default SOURCE_DATE_EPOCH, else today)');
+  addOfficeOptions(cmd, 'the sheet')
     .option('--out <file>', 'output file: .svg, .png or .pdf', 'sheet.pdf')
     .action((opts: SheetOptions) =>
       run(async () => {

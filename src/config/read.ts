@@ -4,7 +4,9 @@
  *   text ──1 parse──▶ JSON ──2 schema──▶ ChartSetFile ──3 resolve──▶ ResolvedChartSet ──4 rules──▶ checked set
  *
  * Every stage reports problems as PmError with the field path, e.g. `sheets[3].gamma: 1.2 is outside 0.3–0.95`.
- * Pure: the caller reads the file; `now` stands in for the clock.
+ * Between 1 and 2 the office file (`officeFile`) fills what the chart set leaves out (config/office.ts); after 3
+ * the logo is read. Pure: the caller reads the file and passes `files` for the files it names; `now` stands in
+ * for the clock.
  */
 import { DESIGN_CODES, parseStrength } from '../codes/registry.js';
 import { BASIS_IDS } from '../codes/registry.js';
@@ -16,6 +18,7 @@ import { issueDate, MAX_AXIAL_LEVELS, MAX_LEVELS_PER_SHEET, MAX_SHEETS } from '.
 import { biaxialStemPart, biaxialTitlePart, DEFAULT_TITLE_PATTERN, fileStemFor, fillPattern, titleFields } from './describe.js';
 import { expandNumbers } from './expand.js';
 import { checkRules } from './rules.js';
+import { readLogo, readOfficeFile, withOfficeDefaults, type FileAccess, type ReadOffice } from './office.js';
 import { ChartSetFileSchema, type ChartSetFile, type SheetGroupFile, type ShapeFile } from './schema.js';
 import { PAPER_POINTS, type ResolvedChartSet, type ResolvedShape, type ResolvedSheet } from './types.js';
 
@@ -26,6 +29,13 @@ export interface ReadOptions {
   now?: Date;
   /** SOURCE_DATE_EPOCH (seconds), when set */
   sourceDateEpoch?: string;
+  /**
+   * Reads the files the chart set names (officeFile, titleBlock.logo), relative to `baseDir`; absent, a chart
+   * set naming one is refused (exit 2 naming the field)
+   */
+  files?: FileAccess;
+  /** the chart set's directory (paths in it are relative to it); default "." */
+  baseDir?: string;
 }
 
 /** Reads a chart set from its text: throws PmError on the first problem. */
@@ -43,14 +53,28 @@ export function readChartSetReport(text: string, opts: ReadOptions = {}): { set:
   } catch (e) {
     throw new PmError(ERROR_CODES.invalidValue, opts.source ?? 'chart set', `is not valid JSON (${(e as Error).message})`);
   }
+  // 1b. the office defaults file, under the chart set's own values
+  let office: ReadOffice | undefined;
+  const officePath = typeof json === 'object' && json !== null ? (json as { officeFile?: unknown }).officeFile : undefined;
+  if (typeof officePath === 'string') {
+    office = readOfficeFile(needFiles(opts, 'officeFile'), officePath, opts.baseDir ?? '.', 'officeFile');
+    json = withOfficeDefaults(json, office.file);
+  }
   // 2. schema
   const file = checkSchema(json);
   // 3. resolve
   const set = resolveChartSet(file, opts);
+  const logo = file.titleBlock.logo !== undefined ? readLogo(needFiles(opts, 'titleBlock.logo'), file.titleBlock.logo, opts.baseDir ?? '.', 'titleBlock.logo') : office?.logo;
+  if (logo) set.titleBlock.logo = logo;
   // 4. rules
   const { errors, warnings } = checkRules(set, file);
   if (errors.length > 0) throw errors[0]!;
   return { set, warnings };
+}
+
+function needFiles(opts: ReadOptions, at: string): FileAccess {
+  if (!opts.files) throw new PmError(ERROR_CODES.invalidValue, at, 'names a file, and this reader was given no file access (ReadOptions.files)');
+  return opts.files;
 }
 
 /** Stage 2: the schema check, with zod's first issue turned into one line naming the field. */

@@ -21,6 +21,7 @@ import {
   MAX_AXIAL_LEVELS,
   MAX_LIST,
   MAX_NAME_CHARS,
+  MAX_PATH_CHARS,
   MAX_TEXT_CHARS,
   MAX_TITLE_PATTERN_CHARS,
   NAME_PATTERN,
@@ -144,9 +145,51 @@ const SheetGroup = z
   })
   .strict();
 
+/** Paper size and orientation, in a chart set or an office file. */
+const Paper = z
+  .object({
+    size: z.enum(PAPER_SIZES).describe('default "tabloid" for US units, "a3" for SI').optional(),
+    orientation: z.enum(ORIENTATIONS).describe('default "landscape"').optional(),
+  })
+  .strict();
+
+const UnitsField = z.enum(['us', 'si']).describe('unit system: "us" (kip, in, ksi) or "si" (N, mm, MPa)');
+
+const Basis = z
+  .object({
+    code: z.string().describe(`design basis and edition, one of: ${BASIS_IDS.join(', ')}`),
+    options: BasisOptions.describe('options some bases read (EN 1992-1-1 partial factors and laws); default: each basis’s recommended values').optional(),
+  })
+  .strict();
+
+/** A logo file path: an SVG or PNG file of at most 1 MB. */
+const LogoPath = text(MAX_PATH_CHARS).describe('office logo: an SVG or PNG file (at most 1 MB), drawn in a fixed box of the title block of every sheet, the cover, the index and check reports; SVG is cleaned of scripts and external references');
+
+/**
+ * The office defaults file (`officeFile` in a chart set, `--office-file` on the command line): what every book
+ * and check sheet of an office shares. A chart set's own fields win over it, flags over both; paths in it are
+ * relative to the office file.
+ */
+export const OfficeFileSchema = z
+  .object({
+    $schema: text(1000).describe('path of this JSON Schema, for editors').optional(),
+    office: text(MAX_TEXT_CHARS).describe('office name on every sheet (a chart set’s titleBlock.office wins)').optional(),
+    logo: LogoPath.describe('office logo, relative to this office file: an SVG or PNG file of at most 1 MB').optional(),
+    preparedBy: text(MAX_TEXT_CHARS).describe('initials or name of the preparer (a chart set’s titleBlock.preparedBy wins)').optional(),
+    checkedBy: text(MAX_TEXT_CHARS).describe('initials or name of the checker (a chart set’s titleBlock.checkedBy wins)').optional(),
+    paper: Paper.describe('the office’s paper; a chart set’s paper fields win field by field').optional(),
+    units: UnitsField.optional(),
+    basis: Basis.describe('the office’s usual design basis; a chart set’s basis wins as a whole').optional(),
+  })
+  .strict();
+export type OfficeFile = z.infer<typeof OfficeFileSchema>;
+
 export const ChartSetFileSchema = z
   .object({
     $schema: text(1000).describe('path of this JSON Schema, for editors').optional(),
+    officeFile: text(MAX_PATH_CHARS)
+      .describe('office defaults file (office name, logo, people, paper, units, basis), relative to this chart set; this file’s own fields win over it')
+      .optional(),
     name: text(MAX_NAME_CHARS)
       .regex(new RegExp(NAME_PATTERN), { message: 'must be 1–80 letters, digits, "-" or "_", starting with a letter or digit' })
       .describe('set name; also the output folder name (letters, digits, "-", "_")'),
@@ -158,24 +201,13 @@ export const ChartSetFileSchema = z
         checkedBy: text(MAX_TEXT_CHARS).describe('initials or name; default ""').optional(),
         revision: text(MAX_TEXT_CHARS).describe('revision mark; default "0"').optional(),
         date: calendarDate().describe('issue date YYYY-MM-DD printed on sheets and used as the PDF dates; default: SOURCE_DATE_EPOCH, else today (UTC)').optional(),
-      })
-      .strict(),
-    paper: z
-      .object({
-        size: z.enum(PAPER_SIZES).describe('default "tabloid" for US units, "a3" for SI').optional(),
-        orientation: z.enum(ORIENTATIONS).describe('default "landscape"').optional(),
+        logo: LogoPath.describe('office logo, relative to this chart set: an SVG or PNG file (at most 1 MB) drawn in a fixed box of every title block, the cover and the index; SVG is cleaned of scripts and external references').optional(),
       })
       .strict()
-      .optional(),
-    units: z.enum(['us', 'si']).describe('unit system: "us" (kip, in, ksi) or "si" (N, mm, MPa)'),
-    basis: z
-      .object({
-        code: z.string().describe(`design basis and edition, one of: ${BASIS_IDS.join(', ')}`),
-        options: BasisOptions
-          .describe('options some bases read (EN 1992-1-1 partial factors and laws); default: each basis’s recommended values')
-          .optional(),
-      })
-      .strict(),
+      .describe('title-block text; office, preparedBy, checkedBy and logo may come from the officeFile instead'),
+    paper: Paper.optional(),
+    units: UnitsField.describe('unit system: "us" (kip, in, ksi) or "si" (N, mm, MPa); required here or in the officeFile'),
+    basis: Basis.describe('design basis; required here or in the officeFile'),
     normalisation: z.enum(NORMALISATIONS).describe('"stress": P/Ag and M/(Ag·h) in the stress unit; "dimensionless": also divided by the basis’s normalising stress (f′c, or fcd for EN 1992-1-1: ν and μ); default "stress"').optional(),
     families: z.enum(FAMILY_CHOICES).describe('curves to draw: "design" (φ-factored), "nominal" or "both"; default "design"').optional(),
     rhoG: z.union([list(ranged(RHO_RANGE), SET_CURVES_RANGE[1]), NumberRange(RHO_RANGE)]).describe('ρg family (geometric ratio As/Ag); default 0.01 to 0.08 in 0.01 steps; give this or omega').optional(),
@@ -218,6 +250,17 @@ export type SheetGroupFile = z.infer<typeof SheetGroup>;
 export type ShapeFile = z.infer<typeof Shape>;
 export type ArrangementFile = z.infer<typeof Arrangement>;
 export type BasisOptionsFile = z.infer<typeof BasisOptions>;
+
+/** JSON Schema of the office defaults file (draft 2020-12), as committed in charts-config/office.schema.json. */
+export function officeJsonSchema(): Record<string, unknown> {
+  const schema = z.toJSONSchema(OfficeFileSchema, { io: 'input' }) as Record<string, unknown>;
+  return {
+    ...schema,
+    $id: 'https://pmchart.invalid/charts-config/office.schema.json',
+    title: 'pmchart office defaults',
+    description: 'What every chart set and check sheet of an office shares: office name, logo, people, paper, units and basis. A chart set names it with officeFile, a command with --office-file; flags win over the chart set, the chart set over this file.',
+  };
+}
 
 /** JSON Schema of the file format (draft 2020-12), as committed in charts-config/. */
 export function chartSetJsonSchema(): Record<string, unknown> {

@@ -2,6 +2,7 @@
 import type { BasisOptions, CodeId, Transverse } from '../codes/types.js';
 import type { Arrangement } from '../section/types.js';
 import type { UnitSystem } from '../units/index.js';
+import type { ResolvedLogo } from './logo.js';
 import type { FamilyChoice, Normalisation, PaperSize } from './schema.js';
 
 export const RATIO_KINDS = ['rhoG', 'omega'] as const;
@@ -18,6 +19,8 @@ export interface ResolvedTitleBlock {
   revision: string;
   /** ISO date YYYY-MM-DD */
   date: string;
+  /** the office logo, read and cleaned (config/logo.ts); absent: none */
+  logo?: ResolvedLogo;
 }
 
 export interface ResolvedPaper {

@@ -21,10 +21,11 @@ import { barCount } from '../section/arrangements.js';
 import { faceCounts, type Arrangement } from '../section/types.js';
 import { DISPLAY_UNITS, parseQuantity, systemFactor, type UnitSystem } from '../units/index.js';
 import { reportDate } from './format.js';
+import type { OfficeFlags } from './office-flags.js';
 import { resolveSectionFlags, withFlagNames, type ResolvedSection, type SectionFlags } from './section-flags.js';
 import { resolveEffects, type EffectsFlags } from './check-effects.js';
 
-export interface CheckOptions extends SectionFlags, EffectsFlags {
+export interface CheckOptions extends SectionFlags, EffectsFlags, OfficeFlags {
   pu?: string;
   mu?: string;
   loads?: string;
@@ -43,9 +44,11 @@ export interface CheckOptions extends SectionFlags, EffectsFlags {
   proposals?: string;
   json?: boolean;
   report?: string;
-  /** title block of a PDF/SVG report */
+  /** title block of a PDF/SVG report (with OfficeFlags: --office-file, --logo, --prepared-by, --checked-by, --revision) */
   project?: string;
   office?: string;
+  /** the column mark for the report's title block (e.g. "C-14") */
+  mark?: string;
   date?: string;
 }
 
@@ -115,15 +118,17 @@ export function exportOptions(o: { columns?: string; compression?: string }, ext
  * Reads the flags into one `ResolvedCheck`. `given` supplies loads already read (a schedule's loads of
  * one mark, src/flags/schedule-rows.ts): they stand for a load file (end moments as columns).
  */
-export function resolveCheckOptions(o: CheckOptions, given?: { loads: readonly FactoredLoad[] }): ResolvedCheck {
-  if (o.report !== undefined) {
-    const ext = extname(o.report).toLowerCase();
+export function resolveCheckOptions(given0: CheckOptions, given?: { loads: readonly FactoredLoad[] }): ResolvedCheck {
+  const o0 = given0;
+  if (o0.report !== undefined) {
+    const ext = extname(o0.report).toLowerCase();
     if (!(REPORT_FORMATS as readonly string[]).includes(ext)) {
-      throw new PmError(ERROR_CODES.invalidValue, '--report', 'has an unknown extension', { value: o.report, allowed: REPORT_FORMATS.join(', ') });
+      throw new PmError(ERROR_CODES.invalidValue, '--report', 'has an unknown extension', { value: o0.report, allowed: REPORT_FORMATS.join(', ') });
     }
   }
-  if (o.date !== undefined) reportDate(o.date);
-  checkTitleFlags(o);
+  if (o0.date !== undefined) reportDate(o0.date);
+  checkTitleFlags(o0);
+  const o = given0;
   const section = resolveSectionFlags(o, true);
   const u = section.units;
   const { basis } = section;

@@ -72,7 +72,7 @@ export { GAMMA_RANGE };
 /** Registers the shared section flags on a command. */
 export function addSectionOptions(cmd: Command): Command {
   return cmd
-    .option('--code <id>', `design basis: ${BASIS_IDS.join(', ')}`, BASIS_IDS[0])
+    .option('--code <id>', `design basis: ${BASIS_IDS.join(', ')} (default ${BASIS_IDS[0]}, or the --office-file's)`)
     .option('--units <system>', "unit system: us (kip, in, ksi) or si (kN, mm, MPa); default: the basis's first (us for ACI, si otherwise)")
     .option('--fc <stress>', "specified concrete strength f′c (fck), e.g. 4, 4ksi, 28MPa")
     .option('--fy <stress>', 'specified yield strength fy (fyk), e.g. 60, 420MPa')

@@ -10,8 +10,9 @@ import { sectionDepth, sectionWidth } from '../section/geometry.js';
 import { parseNumberList } from './format.js';
 import { resolveSectionFlags, type SectionFlags } from './section-flags.js';
 import { parseOmegaList, parseRhoList } from './table-flags.js';
+import type { OfficeFlags, ResolvedOffice } from './office-flags.js';
 
-export interface SheetOptions extends SectionFlags {
+export interface SheetOptions extends SectionFlags, OfficeFlags {
   rho?: string;
   omega?: string;
   out?: string;
@@ -26,7 +27,12 @@ export interface SheetOptions extends SectionFlags {
 }
 
 /** Builds a one-sheet chart set from section flags (pure apart from reading --custom-bars). */
-export async function sheetSetFromFlags(o: SheetOptions): Promise<{ set: ResolvedChartSet; basis: ReturnType<typeof resolveSectionFlags>['basis']; capContext: ReturnType<typeof resolveSectionFlags>['capContext'] }> {
+/**
+ * `office`: the title block and logo with the flags over the --office-file (office-flags.ts resolveOfficeFlags, which
+ * the command line applies first, with the office file's units, code and paper under the flags: the live page reads
+ * no office file).
+ */
+export async function sheetSetFromFlags(o: SheetOptions, office: ResolvedOffice = {}): Promise<{ set: ResolvedChartSet; basis: ReturnType<typeof resolveSectionFlags>['basis']; capContext: ReturnType<typeof resolveSectionFlags>['capContext'] }> {
   const section = resolveSectionFlags(o);
   if (section.arrangement.kind === 'custom') {
     throw new PmError(ERROR_CODES.invalidValue, '--arrangement', 'custom is not available for sheets yet', { value: 'custom', allowed: 'two-faces, four-faces, side-faces, ring' });
@@ -65,7 +71,7 @@ export async function sheetSetFromFlags(o: SheetOptions): Promise<{ set: Resolve
   const fam = families === 'both' ? 'nominal and factored' : families;
   const set: ResolvedChartSet = {
     name: 'sheet',
-    titleBlock: { office: o.office ?? '', project: o.project ?? '', preparedBy: '', checkedBy: '', revision: '—', date },
+    titleBlock: { office: office.office ?? '', project: o.project ?? '', preparedBy: office.preparedBy ?? '', checkedBy: office.checkedBy ?? '', revision: office.revision ?? '—', date, ...(office.logo ? { logo: office.logo } : {}) },
     paper: { size: size as ResolvedChartSet['paper']['size'], orientation: o.portrait ? 'portrait' : 'landscape', widthPt: o.portrait ? pw : ph, heightPt: o.portrait ? ph : pw },
     units: section.units,
     code: section.code,

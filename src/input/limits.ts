@@ -77,6 +77,12 @@ export const MAX_FLAG_CHARS = 4096;
 /** File sizes, bytes. */
 export const MAX_CONFIG_BYTES = 1 << 20;
 export const MAX_CUSTOM_BARS_BYTES = 1 << 20;
+/** An office logo (SVG or PNG): at most 1 MB. */
+export const MAX_LOGO_BYTES = 1 << 20;
+/** An office defaults file (JSON). */
+export const MAX_OFFICE_FILE_BYTES = 1 << 16;
+/** Characters of a file path in a chart set or office file (logo, officeFile). */
+export const MAX_PATH_CHARS = 1000;
 export const MAX_LOADS_BYTES = 32 << 20;
 /** Load rows in one CSV file. */
 export const MAX_LOAD_ROWS = 200_000;

@@ -5,6 +5,7 @@
  * Errors name the input (`at`: a flag or a file) and exit 2.
  */
 import { closeSync, openSync, readSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
 import { ERROR_CODES, PmError } from '../errors.js';
 
 const CHUNK = 1 << 16;
@@ -12,6 +13,27 @@ const sleepSync = (ms: number) => Atomics.wait(new Int32Array(new SharedArrayBuf
 
 /** The UTF-8 text of `file`, at most `limit` bytes; `at` names the input in errors. */
 export function readInputText(file: string, limit: number, at: string): string {
+  const bytes = readInputBytes(file, limit, at);
+  try {
+    return new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+  } catch {
+    throw new PmError(ERROR_CODES.invalidValue, at, 'is not UTF-8 text', { value: file });
+  }
+}
+
+/**
+ * Files a chart set names (its officeFile, a logo), each relative to the directory of the file that names it,
+ * read through the same bounded reader (config/read.ts FileAccess).
+ */
+export const nodeFileAccess = {
+  read(path: string, relativeTo: string, limit: number, at: string): { bytes: Uint8Array; dir: string } {
+    const full = resolve(relativeTo, path);
+    return { bytes: readInputBytes(full, limit, at), dir: dirname(full) };
+  },
+};
+
+/** The bytes of `file`, at most `limit`; `at` names the input in errors (a missing file is exit 2, as a bad path is the user's). */
+export function readInputBytes(file: string, limit: number, at: string): Uint8Array {
   const failed = (e: unknown): PmError =>
     e instanceof PmError ? e : new PmError(ERROR_CODES.io, at, `cannot be read (${(e as NodeJS.ErrnoException).code ?? (e as Error).message.split('\n')[0]})`, { value: file });
   let fd: number;
@@ -47,11 +69,7 @@ export function readInputText(file: string, limit: number, at: string): string {
       bytes.set(c, off);
       off += c.length;
     }
-    try {
-      return new TextDecoder('utf-8', { fatal: true }).decode(bytes);
-    } catch {
-      throw new PmError(ERROR_CODES.invalidValue, at, 'is not UTF-8 text', { value: file });
-    }
+    return bytes;
   } catch (e) {
     throw failed(e);
   } finally {

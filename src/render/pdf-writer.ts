@@ -222,7 +222,7 @@ const css = (c: RGB): string => `rgb(${Math.round(c.red * 255)}, ${Math.round(c.
 
 /**
  * pdf-lib's page drawing calls (y up from the bottom left) on a writer page, so cover, index and summary
- * pages share the book's fonts: drawText, drawRectangle, drawLine.
+ * pages share the book's fonts: drawText, drawRectangle, drawLine, drawImage.
  */
 export class Painter {
   readonly regular: PainterFont;
@@ -278,6 +278,13 @@ export class Painter {
     c.lineCap = 'butt';
     c.setLineDash([]);
     c.stroke();
+  }
+
+  /** A PNG (bytes as they are, embedded once per document) in the box (x, y) bottom left, width × height. */
+  drawImage(png: Uint8Array, o: { x: number; y: number; width: number; height: number }): void {
+    const c = this.canvas;
+    c.globalAlpha = 1;
+    c.drawImage({ src: png, width: o.width, height: o.height }, o.x, this.canvas.height - o.y - o.height, o.width, o.height);
   }
 
   /** Ends the page and adds it to the writer. */

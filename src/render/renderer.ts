@@ -130,7 +130,7 @@ export class SheetRenderer {
   }
 
   async png(page: SheetPage, scale: number): Promise<Buffer> {
-    const view = await this.show(page);
+    const view = await this.show(onCanvas(page));
     const canvas = (await view.toCanvas(scale)) as unknown as import('canvas').Canvas;
     return canvas.toBuffer('image/png', { compressionLevel: 6 });
   }
@@ -174,7 +174,7 @@ export class PdfPages {
   async add(page: SheetPage, insets: readonly Inset[] = []): Promise<void> {
     const { w, h } = page.template.layout.page;
     const ctx = new PdfCanvas(w, h);
-    await this.draw(ctx, await this.renderer.show(page));
+    await this.draw(ctx, await this.renderer.show(onCanvas(page)));
     for (const inset of insets) {
       const view = await this.renderer.specView(inset.spec);
       await this.draw(ctx, view, inset.x, inset.y);
@@ -205,6 +205,16 @@ export class PdfPages {
     meta?.(writer.doc);
     return writer.save();
   }
+}
+
+/**
+ * Canvas and PDF outputs draw the logo's `raster` (a PNG at print resolution, src/sheet/logo.ts): node-canvas
+ * would load an SVG image as a bitmap at its own small size. SVG output keeps `url` (the cleaned SVG itself).
+ */
+function onCanvas(page: SheetPage): SheetPage {
+  const images = page.data.images;
+  if (!images || images.length === 0) return page;
+  return { template: page.template, data: { ...page.data, images: images.map((r) => ({ ...r, url: r.raster })) } };
 }
 
 /**

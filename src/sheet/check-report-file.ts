@@ -6,9 +6,9 @@ import { buildCheckReport, type CheckReportInput } from './check-report.js';
 import { writeFileAtomic } from './files.js';
 
 export async function writeCheckReport(file: string, input: CheckReportInput): Promise<void> {
-  const page = buildCheckReport(input);
   const renderer = await SheetRenderer.create();
   try {
+    const page = buildCheckReport({ ...input, measureText: renderer.measureText });
     const sheet = { template: page.template, data: page.data };
     if (extname(file).toLowerCase() === '.svg') {
       writeFileAtomic(file, await renderer.svg(sheet, page.insets));

@@ -18,8 +18,9 @@
 import { contourSpec } from '../chart/contour-spec.js';
 import type { Box, SheetLayout } from '../chart/layout.js';
 import { LOAD_MARK_WORDS } from '../chart/spec.js';
-import { Deco, estWidth, plotLayers, wrap, type LoadLabelRow, type SheetData, type TemplateParams } from '../chart/sheet-data.js';
+import { breakLines, Deco, drawTitleBlock, estWidth, logoInner, plotLayers, wrap, type LoadLabelRow, type LogoRef, type SheetData, type TemplateParams } from '../chart/sheet-data.js';
 import { COLOURS, TEXT_STYLES, type TextStyle } from '../chart/style.js';
+import { estimateText, type MeasureText } from '../chart/labels.js';
 import { contourPlot } from '../chart/contour-plot.js';
 import { strainClassWord } from '../codes/types.js';
 import type { ColumnCheck, ColumnLoadResult } from '../design/column-check.js';
@@ -38,7 +39,16 @@ export interface CheckReportInput {
   date: string;
   project?: string;
   office?: string;
+  /** the column mark (e.g. "C-14"), named in the header and the title block */
+  mark?: string;
+  preparedBy?: string;
+  checkedBy?: string;
+  revision?: string;
+  /** the office logo (src/sheet/logo.ts), drawn in the title block's fixed box */
+  logo?: LogoRef;
   generator: string;
+  /** text widths with the sheet typeface (SheetRenderer.measureText); default an estimate */
+  measureText?: MeasureText;
 }
 
 export interface CheckReportPage {
@@ -64,12 +74,14 @@ interface ReportLayout extends SheetLayout {
   bottom: Box;
 }
 
-function reportLayout(W: number, H: number, plotShare: number): ReportLayout {
+/** `captionH`: the height of the caption under the plot (all its lines). */
+function reportLayout(W: number, H: number, plotShare: number, captionH = 4.0 * (Math.min(W, H) / 100 + 0.8), minBottom = 0): ReportLayout {
   const u = Math.min(W, H) / 100 + 0.8;
   const m = 3.2 * u;
   const gap = 2.2 * u;
   const header: Box = { x: m, y: m, w: W - 2 * m, h: 4.2 * u };
-  const titleBlock: Box = { x: m, y: H - m - 5.0 * u, w: W - 2 * m, h: 5.0 * u };
+  // two rows: office, project, column mark, sheet; basis, section, people, revision, date, generator
+  const titleBlock: Box = { x: m, y: H - m - 6.4 * u, w: W - 2 * m, h: 6.4 * u };
   const top = header.y + header.h + gap;
   const bottomY = titleBlock.y - gap;
   const bw = W - 2 * m;
@@ -79,7 +91,8 @@ function reportLayout(W: number, H: number, plotShare: number): ReportLayout {
   const plotTop = top + 2.4 * u;
   const plotH = plotShare * colA.h - 2.4 * u - 4.6 * u;
   const plot: Box = { x: m + 6.2 * u, y: plotTop, w: colA.w - 6.2 * u - 0.6 * u, h: plotH };
-  const bTop = plot.y + plot.h + 4.6 * u + 4.4 * u;
+  // the tables start under the plot's caption and under column B's panels (minBottom)
+  const bTop = Math.max(plot.y + plot.h + 4.6 * u + captionH + 0.6 * u, minBottom);
   const bottom: Box = { x: m, y: bTop, w: colB.x + colB.w - m, h: bottomY - bTop };
   return { page: { w: W, h: H }, u, header, plot, table: bottom, side: colC, titleBlock, colA, colB, colC, bottom };
 }
@@ -99,9 +112,14 @@ export function buildCheckReport(input: CheckReportInput): CheckReportPage {
   const b = c.basis;
   const u = c.units;
   const paper = reportPaper(u);
-  const L = reportLayout(paper.w, paper.h, plotShare(paper, c));
+  const measure = input.measureText ?? estimateText;
+  const captionLines = plotCaptionLines(c, reportLayout(paper.w, paper.h, 0.5), measure);
+  const captionH = captionLines.length * TEXT_STYLES.caption.size * (Math.min(paper.w, paper.h) / 100 + 0.8) * 1.3 + 0.4 * (Math.min(paper.w, paper.h) / 100 + 0.8);
+  // the largest plot that leaves every table under it whole (a figure is never cut for a bigger plot)
+  const fit = fittingShare(paper, c, captionH, measure);
+  const L = reportLayout(paper.w, paper.h, fit.share, captionH, fit.minBottom);
   const data: SheetData = { curves: [], curveLabels: [], refs: [], refLabels: [], frame: [], texts: [], rects: [], rules: [], dots: [], rings: [], loadMarks: [], loadLabels: [], extraCurves: [] };
-  const g = new Deco(L, data);
+  const g = new Deco(L, data, measure);
 
   // 1. the family at the actual γ, the governing curve, the loads
   const family = checkFamily(c, SHEET_BASE_POINTS);
@@ -132,26 +150,74 @@ export function buildCheckReport(input: CheckReportInput): CheckReportPage {
     yTitle: `${sy.designAxial} / Ag,  ${vs.P} / Ag   (${su})`,
     families: ['design'],
     overlay: domain,
+    ...(input.logo ? { logo: logoInner(L) } : {}),
   };
 
   // 2. panels
-  const title = `Column check: ${sectionText(c)}`;
+  const title = `Column check${input.mark ? ` ${input.mark}` : ''}: ${sectionText(c)}`;
   header(g, title, input);
   g.text('heading', L.colA.x, L.colA.y + 1.0 * L.u, `Loads on the ${sy.designFamily} curves at the actual γ = ${fmt(c.gamma, 4)}`);
-  plotCaption(g, L, c);
+  plotCaption(g, L, captionLines);
   const insets: Inset[] = [];
   const yB = inputsPanel(g, L, c);
   if (c.biaxial && c.checked && gov) contourPanel(g, L, c, gov, yB, insets);
   else if (gov) summaryPanel(g, L, c, yB);
-  const bottom = new Flow(g, L.bottom);
+  bottomTables(new Flow(g, L.bottom, fit.small), c);
+  sidePanel(g, L, c, input);
+  titleBlock(g, c, input);
+  return { template, data, insets, title };
+}
+
+/**
+ * The plot's share of the column: from 62 % down to 40 % in steps of 2.5 %, the first at which the tables under the
+ * plot (and under column B's panels) are drawn whole, tried on a scratch layer; the smallest when none is.
+ */
+function fittingShare(paper: { w: number; h: number }, c: ColumnCheck, captionH: number, measure: MeasureText): { share: number; minBottom: number; small: boolean } {
+  const start = MAX_PLOT_SHARE;
+  const blank = (): SheetData => ({ curves: [], curveLabels: [], refs: [], refLabels: [], frame: [], texts: [], rects: [], rules: [], dots: [], rings: [] });
+  // the tables run under column B too: they start below its inputs and its contour (at least MIN_CONTOUR units) or summary
+  const L0 = reportLayout(paper.w, paper.h, start, captionH);
+  const g0 = new Deco(L0, blank(), measure);
+  const yB = inputsPanel(g0, L0, c);
+  const gov = c.results[0];
+  const contour = c.biaxial && c.checked && gov;
+  const summaryEnd = !contour && gov ? summaryPanel(g0, L0, c, yB) + 0.6 * L0.u : yB;
+  // the contour inset at a good size, then smaller; per size, shares from the largest; per share, the tables at the
+  // cell size, then all in the smaller type
+  for (const side of contour ? CONTOUR_SIDES : [0]) {
+    const colBEnd = contour ? yB + (1.8 + side + 5.6) * L0.u : summaryEnd;
+    for (let s = start; s >= MIN_PLOT_SHARE - 1e-9; s -= 0.025) {
+      for (const small of [false, true]) {
+        const L = reportLayout(paper.w, paper.h, s, captionH, colBEnd);
+        const scratch = new Flow(new Deco(L, blank(), measure), L.bottom, small);
+        bottomTables(scratch, c);
+        if (!scratch.cut) return { share: s, minBottom: colBEnd, small };
+      }
+    }
+  }
+  const side = CONTOUR_SIDES[CONTOUR_SIDES.length - 1]!;
+  return { share: MIN_PLOT_SHARE, minBottom: contour ? yB + (1.8 + side + 5.6) * L0.u : summaryEnd, small: true };
+}
+
+/** Largest share of the column height the plot takes (a short check). */
+const MAX_PLOT_SHARE = 0.62;
+/** Smallest share of the column height the plot is given to make room for the tables (the plot is the sheet's point). */
+const MIN_PLOT_SHARE = 0.4;
+/** Sides of the Mx–My contour inset tried (the larger first), type units; the last is its smallest. */
+const CONTOUR_SIDES = [16, 12, 9];
+const MIN_CONTOUR = 9;
+
+/** The tables under the plot: results, biaxial methods, slenderness, bar proposals. */
+function bottomTables(bottom: Flow, c: ColumnCheck): void {
   if (bottom.heading('Results (governing load first)', Math.min(2, c.results.length))) {
-    bottom.table(columns(resultsView(c)), resultsView(c).rows, resultsView(c).marked, (n) => `${n} more loads, in rank order: the .txt and .json reports list every load.`);
+    // many loads cannot all be drawn: past the first dozen, rows may go to the text and JSON reports
+    bottom.table(columns(resultsView(c)), resultsView(c).rows, resultsView(c).marked, (n) => `${n} more loads, in rank order: the .txt and .json reports list every load.`, LABELLED_LOADS);
     bottom.note([`Summary: ${c.summary.text}.`, ...resultsFootnotes(c)].join(' '));
   }
   const bx = biaxialView(c);
-  if (bx && bottom.heading('Biaxial bending: three methods side by side (checked reinforcement; above 1 fails)', Math.min(2, c.results.length))) bottom.table(columns(bx), bx.rows, bx.marked);
+  if (bx && bottom.heading('Biaxial bending: three methods side by side (checked reinforcement; above 1 fails)', Math.min(2, c.results.length))) bottom.table(columns(bx), bx.rows, bx.marked, undefined, LABELLED_LOADS);
   const sl = slendernessView(c);
-  if (sl && bottom.heading(`Slenderness: ${sl.method}`, 2)) bottom.table(columns(sl.table), sl.table.rows, sl.table.marked);
+  if (sl && bottom.heading(`Slenderness: ${sl.method}`, 2)) bottom.table(columns(sl.table), sl.table.rows, sl.table.marked, undefined, 2 * LABELLED_LOADS);
   const bars = barsView(c);
   if (bottom.heading('Bar proposals (lightest first, re-verified with the discrete bars against every load and effect)', typeof bars === 'string' ? 0 : Math.min(2, bars.rows.length))) {
     if (typeof bars === 'string') bottom.note(bars, 'body');
@@ -159,24 +225,6 @@ export function buildCheckReport(input: CheckReportInput): CheckReportPage {
     const unmet = barsUnmetLine(c);
     if (unmet) bottom.note(unmet, 'body');
   }
-  sidePanel(g, L, c, input);
-  titleBlock(g, L, c, input);
-  return { template, data, insets, title };
-}
-
-/**
- * Share of the column height the plot takes: what the tables under it need (in table lines, estimated), within
- * 45–62 %, so a short check gets a large plot and a long one keeps its tables on the page.
- */
-function plotShare(paper: { w: number; h: number }, c: ColumnCheck): number {
-  const u = Math.min(paper.w, paper.h) / 100 + 0.8;
-  const colH = reportLayout(paper.w, paper.h, 0.5).colA.h;
-  const n = Math.min(c.results.length, 12);
-  let lines = 5 + n + 3 + 4 + Math.max(1, c.bars.length);
-  if (c.biaxial && c.checked) lines += 5 + n;
-  if (c.slenderness) lines += 5 + 2 * n;
-  const need = lines * 1.22 * u + 9 * u;
-  return Math.min(0.62, Math.max(0.45, 1 - need / colH));
 }
 
 function sectionText(c: ColumnCheck): string {
@@ -266,18 +314,22 @@ function placeLoads(L: SheetLayout, d: { domainM: [number, number]; domainP: [nu
   for (const l of labels) data.loadLabels!.push(l); // no spread: 200k loads overflow the call stack
 }
 
-function plotCaption(g: Deco, L: ReportLayout, c: ColumnCheck): void {
-  const u = L.u;
-  const y = L.plot.y + L.plot.h + 4.6 * u + 0.4 * u;
+/** The caption under the plot, in lines of the column's width (every line is drawn: nothing is cut). */
+function plotCaptionLines(c: ColumnCheck, L: ReportLayout, measure: MeasureText): string[] {
   const n = c.results.length;
   const gov = c.results[0];
   const vs = symbolsOf(c);
   const slender = `${c.slenderness ? ' Moments as checked: magnified for slenderness.' : ''}${c.biaxial ? ` The chart shows ${vs.M} about x${c.shape.kind === 'circle' ? ' (the resultant for a circle)' : ''}; ${vs.M}y enters the biaxial check.` : ''}`;
   const text = `Curves at ρg ${c.chart.rhos.map((r) => fmt(r, 3)).join(', ')}; dashed ink: ρg required of the governing load and the checked ρg, where they fall between the steps. ${LOAD_MARK_WORDS.mark[0]!.toUpperCase()}${LOAD_MARK_WORDS.mark.slice(1)}: the ${n} load${n === 1 ? '' : 's'} at (${vs.M}/(Ag·${vs.depth}), ${vs.P}/Ag), ${LOAD_MARK_WORDS.ray}; ${LOAD_MARK_WORDS.governing}: governing${gov ? ` (${gov.id})` : ''}${n > LABELLED_LOADS ? `; the first ${LABELLED_LOADS} by rank are labelled` : ''}.${slender}`;
-  let yy = y;
-  for (const line of wrap(text, L.colA.w, g.size('caption')).slice(0, 3)) {
-    g.text('caption', L.colA.x, yy, line);
-    yy += g.size('caption') * 1.3;
+  const fs = TEXT_STYLES.caption.size * L.u;
+  return wrap(text, L.colA.w, fs, (s, f) => measure(s, f, false));
+}
+
+function plotCaption(g: Deco, L: ReportLayout, lines: readonly string[]): void {
+  let y = L.plot.y + L.plot.h + 4.6 * L.u + 0.4 * L.u;
+  for (const line of lines) {
+    g.text('caption', L.colA.x, y, line);
+    y += g.size('caption') * 1.3;
   }
 }
 
@@ -288,7 +340,18 @@ function header(g: Deco, title: string, input: CheckReportInput): void {
   g.rect({ x: b.x, y: b.y, w: 0.7 * u, h: b.h }, COLOURS.accent);
   const right = 'calculation sheet · 1 of 1';
   g.text('headerRight', b.x + b.w, b.y + b.h * 0.62, right);
-  g.text('sheetTitle', b.x + 1.8 * u, b.y + b.h * 0.66, title, b.w - 1.8 * u - estWidth(right, g.size('headerRight')) - 3 * u);
+  const room = b.w - 1.8 * u - g.width('headerRight', right) - 3 * u;
+  // the title whole: full size, smaller, or in lines of smaller type; never cut
+  if (g.width('sheetTitle', title) <= room) g.text('sheetTitle', b.x + 1.8 * u, b.y + b.h * 0.66, title);
+  else if (g.width('sheetTitleMid', title) <= room) g.text('sheetTitleMid', b.x + 1.8 * u, b.y + b.h * 0.62, title);
+  else {
+    const style: TextStyle = 'sheetTitleSmall';
+    const lines = breakLines(g, g.width(style, title) <= 2 * room ? style : 'valueBoldSmall', title, room);
+    const st: TextStyle = g.width(style, title) <= 2 * room ? style : 'valueBoldSmall';
+    const fs = g.size(st);
+    const top = b.y + b.h / 2 - (fs * 1.12 * (lines.length - 1)) / 2 + 0.35 * fs;
+    lines.forEach((l, i) => g.text(st, b.x + 1.8 * u, top + i * fs * 1.12, l));
+  }
   g.rule(b.x, b.y + b.h + 0.6 * u, b.x + b.w, b.y + b.h + 0.6 * u, COLOURS.rule, 0.8);
   void input;
 }
@@ -312,12 +375,12 @@ function inputsPanel(g: Deco, L: ReportLayout, c: ColumnCheck): number {
   ];
   const kw = 8.2 * u;
   for (const [k, v] of rows) {
-    g.text('caption', b.x, y, k.toUpperCase(), kw - 0.5 * u);
+    g.text('caption', b.x, y, k);
     y = g.paragraph('body', b.x + kw, y, b.w - kw, v, 1.3);
     y += 0.15 * u;
   }
   const params = Object.entries(c.basis.parameters).map(([k, v]) => `${k} ${typeof v === 'number' ? fmt(v, 5) : v}`);
-  g.text('caption', b.x, y, 'PARAMETERS', kw - 0.5 * u);
+  g.text('caption', b.x, y, 'parameters');
   y = g.paragraph('body', b.x + kw, y, b.w - kw, params.join(' · '), 1.3);
   return y + 0.8 * u;
 }
@@ -330,11 +393,12 @@ function contourPanel(g: Deco, L: ReportLayout, c: ColumnCheck, gov: ColumnLoadR
   g.text('heading', b.x, y + 1.0 * u, `Mx–My contour at ${vs.P} of ${gov.id}`);
   y += 1.8 * u;
   const { section: sec, minP, maxP } = checkedSection(c)!;
-  const bottomLimit = L.bottom.y - 3.6 * u;
+  // the caption under the inset (about three lines) ends above the tables
+  const bottomLimit = L.bottom.y - 4.8 * u;
   if (load.Pu > maxP || load.Pu <= minP) {
     return g.paragraph('body', b.x, y + 1.0 * u, b.w, `${vs.P} = ${f(toDisplay(load.Pu, 'force', c.units), 5)} ${un.force} is outside the axial range of the section: no contour.`) + u;
   }
-  const size = Math.max(10 * u, Math.min(b.w, bottomLimit - y));
+  const size = Math.max(MIN_CONTOUR * u, Math.min(b.w, bottomLimit - y));
   const box: Box = { x: b.x, y, w: b.w, h: size };
   const left = 5.4 * u;
   const bottom = 4.4 * u;
@@ -348,12 +412,12 @@ function contourPanel(g: Deco, L: ReportLayout, c: ColumnCheck, gov: ColumnLoadR
 }
 
 /** The governing load's answer in a few lines (when there is no contour to show). */
-function summaryPanel(g: Deco, L: ReportLayout, c: ColumnCheck, y: number): void {
+/** Returns the y after its last line. */
+function summaryPanel(g: Deco, L: ReportLayout, c: ColumnCheck, y: number): number {
   const { colB: b, u } = L;
   const gov = c.results[0]!;
   const area = c.units === 'us' ? 'in²' : 'mm²';
-  g.text('heading', b.x, y + 1.0 * u, `Governing load: ${gov.id} (${STATUS_WORDS[gov.status]})`);
-  y += 2.0 * u;
+  y = g.paragraph('heading', b.x, y + 1.0 * u, b.w, `Governing load: ${gov.id} (${STATUS_WORDS[gov.status]})`, 1.2) + 0.6 * u;
   const lines: [TextStyle, string][] = [];
   if (gov.status !== 'ok') lines.push(['valueBold', noteText(gov, c)]);
   if (gov.rhoRequired !== null) {
@@ -370,14 +434,27 @@ function summaryPanel(g: Deco, L: ReportLayout, c: ColumnCheck, y: number): void
   lines.push(['body', `At capacity along the load ray: ${c.basis.symbols.tensionStrain ?? 'εt'} = ${f(gov.strain.epsT, 3)}, φ = ${f(gov.strain.phi, 3)}, ${strainClassWord(c.basis.symbols, gov.strain.class)}.`]);
   if (gov.utilisation !== null) lines.push(['valueBold', `Utilisation of the checked steel: ${f(gov.utilisation, 3)}`]);
   for (const [style, text] of lines) y = g.paragraph(style, b.x, y, b.w, text, 1.35) + 0.3 * u;
+  return y;
 }
 
-/** Places blocks top to bottom in a box; a table that does not fit is cut with a note. */
+/** A table row of `lines` lines: the table line (1.22 units; 1.0 in the smaller type) or the lines and a margin. */
+const rowHeight = (u: number, lines: number, lead: number, large: boolean): number => Math.max((large ? 1.22 : 1.0) * u, lines * lead + (large ? 0.45 : 0.3) * u);
+
+/**
+ * Places blocks top to bottom in a box. Figures are never cut: a table's number columns keep the width of their
+ * widest figure (in smaller type when the row is too wide), its text columns share the rest and wrap into more
+ * lines. Rows that do not fit go to a note naming the text and JSON reports; `cut` records that a table lost rows
+ * it had to show (or a block its heading), so the caller can make room.
+ */
 class Flow {
   y: number;
+  /** a block or a table row that had to be shown was left out */
+  cut = false;
+  /** `small`: every table in the smaller type (a crowded sheet) */
   constructor(
     readonly g: Deco,
     readonly box: Box,
+    readonly small = false,
   ) {
     this.y = box.y;
   }
@@ -390,69 +467,139 @@ class Flow {
   /** Writes the heading when it and `lines` more lines fit; else a one-line pointer to the text report where that fits. */
   heading(text: string, lines = 4): boolean {
     if (this.left < 1.8 * this.u + (lines + 2.2) * 1.22 * this.u + 1.6 * this.u) {
+      this.cut = true;
       if (this.left >= 1.6 * this.u) {
-        this.g.text('caption', this.box.x, this.y + 1.0 * this.u, `${text}: no room on this sheet; the .txt and .json reports hold it.`, this.box.w);
+        this.g.paragraph('caption', this.box.x, this.y + 1.0 * this.u, this.box.w, `${text}: no room on this sheet; the .txt and .json reports hold it.`, 1.3);
         this.y += 1.6 * this.u;
       }
       return false;
     }
-    this.g.text('heading', this.box.x, this.y + 1.0 * this.u, text, this.box.w);
+    this.g.paragraph('heading', this.box.x, this.y + 1.0 * this.u, this.box.w, text, 1.2);
     this.y += 1.8 * this.u;
     return true;
   }
   /**
-   * A table: header row with a unit row under it, then rows; column widths from the text, stretched to the box.
-   * `bold` marks rows drawn bold in the first column (the governing load). Returns the rows drawn.
+   * A table: header rows (the head wrapped, a unit line under it), then rows; `bold` marks rows drawn bold in the
+   * first column (the governing load). Rows past `mustShow` may go to the note without counting as cut. Returns
+   * the rows drawn.
    */
-  table(cols: { head: string; unit?: string; align: 'l' | 'r' }[], rows: string[][], bold: boolean[] = [], omittedNote?: (n: number) => string): number {
+  table(cols: { head: string; unit?: string; align: 'l' | 'r' }[], rows: string[][], bold: boolean[] = [], omittedNote?: (n: number) => string, mustShow = Infinity): number {
     const u = this.u;
     const g = this.g;
-    const line = 1.22 * u;
-    const fsCell = TEXT_STYLES.cellRight.size * u;
-    const natural = cols.map((c, i) => Math.max(estWidth(c.head, TEXT_STYLES.cellHead.size * u), estWidth(c.unit ?? '', TEXT_STYLES.cellSub.size * u), ...rows.map((r) => estWidth(r[i] ?? '', fsCell))) + 1.2 * u);
-    const total = natural.reduce((a, v) => a + v, 0);
-    const scale = this.box.w / total;
-    const widths = natural.map((w) => w * scale);
-    const headH = 2.2 * line;
-    const fit = Math.max(0, Math.floor((this.left - headH - 1.6 * u) / line));
-    const shown = rows.length <= fit ? rows.length : Math.max(0, fit - 1);
-    if (fit <= 0) return 0;
+    const pad = 1.0 * u;
+    const W = this.box.w;
+    const words = (t: string) => t.split(/\s+/).filter(Boolean);
+    // styles: figures at the cell size, else smaller; text likewise
+    const sizes: { num: TextStyle; bold: TextStyle; text: TextStyle }[] = [
+      { num: 'cellRight', bold: 'cellRho', text: 'body' },
+      { num: 'bodyTiny', bold: 'valueBoldSmall', text: 'bodyTiny' },
+    ];
+    const plans: { st: (typeof sizes)[number]; widths: number[] }[] = [];
+    for (const st of this.small ? sizes.slice(1) : sizes) {
+      const cellW = (i: number, t: string, k: number) => g.width(cols[i]!.align === 'r' ? st.num : i === 0 && bold[k] ? st.bold : st.text, t);
+      // the head may wrap at spaces; a figure never
+      const headMin = cols.map((c) => Math.max(...words(c.head).map((w) => g.width('cellHead', w)), g.width('cellSub', c.unit ?? '')));
+      const need = cols.map((c, i) => {
+        if (c.align === 'r') return Math.max(headMin[i]!, ...rows.map((r, k) => cellW(i, r[i] ?? '', k))) + pad;
+        // text: its longest word (a load id longer than 9 units breaks after "-" or "_"), at least 4 units
+        return Math.max(headMin[i]!, 4 * u, Math.min(9 * u, Math.max(0, ...rows.map((r, k) => Math.max(0, ...words(r[i] ?? '').map((w) => cellW(i, w, k))))))) + pad;
+      });
+      const want = cols.map((c, i) => Math.max(need[i]!, g.width('cellHead', c.head) + pad, ...rows.map((r, k) => cellW(i, r[i] ?? '', k) + pad)));
+      const sumNeed = need.reduce((a, v) => a + v, 0);
+      const sumWant = want.reduce((a, v) => a + v, 0);
+      // every column its natural width when that fits (the slack spread evenly), else its need plus a share of the rest
+      const widths = sumWant <= W ? want.map((v) => v + (W - sumWant) / cols.length) : need.map((v, i) => v + ((W - sumNeed) * (want[i]! - need[i]!)) / Math.max(1e-9, sumWant - sumNeed));
+      plans.push({ st, widths: sumNeed > W ? need.map((v) => (v * W) / sumNeed) : widths });
+      if (sumNeed > W) plans.pop(); // figures would not fit whole at this size
+    }
+    if (plans.length === 0) {
+      // not even the smaller type holds every figure: the smaller type, columns in proportion (rare: dozens of columns)
+      const st = sizes[sizes.length - 1]!;
+      const need = cols.map((c, i) => Math.max(g.width('cellHead', c.head), ...rows.map((r) => g.width(st.num, r[i] ?? ''))) + pad);
+      const sum = need.reduce((a, v) => a + v, 0);
+      plans.push({ st, widths: need.map((v) => (v * W) / sum) });
+    }
+    // the larger type where the rows that must show fit with it, else the smaller
+    const plan = plans.find((p) => this.rowsFitting(p, cols, rows, bold) >= Math.min(rows.length, mustShow)) ?? plans[plans.length - 1]!;
+    const { st, widths } = plan;
+    const lead = (style: TextStyle) => g.size(style) * 1.18;
+    // header
+    const heads = cols.map((c, i) => breakLines(g, 'cellHead', c.head, widths[i]! - 0.3 * u));
+    const headLines = Math.max(...heads.map((h) => h.length));
+    const hasUnit = cols.some((c) => c.unit);
+    const headH = headLines * lead('cellHead') + (hasUnit ? lead('cellSub') : 0) + 0.7 * u;
+    // rows: each text cell in as many lines as it takes
+    const cells = rows.map((r, k) => cols.map((c, i) => (c.align === 'r' ? [r[i] ?? ''] : breakLines(g, i === 0 && bold[k] ? st.bold : st.text, r[i] ?? '', widths[i]! - 0.8 * u))));
+    const rowH = cells.map((rc) => rowHeight(u, Math.max(...rc.map((l) => l.length)), lead(st.text), st.num === 'cellRight'));
+    const noteH = 1.3 * u;
+    let room = this.left - headH - 1.0 * u;
+    let shown = 0;
+    while (shown < rows.length && rowH[shown]! <= room - (shown + 1 < rows.length ? noteH : 0)) room -= rowH[shown++]!;
+    if (shown < Math.min(rows.length, mustShow)) this.cut = true;
+    if (shown === 0 && rows.length > 0) return 0;
     const x0 = this.box.x;
-    g.rect({ x: x0, y: this.y, w: this.box.w, h: headH }, COLOURS.panel);
+    g.rect({ x: x0, y: this.y, w: W, h: headH }, COLOURS.panel);
     let x = x0;
     cols.forEach((c, i) => {
       const w = widths[i]!;
-      g.text('cellHead', x + w / 2, this.y + 0.85 * line, c.head, w - 0.2 * u);
-      if (c.unit) g.text('cellSub', x + w / 2, this.y + 1.85 * line, c.unit, w - 0.2 * u);
+      heads[i]!.forEach((l, j) => g.text('cellHead', x + w / 2, this.y + 0.35 * u + (j + 0.8) * lead('cellHead'), l));
+      if (c.unit) g.text('cellSub', x + w / 2, this.y + 0.35 * u + headLines * lead('cellHead') + 0.8 * lead('cellSub'), c.unit);
       x += w;
     });
     this.y += headH;
     for (let k = 0; k < shown; k++) {
-      const r = rows[k]!;
-      if (k % 2 === 1) g.rect({ x: x0, y: this.y, w: this.box.w, h: line }, '#f8fafb');
+      const r = cells[k]!;
+      if (k % 2 === 1) g.rect({ x: x0, y: this.y, w: W, h: rowH[k]! }, '#f8fafb');
       let cx = x0;
       cols.forEach((c, i) => {
         const w = widths[i]!;
-        const t = r[i] ?? '';
-        const style: TextStyle = c.align === 'l' ? (i === 0 && bold[k] ? 'cellRho' : 'body') : 'cellRight';
-        if (c.align === 'l') g.text(style, cx + 0.5 * u, this.y + 0.8 * line, t, w - 0.8 * u);
-        else g.text(style, cx + w - 0.5 * u, this.y + 0.8 * line, t, w - 0.6 * u);
+        const base = this.y + 0.25 * u + 0.82 * lead(st.text) + 0.1 * u;
+        if (c.align === 'l') {
+          const style: TextStyle = i === 0 && bold[k] ? st.bold : st.text;
+          r[i]!.forEach((l, j) => g.text(style, cx + 0.5 * u, base + j * lead(st.text), l));
+        } else {
+          const t = r[i]![0]!;
+          // cellRight is right-aligned by its layer; the smaller style is placed by its measured width
+          if (st.num === 'cellRight') g.text('cellRight', cx + w - 0.5 * u, base, t);
+          else g.text(st.num, cx + w - 0.5 * u - g.width(st.num, t), base, t);
+        }
         cx += w;
       });
-      this.y += line;
+      this.y += rowH[k]!;
     }
-    g.rule(x0, this.y + 0.1 * u, x0 + this.box.w, this.y + 0.1 * u, COLOURS.faint, 0.6);
+    g.rule(x0, this.y + 0.1 * u, x0 + W, this.y + 0.1 * u, COLOURS.faint, 0.6);
     this.y += 0.4 * u;
     if (shown < rows.length) {
-      g.text('caption', x0, this.y + 0.9 * u, omittedNote ? omittedNote(rows.length - shown) : `${rows.length - shown} more rows: the .txt and .json reports list every row.`, this.box.w);
-      this.y += 1.3 * u;
+      g.text('caption', x0, this.y + 0.9 * u, omittedNote ? omittedNote(rows.length - shown) : `${rows.length - shown} more rows: the .txt and .json reports list every row.`);
+      this.y += noteH;
     }
     this.y += 0.6 * u;
     return shown;
   }
+  /** How many rows fit below the current position with this plan (as table() lays them out). */
+  private rowsFitting(plan: { st: { num: TextStyle; bold: TextStyle; text: TextStyle }; widths: number[] }, cols: { head: string; unit?: string; align: 'l' | 'r' }[], rows: string[][], bold: boolean[]): number {
+    const { g, u } = this;
+    const lead = (style: TextStyle) => g.size(style) * 1.18;
+    const headLines = Math.max(...cols.map((c, i) => breakLines(g, 'cellHead', c.head, plan.widths[i]! - 0.3 * u).length));
+    const headH = headLines * lead('cellHead') + (cols.some((c) => c.unit) ? lead('cellSub') : 0) + 0.7 * u;
+    let room = this.left - headH - 1.0 * u;
+    let n = 0;
+    for (const [k, r] of rows.entries()) {
+      const lines = Math.max(...cols.map((c, i) => (c.align === 'r' ? 1 : breakLines(g, i === 0 && bold[k] ? plan.st.bold : plan.st.text, r[i] ?? '', plan.widths[i]! - 0.8 * u).length)));
+      const h = rowHeight(u, lines, lead(plan.st.text), plan.st.num === 'cellRight');
+      if (h > room - (n + 1 < rows.length ? 1.3 * u : 0)) break;
+      room -= h;
+      n++;
+    }
+    return n;
+  }
   note(text: string, style: TextStyle = 'caption'): void {
-    if (this.left < 1.5 * this.u) return;
+    if (this.left < 1.5 * this.u) {
+      this.cut = true;
+      return;
+    }
     this.y = this.g.paragraph(style, this.box.x, this.y + 0.9 * this.u, this.box.w, text, 1.3) + 0.3 * this.u;
+    if (this.y > this.box.y + this.box.h) this.cut = true;
   }
 }
 
@@ -470,8 +617,7 @@ function sidePanel(g: Deco, L: ReportLayout, c: ColumnCheck, input: CheckReportI
   const gov = c.results[0];
   if (c.slenderness && gov?.slenderness) {
     const e = gov.slenderness;
-    g.text('heading', b.x, y + 1.0 * u, `Slenderness steps, ${gov.id}`);
-    y += 2.0 * u;
+    y = g.paragraph('heading', b.x, y + 1.0 * u, b.w, `Slenderness steps, ${gov.id}`, 1.2) + 0.6 * u;
     const axes = [['x', e.x], ['y', e.y]].filter((a): a is ['x' | 'y', NonNullable<typeof e.x>] => a[1] != null);
     const colW = b.w / axes.length;
     let yEnd = y;
@@ -521,25 +667,31 @@ function sidePanel(g: Deco, L: ReportLayout, c: ColumnCheck, input: CheckReportI
   if (cut > 0) g.text('caption', b.x, y + 0.2 * u, `${cut} more assumption${cut === 1 ? '' : 's'}: the .txt and .json reports list them all.`, b.w);
 }
 
-function titleBlock(g: Deco, L: ReportLayout, c: ColumnCheck, input: CheckReportInput): void {
-  const { titleBlock: b, u } = L;
-  const cells: [string, string, number][] = [
-    ['office', input.office ?? '', 3.2],
-    ['project', input.project ?? '', 4.2],
-    ['design basis', c.basis.title, 1.4],
-    ['section', sectionText(c), 5.2],
-    ['date', input.date, 1.1],
-    ['generated by', input.generator, 1.3],
-    ['sheet', '1 of 1', 0.8],
-  ];
-  g.rect(b, COLOURS.paper, COLOURS.ink, 0.9);
-  const total = cells.reduce((s, c) => s + c[2], 0);
-  let x = b.x;
-  cells.forEach(([cap, val, wgt], k) => {
-    const w = (b.w * wgt) / total;
-    if (k > 0) g.rule(x, b.y, x, b.y + b.h, COLOURS.ink, 0.5);
-    g.text('caption', x + 0.7 * u, b.y + 1.3 * u, cap.toUpperCase(), w - 1.4 * u);
-    g.text(k === 1 ? 'valueBold' : 'value', x + 0.7 * u, b.y + b.h - 1.0 * u, val || '—', w - 1.4 * u);
-    x += w;
-  });
+/**
+ * Two rows, whole values (drawTitleBlock lends width, shrinks and wraps; nothing is cut): the office, project,
+ * column mark and sheet; the basis, section, preparer and checker, revision, date and generator. The logo, when
+ * given, in the block's fixed box at the right.
+ */
+function titleBlock(g: Deco, c: ColumnCheck, input: CheckReportInput): void {
+  const people = [input.preparedBy, input.checkedBy].map((p) => (p === undefined || p === '' ? '—' : p)).join(' · ');
+  drawTitleBlock(
+    g,
+    [
+      [
+        ['office', input.office || '—', 3.2],
+        ['project', input.project || '—', 4.6],
+        ['column mark', input.mark || '—', 1.2],
+        ['sheet', '1 of 1', 0.8],
+      ],
+      [
+        ['design basis', c.basis.title, 1.4],
+        ['section', sectionText(c), 4.6],
+        ['prepared · checked', people, 1.5],
+        ['rev.', input.revision || '—', 0.5],
+        ['date', input.date, 1.0],
+        ['generated by', input.generator, 1.2],
+      ],
+    ],
+    input.logo,
+  );
 }

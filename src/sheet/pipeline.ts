@@ -22,9 +22,10 @@ import type { ResolvedChartSet } from '../config/types.js';
 import { runInChildren } from '../io/child-pool.js';
 import { SheetRenderer } from '../render/renderer.js';
 import type { PageContent } from '../render/pdf-canvas.js';
-import { bindBook } from './book.js';
+import { bindBook, perSheetBasis } from './book.js';
+import { checkLogo, logoRef } from './logo.js';
 import { basisForSheet, groupExtents } from './curves.js';
-import { normalisationText, primaryFamily } from '../chart/sheet-data.js';
+import { primaryFamily } from '../chart/sheet-data.js';
 import { checkTarget, ioError, recoverStale, swapInFolder, writeFileAtomic } from './files.js';
 import { chunksOf, type ChunkTask } from './render-chunk.js';
 import { renderChunk } from './render-chunk.js';
@@ -60,6 +61,8 @@ export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions):
   const staging = `${target}.partial-${process.pid}`;
   // 0. the place: a folder or nothing at the target; leftovers of killed runs cleaned or put back
   checkTarget(target);
+  // a logo that cannot be drawn is the user's to fix (exit 2), before any sheet is drawn
+  await checkLogo(set.titleBlock.logo);
   for (const note of recoverStale(target)) (opts.onNote ?? ((t: string) => process.stderr.write(`pmchart: ${t}\n`)))(note);
   try {
     rmSync(staging, { recursive: true, force: true });
@@ -90,23 +93,18 @@ export async function makeChartSet(set: ResolvedChartSet, opts: MakeSetOptions):
     if (set.outputs.pdf) {
       const bases = set.sheets.map((s) => basisForSheet(set, s));
       const basis = bases[0]!;
-      const factorGroups: { summary: string; sheets: number[] }[] = [];
-      bases.forEach((b, i) => {
-        const g = factorGroups.find((x) => x.summary === b.factorSummary);
-        if (g) g.sheets.push(set.sheets[i]!.index);
-        else factorGroups.push({ summary: b.factorSummary, sheets: [set.sheets[i]!.index] });
-      });
       const sy = basis.symbols;
       const design = primaryFamily(set) === 'design';
+      const logo = set.titleBlock.logo ? await logoRef(set.titleBlock.logo) : undefined;
       const bytes = await bindBook({
         set,
         pages: chunks.flatMap((c) => c ?? []),
         generator: opts.generator,
         basisTitle: basis.title,
-        basisNotes: basis.notes,
         symbols: sy,
-        factorGroups,
-        normalisation: normalisationText(set, sy, design ? sy.designAxial : sy.nominalAxial, design ? sy.designMoment : sy.nominalMoment, basis.normalisingStress),
+        // every sheet's own basis: a mixed set (basisOptions per group, α2 or fcd by strength) is described per group
+        ...perSheetBasis(set, bases, design),
+        ...(logo ? { logoPng: Buffer.from(logo.raster.slice(logo.raster.indexOf(',') + 1), 'base64') } : {}),
       });
       writeFileAtomic(join(staging, 'book.pdf'), bytes);
       book = join(target, 'book.pdf');

@@ -15,6 +15,7 @@ import { biaxialTableCsv } from '../chart/biaxial-table.js';
 import { buildBiaxialSheet } from '../chart/biaxial-sheet.js';
 import { biaxialFamilyForSheet, familyForSheet } from './curves.js';
 import { writeFileAtomic } from './files.js';
+import { logoRef } from './logo.js';
 import { biaxialTableJson, tableJson } from './tables.js';
 
 /** Sheets per chunk. */
@@ -50,12 +51,13 @@ export async function renderChunk(task: ChunkTask, renderer: SheetRenderer, onSh
   // stream, depended on which sheets the process had drawn before: --jobs changed the bytes.
   renderer.finalize();
   const pdf = out.pdf ? renderer.pdfPages() : undefined;
+  const logo = set.titleBlock.logo ? await logoRef(set.titleBlock.logo) : undefined;
   for (const i of task.indices) {
     // a render process whose parent has gone stops between sheets (worker.ts exits on disconnect)
     if (process.send !== undefined && !process.connected) throw new Error('the parent process has gone');
     const sheet = set.sheets[i]!;
     const extent = task.extents?.[sheet.origin];
-    const common = { set, sheet, sheetNumber: i + 1, sheetCount: set.sheets.length, generator, measureText: renderer.measureText, ...(extent ? { extent } : {}) };
+    const common = { set, sheet, sheetNumber: i + 1, sheetCount: set.sheets.length, generator, measureText: renderer.measureText, ...(extent ? { extent } : {}), ...(logo ? { logo } : {}) };
     let built: { template: TemplateParams; data: SheetData };
     if (sheet.chart === 'biaxial') {
       const family = biaxialFamilyForSheet(set, sheet);

@@ -31,7 +31,9 @@ export async function renderSheet(set: ResolvedChartSet, sheetNumber = 1, format
   const { SheetRenderer } = await import('../render/renderer.js');
   const renderer = await SheetRenderer.create();
   try {
-    const common = { set, sheet, sheetNumber: index + 1, sheetCount: set.sheets.length, generator: generatorLabel(), measureText: renderer.measureText };
+    const { logoRef } = await import('./logo.js');
+    const logo = set.titleBlock.logo ? await logoRef(set.titleBlock.logo) : undefined;
+    const common = { set, sheet, sheetNumber: index + 1, sheetCount: set.sheets.length, generator: generatorLabel(), measureText: renderer.measureText, ...(logo ? { logo } : {}) };
     const built =
       sheet.chart === 'biaxial'
         ? buildBiaxialSheet({ ...common, family: biaxialFamilyForSheet(set, sheet) })

@@ -68,6 +68,8 @@ export async function writeScheduleReport<R extends ScheduleRowFacts>(
         generator: meta.generator,
         project: meta.project !== undefined ? `${meta.project} · mark ${row.mark}` : `Column mark ${row.mark}`,
         ...(meta.office !== undefined ? { office: meta.office } : {}),
+        // the calculation sheet's own column-mark field (issue 20)
+        mark: row.mark,
       });
       await pdf.add({ template: page.template, data: page.data }, page.insets);
       rows.push(row as unknown as R & { code: string; title: string });

@@ -62,8 +62,8 @@ describe("import { checkColumn } from 'pmchart'", () => {
   it('renders one sheet of a chart set read from text', () => {
     const r = run(`
       import { readFileSync } from 'node:fs';
-      import { readChartSet, renderSheet } from 'pmchart';
-      const set = readChartSet(readFileSync('charts-config/demo.json', 'utf8'));
+      import { nodeFileAccess, readChartSet, renderSheet } from 'pmchart';
+      const set = readChartSet(readFileSync('charts-config/demo.json', 'utf8'), { files: nodeFileAccess, baseDir: 'charts-config' });
       const svg = await renderSheet(set, 1, 'svg');
       console.log(JSON.stringify({ sheets: set.sheets.length, svg: typeof svg === 'string' && svg.startsWith('<svg'), caution: String(svg).includes('qualified engineers') }));
     `);

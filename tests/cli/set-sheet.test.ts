@@ -13,6 +13,7 @@ describe('pmchart set', () => {
   it('rejects a bad set with one line naming the field, exit 2, and writes nothing', async () => {
     const demo = JSON.parse(readFileSync(join(root, 'charts-config/demo.json'), 'utf8'));
     demo.sheets[0].gamma = { from: 0.7, to: 1.2, step: 0.25 };
+    delete demo.officeFile; // the copy is elsewhere: its office file would not be found
     const file = join(tmp, 'bad.json');
     writeFileSync(file, JSON.stringify(demo));
     const r = await cli(['set', file, '--out', join(tmp, 'out')]);

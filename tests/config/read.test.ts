@@ -2,11 +2,14 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { readChartSet, readChartSetReport } from '../../src/config/read.js';
+import { nodeFileAccess } from '../../src/io/read.js';
 import { expandNumbers } from '../../src/config/expand.js';
 import { schemaText } from '../../src/config/write-schema.js';
 
 const demoPath = new URL('../../charts-config/demo.json', import.meta.url);
 const demoText = readFileSync(demoPath, 'utf8');
+/** the demo names an office file and, through it, a logo: read relative to charts-config/ */
+const files = { files: nodeFileAccess, baseDir: 'charts-config' };
 const demo = JSON.parse(demoText);
 const withChange = (f: (d: any) => void): string => {
   const d = structuredClone(demo);
@@ -23,7 +26,7 @@ const minimal = {
 
 describe('readChartSet', () => {
   it('resolves the demo set (snapshot of the resolved set)', () => {
-    const set = readChartSet(demoText);
+    const set = readChartSet(demoText, files);
     expect(set.sheets).toHaveLength(14);
     expect(set).toMatchSnapshot();
   });
@@ -61,7 +64,7 @@ describe('readChartSet', () => {
   });
 
   it('names sheets with spelled-out parameters, or the office pattern', () => {
-    const set = readChartSet(demoText);
+    const set = readChartSet(demoText, files);
     expect(set.sheets[0]!.fileStem).toBe('01-square-fc-7ksi-fy-80ksi-gamma-0.70-two-faces-3-per-face-tied');
     expect(set.sheets[0]!.title).toBe('Square column, f′c 7 ksi, Grade 80 bars (fy 80 ksi), γ 0.70, 3 bars on each of two faces, tied');
   });
@@ -93,9 +96,9 @@ describe('readChartSet rejects bad sets with the field path', () => {
   ];
   for (const [what, text, message] of cases) {
     it(what, () => {
-      expect(() => readChartSet(text)).toThrow(message);
+      expect(() => readChartSet(text, files)).toThrow(message);
       try {
-        readChartSet(text);
+        readChartSet(text, files);
       } catch (e) {
         expect((e as { exitCode: number }).exitCode).toBe(2);
       }

@@ -85,7 +85,7 @@ describe('labels and axes', () => {
     const { readChartSet } = await import('../../src/config/read.js');
     const { groupExtents } = await import('../../src/sheet/curves.js');
     const { readFileSync } = await import('node:fs');
-    const set = readChartSet(readFileSync('charts-config/demo.json', 'utf8'));
+    const set = readChartSet(readFileSync('charts-config/demo.json', 'utf8'), { files: (await import('../../src/io/read.js')).nodeFileAccess, baseDir: 'charts-config' });
     const ext = groupExtents(set);
     for (const sheet of set.sheets.slice(0, 4)) {
       const family = familyForSheet(set, sheet);
@@ -107,7 +107,7 @@ describe('labels and axes', () => {
   it('on the demo sheet, the label nearest to each curve at half its largest P names that curve', async () => {
     const { readChartSet } = await import('../../src/config/read.js');
     const { readFileSync } = await import('node:fs');
-    const set = readChartSet(readFileSync('charts-config/demo.json', 'utf8'));
+    const set = readChartSet(readFileSync('charts-config/demo.json', 'utf8'), { files: (await import('../../src/io/read.js')).nodeFileAccess, baseDir: 'charts-config' });
     const sheet = set.sheets[0]!;
     const family = familyForSheet(set, sheet);
     const built = buildSheet({ set, sheet, family, sheetNumber: 1, sheetCount: set.sheets.length, generator: 'pmchart 0.1.0', measureText: renderer.measureText });
