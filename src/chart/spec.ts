@@ -6,7 +6,7 @@
  */
 import type { SheetData, TemplateParams } from './sheet-data.js';
 import { tickFormat, tickValues } from './axes.js';
-import { chartConfig, COLOURS, pageFrame, round2, TEXT_STYLES, textLayer, type TextStyle } from './style.js';
+import { chartConfig, COLOURS, LINE_KINDS, pageFrame, round2, TEXT_STYLES, textLayer, type TextStyle } from './style.js';
 import { panelTemplate } from './panel-spec.js';
 
 export type VlSpec = Record<string, unknown>;
@@ -44,22 +44,31 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
   const layers: Record<string, unknown>[] = [
     { name: 'frame', data: { name: 'frame' }, mark: { type: 'point', opacity: 0 }, encoding: { x, y } },
     { name: 'rects', data: { name: 'rects' }, mark: { type: 'rect' }, encoding: { x: raw('x'), x2: { field: 'x2' }, y: raw('y'), y2: { field: 'y2' }, fill: lit('fill'), stroke: lit('stroke'), strokeWidth: raw('strokeWidth'), order: z } },
-    plotLine('rays', 'ray', { color: COLOURS.ray, strokeWidth: 0.7, strokeDash: [1.2, 2.6] }),
+    plotLine('rays', 'ray', { color: COLOURS.ray, strokeWidth: LINE_KINDS.ray.width, strokeDash: [...LINE_KINDS.ray.dash] }),
     plotLine('zero', 'zero', { color: COLOURS.muted, strokeWidth: 0.8 }),
-    plotLine('strain_lines', 'strain', { color: COLOURS.strain, strokeWidth: 0.9, strokeDash: [5, 2.5] }),
-    plotLine('cap_line', 'cap', { color: COLOURS.cap, strokeWidth: 0.9, strokeDash: [7, 2, 1.5, 2] }),
+    plotLine('strain_lines', 'strain', { color: COLOURS.strain, strokeWidth: LINE_KINDS.strain.width, strokeDash: [...LINE_KINDS.strain.dash] }),
+    plotLine('cap_line', 'cap', { color: COLOURS.cap, strokeWidth: LINE_KINDS.cap.width, strokeDash: [...LINE_KINDS.cap.dash] }),
   ];
   for (const fam of t.families) {
     const design = fam === 'design';
-    const faded = t.families.length > 1 && !design;
+    const kind = LINE_KINDS[design ? 'design' : 'nominal'];
     layers.push({
       name: `curves_${fam}`,
       data: { name: 'curves' },
       transform: [{ filter: `datum.family === '${fam}'` }],
-      mark: { type: 'line', strokeWidth: faded ? 0.8 : 1.5, ...(faded ? { strokeDash: [4, 2.5], opacity: 0.75 } : {}), strokeJoin: 'round' },
+      mark: { type: 'line', strokeWidth: kind.width, ...(kind.dash.length ? { strokeDash: [...kind.dash] } : {}), strokeJoin: 'round' },
       encoding: { x, y, detail: { field: 'curve' }, order: { field: 'i' }, stroke: lit('colour') },
     });
   }
+  // knockouts: a paper box under every plot label, above every line, so no line runs through a label
+  const knock = (name: string, data: string) => ({
+    name,
+    data: { name: data },
+    transform: [{ filter: 'datum.knock' }],
+    mark: { type: 'point', filled: true, opacity: 1, size: 4, color: COLOURS.paper, strokeWidth: 0 },
+    encoding: { x, y, shape: { field: 'knock', type: 'nominal' as const, scale: null }, order: z },
+  });
+  layers.push(knock('ref_label_knockouts', 'refLabels'), knock('curve_label_knockouts', 'curveLabels'));
   const refLabel = (kind: string, colour: string, dx: number, dy: number) => ({
     name: `labels_${kind}`,
     data: { name: 'refLabels' },
@@ -71,24 +80,25 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
     refLabel('ray', COLOURS.muted, 2, -2),
     refLabel('strain', COLOURS.strain, 0, 0),
     refLabel('cap', COLOURS.cap, 0, 0),
-    {
-      name: 'curve_label_halo',
+    ...([1, 0] as const).map((b) => ({
+      name: b ? 'curve_labels' : 'curve_labels_regular',
       data: { name: 'curveLabels' },
-      mark: { type: 'text', align: 'center', baseline: 'middle', fontSize: round2(0.82 * u), fontWeight: 'bold', stroke: COLOURS.paper, strokeWidth: 3, strokeJoin: 'round' },
-      encoding: { x, y, text: { field: 'text' }, order: z },
-    },
-    {
-      name: 'curve_labels',
-      data: { name: 'curveLabels' },
-      mark: { type: 'text', align: 'center', baseline: 'middle', fontSize: round2(0.82 * u), fontWeight: 'bold' },
+      transform: [{ filter: b ? 'datum.bold !== 0' : 'datum.bold === 0' }],
+      mark: { type: 'text', align: 'center', baseline: 'middle', fontSize: round2(0.82 * u), fontWeight: b ? 'bold' : 'normal' },
       encoding: { x, y, text: { field: 'text' }, fill: lit('colour'), order: z },
-    },
+    })),
     { name: 'rules', data: { name: 'rules' }, mark: { type: 'rule' }, encoding: { x: raw('x'), x2: { field: 'x2' }, y: raw('y'), y2: { field: 'y2' }, stroke: lit('stroke'), strokeWidth: raw('strokeWidth'), order: z } },
     { name: 'rings', data: { name: 'rings' }, mark: { type: 'point', shape: 'circle', filled: false, strokeWidth: 1.1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), stroke: lit('fill'), order: z } },
     { name: 'dots', data: { name: 'dots' }, mark: { type: 'point', shape: 'circle', filled: true, opacity: 1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), fill: lit('fill'), order: z } },
     ...(Object.keys(TEXT_STYLES) as TextStyle[]).map((s) => textLayer(s, u)),
   );
-  if (o) layers.splice(layers.findIndex((l) => l.name === 'rules'), 0, ...overlayLayers(x, y, u, o.loadRays !== false));
+  if (o) {
+    // load lines and marks under the label knockouts, load labels (placed clear of curve labels) on top
+    const ov = overlayLayers(x, y, u, o.loadRays !== false);
+    const isLabel = (l: Record<string, unknown>) => String(l.name).includes('label');
+    layers.splice(layers.findIndex((l) => l.name === 'ref_label_knockouts'), 0, ...ov.filter((l) => !isLabel(l)));
+    layers.splice(layers.findIndex((l) => l.name === 'rules'), 0, ...ov.filter(isLabel));
+  }
 
   return {
     ...pageFrame(L),

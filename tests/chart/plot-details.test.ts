@@ -3,7 +3,7 @@
  * drawing, the nominal family's tone, and the label placer.
  */
 import { describe, expect, it } from 'vitest';
-import { buildSheet, barEntryIndices, lighter } from '../../src/chart/sheet-data.js';
+import { buildSheet, barEntryIndices } from '../../src/chart/sheet-data.js';
 import { roundScale, roundStep, tickFormat, tickValues } from '../../src/chart/axes.js';
 import { LabelPlacer, segmentHitsBox } from '../../src/chart/labels.js';
 import { sheetSpec } from '../../src/chart/spec.js';
@@ -66,8 +66,8 @@ describe('bar-entry steps', () => {
   // displaced concrete deducted; φ = 0.65 compression-controlled, 21.2.2): at ρg 0.08 a middle row has
   // As = 0.08·2/12 Ag, so φ·ΔP = 0.65·0.85·12·0.08/6 = 0.0884 ksi and φ·ΔM = 0.0884·0.125 = 0.01105 ksi.
   const over = { rhoG: [0.08], sheets: [{ fc: 12, fy: 60, gamma: 0.75, arrangement: { kind: 'four-faces', barsPerFace: 4 } }] };
-  it('draws each step as one straight segment between the two states at the same depth', () => {
-    const { built } = build(over);
+  it('with barEntry: "steps" draws each step as one straight segment between the two states at the same depth', () => {
+    const { built } = build({ ...over, referenceLines: { barEntry: 'steps' } });
     const rows = built.data.curves;
     const drops = rows.slice(1).map((r, i) => ({ dP: r.P - rows[i]!.P, dM: r.M - rows[i]!.M })).filter((d) => d.dP < -0.05);
     const mid = drops.find((d) => Math.abs(d.dP + 0.0884) < 0.002);
@@ -100,12 +100,19 @@ describe('bar-entry steps', () => {
 });
 
 describe('families: both', () => {
-  it('draws nominal curves in a lighter tone of the design curve’s hue and pairs them in a key', () => {
+  it('draws nominal curves in the design curve’s colour, dashed and lighter in weight, labels them and pairs them in a key', () => {
     const { built } = build({ families: 'both' });
     const d = built.data.curves.find((c) => c.curve === 'design-0.02')!.colour;
     const n = built.data.curves.find((c) => c.curve === 'nominal-0.02')!.colour;
-    expect(n).toBe(lighter(d));
-    expect(n).not.toBe(d);
+    expect(n).toBe(d);
+    const spec = sheetSpec(built.template, built.data) as { layer: { name: string; mark: { strokeDash?: number[]; strokeWidth: number } }[] };
+    const nom = spec.layer.find((l) => l.name === 'curves_nominal')!.mark;
+    const des = spec.layer.find((l) => l.name === 'curves_design')!.mark;
+    expect(nom.strokeDash!.length).toBeGreaterThan(0);
+    expect(des.strokeDash).toBeUndefined();
+    expect(nom.strokeWidth).toBeLessThan(des.strokeWidth);
+    // nominal curves carry their own labels in the compression zone ("ρg 0.02 n")
+    expect(built.data.curveLabels.filter((l) => l.text === 'ρg 0.02 n' && l.P > 0).length).toBeGreaterThanOrEqual(2);
     expect(built.data.texts.some((t) => t.text.startsWith('solid φ-factored · dashed nominal'))).toBe(true);
   });
 });
