@@ -10,7 +10,8 @@ import { describeArrangement, describeShape, describeTransverse, fmt, levelSymbo
 import type { ResolvedChartSet, ResolvedSheet } from '../config/types.js';
 import { RATIO_SYMBOL } from '../config/types.js';
 import { DISPLAY_UNITS } from '../units/index.js';
-import { roundStep, tickFormat, type AxisExtent, type AxisScale } from './axes.js';
+import { PANEL_LABEL_EM } from './panel-spec.js';
+import { MIN_FILL, roundStep, tickFormat, type AxisExtent, type AxisScale } from './axes.js';
 import { biaxialTable, type BiaxialTable } from './biaxial-table.js';
 import { centredBox, estimateText, LabelPlacer, type MeasureText, type Segment } from './labels.js';
 import { sheetLayout, type Box, type SheetLayout } from './layout.js';
@@ -164,7 +165,10 @@ function panels(ctx: BiaxialSheetContext, g: Deco, d: number): void {
     }
     return best!;
   };
-  const scale = { x: axis(Math.min(ext.M[0], own.M[0]), Math.max(ext.M[1], own.M[1])), y: axis(Math.min(ext.P[0], own.P[0]), Math.max(ext.P[1], own.P[1])) };
+  const shared = { x: axis(Math.min(ext.M[0], own.M[0]), Math.max(ext.M[1], own.M[1])), y: axis(Math.min(ext.P[0], own.P[0]), Math.max(ext.P[1], own.P[1])) };
+  // the group's scale only where this sheet's contours fill MIN_FILL of it on both axes; one scale for all its panels
+  const fills = (e: [number, number], a: AxisScale) => Math.max(e[1], -e[0]) / a.domain[1] >= MIN_FILL - 1e-9;
+  const scale = ctx.extent && !(fills(own.M, shared.x) && fills(own.P, shared.y)) ? { x: axis(own.M[0], own.M[1]), y: axis(own.P[0], own.P[1]) } : shared;
   const names = axisNames(set, family);
   // panels packed from the top left; room left below them takes the reading notes
   const cellH = grid.h + (PAD.top + PAD.bottom) * u;
@@ -279,7 +283,7 @@ function panel(ctx: BiaxialSheetContext, g: Deco, b: Box, s: { x: AxisScale; y: 
   }
 
   // ρg values on the curves, spread over the quadrant (outer curves toward 45°, alternating sides)
-  const fs = 0.72 * u;
+  const fs = Math.max(PANEL_LABEL_EM * u, g.L.minText ?? 0);
   const h = 1.05 * fs;
   for (const c of [...drawn].reverse()) {
     const text = curveKeyText(set, family.rhos[c.k]!, c.k).replace(/^\S+ /, '');

@@ -15,7 +15,7 @@ import { columnsFor, lookupTable, shortLabel, type FamilyKind, type LookupTable 
 import { simplifyIndices } from './simplify.js';
 import { innerBranch } from '../analysis/inner-branch.js';
 import type { BarEntryDrawing } from '../config/schema.js';
-import { axesFor, envelope, familyExtent, type AxisExtent, type SheetAxes } from './axes.js';
+import { axesFor, familyExtent, sheetAxes, type AxisExtent, type SheetAxes } from './axes.js';
 import { centredBox, estimateText, LabelPlacer, type LabelBox, type MeasureText, type Segment } from './labels.js';
 import { AVG_CHAR_EM, COLOURS, curveColour, LINE_KINDS, TEXT_STYLES, type TextStyle } from './style.js';
 
@@ -148,7 +148,8 @@ export function buildSheet(ctx: SheetContext): BuiltSheet {
   const data: SheetData = { curves: [], curveLabels: [], refs: [], refLabels: [], frame: [], texts: [], rects: [], rules: [], dots: [], rings: [] };
   const measure = ctx.measureText ?? estimateText;
   const own = familyExtent(family, template.families, divisor);
-  const axes = axesFor(ctx.extent ? envelope([ctx.extent, own]) : own, L.plot, ctx.sheet.axes);
+  // the group's shared scale only where this sheet's curves fill 75 % of it; explicit group axes win
+  const axes = sheetAxes(own, ctx.extent, L.plot, ctx.sheet.axes);
   template.axes = axes;
 
   const deco = new Deco(L, data, measure);
@@ -263,7 +264,7 @@ export const REF_LABEL_EM = 0.78;
  * P: the lower one a little under half-way up, where a typical column load falls, the upper one near the
  * cap, so a reader finds a label near any load (common practice).
  */
-const LOWER_LEVEL = 0.42;
+const LOWER_LEVEL = 0.5;
 const UPPER_LEVEL = 0.9;
 
 /** A curve label's row: its centre in chart units and its knockout (a box in points around the centre). */
@@ -440,10 +441,10 @@ export function plotLayers(
     placer.addObstacle({ group: `ray-${e}`, weight: 0.4, segments: [[X(0), Y(0), X(end.M), Y(end.P)]] });
     if (report) {
       const text = `e/h ${fmt(e)}`;
-      const rfs0 = REF_LABEL_EM * u;
+      const rfs0 = Math.max(REF_LABEL_EM * u, L.minText ?? 0);
       out.refLabels.push({ kind: 'ray', M: r5(end.M), P: r5(end.P), text, knock: knockout(1, -2 - 0.6 * rfs0, measure(text, rfs0, false) + 2, 1.2 * rfs0), z: out.refLabels.length });
       // drawn at dx 2, dy −2 from the tip (spec.ts): other labels keep clear of it
-      const rfs = REF_LABEL_EM * u;
+      const rfs = rfs0;
       placer.reserve({ x0: X(end.M) + 2, y0: Y(end.P) - 2 - 0.6 * rfs, x1: X(end.M) + 2 + measure(text, rfs, false), y1: Y(end.P) - 2 + 0.6 * rfs });
     }
   }
@@ -451,7 +452,7 @@ export function plotLayers(
   // 1. ρg labels in the compression zone (P > 0), never dropped: two per curve of every family drawn, at
   // clearly different heights, one near or on the cap (upper) and one lower down, so a reader finds a
   // label near any load; on report plots the lower one sits at the loads' level
-  const fs = CURVE_LABEL_EM * u;
+  const fs = Math.max(CURVE_LABEL_EM * u, L.minText ?? 0);
   const h = 1.05 * fs;
   const order = [primary, ...families.filter((f) => f !== primary)];
   const focus = (opts.focusP ?? []).filter((p) => Number.isFinite(p) && p > 0);
@@ -519,7 +520,7 @@ export function plotLayers(
 
   // 2. reference-line names at the outer end of their line: beside it, above or below; dropped if no room
   for (const r of refEnds) {
-    const rfs = REF_LABEL_EM * u;
+    const rfs = Math.max(REF_LABEL_EM * u, L.minText ?? 0);
     const w = measure(r.text, rfs, false);
     const x = X(r.M);
     const y = Y(r.P);
@@ -568,7 +569,7 @@ export class Deco {
   ) {}
   private ox = (x: number) => round(x - this.L.plot.x);
   private oy = (y: number) => round(y - this.L.plot.y);
-  size = (style: TextStyle) => TEXT_STYLES[style].size * this.L.u;
+  size = (style: TextStyle) => Math.max(TEXT_STYLES[style].size * this.L.u, this.L.minText ?? 0);
   /** advance width of `text` in a text style, in points */
   width = (style: TextStyle, text: string) => this.measure(text, this.size(style), TEXT_STYLES[style].weight === 'bold');
   text(style: TextStyle, x: number, y: number, text: string, maxW?: number): void {

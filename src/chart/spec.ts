@@ -5,8 +5,9 @@
  * and `padding` make the view exactly one page.
  */
 import type { SheetData, TemplateParams } from './sheet-data.js';
-import { tickFormat, tickValues } from './axes.js';
-import { chartConfig, COLOURS, LINE_KINDS, pageFrame, round2, TEXT_STYLES, textLayer, type TextStyle } from './style.js';
+import { minorValues, tickFormat, tickValues, type SheetAxes } from './axes.js';
+import { chartConfig, COLOURS, LINE_KINDS, MINOR_GRID, pageFrame, round2, TEXT_STYLES, textLayer, textPt, type TextStyle } from './style.js';
+import { CURVE_LABEL_EM, REF_LABEL_EM } from './sheet-data.js';
 import { panelTemplate } from './panel-spec.js';
 
 export type VlSpec = Record<string, unknown>;
@@ -29,6 +30,7 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
   if (t.panels) return panelTemplate(t);
   const { layout: L } = t;
   const u = L.u;
+  const mt = L.minText ?? 0;
   const o = t.overlay;
   const a = t.axes;
   const x = { field: 'M', type: 'quantitative', scale: o ? { domain: o.domainM, nice: false, zero: false } : a ? { domain: a.M.domain, nice: false, zero: false } : { zero: true, nice: true } };
@@ -44,6 +46,7 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
   const layers: Record<string, unknown>[] = [
     { name: 'frame', data: { name: 'frame' }, mark: { type: 'point', opacity: 0 }, encoding: { x, y } },
     { name: 'rects', data: { name: 'rects' }, mark: { type: 'rect' }, encoding: { x: raw('x'), x2: { field: 'x2' }, y: raw('y'), y2: { field: 'y2' }, fill: lit('fill'), stroke: lit('stroke'), strokeWidth: raw('strokeWidth'), order: z } },
+    ...(a && !o ? minorGrid(a) : []),
     plotLine('rays', 'ray', { color: COLOURS.ray, strokeWidth: LINE_KINDS.ray.width, strokeDash: [...LINE_KINDS.ray.dash] }),
     plotLine('zero', 'zero', { color: COLOURS.muted, strokeWidth: 0.8 }),
     plotLine('strain_lines', 'strain', { color: COLOURS.strain, strokeWidth: LINE_KINDS.strain.width, strokeDash: [...LINE_KINDS.strain.dash] }),
@@ -73,7 +76,7 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
     name: `labels_${kind}`,
     data: { name: 'refLabels' },
     transform: [{ filter: `datum.kind === '${kind}'` }],
-    mark: { type: 'text', align: 'left', baseline: 'middle', dx, dy, fontSize: round2(0.78 * u), color: colour },
+    mark: { type: 'text', align: 'left', baseline: 'middle', dx, dy, fontSize: textPt(REF_LABEL_EM, u, mt), color: colour },
     encoding: { x, y, text: { field: 'text' }, order: z },
   });
   layers.push(
@@ -84,13 +87,13 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
       name: b ? 'curve_labels' : 'curve_labels_regular',
       data: { name: 'curveLabels' },
       transform: [{ filter: b ? 'datum.bold !== 0' : 'datum.bold === 0' }],
-      mark: { type: 'text', align: 'center', baseline: 'middle', fontSize: round2(0.82 * u), fontWeight: b ? 'bold' : 'normal' },
+      mark: { type: 'text', align: 'center', baseline: 'middle', fontSize: textPt(CURVE_LABEL_EM, u, mt), fontWeight: b ? 'bold' : 'normal' },
       encoding: { x, y, text: { field: 'text' }, fill: lit('colour'), order: z },
     })),
     { name: 'rules', data: { name: 'rules' }, mark: { type: 'rule' }, encoding: { x: raw('x'), x2: { field: 'x2' }, y: raw('y'), y2: { field: 'y2' }, stroke: lit('stroke'), strokeWidth: raw('strokeWidth'), order: z } },
     { name: 'rings', data: { name: 'rings' }, mark: { type: 'point', shape: 'circle', filled: false, strokeWidth: 1.1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), stroke: lit('fill'), order: z } },
     { name: 'dots', data: { name: 'dots' }, mark: { type: 'point', shape: 'circle', filled: true, opacity: 1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), fill: lit('fill'), order: z } },
-    ...(Object.keys(TEXT_STYLES) as TextStyle[]).map((s) => textLayer(s, u)),
+    ...(Object.keys(TEXT_STYLES) as TextStyle[]).map((s) => textLayer(s, u, mt)),
   );
   if (o) {
     // load lines and marks under the label knockouts, load labels (placed clear of curve labels) on top
@@ -102,13 +105,25 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
 
   return {
     ...pageFrame(L),
-    config: chartConfig(u),
+    config: chartConfig(u, mt),
     encoding: {
       x: { ...x, axis: { title: t.xTitle, orient: 'bottom', ...(a && !o ? { values: tickValues(a.M), format: tickFormat(a.M) } : { tickCount: 12 }) } },
       y: { ...y, axis: { title: t.yTitle, ...(a && !o ? { values: tickValues(a.P), format: tickFormat(a.P) } : { tickCount: 14 }) } },
     },
     layer: layers,
   };
+}
+
+/** The minor grid of a chart sheet: fine lines between the major grid lines (axes.ts minorValues), under every mark. */
+function minorGrid(a: SheetAxes): Record<string, unknown>[] {
+  const mark = { type: 'rule', color: MINOR_GRID, strokeWidth: 0.3 };
+  const xs = minorValues(a.M);
+  const ys = minorValues(a.P);
+  const scale = (d: [number, number]) => ({ domain: d, nice: false, zero: false });
+  return [
+    ...(xs.length ? [{ name: 'minor_grid_M', data: { values: xs.map((v) => ({ v })) }, mark, encoding: { x: { field: 'v', type: 'quantitative', scale: scale(a.M.domain) } } }] : []),
+    ...(ys.length ? [{ name: 'minor_grid_P', data: { values: ys.map((v) => ({ v })) }, mark, encoding: { y: { field: 'v', type: 'quantitative', scale: scale(a.P.domain) } } }] : []),
+  ];
 }
 
 /** How the report's caption names the load marks (src/sheet/check-report.ts). */

@@ -24,6 +24,9 @@ export const COLOURS = {
   paper: '#ffffff',
 } as const;
 
+/** The minor grid's colour: lighter than the major grid (gridColor in chartConfig). */
+export const MINOR_GRID = '#eff2f5';
+
 /**
  * Curve colours in order: dark and mid lightness steps alternate (L* 34, 56; ΔL* 22 between neighbours),
  * hues step around the circle so that curves two apart differ in hue too. Lab values chosen for pmchart,
@@ -97,21 +100,37 @@ export const AVG_CHAR_EM = 0.56;
 /** Rounds page coordinates to 0.01 pt so specs stay small and byte-stable. */
 export const round2 = (v: number): number => Math.round(v * 100) / 100;
 
-/** The page-level vega-lite config every chart of ours shares (font, plot frame, axes); `u` is the text unit in pt. */
-export function chartConfig(u: number) {
+/** A text size in points: `em` type units, never under the page's print floor `min` (SheetLayout.minText). */
+export const textPt = (em: number, u: number, min = 0): number => round2(Math.max(em * u, min));
+
+/**
+ * The smallest text size on a page of w × h points such that text stays at least 5 pt when the page is
+ * fitted to Letter or to A4, whichever shrinks it more (offices print books on either): 5 pt divided by
+ * that scale, rounded up to 0.05 pt. Tabloid (→ Letter, × 0.647) gives 7.75 pt, A3 (× 0.665) 7.55 pt,
+ * Letter and A4 themselves 5.15 and 5.35 pt. The 5 pt floor for printed text is common practice.
+ */
+export function printFloor(w: number, h: number): number {
+  const [pw, ph] = [Math.min(w, h), Math.max(w, h)];
+  const fit = (tw: number, th: number) => Math.min(1, tw / pw, th / ph);
+  const scale = Math.min(fit(612, 792), fit(595.28, 841.89));
+  return Math.ceil((5 / scale) * 20 - 1e-9) / 20;
+}
+
+/** The page-level vega-lite config every chart of ours shares (font, plot frame, axes); `u` is the text unit in pt, `min` the print floor. */
+export function chartConfig(u: number, min = 0) {
   return {
     font: FONT_FAMILY,
     view: { stroke: COLOURS.faint, strokeWidth: 0.7 },
     axis: {
       labelFont: FONT_FAMILY,
       titleFont: FONT_FAMILY,
-      labelFontSize: round2(0.82 * u),
-      titleFontSize: round2(0.95 * u),
+      labelFontSize: textPt(0.82, u, min),
+      titleFontSize: textPt(0.95, u, min),
       titleFontWeight: 'normal',
       titleColor: COLOURS.ink,
       labelColor: COLOURS.muted,
-      gridColor: '#e4e9ed',
-      gridWidth: 0.5,
+      gridColor: '#d5dce2',
+      gridWidth: 0.55,
       domainColor: COLOURS.faint,
       tickColor: COLOURS.faint,
       titlePadding: round2(0.8 * u),
@@ -120,13 +139,13 @@ export function chartConfig(u: number) {
 }
 
 /** A vega-lite layer drawing the `texts` rows of one style, in page points (`scale: null`); sheets, panels and contour plots share it. */
-export function textLayer(style: TextStyle, u: number) {
+export function textLayer(style: TextStyle, u: number, min = 0) {
   const s = TEXT_STYLES[style];
   return {
     name: `text_${style}`,
     data: { name: 'texts' },
     transform: [{ filter: `datum.style === '${style}'` }],
-    mark: { type: 'text', align: s.align, baseline: 'alphabetic', fontSize: round2(s.size * u), fontWeight: s.weight, color: s.colour },
+    mark: { type: 'text', align: s.align, baseline: 'alphabetic', fontSize: textPt(s.size, u, min), fontWeight: s.weight, color: s.colour },
     encoding: { x: { field: 'x', type: 'quantitative' as const, scale: null }, y: { field: 'y', type: 'quantitative' as const, scale: null }, text: { field: 'text' }, order: { field: 'z', type: 'quantitative' as const } },
   };
 }
