@@ -121,7 +121,13 @@ export function buildCheckReport(input: CheckReportInput): CheckReportPage {
   const px = (M: number) => ((M - domain.domainM[0]) / (domain.domainM[1] - domain.domainM[0])) * L.plot.w;
   const py = (P: number) => L.plot.h - ((P - domain.domainP[0]) / (domain.domainP[1] - domain.domainP[0])) * L.plot.h;
   const shown = c.results.filter((r) => Number.isFinite(r.chartM) && Number.isFinite(r.normalised.P));
+  // the loads' labels first (clear of the extra curves' labels), then the curves' labels clear of them
+  placeLoads(L, domain, c.results, data);
   const keepClear = [
+    ...(data.loadLabels ?? []).map((l) => {
+      const fs = (l.governing ? 0.86 : 0.76) * L.u;
+      return { x0: l.x - 1, y0: l.y - 0.65 * fs, x1: l.x + estWidth(l.text, fs) + 3, y1: l.y + 0.65 * fs };
+    }),
     ...shown.map((r) => ({ x0: px(r.chartM) - 0.9 * L.u, y0: py(r.normalised.P) - 0.9 * L.u, x1: px(r.chartM) + 0.9 * L.u, y1: py(r.normalised.P) + 0.9 * L.u })),
     ...data.curveLabels.map((l) => {
       const w = estWidth(l.text, 0.82 * L.u);
@@ -133,7 +139,6 @@ export function buildCheckReport(input: CheckReportInput): CheckReportPage {
     focusP: shown.slice(0, 12).map((r) => r.normalised.P),
     reserved: keepClear,
   });
-  placeLoads(L, domain, c.results, data);
 
   const sy = b.symbols;
   const su = DISPLAY_UNITS[u].stress;

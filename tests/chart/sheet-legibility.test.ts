@@ -10,6 +10,7 @@
  * - every font size is at least the print floor: ≥ 5 pt once the page is fitted to Letter or A4
  *   (common practice for printed text), i.e. ≥ 7.75 pt on Tabloid, the US default;
  * - no text is cut ('…') and no Greek symbol is upper-cased;
+ * - no drawn curve crosses itself (bar-entry steps drawn on the inner branch);
  * - each P–M plot's curves fill at least 75 % of both axes, with the book's group scale where that holds.
  * Measured: font sizes are the spec's fontSize values in PDF points on the page as drawn; the fitted size
  * multiplies by the page's scale onto Letter or A4 (the smaller, whole page kept).
@@ -26,6 +27,7 @@ import type { ResolvedChartSet } from '../../src/config/types.js';
 import { biaxialFamilyForSheet, familyForSheet, groupExtents } from '../../src/sheet/curves.js';
 import { SheetRenderer } from '../../src/render/renderer.js';
 import type { CurveFamily } from '../../src/analysis/family.js';
+import { selfCrossing } from '../../src/analysis/inner-branch.js';
 import type { BiaxialFamily } from '../../src/analysis/biaxial-family.js';
 
 let renderer: SheetRenderer;
@@ -162,6 +164,8 @@ for (const d of demos) {
               const text = curveLabelText(set, c.rho, k, nominal);
               const rows = b.data.curves.filter((r) => r.curve === `${fam}-${c.rho}`);
               const pMax = Math.max(...rows.map((r) => r.P));
+              // the drawn curve (inner branch by default) never crosses itself
+              expect(selfCrossing(rows.map((r) => r.M), rows.map((r) => r.P)), `${where} ${fam}-${c.rho} crosses itself`).toBeNull();
               const ls = b.data.curveLabels.filter((l) => l.text === text && l.P > 0);
               expect(ls.length, `${where} ${text}`).toBeGreaterThanOrEqual(2);
               const ps = ls.map((l) => l.P);
