@@ -244,9 +244,9 @@ export interface PlotOptions {
   measure?: MeasureText;
   /**
    * 'border' (chart sheets): rays run to the plot border, whose e/h scale the caller draws (ehScale), and
-   * every curve gets a compression-zone label. 'tips' (report plots, whose axes the report fits to its
-   * loads afterwards): rays end just past the outermost curve with their value at the tip, and curves are
-   * labelled on the tension branch only, leaving the compression zone to the loads. Default 'tips'.
+   * every curve gets its compression-zone labels. 'tips' (report plots): rays end just past the outermost
+   * curve with their value at the tip, and curves get compression-zone labels only with `focusP` (near the
+   * loads' levels, clear of the `reserved` load marks), else on the tension branch only. Default 'tips'.
    */
   rayValues?: 'border' | 'tips';
   /** boxes, in points from the plot origin, that labels must keep clear of (a legend) */
