@@ -16,7 +16,7 @@ import { biaxialTable, type BiaxialTable } from './biaxial-table.js';
 import { centredBox, estimateText, LabelPlacer, type MeasureText, type Segment } from './labels.js';
 import { sheetLayout, type Box, type SheetLayout } from './layout.js';
 import { curveKeyText, Deco, drawTitleBlock, fitSideColumn, notesAndCaution, type SideFit, header, wrap, type SheetData, type TemplateParams } from './sheet-data.js';
-import { COLOURS, curveColour } from './style.js';
+import { COLOURS, curveColour, TEXT_STYLES } from './style.js';
 
 export interface BiaxialSheetContext {
   set: ResolvedChartSet;
@@ -154,7 +154,7 @@ function panels(ctx: BiaxialSheetContext, g: Deco, d: number): void {
   const ext = ctx.extent ?? own;
   // each axis to its own round end (mx and my are normalised by different sizes on rectangles)
   // the round step (1, 2, 2.5, 5 × 10^k) whose axis end overshoots the data least (the finer on a tie), ticks at least 2.6 type units apart
-  const most = Math.max(3, Math.min(10, Math.floor(Math.min(grid.w, grid.h) / (2.6 * u))));
+  const most = Math.max(3, Math.min(10, Math.floor(Math.min(grid.w, grid.h) / (2.6 * Math.max(u, g.size('dim') / TEXT_STYLES.dim.size)))));
   const axis = (lo: number, hi: number): AxisScale => {
     const top = family.quadrants === 'first' ? hi : Math.max(hi, -lo);
     let best: AxisScale | undefined;
@@ -230,17 +230,19 @@ function panel(ctx: BiaxialSheetContext, g: Deco, b: Box, s: { x: AxisScale; y: 
       draw(v, v.toFixed(dec), Math.abs(v) < 1e-12);
     }
   };
+  // offsets scale with the tick type, which the print floor may set above its share of u
+  const tu = Math.max(u, g.size('dim') / TEXT_STYLES.dim.size);
   ticks(s.x, (v, t, zero) => {
     g.rule(X(v), b.y, X(v), b.y + b.h, zero ? COLOURS.muted : '#e4e9ed', zero ? 0.7 : 0.5);
-    g.text('dim', X(v), b.y + b.h + 1.1 * u, t);
+    g.text('dim', X(v), b.y + b.h + 1.1 * tu, t);
   });
   ticks(s.y, (v, t, zero) => {
     g.rule(b.x, Y(v), b.x + b.w, Y(v), zero ? COLOURS.muted : '#e4e9ed', zero ? 0.7 : 0.5);
-    g.text('dim', b.x - 0.5 * u - g.width('dim', t) / 2, Y(v) + 0.3 * u, t);
+    g.text('dim', b.x - 0.5 * tu - g.width('dim', t) / 2, Y(v) + 0.3 * tu, t);
   });
   g.rect(b, 'transparent', COLOURS.faint, 0.7);
-  g.text('dimLeft', b.x + b.w - g.width('dimLeft', `${names.x} →`), b.y + b.h + 2.3 * u, `${names.x} →`);
-  g.text('dimLeft', b.x - 3.2 * u, b.y - 1.1 * u, `↑ ${names.y}`);
+  g.text('dimLeft', b.x + b.w - g.width('dimLeft', `${names.x} →`), b.y + b.h + 2.3 * tu, `${names.x} →`);
+  g.text('dimLeft', b.x - 3.2 * tu, b.y - 1.1 * tu, `↑ ${names.y}`);
 
   // the contours, in page points from the panels area's origin
   const n = family.rhos.length;

@@ -729,6 +729,8 @@ const SIDE_FITS: SideFit[] = [
   { picture: 1, notes: 'body' },
   { picture: 0.8, notes: 'bodySmall' },
   { picture: 0.6, notes: 'bodyTiny' },
+  // the print floor can set every notes style to one size: a smaller picture then makes the room
+  { picture: 0.4, notes: 'bodyTiny' },
 ];
 
 /** Draws a side column with the largest variant that fits (tried on a scratch layer); `draw` returns the column's bottom. */
