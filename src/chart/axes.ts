@@ -37,14 +37,54 @@ export function roundStep(span: number, ticks: number): number {
 /** Rounds to 10 significant digits so that steps × integers print cleanly. */
 const clean = (x: number): number => Number(x.toPrecision(10)) + 0;
 
+/** Share of an axis the curves must fill (issue: plots spent 35–40 % of their area on nothing). */
+export const MIN_FILL = 0.75;
+
 /**
  * The domain from the next round value at or below `lo` to the next at or above `hi`, `ticks` intervals
- * at most. A data end already on a round value stays there.
+ * at most. A data end already on a round value stays there. With `minFill`, a finer round step is taken
+ * (up to 1.6 × the ticks) where the coarse one would leave the data less than that share of the axis.
  */
-export function roundScale(lo: number, hi: number, ticks: number): AxisScale {
-  const step = roundStep(hi - lo, ticks);
-  const eps = 1e-9 * Math.max(1, Math.abs(hi), Math.abs(lo));
-  return { domain: [clean(Math.floor((lo + eps) / step) * step), clean(Math.ceil((hi - eps) / step) * step)], step };
+export function roundScale(lo: number, hi: number, ticks: number, minFill = 0): AxisScale {
+  let out: AxisScale | null = null;
+  for (let t = ticks; t <= Math.ceil(1.6 * ticks); t++) {
+    const step = roundStep(hi - lo, t);
+    const eps = 1e-9 * Math.max(1, Math.abs(hi), Math.abs(lo));
+    const s: AxisScale = { domain: [clean(Math.floor((lo + eps) / step) * step), clean(Math.ceil((hi - eps) / step) * step)], step };
+    if (!out) out = s;
+    if ((hi - lo) / (s.domain[1] - s.domain[0]) >= minFill - 1e-9) return s;
+  }
+  return out!;
+}
+
+/** The share of each axis that an extent fills. */
+export function fillOf(e: AxisExtent, a: SheetAxes): { M: number; P: number } {
+  return { M: (e.M[1] - e.M[0]) / (a.M.domain[1] - a.M.domain[0]), P: (e.P[1] - e.P[0]) / (a.P.domain[1] - a.P.domain[0]) };
+}
+
+/**
+ * A sheet's axes in a book: the group's shared scale where this sheet's own curves still fill MIN_FILL of
+ * it in both directions, else its own; an explicit group `axes` always wins.
+ */
+export function sheetAxes(own: AxisExtent, group: AxisExtent | undefined, plot: { w: number; h: number }, fixed?: { M?: [number, number]; P?: [number, number] }): SheetAxes {
+  const mine = axesFor(own, plot, fixed);
+  if (!group) return mine;
+  const shared = axesFor(envelope([group, own]), plot, fixed);
+  const f = fillOf(own, shared);
+  return (fixed?.M || f.M >= MIN_FILL - 1e-9) && (fixed?.P || f.P >= MIN_FILL - 1e-9) ? shared : mine;
+}
+
+/** Minor grid values: each major step split in five (in four for steps of 2 × 10^k), inside the domain. */
+export function minorValues(s: AxisScale): number[] {
+  const mant = Number((s.step / 10 ** Math.floor(Math.log10(s.step))).toPrecision(6));
+  const minor = s.step / (mant === 2 ? 4 : 5);
+  const out: number[] = [];
+  const first = Math.ceil(s.domain[0] / minor - 1e-9);
+  for (let k = first; k * minor <= s.domain[1] + 1e-9 * minor; k++) {
+    const v = clean(k * minor);
+    if (Math.abs(v / s.step - Math.round(v / s.step)) > 1e-6) out.push(v);
+  }
+  return out;
 }
 
 /** A fixed domain (a group's own `axes`): ticks at a round step inside it. */
@@ -94,8 +134,8 @@ export function axesFor(extent: AxisExtent, plot: { w: number; h: number }, fixe
   const nx = Math.max(5, Math.min(16, Math.floor(plot.w / 34)));
   const ny = Math.max(5, Math.min(16, Math.floor(plot.h / 32)));
   return {
-    M: fixed?.M ? fixedScale(fixed.M, nx) : roundScale(extent.M[0], extent.M[1], nx),
-    P: fixed?.P ? fixedScale(fixed.P, ny) : roundScale(extent.P[0], extent.P[1], ny),
+    M: fixed?.M ? fixedScale(fixed.M, nx) : roundScale(extent.M[0], extent.M[1], nx, MIN_FILL),
+    P: fixed?.P ? fixedScale(fixed.P, ny) : roundScale(extent.P[0], extent.P[1], ny, MIN_FILL),
   };
 }
 

@@ -10,12 +10,13 @@ import { describeArrangement, describeShape, describeTransverse, fmt, levelSymbo
 import type { ResolvedChartSet, ResolvedSheet } from '../config/types.js';
 import { RATIO_SYMBOL } from '../config/types.js';
 import { DISPLAY_UNITS } from '../units/index.js';
-import { roundStep, tickFormat, type AxisExtent, type AxisScale } from './axes.js';
+import { PANEL_LABEL_EM } from './panel-spec.js';
+import { MIN_FILL, roundStep, tickFormat, type AxisExtent, type AxisScale } from './axes.js';
 import { biaxialTable, type BiaxialTable } from './biaxial-table.js';
 import { centredBox, estimateText, LabelPlacer, type MeasureText, type Segment } from './labels.js';
 import { sheetLayout, type Box, type SheetLayout } from './layout.js';
 import { curveKeyText, Deco, drawTitleBlock, logoInner, type LogoRef, fitSideColumn, notesAndCaution, type SideFit, header, wrap, type SheetData, type TemplateParams } from './sheet-data.js';
-import { COLOURS, curveColour } from './style.js';
+import { COLOURS, curveColour, TEXT_STYLES } from './style.js';
 
 export interface BiaxialSheetContext {
   set: ResolvedChartSet;
@@ -156,7 +157,7 @@ function panels(ctx: BiaxialSheetContext, g: Deco, d: number): void {
   const ext = ctx.extent ?? own;
   // each axis to its own round end (mx and my are normalised by different sizes on rectangles)
   // the round step (1, 2, 2.5, 5 × 10^k) whose axis end overshoots the data least (the finer on a tie), ticks at least 2.6 type units apart
-  const most = Math.max(3, Math.min(10, Math.floor(Math.min(grid.w, grid.h) / (2.6 * u))));
+  const most = Math.max(3, Math.min(10, Math.floor(Math.min(grid.w, grid.h) / (2.6 * Math.max(u, g.size('dim') / TEXT_STYLES.dim.size)))));
   const axis = (lo: number, hi: number): AxisScale => {
     const top = family.quadrants === 'first' ? hi : Math.max(hi, -lo);
     let best: AxisScale | undefined;
@@ -167,7 +168,10 @@ function panels(ctx: BiaxialSheetContext, g: Deco, d: number): void {
     }
     return best!;
   };
-  const scale = { x: axis(Math.min(ext.M[0], own.M[0]), Math.max(ext.M[1], own.M[1])), y: axis(Math.min(ext.P[0], own.P[0]), Math.max(ext.P[1], own.P[1])) };
+  const shared = { x: axis(Math.min(ext.M[0], own.M[0]), Math.max(ext.M[1], own.M[1])), y: axis(Math.min(ext.P[0], own.P[0]), Math.max(ext.P[1], own.P[1])) };
+  // the group's scale only where this sheet's contours fill MIN_FILL of it on both axes; one scale for all its panels
+  const fills = (e: [number, number], a: AxisScale) => Math.max(e[1], -e[0]) / a.domain[1] >= MIN_FILL - 1e-9;
+  const scale = ctx.extent && !(fills(own.M, shared.x) && fills(own.P, shared.y)) ? { x: axis(own.M[0], own.M[1]), y: axis(own.P[0], own.P[1]) } : shared;
   const names = axisNames(set, family);
   // panels packed from the top left; room left below them takes the reading notes
   const cellH = grid.h + (PAD.top + PAD.bottom) * u;
@@ -229,17 +233,19 @@ function panel(ctx: BiaxialSheetContext, g: Deco, b: Box, s: { x: AxisScale; y: 
       draw(v, v.toFixed(dec), Math.abs(v) < 1e-12);
     }
   };
+  // offsets scale with the tick type, which the print floor may set above its share of u
+  const tu = Math.max(u, g.size('dim') / TEXT_STYLES.dim.size);
   ticks(s.x, (v, t, zero) => {
     g.rule(X(v), b.y, X(v), b.y + b.h, zero ? COLOURS.muted : '#e4e9ed', zero ? 0.7 : 0.5);
-    g.text('dim', X(v), b.y + b.h + 1.1 * u, t);
+    g.text('dim', X(v), b.y + b.h + 1.1 * tu, t);
   });
   ticks(s.y, (v, t, zero) => {
     g.rule(b.x, Y(v), b.x + b.w, Y(v), zero ? COLOURS.muted : '#e4e9ed', zero ? 0.7 : 0.5);
-    g.text('dim', b.x - 0.5 * u - g.width('dim', t) / 2, Y(v) + 0.3 * u, t);
+    g.text('dim', b.x - 0.5 * tu - g.width('dim', t) / 2, Y(v) + 0.3 * tu, t);
   });
   g.rect(b, 'transparent', COLOURS.faint, 0.7);
-  g.text('dimLeft', b.x + b.w - g.width('dimLeft', `${names.x} →`), b.y + b.h + 2.3 * u, `${names.x} →`);
-  g.text('dimLeft', b.x - 3.2 * u, b.y - 1.1 * u, `↑ ${names.y}`);
+  g.text('dimLeft', b.x + b.w - g.width('dimLeft', `${names.x} →`), b.y + b.h + 2.3 * tu, `${names.x} →`);
+  g.text('dimLeft', b.x - 3.2 * tu, b.y - 1.1 * tu, `↑ ${names.y}`);
 
   // the contours, in page points from the panels area's origin
   const n = family.rhos.length;
@@ -282,7 +288,7 @@ function panel(ctx: BiaxialSheetContext, g: Deco, b: Box, s: { x: AxisScale; y: 
   }
 
   // ρg values on the curves, spread over the quadrant (outer curves toward 45°, alternating sides)
-  const fs = 0.72 * u;
+  const fs = Math.max(PANEL_LABEL_EM * u, g.L.minText ?? 0);
   const h = 1.05 * fs;
   for (const c of [...drawn].reverse()) {
     const text = curveKeyText(set, family.rhos[c.k]!, c.k).replace(/^\S+ /, '');

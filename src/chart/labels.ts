@@ -102,6 +102,26 @@ export class LabelPlacer {
    * Places a label at the cheapest free candidate; a candidate's own `penalty` (distance from its
    * preferred spot) adds to the cost of the lines it covers. Returns the index of the chosen one, or -1.
    */
+  /**
+   * Last resort for a label that must not be dropped: the candidate inside the bounds that overlaps placed
+   * boxes least (by area), then the cheapest. Returns its index, or -1 when there is none.
+   */
+  force(candidates: readonly { box: LabelBox; penalty: number }[]): number {
+    const B = this.bounds;
+    let best = -1;
+    let bestCost = Infinity;
+    candidates.forEach((c, i) => {
+      const b = c.box;
+      if (b.x0 < B.x0 || b.y0 < B.y0 || b.x1 > B.x1 || b.y1 > B.y1) return;
+      let area = 0;
+      for (const p of this.placed) area += Math.max(0, Math.min(b.x1, p.x1) - Math.max(b.x0, p.x0)) * Math.max(0, Math.min(b.y1, p.y1) - Math.max(b.y0, p.y0));
+      const cost = area * 100 + c.penalty;
+      if (cost < bestCost) ((best = i), (bestCost = cost));
+    });
+    if (best >= 0) this.placed.push(candidates[best]!.box);
+    return best;
+  }
+
   place(candidates: readonly { box: LabelBox; penalty: number }[], own?: string, clear = 0): number {
     let best = -1;
     let bestCost = Infinity;

@@ -1,3 +1,5 @@
+import { printFloor } from './style.js';
+
 /** Page regions of a sheet, in PDF points from the page's top-left corner. */
 export interface Box {
   x: number;
@@ -17,6 +19,8 @@ export interface SheetLayout {
   titleBlock: Box;
   /** rows of the title block: 3, or 5 on narrow pages */
   titleRows?: number;
+  /** the print floor: no text smaller, in points (style.ts printFloor) */
+  minText?: number;
 }
 
 /**
@@ -46,5 +50,5 @@ export function sheetLayout(pageW: number, pageH: number, tableRows: number): Sh
   const axisBottom = 5.2 * u;
   const plotTop = bodyTop + 1.2 * u;
   const plot: Box = { x: m + axisLeft, y: plotTop, w: leftW - axisLeft - 1.0 * u, h: table.y - gap - axisBottom - plotTop };
-  return { page: { w: pageW, h: pageH }, u, header, plot, table, side, titleBlock, titleRows };
+  return { page: { w: pageW, h: pageH }, u, header, plot, table, side, titleBlock, titleRows, minText: printFloor(pageW, pageH) };
 }

@@ -13,9 +13,11 @@ import { DISPLAY_UNITS } from '../units/index.js';
 import { sheetLayout, type Box, type SheetLayout } from './layout.js';
 import { columnsFor, lookupTable, shortLabel, type FamilyKind, type LookupTable } from './lookup-table.js';
 import { simplifyIndices } from './simplify.js';
-import { axesFor, envelope, familyExtent, type AxisExtent, type SheetAxes } from './axes.js';
+import { innerBranch } from '../analysis/inner-branch.js';
+import type { BarEntryDrawing } from '../config/schema.js';
+import { axesFor, familyExtent, sheetAxes, type AxisExtent, type SheetAxes } from './axes.js';
 import { centredBox, estimateText, LabelPlacer, type LabelBox, type MeasureText, type Segment } from './labels.js';
-import { AVG_CHAR_EM, COLOURS, curveColour, TEXT_STYLES, type TextStyle } from './style.js';
+import { AVG_CHAR_EM, COLOURS, curveColour, LINE_KINDS, TEXT_STYLES, type TextStyle } from './style.js';
 
 export interface SheetContext {
   set: ResolvedChartSet;
@@ -35,9 +37,10 @@ export interface SheetContext {
 }
 
 export interface CurveRow { curve: string; family: FamilyKind; i: number; M: number; P: number; colour: string }
-export interface CurveLabelRow { M: number; P: number; text: string; colour: string; z: number }
+/** A curve label: centre in chart units; `bold` 1 on the primary family; `knock` its knockout path in points (spec.ts). */
+export interface CurveLabelRow { M: number; P: number; text: string; colour: string; bold?: 0 | 1; knock?: string; z: number }
 export interface RefRow { line: string; kind: 'strain' | 'ray' | 'cap' | 'zero'; i: number; M: number; P: number }
-export interface RefLabelRow { kind: 'strain' | 'ray' | 'cap'; M: number; P: number; text: string; z: number }
+export interface RefLabelRow { kind: 'strain' | 'ray' | 'cap'; M: number; P: number; text: string; knock?: string; z: number }
 export interface FrameRow { M: number; P: number }
 export interface TextRow { style: TextStyle; x: number; y: number; text: string; z: number }
 export interface RectRow { x: number; y: number; x2: number; y2: number; fill: string; stroke: string; strokeWidth: number; z: number }
@@ -153,7 +156,8 @@ export function buildSheet(ctx: SheetContext): BuiltSheet {
   const data: SheetData = { curves: [], curveLabels: [], refs: [], refLabels: [], frame: [], texts: [], rects: [], rules: [], dots: [], rings: [] };
   const measure = ctx.measureText ?? estimateText;
   const own = familyExtent(family, template.families, divisor);
-  const axes = axesFor(ctx.extent ? envelope([ctx.extent, own]) : own, L.plot, ctx.sheet.axes);
+  // the group's shared scale only where this sheet's curves fill 75 % of it; explicit group axes win
+  const axes = sheetAxes(own, ctx.extent, L.plot, ctx.sheet.axes);
   template.axes = axes;
 
   if (ctx.logo) template.logo = logoInner(L);
@@ -205,7 +209,7 @@ export function ehScale(eccentricities: readonly number[], axes: SheetAxes, g: D
 
 /**
  * With both families drawn: a key in the plot's top-right corner pairing each design curve (solid) with
- * its nominal curve (dashed, a lighter tone of the same hue). Returns its box in points from the plot origin.
+ * its nominal curve (dashed and lighter in weight, the same colour). Returns its box in points from the plot origin.
  */
 function familyLegend(ctx: SheetContext, g: Deco): LabelBox {
   const { plot: b, u } = g.L;
@@ -214,7 +218,7 @@ function familyLegend(ctx: SheetContext, g: Deco): LabelBox {
   const line = 1.15 * g.size('body');
   const sw = 2.6 * u;
   const keyW = Math.max(...ctx.family.curves.map((c, k) => g.width('body', curveKeyText(ctx.set, c.rho, k))));
-  const head = `solid ${sy.designFamily} · dashed ${sy.nominalFamily}`;
+  const head = `solid ${sy.designFamily} · dashed ${sy.nominalFamily} (labels ending n)`;
   const w = Math.max(keyW + 2 * sw + 2.4 * u, g.width('caption', head)) + 1.6 * u;
   const h = (n + 1.4) * line + 0.8 * u;
   const x = b.x + b.w - w - 0.4 * u;
@@ -226,7 +230,9 @@ function familyLegend(ctx: SheetContext, g: Deco): LabelBox {
     const col = curveColour(k, n);
     const x0 = x + 0.8 * u;
     g.rule(x0, yy - 0.3 * g.size('body'), x0 + sw, yy - 0.3 * g.size('body'), col, 1.5);
-    for (let s = 0; s < 3; s++) g.rule(x0 + sw + 0.6 * u + s * sw / 3, yy - 0.3 * g.size('body'), x0 + sw + 0.6 * u + s * sw / 3 + sw / 5, yy - 0.3 * g.size('body'), lighter(col), 1.0);
+    // the nominal key in the nominal curves' dash and weight (LINE_KINDS)
+    const [dash, gap] = LINE_KINDS.nominal.dash;
+    for (let xx = x0 + sw + 0.6 * u; xx < x0 + 2 * sw + 0.6 * u - 0.1; xx += dash + gap) g.rule(xx, yy - 0.3 * g.size('body'), Math.min(xx + dash, x0 + 2 * sw + 0.6 * u), yy - 0.3 * g.size('body'), col, LINE_KINDS.nominal.width);
     g.text('body', x0 + 2 * sw + 1.2 * u, yy, curveKeyText(ctx.set, c.rho, k));
   });
   return { x0: x - b.x - 2, y0: y - b.y - 2, x1: x + w - b.x + 2, y1: y + h - b.y + 2 };
@@ -247,13 +253,15 @@ export interface PlotOptions {
   measure?: MeasureText;
   /**
    * 'border' (chart sheets): rays run to the plot border, whose e/h scale the caller draws (ehScale), and
-   * every curve gets a compression-zone label. 'tips' (report plots, whose axes the report fits to its
-   * loads afterwards): rays end just past the outermost curve with their value at the tip, and curves are
-   * labelled on the tension branch only, leaving the compression zone to the loads. Default 'tips'.
+   * every curve gets its compression-zone labels. 'tips' (report plots): rays end just past the outermost
+   * curve with their value at the tip, and curves get compression-zone labels only with `focusP` (near the
+   * loads' levels, clear of the `reserved` load marks), else on the tension branch only. Default 'tips'.
    */
   rayValues?: 'border' | 'tips';
   /** boxes, in points from the plot origin, that labels must keep clear of (a legend) */
   reserved?: LabelBox[];
+  /** report plots: the loads' P (chart units); curves get compression-zone labels near these levels */
+  focusP?: number[];
 }
 
 /** Font size of the ρg labels and of the reference-line labels, in type units. */
@@ -261,11 +269,30 @@ export const CURVE_LABEL_EM = 0.82;
 export const REF_LABEL_EM = 0.78;
 
 /**
- * Where a label prefers to sit, as a fraction of its curve's own largest P: half-way up, where a reader
- * looking for the curve through a typical column load is most likely to look (common practice).
+ * Where the two compression-zone labels of a curve prefer to sit, as fractions of the curve's own largest
+ * P: the lower one a little under half-way up, where a typical column load falls, the upper one near the
+ * cap, so a reader finds a label near any load (common practice).
  */
-const PREFERRED_LEVEL = 0.5;
-const LEVELS = [0.5, 0.45, 0.55, 0.4, 0.6, 0.35, 0.65, 0.7, 0.3, 0.75, 0.25, 0.8, 0.2, 0.85, 0.15, 0.9, 0.1];
+const LOWER_LEVEL = 0.5;
+const UPPER_LEVEL = 0.9;
+
+/** A curve label's row: its centre in chart units and its knockout (a box in points around the centre). */
+function labelRow(M: number, P: number, text: string, colour: string, bold: boolean, w: number, h: number, z: number): CurveLabelRow {
+  return { M: r5(M), P: r5(P), text, colour, bold: bold ? 1 : 0, knock: knockout(-w / 2 - 1, -h / 2, w + 2, h), z };
+}
+
+/** A knockout as a vega symbol path in points around the mark's anchor (symbol size 4 draws it 1:1). */
+export function knockout(x0: number, y0: number, w: number, h: number): string {
+  const f = (v: number) => String(round(v));
+  return `M${f(x0)},${f(y0)}h${f(w)}v${f(h)}h${f(-w)}Z`;
+}
+
+/** A curve's label text: "ρg 0.02"; on ω sets "ω 0.2 · ρg 0.0123" (the value asked for, then the sheet's ρg). */
+export function curveLabelText(set: Pick<ResolvedChartSet, 'ratios'>, rho: number, k: number, nominal: boolean): string {
+  const key = curveKeyText(set, rho, k);
+  const withRho = set.ratios.kind === 'omega' ? `${key} · ρg ${String(Number(rho.toPrecision(3)))}` : key;
+  return nominal ? `${withRho} n` : withRho;
+}
 
 /** Indices of the points just before a bar-row step (src/analysis/family.ts sweeps a pair of depths there). */
 export function barEntryIndices(cOverH: ArrayLike<number>): Set<number> {
@@ -322,6 +349,23 @@ export function lighter(hex: string, t = 0.5): string {
   return `#${c.map((v) => Math.round(v + (255 - v) * t).toString(16).padStart(2, '0')).join('')}`;
 }
 
+/**
+ * A curve of one family as a sheet draws it, in chart units: the inner (conservative) branch by default
+ * (src/analysis/inner-branch.ts, the same branch the check's chart reading reads), the computed points
+ * ('steps'), or the computed points with each bar-entry step cut to a chord on its inner side ('chord').
+ */
+export function drawnCurve(c: Curve, fam: FamilyKind, drawing: BarEntryDrawing, steps: ReadonlySet<number>, negativeStart: number | undefined, d: number): { M: number[]; P: number[] } {
+  const P = fam === 'design' ? c.phiPn : c.Pn;
+  const M = fam === 'design' ? c.phiMn : c.Mn;
+  if (drawing === 'inner') {
+    const b = innerBranch(M, P, negativeStart);
+    return { M: b.M.map((v) => v / d), P: b.P.map((v) => v / d) };
+  }
+  const cut = drawing === 'chord' ? innerChord(P, steps) : new Set<number>();
+  const idx = Array.from(P, (_, i) => i).filter((i) => !cut.has(i));
+  return { M: idx.map((i) => M[i]! / d), P: idx.map((i) => P[i]! / d) };
+}
+
 export function plotLayers(
   ctx: { family: CurveFamily; set: Pick<ResolvedChartSet, 'referenceLines' | 'ratios'> },
   templateLayout: SheetLayout,
@@ -344,28 +388,27 @@ export function plotLayers(
   const Y = (P: number) => ((p1 - P) / (p1 - p0)) * L.plot.h;
   const M_ = (x: number) => m0 + (x / L.plot.w) * (m1 - m0);
   const P_ = (y: number) => p1 - (y / L.plot.h) * (p1 - p0);
-  const smooth = set.referenceLines.barEntry === false;
-  const skip = smooth ? barEntryIndices(family.sweep.cOverH) : new Set<number>();
-  const both = families.length > 1;
+  const drawing = set.referenceLines.barEntry ?? 'inner';
+  const skip = drawing === 'chord' ? barEntryIndices(family.sweep.cOverH) : new Set<number>();
 
   const placer = new LabelPlacer({ x0: 0, y0: 0, x1: L.plot.w, y1: L.plot.h });
   for (const b of opts.reserved ?? []) placer.reserve(b);
   const segs = (Ms: number[], Ps: number[]): Segment[] => Ms.slice(1).map((_, i) => [X(Ms[i]!), Y(Ps[i]!), X(Ms[i + 1]!), Y(Ps[i + 1]!)] as Segment);
 
-  family.curves.forEach((c, k) => {
+  /** each curve as drawn, chart units, per family: the polylines labels are placed on */
+  const drawn = family.curves.map((c, k) => {
     const colour = curveColour(k, n);
+    const byFam = {} as Record<FamilyKind, { M: number[]; P: number[] }>;
     for (const fam of families) {
-      const P = fam === 'design' ? c.phiPn : c.Pn;
-      const M = fam === 'design' ? c.phiMn : c.Mn;
+      const line = drawnCurve(c, fam, drawing, skip, family.negativeBranchStart, d);
       const id = `${fam}-${c.rho}`;
-      const cut = smooth ? innerChord(P, skip) : skip;
-      const idx = Array.from(P, (_, i) => i).filter((i) => !cut.has(i));
-      // drawn within SIMPLIFY_TOLERANCE_PT of every computed point
-      const keep = simplifyIndices(idx.map((i) => X(M[i]! / d)), idx.map((i) => Y(P[i]! / d)), SIMPLIFY_TOLERANCE_PT).map((j) => idx[j]!);
-      const tone = both && fam === 'nominal' ? lighter(colour) : colour;
-      keep.forEach((i, j) => out.curves.push({ curve: id, family: fam, i: j, M: r5(M[i]! / d), P: r5(P[i]! / d), colour: tone }));
-      placer.addObstacle({ group: `curve-${k}`, weight: fam === primary ? 1 : 0.5, segments: segs(keep.map((i) => M[i]! / d), keep.map((i) => P[i]! / d)) });
+      // drawn within SIMPLIFY_TOLERANCE_PT of every point of the drawn branch
+      const keep = simplifyIndices(line.M.map(X), line.P.map(Y), SIMPLIFY_TOLERANCE_PT);
+      keep.forEach((i, j) => out.curves.push({ curve: id, family: fam, i: j, M: r5(line.M[i]!), P: r5(line.P[i]!), colour }));
+      placer.addObstacle({ group: `curve-${k}`, weight: fam === primary ? 1 : 0.5, segments: segs(keep.map((i) => line.M[i]!), keep.map((i) => line.P[i]!)) });
+      byFam[fam] = line;
     }
+    return byFam;
   });
 
   const pointsOf = (id: string): { rho: number; v: PointValues }[] =>
@@ -407,58 +450,86 @@ export function plotLayers(
     placer.addObstacle({ group: `ray-${e}`, weight: 0.4, segments: [[X(0), Y(0), X(end.M), Y(end.P)]] });
     if (report) {
       const text = `e/h ${fmt(e)}`;
-      out.refLabels.push({ kind: 'ray', M: r5(end.M), P: r5(end.P), text, z: out.refLabels.length });
+      const rfs0 = Math.max(REF_LABEL_EM * u, L.minText ?? 0);
+      out.refLabels.push({ kind: 'ray', M: r5(end.M), P: r5(end.P), text, knock: knockout(1, -2 - 0.6 * rfs0, measure(text, rfs0, false) + 2, 1.2 * rfs0), z: out.refLabels.length });
       // drawn at dx 2, dy −2 from the tip (spec.ts): other labels keep clear of it
-      const rfs = REF_LABEL_EM * u;
+      const rfs = rfs0;
       placer.reserve({ x0: X(end.M) + 2, y0: Y(end.P) - 2 - 0.6 * rfs, x1: X(end.M) + 2 + measure(text, rfs, false), y1: Y(end.P) - 2 + 0.6 * rfs });
     }
   }
 
-  // 1. one ρg label per curve in the compression zone (P > 0), never dropped: moved along the curve instead
-  const fs = CURVE_LABEL_EM * u;
+  // 1. ρg labels in the compression zone (P > 0), never dropped: two per curve of every family drawn, at
+  // clearly different heights, one near or on the cap (upper) and one lower down, so a reader finds a
+  // label near any load; on report plots the lower one sits at the loads' level
+  const fs = Math.max(CURVE_LABEL_EM * u, L.minText ?? 0);
   const h = 1.05 * fs;
-  family.curves.forEach((c, k) => {
-    if (report) return;
-    const P = primary === 'design' ? c.phiPn : c.Pn;
-    const M = primary === 'design' ? c.phiMn : c.Mn;
-    const text = curveKeyText(set, c.rho, k);
-    const w = measure(text, fs, true);
+  const order = [primary, ...families.filter((f) => f !== primary)];
+  const focus = (opts.focusP ?? []).filter((p) => Number.isFinite(p) && p > 0);
+  type Cand = { box: LabelBox; penalty: number; M: number; P: number };
+  const upperAt = new Map<string, number>();
+  const label = (k: number, fam: FamilyKind, zone: 'upper' | 'lower') => {
+    const c = family.curves[k]!;
+    const line = drawn[k]![fam];
+    const bold = fam === primary;
+    const text = curveLabelText(set, c.rho, k, fam !== primary);
+    const w = measure(text, fs, bold);
     let pMax = 0;
-    for (const v of P) pMax = Math.max(pMax, v / d);
-    const cands: { box: LabelBox; penalty: number; M: number; P: number }[] = [];
+    for (const v of line.P) pMax = Math.max(pMax, v);
+    if (!(pMax > 0)) return;
+    const key = `${fam}-${k}`;
+    const upperP = upperAt.get(key);
+    // the lower label keeps at least a quarter of the curve's height below the upper one
+    const ok = (P: number) => zone === 'upper' || upperP === undefined || P <= upperP - 0.25 * pMax;
+    const fLo = zone === 'upper' ? 0.7 : 0.08;
+    const fHi = zone === 'upper' ? 1 : 0.62;
+    const lowPref = focus.length ? Math.min(fHi, Math.max(fLo, focus.reduce((s, p) => s + p, 0) / focus.length / pMax)) : LOWER_LEVEL;
+    const pref = zone === 'upper' ? UPPER_LEVEL : lowPref;
+    const cands: Cand[] = [];
     const at = (pt: { M: number; P: number } | null, penalty: number, dy = 0) => {
       if (!pt || !(pt.P > 0)) return;
       const x = X(pt.M);
       const y = Y(pt.P) + dy;
-      cands.push({ box: centredBox(x, y, w, h, 1), penalty, M: pt.M, P: P_(y) });
+      const P = P_(y);
+      if (P > 0 && ok(P)) cands.push({ box: centredBox(x, y, w, h, 1), penalty, M: pt.M, P });
     };
-    for (const f of LEVELS) at(crossing(M, P, f * pMax, d), 3 * Math.abs(f - PREFERRED_LEVEL));
-    for (let f = 0.06; f < 0.97; f += 0.04) at(crossing(M, P, f * pMax, d), 0.5 + 3 * Math.abs(f - PREFERRED_LEVEL));
-    // on the cap segment: the flat top of a factored curve
-    const flat = Array.from(P, (v, i) => ({ v: v / d, m: M[i]! / d })).filter((q) => q.v >= pMax * (1 - 1e-9));
-    const capM = Math.max(...flat.map((q) => q.m));
-    if (flat.length > 1 && X(capM) > w + 4) for (const t of [0.5, 0.35, 0.65]) at({ M: capM * t, P: pMax }, 1.5 + Math.abs(t - 0.5));
+    const levels = (step: number) => {
+      for (let f = fLo; f <= fHi + 1e-9; f += step) at(crossing(line.M, line.P, Math.min(f, 0.995) * pMax, 1), 3 * Math.abs(f - pref));
+    };
+    levels(0.03);
+    // on the cap: the flat top of a factored curve
+    if (zone === 'upper') {
+      const flat = line.P.map((v, i) => ({ v, m: line.M[i]! })).filter((q) => q.v >= pMax * (1 - 1e-9));
+      const capM = Math.max(...flat.map((q) => q.m));
+      const capMin = Math.min(...flat.map((q) => q.m));
+      if (flat.length > 1 && X(capM) - X(capMin) > w + 4) for (const t of [0.5, 0.35, 0.65, 0.8, 0.2]) at({ M: capMin + (capM - capMin) * t, P: pMax }, 0.6 + Math.abs(t - 0.5));
+    }
     let chosen = placer.place(cands, `curve-${k}`, 0.4 * h);
     if (chosen < 0) {
-      // denser positions, then beside the curve rather than on it
+      // denser positions, then beside the curve rather than on it (a label off its curve reads less surely)
       cands.length = 0;
-      for (let f = 0.03; f < 0.99; f += 0.02) {
-        const pt = crossing(M, P, f * pMax, d);
-        const pen = 3 * Math.abs(f - PREFERRED_LEVEL);
+      for (let f = fLo; f <= fHi + 1e-9; f += 0.01) {
+        const pt = crossing(line.M, line.P, Math.min(f, 0.995) * pMax, 1);
+        const pen = 3 * Math.abs(f - pref);
         at(pt, pen);
-        // beside the curve only as a last resort: a label off its curve reads less surely
         at(pt, pen + 8, -1.1 * h);
         at(pt, pen + 8, 1.1 * h);
       }
       chosen = placer.place(cands, `curve-${k}`, 0.4 * h);
     }
+    if (chosen < 0) chosen = placer.force(cands);
     const best = cands[chosen];
-    if (best) out.curveLabels.push({ M: r5(best.M), P: r5(best.P), text, colour: curveColour(k, n), z: out.curveLabels.length });
-  });
+    if (!best) return;
+    if (zone === 'upper') upperAt.set(key, best.P);
+    out.curveLabels.push(labelRow(best.M, best.P, text, curveColour(k, n), bold, w, h, out.curveLabels.length));
+  };
+  if (!report || focus.length) {
+    for (const fam of order) for (let k = 0; k < n; k++) label(k, fam, 'upper');
+    for (const fam of order) for (let k = 0; k < n; k++) label(k, fam, 'lower');
+  }
 
   // 2. reference-line names at the outer end of their line: beside it, above or below; dropped if no room
   for (const r of refEnds) {
-    const rfs = REF_LABEL_EM * u;
+    const rfs = Math.max(REF_LABEL_EM * u, L.minText ?? 0);
     const w = measure(r.text, rfs, false);
     const x = X(r.M);
     const y = Y(r.P);
@@ -473,24 +544,23 @@ export function plotLayers(
     ];
     const i = placer.place(cands, r.kind === 'cap' ? 'cap' : undefined);
     const b = cands[i];
-    if (b) out.refLabels.push({ kind: r.kind, M: r5(M_(b.box.x0)), P: r5(P_((b.box.y0 + b.box.y1) / 2)), text: r.text, z: out.refLabels.length });
+    if (b) out.refLabels.push({ kind: r.kind, M: r5(M_(b.box.x0)), P: r5(P_((b.box.y0 + b.box.y1) / 2)), text: r.text, knock: knockout(-1, -rh / 2, w + 2, rh), z: out.refLabels.length });
   }
 
-  // 3. a second ρg label on the tension branch where there is room (lowest priority)
+  // 3. a further label on the tension branch where there is room (lowest priority)
   const tensionP = (k: number) => (family.curves[k]!.keyPoints.find((p) => p.id === 'pure-tension')?.[primary]?.P ?? 0) / d;
   family.curves.forEach((c, k) => {
-    const P = primary === 'design' ? c.phiPn : c.Pn;
-    const M = primary === 'design' ? c.phiMn : c.Mn;
-    const text = curveKeyText(set, c.rho, k);
+    const line = drawn[k]![primary];
+    const text = curveLabelText(set, c.rho, k, false);
     const w = measure(text, fs, true);
     const cands: { box: LabelBox; penalty: number; M: number; P: number }[] = [];
     for (const f of [0.33, 0.25, 0.42, 0.18, 0.5]) {
-      const pt = crossing(M, P, f * tensionP(k), d);
+      const pt = crossing(line.M, line.P, f * tensionP(k), 1);
       if (pt) cands.push({ box: centredBox(X(pt.M), Y(pt.P), w, h, 1), penalty: Math.abs(f - 0.33), M: pt.M, P: pt.P });
     }
     const free = report ? cands : cands.filter((q) => placer.cost(q.box, `curve-${k}`) === 0);
     const b = free[placer.place(free)];
-    if (b) out.curveLabels.push({ M: r5(b.M), P: r5(b.P), text, colour: curveColour(k, n), z: out.curveLabels.length });
+    if (b) out.curveLabels.push(labelRow(b.M, b.P, text, curveColour(k, n), true, w, h, out.curveLabels.length));
   });
 
   // invisible frame: the axes' corners
@@ -508,7 +578,7 @@ export class Deco {
   ) {}
   private ox = (x: number) => round(x - this.L.plot.x);
   private oy = (y: number) => round(y - this.L.plot.y);
-  size = (style: TextStyle) => TEXT_STYLES[style].size * this.L.u;
+  size = (style: TextStyle) => Math.max(TEXT_STYLES[style].size * this.L.u, this.L.minText ?? 0);
   /** advance width of `text` in a text style, in points */
   width = (style: TextStyle, text: string) => this.measure(text, this.size(style), TEXT_STYLES[style].weight === 'bold');
   text(style: TextStyle, x: number, y: number, text: string, maxW?: number): void {
@@ -673,6 +743,8 @@ const SIDE_FITS: SideFit[] = [
   { picture: 1, notes: 'body' },
   { picture: 0.8, notes: 'bodySmall' },
   { picture: 0.6, notes: 'bodyTiny' },
+  // the print floor can set every notes style to one size: a smaller picture then makes the room
+  { picture: 0.4, notes: 'bodyTiny' },
 ];
 
 /** Draws a side column with the largest variant that fits (tried on a scratch layer); `draw` returns the column's bottom. */
@@ -761,8 +833,13 @@ function sideColumn(ctx: SheetContext, g: Deco, fit: SideFit): number {
     );
   }
   // the basis notes state why the curves step; a smoothed drawing says which model it then shows
-  if (set.referenceLines.barEntry === false && barEntryIndices(family.sweep.cOverH).size > 0) {
-    extra.push('Drawn smoothed: where a bar row enters the rectangular stress block the computed curve steps inward; each step is drawn here as a chord on its inner side. Key points and tables keep the computed model (block with displaced concrete deducted).');
+  const drawing = set.referenceLines.barEntry ?? 'inner';
+  if (drawing !== 'steps' && barEntryIndices(family.sweep.cOverH).size > 0) {
+    extra.push(
+      drawing === 'chord'
+        ? 'Drawn smoothed: where a bar row enters the rectangular stress block the computed curve steps inward; each step is drawn here as a chord on its inner side. Key points and tables keep the computed model (block with displaced concrete deducted).'
+        : 'Drawn on the inner branch: where a bar row enters the rectangular stress block the computed curve steps inward and would fold back; each curve is drawn with the least moment it reaches at each axial level, the conservative side, and pmchart check reads the same line. Key points and tables keep the computed model.',
+    );
   }
   if (set.ratios.kind === 'omega') {
     const fyd = basis.design.steel.yieldStress;

@@ -5,8 +5,9 @@
  * and `padding` make the view exactly one page.
  */
 import type { SheetData, TemplateParams } from './sheet-data.js';
-import { tickFormat, tickValues } from './axes.js';
-import { chartConfig, COLOURS, pageFrame, round2, TEXT_STYLES, textLayer, type TextStyle } from './style.js';
+import { minorValues, tickFormat, tickValues, type SheetAxes } from './axes.js';
+import { chartConfig, COLOURS, LINE_KINDS, MINOR_GRID, pageFrame, round2, TEXT_STYLES, textLayer, textPt, type TextStyle } from './style.js';
+import { CURVE_LABEL_EM, REF_LABEL_EM } from './sheet-data.js';
 import { panelTemplate } from './panel-spec.js';
 
 export type VlSpec = Record<string, unknown>;
@@ -48,6 +49,7 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
   if (t.panels) return panelTemplate(t);
   const { layout: L } = t;
   const u = L.u;
+  const mt = L.minText ?? 0;
   const o = t.overlay;
   const a = t.axes;
   const x = { field: 'M', type: 'quantitative', scale: o ? { domain: o.domainM, nice: false, zero: false } : a ? { domain: a.M.domain, nice: false, zero: false } : { zero: true, nice: true } };
@@ -63,62 +65,85 @@ export function sheetTemplate(t: TemplateParams): VlSpec {
   const layers: Record<string, unknown>[] = [
     { name: 'frame', data: { name: 'frame' }, mark: { type: 'point', opacity: 0 }, encoding: { x, y } },
     { name: 'rects', data: { name: 'rects' }, mark: { type: 'rect' }, encoding: { x: raw('x'), x2: { field: 'x2' }, y: raw('y'), y2: { field: 'y2' }, fill: lit('fill'), stroke: lit('stroke'), strokeWidth: raw('strokeWidth'), order: z } },
-    plotLine('rays', 'ray', { color: COLOURS.ray, strokeWidth: 0.7, strokeDash: [1.2, 2.6] }),
+    ...(a && !o ? minorGrid(a) : []),
+    plotLine('rays', 'ray', { color: COLOURS.ray, strokeWidth: LINE_KINDS.ray.width, strokeDash: [...LINE_KINDS.ray.dash] }),
     plotLine('zero', 'zero', { color: COLOURS.muted, strokeWidth: 0.8 }),
-    plotLine('strain_lines', 'strain', { color: COLOURS.strain, strokeWidth: 0.9, strokeDash: [5, 2.5] }),
-    plotLine('cap_line', 'cap', { color: COLOURS.cap, strokeWidth: 0.9, strokeDash: [7, 2, 1.5, 2] }),
+    plotLine('strain_lines', 'strain', { color: COLOURS.strain, strokeWidth: LINE_KINDS.strain.width, strokeDash: [...LINE_KINDS.strain.dash] }),
+    plotLine('cap_line', 'cap', { color: COLOURS.cap, strokeWidth: LINE_KINDS.cap.width, strokeDash: [...LINE_KINDS.cap.dash] }),
   ];
   for (const fam of t.families) {
     const design = fam === 'design';
-    const faded = t.families.length > 1 && !design;
+    const kind = LINE_KINDS[design ? 'design' : 'nominal'];
     layers.push({
       name: `curves_${fam}`,
       data: { name: 'curves' },
       transform: [{ filter: `datum.family === '${fam}'` }],
-      mark: { type: 'line', strokeWidth: faded ? 0.8 : 1.5, ...(faded ? { strokeDash: [4, 2.5], opacity: 0.75 } : {}), strokeJoin: 'round' },
+      mark: { type: 'line', strokeWidth: kind.width, ...(kind.dash.length ? { strokeDash: [...kind.dash] } : {}), strokeJoin: 'round' },
       encoding: { x, y, detail: { field: 'curve' }, order: { field: 'i' }, stroke: lit('colour') },
     });
   }
+  // knockouts: a paper box under every plot label, above every line, so no line runs through a label
+  const knock = (name: string, data: string) => ({
+    name,
+    data: { name: data },
+    transform: [{ filter: 'datum.knock' }],
+    mark: { type: 'point', filled: true, opacity: 1, size: 4, color: COLOURS.paper, strokeWidth: 0 },
+    encoding: { x, y, shape: { field: 'knock', type: 'nominal' as const, scale: null }, order: z },
+  });
+  layers.push(knock('ref_label_knockouts', 'refLabels'), knock('curve_label_knockouts', 'curveLabels'));
   const refLabel = (kind: string, colour: string, dx: number, dy: number) => ({
     name: `labels_${kind}`,
     data: { name: 'refLabels' },
     transform: [{ filter: `datum.kind === '${kind}'` }],
-    mark: { type: 'text', align: 'left', baseline: 'middle', dx, dy, fontSize: round2(0.78 * u), color: colour },
+    mark: { type: 'text', align: 'left', baseline: 'middle', dx, dy, fontSize: textPt(REF_LABEL_EM, u, mt), color: colour },
     encoding: { x, y, text: { field: 'text' }, order: z },
   });
   layers.push(
     refLabel('ray', COLOURS.muted, 2, -2),
     refLabel('strain', COLOURS.strain, 0, 0),
     refLabel('cap', COLOURS.cap, 0, 0),
-    {
-      name: 'curve_label_halo',
+    ...([1, 0] as const).map((b) => ({
+      name: b ? 'curve_labels' : 'curve_labels_regular',
       data: { name: 'curveLabels' },
-      mark: { type: 'text', align: 'center', baseline: 'middle', fontSize: round2(0.82 * u), fontWeight: 'bold', stroke: COLOURS.paper, strokeWidth: 3, strokeJoin: 'round' },
-      encoding: { x, y, text: { field: 'text' }, order: z },
-    },
-    {
-      name: 'curve_labels',
-      data: { name: 'curveLabels' },
-      mark: { type: 'text', align: 'center', baseline: 'middle', fontSize: round2(0.82 * u), fontWeight: 'bold' },
+      transform: [{ filter: b ? 'datum.bold !== 0' : 'datum.bold === 0' }],
+      mark: { type: 'text', align: 'center', baseline: 'middle', fontSize: textPt(CURVE_LABEL_EM, u, mt), fontWeight: b ? 'bold' : 'normal' },
       encoding: { x, y, text: { field: 'text' }, fill: lit('colour'), order: z },
-    },
+    })),
     { name: 'rules', data: { name: 'rules' }, mark: { type: 'rule' }, encoding: { x: raw('x'), x2: { field: 'x2' }, y: raw('y'), y2: { field: 'y2' }, stroke: lit('stroke'), strokeWidth: raw('strokeWidth'), order: z } },
     { name: 'rings', data: { name: 'rings' }, mark: { type: 'point', shape: 'circle', filled: false, strokeWidth: 1.1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), stroke: lit('fill'), order: z } },
     { name: 'dots', data: { name: 'dots' }, mark: { type: 'point', shape: 'circle', filled: true, opacity: 1 }, encoding: { x: raw('x'), y: raw('y'), size: raw('size'), fill: lit('fill'), order: z } },
-    ...(Object.keys(TEXT_STYLES) as TextStyle[]).map((s) => textLayer(s, u)),
+    ...(Object.keys(TEXT_STYLES) as TextStyle[]).map((s) => textLayer(s, u, mt)),
     ...logoLayer(t),
   );
-  if (o) layers.splice(layers.findIndex((l) => l.name === 'rules'), 0, ...overlayLayers(x, y, u, o.loadRays !== false));
+  if (o) {
+    // load lines and marks under the label knockouts, load labels (placed clear of curve labels) on top
+    const ov = overlayLayers(x, y, u, o.loadRays !== false);
+    const isLabel = (l: Record<string, unknown>) => String(l.name).includes('label');
+    layers.splice(layers.findIndex((l) => l.name === 'ref_label_knockouts'), 0, ...ov.filter((l) => !isLabel(l)));
+    layers.splice(layers.findIndex((l) => l.name === 'rules'), 0, ...ov.filter(isLabel));
+  }
 
   return {
     ...pageFrame(L),
-    config: chartConfig(u),
+    config: chartConfig(u, mt),
     encoding: {
       x: { ...x, axis: { title: t.xTitle, orient: 'bottom', ...(a && !o ? { values: tickValues(a.M), format: tickFormat(a.M) } : { tickCount: 12 }) } },
       y: { ...y, axis: { title: t.yTitle, ...(a && !o ? { values: tickValues(a.P), format: tickFormat(a.P) } : { tickCount: 14 }) } },
     },
     layer: layers,
   };
+}
+
+/** The minor grid of a chart sheet: fine lines between the major grid lines (axes.ts minorValues), under every mark. */
+function minorGrid(a: SheetAxes): Record<string, unknown>[] {
+  const mark = { type: 'rule', color: MINOR_GRID, strokeWidth: 0.3 };
+  const xs = minorValues(a.M);
+  const ys = minorValues(a.P);
+  const scale = (d: [number, number]) => ({ domain: d, nice: false, zero: false });
+  return [
+    ...(xs.length ? [{ name: 'minor_grid_M', data: { values: xs.map((v) => ({ v })) }, mark, encoding: { x: { field: 'v', type: 'quantitative', scale: scale(a.M.domain) } } }] : []),
+    ...(ys.length ? [{ name: 'minor_grid_P', data: { values: ys.map((v) => ({ v })) }, mark, encoding: { y: { field: 'v', type: 'quantitative', scale: scale(a.P.domain) } } }] : []),
+  ];
 }
 
 /** How the report's caption names the load marks (src/sheet/check-report.ts). */

@@ -19,7 +19,7 @@ import { biaxialStemPart, biaxialTitlePart, DEFAULT_TITLE_PATTERN, fileStemFor, 
 import { expandNumbers } from './expand.js';
 import { checkRules } from './rules.js';
 import { readLogo, readOfficeFile, withOfficeDefaults, type FileAccess, type ReadOffice } from './office.js';
-import { ChartSetFileSchema, type ChartSetFile, type SheetGroupFile, type ShapeFile } from './schema.js';
+import { ChartSetFileSchema, type BarEntryDrawing, type ChartSetFile, type SheetGroupFile, type ShapeFile } from './schema.js';
 import { PAPER_POINTS, type ResolvedChartSet, type ResolvedShape, type ResolvedSheet } from './types.js';
 
 export interface ReadOptions {
@@ -219,7 +219,7 @@ export function resolveChartSet(file: ChartSetFile, opts: ReadOptions = {}): Res
       strainStates: file.referenceLines?.strainStates ?? true,
       eccentricities: file.referenceLines?.eccentricities ?? [0.1, 0.25, 0.5, 1],
       axialCap: file.referenceLines?.axialCap ?? true,
-      barEntry: file.referenceLines?.barEntry ?? true,
+      barEntry: barEntryDrawing(file.referenceLines?.barEntry),
     },
     outputs: {
       pdf: file.outputs?.pdf ?? true,
@@ -253,4 +253,9 @@ function axisLimits(v: [number, number], path: string): [number, number] {
     throw new PmError(ERROR_CODES.invalidValue, path, 'must be [low, high] with low below high', { value: JSON.stringify(v) });
   }
   return [v[0], v[1]];
+}
+
+/** `referenceLines.barEntry`: its earlier booleans read as the drawings they chose (true "steps", false "chord"). */
+export function barEntryDrawing(v: BarEntryDrawing | boolean | undefined): BarEntryDrawing {
+  return v === true ? 'steps' : v === false ? 'chord' : (v ?? 'inner');
 }

@@ -72,6 +72,9 @@ const BasisOptions = z
   .strict();
 
 export const PAPER_SIZES = ['a4', 'a3', 'letter', 'tabloid'] as const;
+/** How sheets draw bar-entry steps (`referenceLines.barEntry`). */
+export const BAR_ENTRY_DRAWINGS = ['inner', 'steps', 'chord'] as const;
+export type BarEntryDrawing = (typeof BAR_ENTRY_DRAWINGS)[number];
 export type PaperSize = (typeof PAPER_SIZES)[number];
 export const ORIENTATIONS = ['landscape', 'portrait'] as const;
 export const NORMALISATIONS = ['stress', 'dimensionless'] as const;
@@ -221,8 +224,8 @@ export const ChartSetFileSchema = z
         eccentricities: list(ranged(ECCENTRICITY_RANGE), 20).describe('radial lines of constant e/h; default [0.1, 0.25, 0.5, 1]').optional(),
         axialCap: z.boolean().describe('line through the points where each curve meets its axial cap; default true').optional(),
         barEntry: z
-          .boolean()
-          .describe('draw the step where a bar row enters the rectangular stress block as computed (true), or smooth it into a chord on the inner side for presentation (false); tables keep the computed values; default true')
+          .union([z.enum(BAR_ENTRY_DRAWINGS), z.boolean()])
+          .describe('how a bar-entry step (a bar row entering the rectangular stress block drops P and M at one neutral-axis depth) is drawn: "inner" the inner (conservative) branch, the least moment the computed curve reaches at each axial level, never crossing itself, which the check\'s chart reading also reads; "steps" as computed, folds included; "chord" a chord on the inner side of each step; tables keep the computed values; true and false, its earlier values, read as "steps" and "chord"; default "inner"')
           .optional(),
       })
       .strict()

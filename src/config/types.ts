@@ -3,7 +3,7 @@ import type { BasisOptions, CodeId, Transverse } from '../codes/types.js';
 import type { Arrangement } from '../section/types.js';
 import type { UnitSystem } from '../units/index.js';
 import type { ResolvedLogo } from './logo.js';
-import type { FamilyChoice, Normalisation, PaperSize } from './schema.js';
+import type { BarEntryDrawing, FamilyChoice, Normalisation, PaperSize } from './schema.js';
 
 export const RATIO_KINDS = ['rhoG', 'omega'] as const;
 export type RatioKind = (typeof RATIO_KINDS)[number];
@@ -82,7 +82,7 @@ export interface ResolvedChartSet {
    * sheet converts to ρg with its own basis (src/sheet/curves.ts sheetRhos).
    */
   ratios: { kind: RatioKind; values: number[] };
-  referenceLines: { strainStates: boolean; eccentricities: number[]; axialCap: boolean; barEntry?: boolean };
+  referenceLines: { strainStates: boolean; eccentricities: number[]; axialCap: boolean; barEntry?: BarEntryDrawing };
   outputs: { pdf: boolean; svg: boolean; png: boolean; pngScale: number; tables: boolean };
   sheets: ResolvedSheet[];
 }

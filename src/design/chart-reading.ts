@@ -3,9 +3,11 @@
  * with curves at fixed ρg steps (0.01). On a sheet, the reading is the linear interpolation along the
  * load ray between the two curves that bracket the point; between sheets, linear in γ (common practice).
  * The traditional reading takes the sheet with the next lower γ and rounds ρg up to the next curve.
- * Curves are read as drawn: the polyline of the family's points, axial cap included.
+ * Curves are read as drawn: the inner (conservative) branch of the family's points, axial cap included
+ * (src/analysis/inner-branch.ts), the line a chart sheet draws by default (`referenceLines.barEntry`).
  */
 import { computeFamily, type Curve, type CurveFamily } from '../analysis/family.js';
+import { innerBranch, type Polyline } from '../analysis/inner-branch.js';
 import type { Basis, CapContext } from '../codes/types.js';
 import type { Arrangement, Shape } from '../section/types.js';
 import type { NormalisedLoad } from './ray.js';
@@ -68,11 +70,19 @@ export function buildChartSet(req: ChartSetRequest): ChartSet {
   return { lower: sheet(lower), upper: upper === null ? null : sheet(upper), gamma: req.gamma, gammaStep, rhos };
 }
 
+const drawnLines = new WeakMap<Curve, Polyline>();
+
+/** The factored curve as a sheet draws it: its inner branch (computed once per curve). */
+export function drawnLine(curve: Curve, negativeStart?: number): Polyline {
+  let line = drawnLines.get(curve);
+  if (!line) drawnLines.set(curve, (line = innerBranch(curve.phiMn, curve.phiPn, negativeStart)));
+  return line;
+}
+
 /** Where the ray through the load meets a drawn curve, as a multiple of the load (polyline intersection). */
-export function drawnScale(curve: Curve, load: NormalisedLoad): number {
+export function drawnScale(curve: Curve, load: NormalisedLoad, negativeStart?: number): number {
   const { P: p, M: m } = load;
-  const P = curve.phiPn;
-  const M = curve.phiMn;
+  const { P, M } = drawnLine(curve, negativeStart);
   const n = P.length;
   if (p === 0 && m === 0) return Infinity;
   if (m === 0) return p > 0 ? P[n - 1]! / p : P[0]! / p;
@@ -105,11 +115,12 @@ export function readSheet(sheet: ChartSheet, load: NormalisedLoad): SheetReading
   const curves = sheet.family.curves;
   if (curves.length === 0) return { gamma: sheet.gamma, rho: null, roundedUp: null, position: 'outside-highest' };
   // curve by curve, outward, stopping at the bracket (most loads need a few of the curves)
-  let b = drawnScale(curves[0]!, load);
+  const neg = sheet.family.negativeBranchStart;
+  let b = drawnScale(curves[0]!, load, neg);
   if (b >= 1) return { gamma: sheet.gamma, rho: curves[0]!.rho, roundedUp: curves[0]!.rho, position: 'inside-lowest' };
   for (let k = 0; k + 1 < curves.length; k++) {
     const a = b;
-    b = drawnScale(curves[k + 1]!, load);
+    b = drawnScale(curves[k + 1]!, load, neg);
     if (a < 1 && b >= 1) {
       const rho = curves[k]!.rho + ((1 - a) / (b - a)) * (curves[k + 1]!.rho - curves[k]!.rho);
       return { gamma: sheet.gamma, rho, roundedUp: curves[k + 1]!.rho, position: 'between' };

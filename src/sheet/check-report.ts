@@ -17,6 +17,7 @@
  */
 import { contourSpec } from '../chart/contour-spec.js';
 import type { Box, SheetLayout } from '../chart/layout.js';
+import { roundStep } from '../chart/axes.js';
 import { LOAD_MARK_WORDS } from '../chart/spec.js';
 import { breakLines, Deco, drawTitleBlock, estWidth, logoInner, plotLayers, wrap, type LoadLabelRow, type LogoRef, type SheetData, type TemplateParams } from '../chart/sheet-data.js';
 import { COLOURS, TEXT_STYLES, type TextStyle } from '../chart/style.js';
@@ -123,22 +124,39 @@ export function buildCheckReport(input: CheckReportInput): CheckReportPage {
 
   // 1. the family at the actual γ, the governing curve, the loads
   const family = checkFamily(c, SHEET_BASE_POINTS);
-  plotLayers(
-    { family, set: { referenceLines: { strainStates: true, eccentricities: [0.1, 0.25, 0.5, 1], axialCap: true }, ratios: { kind: 'rhoG', values: [...c.chart.rhos] } } },
-    L,
-    ['design'],
-    'design',
-    1,
-    data,
-  );
+  const plotCtx = { family, set: { referenceLines: { strainStates: true, eccentricities: [0.1, 0.25, 0.5, 1], axialCap: true }, ratios: { kind: 'rhoG' as const, values: [...c.chart.rhos] } } };
+  // a first pass fits the axes to the curves and the loads; the second places the curves' labels at that
+  // scale, near the loads' axial levels and clear of their marks
+  const scratch: SheetData = { curves: [], curveLabels: [], refs: [], refLabels: [], frame: [], texts: [], rects: [], rules: [], dots: [], rings: [] };
+  plotLayers(plotCtx, L, ['design'], 'design', 1, scratch);
   const gov = c.results[0];
   const req = gov?.rhoRequired ?? null;
   const onStep = (rho: number) => c.chart.rhos.some((r) => Math.abs(r - rho) < 5e-4);
   if (gov && req !== null && !onStep(req)) extraCurve(c, req, `ρg req ${fmt(req, 4)}`, data);
   const checked = c.checked?.rho;
   if (checked !== undefined && !onStep(checked) && (req === null || Math.abs(checked - req) >= 5e-4)) extraCurve(c, checked, `checked ρg ${fmt(checked, 4)}`, data);
-  const domain = plotDomain(data, c.results);
+  const domain = plotDomain({ ...scratch, extraCurves: data.extraCurves ?? [] }, c.results);
+  const px = (M: number) => ((M - domain.domainM[0]) / (domain.domainM[1] - domain.domainM[0])) * L.plot.w;
+  const py = (P: number) => L.plot.h - ((P - domain.domainP[0]) / (domain.domainP[1] - domain.domainP[0])) * L.plot.h;
+  const shown = c.results.filter((r) => Number.isFinite(r.chartM) && Number.isFinite(r.normalised.P));
+  // the loads' labels first (clear of the extra curves' labels), then the curves' labels clear of them
   placeLoads(L, domain, c.results, data);
+  const keepClear = [
+    ...(data.loadLabels ?? []).map((l) => {
+      const fs = (l.governing ? 0.86 : 0.76) * L.u;
+      return { x0: l.x - 1, y0: l.y - 0.65 * fs, x1: l.x + estWidth(l.text, fs) + 3, y1: l.y + 0.65 * fs };
+    }),
+    ...shown.map((r) => ({ x0: px(r.chartM) - 0.9 * L.u, y0: py(r.normalised.P) - 0.9 * L.u, x1: px(r.chartM) + 0.9 * L.u, y1: py(r.normalised.P) + 0.9 * L.u })),
+    ...data.curveLabels.map((l) => {
+      const w = estWidth(l.text, 0.82 * L.u);
+      return { x0: px(l.M) - w / 2, y0: py(l.P) - 0.6 * L.u, x1: px(l.M) + w / 2, y1: py(l.P) + 0.6 * L.u };
+    }),
+  ];
+  plotLayers(plotCtx, L, ['design'], 'design', 1, data, {
+    axes: { M: { domain: domain.domainM, step: roundStep(domain.domainM[1] - domain.domainM[0], 10) }, P: { domain: domain.domainP, step: roundStep(domain.domainP[1] - domain.domainP[0], 12) } },
+    focusP: shown.slice(0, 12).map((r) => r.normalised.P),
+    reserved: keepClear,
+  });
 
   const sy = b.symbols;
   const su = DISPLAY_UNITS[u].stress;
@@ -281,7 +299,7 @@ function placeLoads(L: SheetLayout, d: { domainM: [number, number]; domainP: [nu
   const py = (P: number) => L.plot.h - ((P - d.domainP[0]) / (d.domainP[1] - d.domainP[0])) * L.plot.h;
   const placed: { x0: number; y0: number; x1: number; y1: number }[] = [];
   // labels of the extra curves (centred on their point) are obstacles too
-  for (const c of data.curveLabels.filter((l) => l.colour === COLOURS.ink)) {
+  for (const c of data.curveLabels) {
     const w = estWidth(c.text, 0.82 * L.u);
     placed.push({ x0: px(c.M) - w / 2, y0: py(c.P) - 0.6 * L.u, x1: px(c.M) + w / 2, y1: py(c.P) + 0.6 * L.u });
   }

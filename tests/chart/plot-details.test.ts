@@ -3,7 +3,7 @@
  * drawing, the nominal family's tone, and the label placer.
  */
 import { describe, expect, it } from 'vitest';
-import { buildSheet, barEntryIndices, lighter } from '../../src/chart/sheet-data.js';
+import { buildSheet, barEntryIndices } from '../../src/chart/sheet-data.js';
 import { roundScale, roundStep, tickFormat, tickValues } from '../../src/chart/axes.js';
 import { LabelPlacer, segmentHitsBox } from '../../src/chart/labels.js';
 import { sheetSpec } from '../../src/chart/spec.js';
@@ -38,12 +38,20 @@ describe('round axis steps (common practice: 1, 2, 2.5, 5 × 10^k)', () => {
 
 describe('group scales', () => {
   const group = { sheets: [{ fc: [4, 8], fy: 60, gamma: [0.6, 0.9], arrangement: { kind: 'two-faces', barsPerFace: 3 } }, { fc: 5, fy: 60, gamma: 0.8, arrangement: { kind: 'two-faces', barsPerFace: 3 } }] };
-  it('draws every sheet of a group to one scale, the envelope of its sheets', () => {
-    const axes = [0, 1, 2, 3].map((k) => build(group, k, true).built.template.axes);
-    for (const a of axes) expect(a).toEqual(axes[0]);
-    // the strongest sheet (f′c 8, γ 0.9) sets the moment axis: it must cover that sheet's own curves
-    const own = build(group, 3).built.template.axes!;
-    expect(axes[0]!.M.domain[1]).toBeGreaterThanOrEqual(own.M.domain[1]);
+  it('draws the sheets of a group to one scale, the envelope of its sheets, where each sheet fills 75 % of it', () => {
+    // f′c 8 ksi, γ 0.8 and 0.85: near-identical families share the group's scale
+    const close = { sheets: [{ fc: 8, fy: 60, gamma: [0.8, 0.85], arrangement: { kind: 'two-faces', barsPerFace: 3 } }] };
+    const shared = [0, 1].map((k) => build(close, k, true).built.template.axes);
+    expect(shared[1]).toEqual(shared[0]);
+    const own = build(close, 1).built.template.axes!;
+    expect(shared[0]!.M.domain[1]).toBeGreaterThanOrEqual(own.M.domain[1]);
+  });
+  it('gives a sheet its own scale where the group envelope would leave its curves under 75 % of an axis', () => {
+    // f′c 4 ksi, γ 0.6 beside f′c 8 ksi, γ 0.9: at P/Ag in ksi the weaker family spans about half the
+    // stronger one's range (P scales with f′c), so a shared scale would leave half its plot empty
+    const axes = [0, 1, 2, 3].map((k) => build(group, k, true).built.template.axes!);
+    expect(axes[0]).toEqual(build(group, 0).built.template.axes);
+    expect(axes[0]).not.toEqual(axes[3]);
     // a separate group keeps its own scale
     expect(build(group, 4, true).built.template.axes).not.toEqual(axes[0]);
   });
@@ -66,8 +74,8 @@ describe('bar-entry steps', () => {
   // displaced concrete deducted; φ = 0.65 compression-controlled, 21.2.2): at ρg 0.08 a middle row has
   // As = 0.08·2/12 Ag, so φ·ΔP = 0.65·0.85·12·0.08/6 = 0.0884 ksi and φ·ΔM = 0.0884·0.125 = 0.01105 ksi.
   const over = { rhoG: [0.08], sheets: [{ fc: 12, fy: 60, gamma: 0.75, arrangement: { kind: 'four-faces', barsPerFace: 4 } }] };
-  it('draws each step as one straight segment between the two states at the same depth', () => {
-    const { built } = build(over);
+  it('with barEntry: "steps" draws each step as one straight segment between the two states at the same depth', () => {
+    const { built } = build({ ...over, referenceLines: { barEntry: 'steps' } });
     const rows = built.data.curves;
     const drops = rows.slice(1).map((r, i) => ({ dP: r.P - rows[i]!.P, dM: r.M - rows[i]!.M })).filter((d) => d.dP < -0.05);
     const mid = drops.find((d) => Math.abs(d.dP + 0.0884) < 0.002);
@@ -100,12 +108,19 @@ describe('bar-entry steps', () => {
 });
 
 describe('families: both', () => {
-  it('draws nominal curves in a lighter tone of the design curve’s hue and pairs them in a key', () => {
+  it('draws nominal curves in the design curve’s colour, dashed and lighter in weight, labels them and pairs them in a key', () => {
     const { built } = build({ families: 'both' });
     const d = built.data.curves.find((c) => c.curve === 'design-0.02')!.colour;
     const n = built.data.curves.find((c) => c.curve === 'nominal-0.02')!.colour;
-    expect(n).toBe(lighter(d));
-    expect(n).not.toBe(d);
+    expect(n).toBe(d);
+    const spec = sheetSpec(built.template, built.data) as { layer: { name: string; mark: { strokeDash?: number[]; strokeWidth: number } }[] };
+    const nom = spec.layer.find((l) => l.name === 'curves_nominal')!.mark;
+    const des = spec.layer.find((l) => l.name === 'curves_design')!.mark;
+    expect(nom.strokeDash!.length).toBeGreaterThan(0);
+    expect(des.strokeDash).toBeUndefined();
+    expect(nom.strokeWidth).toBeLessThan(des.strokeWidth);
+    // nominal curves carry their own labels in the compression zone ("ρg 0.02 n")
+    expect(built.data.curveLabels.filter((l) => l.text === 'ρg 0.02 n' && l.P > 0).length).toBeGreaterThanOrEqual(2);
     expect(built.data.texts.some((t) => t.text.startsWith('solid φ-factored · dashed nominal'))).toBe(true);
   });
 });

@@ -75,6 +75,29 @@ describe('check --report FILE.svg', () => {
     expect(page.data.extraCurves!.length).toBeGreaterThan(50);
   });
 
+  it('labels the curves where the load is: in the compression zone near its axial level, clear of its mark (issue: reports labelled only the tension branch)', () => {
+    const { check } = computeCheck(hand);
+    const page = buildCheckReport({ check, assumptions: checkAssumptions(check), caution: CAUTION, date: '2026-03-01', generator: 'pmchart test' });
+    const mark = page.data.loadMarks![0]!;
+    const { domainM, domainP } = page.template.overlay!;
+    const L = page.template.layout;
+    const X = (M: number) => ((M - domainM[0]) / (domainM[1] - domainM[0])) * L.plot.w;
+    const Y = (P: number) => ((domainP[1] - P) / (domainP[1] - domainP[0])) * L.plot.h;
+    // the ρg curves (labels "ρg 0.0x"), each labelled in the compression zone; the nearest label to the load
+    // (Pu/Ag = 1.5625 ksi) within a fifth of the plot height of it
+    const comp = page.data.curveLabels.filter((l) => /^ρg 0\.\d+$/.test(l.text) && l.P > 0);
+    expect(new Set(comp.map((l) => l.text)).size).toBe(check.chart.rhos.length);
+    const near = Math.min(...comp.map((l) => Math.abs(Y(l.P) - Y(mark.P))));
+    expect(near).toBeLessThan(0.2 * L.plot.h);
+    // no label box over the load's mark (its ring, 0.9 type units across)
+    for (const l of comp) {
+      const [x0, y0, w, h] = /^M(-?[\d.]+),(-?[\d.]+)h(-?[\d.]+)v(-?[\d.]+)/.exec(l.knock!)!.slice(1).map(Number) as [number, number, number, number];
+      const dx = X(mark.M) - X(l.M);
+      const dy = Y(mark.P) - Y(l.P);
+      expect(dx < x0 || dx > x0 + w || dy < y0 || dy > y0 + h, l.text).toBe(true);
+    }
+  });
+
   it('writes SVG with one mark per load, one governing diamond, the id labels and the contour of the governing load', async () => {
     const loads = join(dir, 'loads.csv');
     writeFileSync(loads, 'id,Pu,Mu,Muy\nG1-gravity,900,300,80\nW2-wind,700,600,150\nU3-uplift,-60,200,20\n');

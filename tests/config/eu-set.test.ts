@@ -70,7 +70,10 @@ describe('demo-eu.json resolved', () => {
   it('draws ω labels, ν/μ axes, fck/fyk, the partial factors and the normalisation on the sheet', () => {
     const sheet = set.sheets[10]!;
     const built = buildSheet({ set, sheet, family: familyForSheet(set, sheet), sheetNumber: 11, sheetCount: 11, generator: 'pmchart test' });
-    expect(built.data.curveLabels.slice(0, 8).map((l) => l.text)).toEqual(['ω 0.1', 'ω 0.2', 'ω 0.3', 'ω 0.4', 'ω 0.5', 'ω 0.6', 'ω 0.7', 'ω 0.8']);
+    // each label gives ω and the sheet's ρg = ω·fcd/fyd (EN 1992-1-1 3.1.6, 3.2.7: fcd = 0.85·60/1.5 = 34 MPa,
+    // fyd = 500/1.15 = 434.8 MPa; ω 0.1 → ρg = 0.1·34/434.8 = 0.00782 by hand)
+    expect(built.data.curveLabels[0]!.text).toBe('ω 0.1 · ρg 0.00782');
+    expect(built.data.curveLabels.slice(0, 8).map((l) => l.text.split(' · ')[0])).toEqual(['ω 0.1', 'ω 0.2', 'ω 0.3', 'ω 0.4', 'ω 0.5', 'ω 0.6', 'ω 0.7', 'ω 0.8']);
     expect(built.template.yTitle).toMatch(/^ν = NRd \/ \(fcd · Ag\)/);
     expect(built.template.xTitle).toMatch(/^μ = MRd \/ \(fcd · Ag · h\)/);
     const texts = built.data.texts.map((t) => t.text);

@@ -39,7 +39,7 @@ describe('readChartSet', () => {
     expect(set.paper).toEqual({ size: 'tabloid', orientation: 'landscape', widthPt: 1224, heightPt: 792 });
     expect(set.sheets[0]!.shape).toEqual({ kind: 'rectangle', aspect: 1 });
     expect(set.sheets[0]!.transverse).toBe('tied');
-    expect(set.referenceLines).toEqual({ strainStates: true, eccentricities: [0.1, 0.25, 0.5, 1], axialCap: true, barEntry: true });
+    expect(set.referenceLines).toEqual({ strainStates: true, eccentricities: [0.1, 0.25, 0.5, 1], axialCap: true, barEntry: 'inner' });
   });
 
   it('converts units once: "48.26MPa" in a US set is 7 ksi (NIST SP 811 factor)', () => {
@@ -135,5 +135,15 @@ describe('chart-set text (issue 25)', () => {
     expect(message.startsWith('set.json: is not valid JSON')).toBe(true);
     expect(message.length).toBeLessThan(400);
     expect(message).not.toMatch(/\u0000/);
+  });
+});
+
+describe('referenceLines.barEntry', () => {
+  it('reads "inner", "steps", "chord", and its earlier booleans as "steps" (true) and "chord" (false)', async () => {
+    const { barEntryDrawing } = await import('../../src/config/read.js');
+    expect(barEntryDrawing(undefined)).toBe('inner');
+    expect(barEntryDrawing('chord')).toBe('chord');
+    expect(barEntryDrawing(true)).toBe('steps');
+    expect(barEntryDrawing(false)).toBe('chord');
   });
 });
