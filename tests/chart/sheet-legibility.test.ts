@@ -39,7 +39,8 @@ afterAll(() => renderer.finalize());
 
 const DEMOS = ['demo.json', 'demo-eu.json', 'demo-au.json'];
 const PAPERS = ['tabloid', 'a3', 'letter', 'a4'] as const;
-const GREEK_CAPITALS = /[\u0391-\u03A9]/;
+// Α … Ω but Σ, the summation sign (ΣPu, ΣPc of a storey), which is no upper-cased σ
+const GREEK_CAPITALS = /[\u0391-\u03A2\u03A4-\u03A9]/;
 
 interface Box { x0: number; y0: number; x1: number; y1: number }
 const overlaps = (a: Box, b: Box) => a.x0 < b.x1 - 0.01 && b.x0 < a.x1 - 0.01 && a.y0 < b.y1 - 0.01 && b.y0 < a.y1 - 0.01;

@@ -25,7 +25,9 @@ import { logoRef } from '../../src/sheet/logo.js';
 import { makeChartSet } from '../../src/sheet/pipeline.js';
 import { renderSheet } from '../../src/sheet/render-sheet.js';
 
-const UPPER_GREEK = /[\u0391-\u03A9]/; // Α … Ω: none of the trade symbols is a capital (γ, ρ, φ, ε, ν, μ, ω)
+// Α … Ω but Σ: none of the trade symbols is a capital (γ, ρ, φ, ε, ν, μ, ω); Σ is the summation sign of the sway
+// storey sums (ΣPu, ΣPc: ACI 318-19 6.6.4.6.2(b)), not an upper-cased σ
+const UPPER_GREEK = /[\u0391-\u03A2\u03A4-\u03A9]/;
 const demo = (file: string, over: (d: any) => void = () => {}): ResolvedChartSet => {
   const d = JSON.parse(readFileSync(join('charts-config', file), 'utf8'));
   over(d);
