@@ -78,6 +78,19 @@ const STATUS_RANK: Record<LoadStatus, number> = { unstable: 0, 'outside-scope': 
 /** Which measure ranks the loads: utilisation of the given reinforcement, else the ρg required. */
 export type GoverningMeasure = 'utilisation' | 'rhoRequired';
 
+
+/**
+ * Why a load has its status, as facts: the slenderness method that stops (its axis and the method's own warning,
+ * in the rulebook's words), the ρg beyond the basis maximum, the broken detailing rule, or the utilisation above 1
+ * and where it comes from. `none` for `ok`. The views make the sentence (report/check-view.ts).
+ */
+export type StatusCause =
+  | { readonly kind: 'none' }
+  | { readonly kind: 'slenderness'; readonly axis: 'x' | 'y'; readonly warning: string | null }
+  | { readonly kind: 'rho-beyond-maximum'; readonly rhoMax: number }
+  | { readonly kind: 'detailing' }
+  | { readonly kind: 'utilisation'; readonly value: number; readonly from: MeasureSource };
+
 /** A section variant: the layout as the load's sign or orientation sees it. */
 export interface VariantInfo {
   /** e.g. "as drawn", "branch with compression on the −y face", "ring turned 15°" */
@@ -132,8 +145,8 @@ export interface ColumnLoadResult {
   /** biaxial results for a load with Muy: exact and approximate utilisations (given reinforcement), and the exact ρg required (none given) */
   readonly biaxial: (Partial<BiaxialResult> & { readonly rhoRequired: number | null; readonly rhoStatus: RhoStatus | null } & BiaxialChartFields) | null;
   readonly status: LoadStatus;
-  /** why, in words, with the clause where there is one; empty for `detailing`, whose reason is the fact `statusFinding` (the views put it in words) */
-  readonly statusReason: string;
+  /** why the load has its status, as facts (the views put it in words: report/check-view.ts `statusReasonOf`) */
+  readonly statusCause: StatusCause;
   readonly statusClause: string | null;
   /** the binding detailing finding the given reinforcement breaks (status `detailing`); null otherwise */
   readonly statusFinding: RuleFinding | null;
@@ -807,13 +820,6 @@ function governingOf(ctx: ColumnCheckContext, candidates: readonly Candidate[], 
   return { g: gov!, bySign };
 }
 
-/** Words for where a failing measure comes from (the x uniaxial and biaxial figures need none). */
-const MEASURE_WORDS: Partial<Record<MeasureSource, string>> = {
-  'x-exact': 'about x, exact search: the neutral axis inclines',
-  y: 'about y alone',
-  'y-exact': 'about y alone, exact search: the neutral axis inclines',
-};
-
 /** The whole result for one load. */
 export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index: number): ColumnLoadResult {
   const { basis, area, depth, input } = ctx;
@@ -1025,22 +1031,20 @@ const endMoments = (l: FactoredLoad): EndMoments => Object.fromEntries(END_KEYS.
 /** Status from the checks, worst first: unstable, outside the method's scope, not possible, detailing (a binding rule broken by the given reinforcement), fails. */
 function statusOf(x: { magnified: MagnifiedLoad | null; checked: boolean; measureValue: number; measureFrom: MeasureSource; notPossible: boolean; finite: boolean; limitsMax: number; detailing: { clause: string } | null }): {
   status: LoadStatus;
-  statusReason: string;
+  statusCause: StatusCause;
   statusClause: string | null;
 } {
   const axes = x.magnified ? ([['x', x.magnified.x], ['y', x.magnified.y]] as const) : [];
   for (const [axis, s] of axes) {
-    if (s && !s.ok && !(s.delta < Infinity)) {
-      return { status: 'unstable', statusReason: `about ${axis}: ${s.warnings[0] ?? 'the axial load reaches the critical load of the magnifier'}`, statusClause: s.limitClause ?? s.method };
-    }
+    if (s && !s.ok && !(s.delta < Infinity)) return { status: 'unstable', statusCause: { kind: 'slenderness', axis, warning: s.warnings[0] ?? null }, statusClause: s.limitClause ?? s.method };
   }
   for (const [axis, s] of axes) {
-    if (s && !s.ok) return { status: 'outside-scope', statusReason: `about ${axis}: ${s.warnings[0] ?? "second-order moment beyond the method's limit"}`, statusClause: s.limitClause ?? s.method };
+    if (s && !s.ok) return { status: 'outside-scope', statusCause: { kind: 'slenderness', axis, warning: s.warnings[0] ?? null }, statusClause: s.limitClause ?? s.method };
   }
-  if (!x.finite || x.notPossible) return { status: 'not-possible', statusReason: `needs more than the maximum ρg = ${fmtRho(x.limitsMax)}: enlarge the section`, statusClause: null };
-  if (x.detailing) return { status: 'detailing', statusReason: '', statusClause: x.detailing.clause };
-  if (x.checked && !(x.measureValue <= 1 + 1e-9)) return { status: 'fails', statusReason: `utilisation ${x.measureValue.toFixed(3)} > 1${MEASURE_WORDS[x.measureFrom] ? ` (${MEASURE_WORDS[x.measureFrom]})` : ''}`, statusClause: null };
-  return { status: 'ok', statusReason: '', statusClause: null };
+  if (!x.finite || x.notPossible) return { status: 'not-possible', statusCause: { kind: 'rho-beyond-maximum', rhoMax: x.limitsMax }, statusClause: null };
+  if (x.detailing) return { status: 'detailing', statusCause: { kind: 'detailing' }, statusClause: x.detailing.clause };
+  if (x.checked && !(x.measureValue <= 1 + 1e-9)) return { status: 'fails', statusCause: { kind: 'utilisation', value: x.measureValue, from: x.measureFrom }, statusClause: null };
+  return { status: 'ok', statusCause: { kind: 'none' }, statusClause: null };
 }
 
 
@@ -1181,7 +1185,8 @@ function assemble(ctx: ColumnCheckContext, d: LoadDigest, gov: ColumnLoadResult 
   const governingWhy = !gov
     ? 'no loads'
     : gov.status !== 'ok' && gov.status !== 'fails'
-      ? `${gov.status}${gov.statusReason ? ` ${gov.statusReason}` : ''}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`
+      ? // the reason is a fact of the load (statusCause): the views put it in words (report/check-view.ts governingWords)
+        `${gov.status}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`
       : measure === 'utilisation'
         ? `highest utilisation ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(3)} (the larger of the uniaxial and exact biaxial figures${GOVERNING_FROM[gov.measureFrom] ?? ''})`
         : `largest ρg required ${gov.measureValue === null ? '—' : gov.measureValue.toFixed(4)}${ctx.biaxial ? ` (the larger of the uniaxial and exact biaxial figures${GOVERNING_FROM[gov.measureFrom] ?? ''})` : GOVERNING_FROM[gov.measureFrom] ? ` (${GOVERNING_FROM[gov.measureFrom]!.slice(2)})` : ''}`;

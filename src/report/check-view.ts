@@ -139,13 +139,40 @@ export function findingReason(basis: Basis, x: RuleFinding): string {
   return `${title}: ${n(x.value)} ${findingComparison(x)} ${n(x.limit)}`;
 }
 
-/** Why a load has its status, in words: the engine's reason, or for `detailing` the broken finding in words. */
-export const statusReasonOf = (r: Pick<ColumnLoadResult, 'statusReason' | 'statusFinding'>, basis: Basis): string => (r.statusFinding ? findingReason(basis, r.statusFinding) : r.statusReason);
+/** Words for where a failing measure comes from (the x uniaxial and biaxial figures need none). */
+const MEASURE_WORDS: Partial<Record<MeasureSource, string>> = {
+  'x-exact': 'about x, exact search: the neutral axis inclines',
+  y: 'about y alone',
+  'y-exact': 'about y alone, exact search: the neutral axis inclines',
+};
 
-/** The governing load's reason in words: the engine's `governingWhy`, with a broken detailing finding put in words. */
+/** ρg to 4 decimals, trailing zeros dropped. */
+const rhoWords = (r: number): string => String(Number(r.toFixed(4)));
+
+/** Why a load has its status, in words, from the engine's facts (`statusCause`, and `statusFinding` for `detailing`). */
+export function statusReasonOf(r: Pick<ColumnLoadResult, 'status' | 'statusCause' | 'statusFinding'>, basis: Basis): string {
+  const c = r.statusCause;
+  switch (c.kind) {
+    case 'none':
+      return '';
+    case 'slenderness':
+      return `about ${c.axis}: ${c.warning ?? (r.status === 'unstable' ? 'the axial load reaches the critical load of the magnifier' : "second-order moment beyond the method's limit")}`;
+    case 'rho-beyond-maximum':
+      return `needs more than the maximum ρg = ${rhoWords(c.rhoMax)}: enlarge the section`;
+    case 'detailing':
+      return r.statusFinding ? findingReason(basis, r.statusFinding) : '';
+    case 'utilisation': {
+      const from = MEASURE_WORDS[c.from];
+      return `utilisation ${c.value.toFixed(3)} > 1${from ? ` (${from})` : ''}`;
+    }
+  }
+}
+
+/** The governing load's reason in words: the engine's `governingWhy`, with the status's reason (a fact of the load) put in words. */
 export function governingWords(c: Pick<ColumnCheckHead, 'governingWhy' | 'basis'>, gov: ColumnLoadResult | undefined): string {
-  if (!gov?.statusFinding) return c.governingWhy;
-  return `${gov.status} ${findingReason(c.basis, gov.statusFinding)}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`;
+  if (!gov || gov.status === 'ok' || gov.status === 'fails') return c.governingWhy;
+  const why = statusReasonOf(gov, c.basis);
+  return `${gov.status}${why ? ` ${why}` : ''}${gov.statusClause ? ` [${gov.statusClause}]` : ''}`;
 }
 
 /** A finding in JSON: the facts, moments and forces in display units. */

@@ -13,6 +13,7 @@
  * P–M diagram is a decreasing M(P). A demand at or above a boundary point there (P ≥ φPn and M ≥ φMn) is outside
  * the diagram (utilisation > 1); a boundary point at or above the demand (φPn ≥ P, φMn ≥ M, P below the cap) holds it.
  */
+import { statusReasonOf } from '../../src/report/check-view.js';
 import { describe, expect, it } from 'vitest';
 import { capacityAlongRay as biaxialRay, prepareBiaxial } from '../../src/analysis/biaxial.js';
 import { resolveBasis } from '../../src/codes/registry.js';
@@ -75,7 +76,9 @@ describe('U1: the y axis is always checked for slenderness and its minimum momen
     expect(r.measureFrom).toBe('y');
     expect(r.measureValue!).toBeGreaterThan(1);
     expect(r.status).toBe('fails');
-    expect(r.statusReason).toContain('about y');
+    // the engine gives the reason as facts; the views say "utilisation … > 1 (about y alone)"
+    expect(r.statusCause).toMatchObject({ kind: 'utilisation', from: 'y' });
+    expect(statusReasonOf(r, c.basis)).toContain('about y');
     expect(c.exitCode).toBe(1);
   });
 });

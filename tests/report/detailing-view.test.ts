@@ -46,7 +46,7 @@ describe('the detailing status in the views', () => {
   it('the engine gives the broken rule as a fact, the views put it in words: JSON statusReason and governingWhy, and the findings list names detailing rules by title (they were shown as raw ids)', () => {
     const r = c.results[0]!;
     expect(r.statusFinding).toMatchObject({ rule: 'clear-spacing', clause: '25.2.3', outcome: 'violated' });
-    expect(r.statusReason).toBe('');
+    expect(r.statusCause).toEqual({ kind: 'detailing' });
     const j = JSON.parse(checkJson(c, 'test'));
     expect(j.results[0].statusReason).toBe('clear spacing ≥ max(1.5 in, 1.5·db, 4/3·dagg): 1.743 < 2.54');
     expect(j.governingWhy).toBe('detailing clear spacing ≥ max(1.5 in, 1.5·db, 4/3·dagg): 1.743 < 2.54 [25.2.3]');
