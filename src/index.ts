@@ -30,6 +30,7 @@ export {
   type ColumnCheckInput,
   type ColumnLoadResult,
   type StatusCause,
+  type LoadNote,
   type LoadStatus,
   type GoverningMeasure,
   type VariantInfo,
@@ -57,7 +58,7 @@ export { BiaxialCharts, DEFAULT_CHART_AXIAL_STEP, type BiaxialChartReading, type
 export type { SlendernessRequest, AxisMember, SwayMember, EndMoments } from './design/column-effects.js';
 export type { SwayInput, SwayMethod, SwayInputs } from './codes/slenderness.js';
 export type { BarProposal, Detailing } from './design/bar-selection.js';
-export { checkJson, checkText, checkReportText, checkJsonPieces, checkTextPieces, checkReportPieces, textSizer, statusReasonOf } from './report/check-view.js';
+export { checkJson, checkText, checkReportText, checkJsonPieces, checkTextPieces, checkReportPieces, textSizer, statusReasonOf, loadNoteText } from './report/check-view.js';
 export { CAUTION } from './report/caution.js';
 export { readChartSet, readChartSetReport } from './config/read.js';
 /** file access for readChartSet's `files` option: the office file and logo a chart set names, relative to `baseDir` */

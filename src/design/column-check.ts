@@ -79,6 +79,23 @@ const STATUS_RANK: Record<LoadStatus, number> = { unstable: 0, 'outside-scope': 
 export type GoverningMeasure = 'utilisation' | 'rhoRequired';
 
 
+
+/** A note on one load's check, as a fact; report/check-view.ts `loadNoteText` puts it in words. */
+export type LoadNote =
+  | { readonly kind: 'rho-not-possible'; readonly rhoMax: number }
+  | { readonly kind: 'rho-minimum-governs'; readonly rhoMin: number }
+  | { readonly kind: 'cap-governs-rho' }
+  /** the moment was raised to the basis minimum; both signs checked where the layout is not symmetric */
+  | { readonly kind: 'moment-raised'; readonly bothSigns: boolean }
+  | { readonly kind: 'method-minimum-both-signs' }
+  /** a ring's weakest uniaxial orientation, degrees from a bar at the compression extreme */
+  | { readonly kind: 'weakest-orientation'; readonly turnDeg: number }
+  | { readonly kind: 'negative-branch-governs' }
+  | { readonly kind: 'off-charts' }
+  | { readonly kind: 'circle-resultant' }
+  | { readonly kind: 'y-moment-raised' }
+  | { readonly kind: 'exact-search'; readonly cause: 'ring-turned' | 'unsymmetric' };
+
 /**
  * Why a load has its status, as facts: the slenderness method that stops (its axis and the method's own warning,
  * in the rulebook's words), the ρg beyond the basis maximum, the broken detailing rule, or the utilisation above 1
@@ -153,7 +170,8 @@ export interface ColumnLoadResult {
   /** the ranking value: max of the uniaxial and exact biaxial figures of `ColumnCheck.measure` (Infinity when not possible) */
   readonly measureValue: number | null;
   readonly governing: boolean;
-  readonly notes: readonly string[];
+  /** what else the check found for this load, as facts (the views put them in words: report/check-view.ts loadNoteText) */
+  readonly notes: readonly LoadNote[];
   /** the check about y alone (one axis at a time): the y minimum moment at the same Pu, with the y slenderness; null where nothing about y is checked alone */
   readonly yAxis: YAxisCheck | null;
   /** the exact biaxial search with Muy = 0, for a layout not symmetric about the bending plane (its neutral axis inclines); null otherwise */
@@ -530,7 +548,6 @@ function eccentricityRatio(P: number, M: number): number | null {
   return Number.isFinite(r) ? r : null;
 }
 
-const fmtRho = (r: number): string => String(Number(r.toFixed(4)));
 
 /** One variant with the load as it sees it, and the sign of the moment (+1 compresses the + face). */
 interface Candidate {
@@ -823,7 +840,7 @@ function governingOf(ctx: ColumnCheckContext, candidates: readonly Candidate[], 
 /** The whole result for one load. */
 export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index: number): ColumnLoadResult {
   const { basis, area, depth, input } = ctx;
-  const notes: string[] = [];
+  const notes: LoadNote[] = [];
   const d = demandOf(ctx, load);
   const { magnified, Mux, Muy, finiteMoments, Mdesign, raised, n, limits, candidates, unsymmetric } = d;
   const checked = ctx.checkedRho !== null;
@@ -832,15 +849,15 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
   const chartM = unsymmetric && Mux < 0 ? -n.M : n.M;
   const chartSet = ctx.charts;
   const reading = chartSet ? withMinimum(readCharts(chartSet, { P: n.P, M: chartM }), limits.min, chartSet.rhos) : { rhoFromChart: null, rhoRoundedDown: null, sheets: [] };
-  if (g.req.status === 'not-possible') notes.push(`not possible within ρg ≤ ${fmtRho(limits.max)}`);
-  if (g.req.status === 'minimum-governs') notes.push(`minimum ρg = ${fmtRho(limits.min)} governs`);
-  if (g.req.governedBy === 'cap') notes.push('axial cap governs ρg');
-  if (raised) notes.push(unsymmetric ? 'moment raised to the basis minimum; both signs checked, the worse governs' : 'moment raised to the basis minimum');
-  else if (unsymmetric && Mux !== 0 && d.signs.length === 2) notes.push('the minimum moment of the slenderness method governs: both signs checked, the worse governs');
-  if (g.v.info.turnDeg !== 0) notes.push(`weakest orientation: ${g.v.info.label}`);
-  if (g.v.info.sign === -1) notes.push('the branch with compression on the −y face governs');
-  if (chartSet && reading.rhoFromChart === null) notes.push('off the charted range');
-  if (input.shape.kind === 'circle' && Muy !== undefined) notes.push('circle: the resultant of Mux and Muy is checked on the weakest orientation');
+  if (g.req.status === 'not-possible') notes.push({ kind: 'rho-not-possible', rhoMax: limits.max });
+  if (g.req.status === 'minimum-governs') notes.push({ kind: 'rho-minimum-governs', rhoMin: limits.min });
+  if (g.req.governedBy === 'cap') notes.push({ kind: 'cap-governs-rho' });
+  if (raised) notes.push({ kind: 'moment-raised', bothSigns: unsymmetric });
+  else if (unsymmetric && Mux !== 0 && d.signs.length === 2) notes.push({ kind: 'method-minimum-both-signs' });
+  if (g.v.info.turnDeg !== 0) notes.push({ kind: 'weakest-orientation', turnDeg: g.v.info.turnDeg });
+  if (g.v.info.sign === -1) notes.push({ kind: 'negative-branch-governs' });
+  if (chartSet && reading.rhoFromChart === null) notes.push({ kind: 'off-charts' });
+  if (input.shape.kind === 'circle' && Muy !== undefined) notes.push({ kind: 'circle-resultant' });
   const s = strainReport(g.strainTable, g.cap);
   const zero = n.P === 0 && n.M === 0;
 
@@ -881,9 +898,9 @@ export function checkOneLoad(ctx: ColumnCheckContext, load: FactoredLoad, index:
       variant: { label: yg.v.info.label, sign: yg.v.info.sign, turnDeg: yg.v.info.turnDeg },
       exact: ex.y,
     };
-    if (d.y.raised) notes.push('about y alone: the moment raised to the basis minimum (one axis at a time)');
+    if (d.y.raised) notes.push({ kind: 'y-moment-raised' });
   }
-  if (ex.x) notes.push(ctx.ringTurns.length > 0 ? 'ring turned off a bar or a mid-gap: exact search with the neutral axis free to incline' : 'bars not symmetric about the bending plane: exact search with the neutral axis free to incline');
+  if (ex.x) notes.push({ kind: 'exact-search', cause: ctx.ringTurns.length > 0 ? 'ring-turned' : 'unsymmetric' });
 
   // 4. status and measure: the largest of every figure
   const utilisation = checked ? g.cap.utilisation : null;

@@ -9,7 +9,7 @@
  */
 import type { RuleFinding } from '../codes/rules.js';
 import { strainClassWord, type Basis } from '../codes/types.js';
-import type { ColumnCheck, ColumnCheckFrame, ColumnCheckHead, ColumnLoadResult, LoadStatus, MeasureSource } from '../design/column-check.js';
+import type { ColumnCheck, ColumnCheckFrame, ColumnCheckHead, ColumnLoadResult, LoadNote, LoadStatus, MeasureSource } from '../design/column-check.js';
 import { detailingRule, findingComparison } from '../design/detailing.js';
 import type { SlendernessResult } from '../design/slenderness.js';
 import { barSet } from '../section/bar-tables.js';
@@ -87,6 +87,34 @@ export function symbolsOf(c: Pick<ColumnCheck, 'basis' | 'shape'>) {
     Po: sy.squashLoad ?? 'Po',
     cap: sy.axialCap ?? 'axial cap',
   };
+}
+
+/** A load's note in words (the JSON's `results[].notes`): the engine gives it as a fact (`LoadNote`). */
+export function loadNoteText(n: LoadNote): string {
+  switch (n.kind) {
+    case 'rho-not-possible':
+      return `not possible within ρg ≤ ${rhoWords(n.rhoMax)}`;
+    case 'rho-minimum-governs':
+      return `minimum ρg = ${rhoWords(n.rhoMin)} governs`;
+    case 'cap-governs-rho':
+      return 'axial cap governs ρg';
+    case 'moment-raised':
+      return n.bothSigns ? 'moment raised to the basis minimum; both signs checked, the worse governs' : 'moment raised to the basis minimum';
+    case 'method-minimum-both-signs':
+      return 'the minimum moment of the slenderness method governs: both signs checked, the worse governs';
+    case 'weakest-orientation':
+      return `weakest orientation: ring turned ${String(Number(n.turnDeg.toFixed(2)))}° from a bar at the compression extreme`;
+    case 'negative-branch-governs':
+      return 'the branch with compression on the −y face governs';
+    case 'off-charts':
+      return 'off the charted range';
+    case 'circle-resultant':
+      return 'circle: the resultant of Mux and Muy is checked on the weakest orientation';
+    case 'y-moment-raised':
+      return 'about y alone: the moment raised to the basis minimum (one axis at a time)';
+    case 'exact-search':
+      return n.cause === 'ring-turned' ? 'ring turned off a bar or a mid-gap: exact search with the neutral axis free to incline' : 'bars not symmetric about the bending plane: exact search with the neutral axis free to incline';
+  }
 }
 
 /** The note column of a load's row. */
@@ -888,7 +916,7 @@ export function resultJson(r: ColumnLoadResult, c: ColumnCheckFrame) {
     statusClause: r.statusClause,
     measure: orNull(r.measureValue),
     governing: r.governing,
-    notes: r.notes,
+    notes: r.notes.map(loadNoteText),
     measureFrom: r.measureFrom,
     findings: r.findings.map((x) => findingJson(x, u)),
     yAxis: r.yAxis
