@@ -17,6 +17,7 @@ import { layoutBars } from '../section/arrangements.js';
 import { grossArea, sectionDepth, sectionWidth } from '../section/geometry.js';
 import type { Arrangement, Bar, Shape } from '../section/types.js';
 import { contourPointAtAngle, prepareBiaxial, type BiaxialSection, type ModelKind } from './biaxial.js';
+import { goldenSection } from './solve.js';
 
 /** Moment-direction step of the tabulated contours, degrees (common practice for drawn contours). */
 export const DEFAULT_ANGLE_STEP_DEG = 5;
@@ -109,28 +110,7 @@ export function fitLoadContour(points: readonly { u: number; v: number }[]): { a
   if (pts.length === 0) return { alpha: NaN, misfit: NaN };
   const polar = pts.map((p) => ({ r: Math.hypot(p.u, p.v), phi: Math.atan2(Math.abs(p.v), Math.abs(p.u)) }));
   const sse = (a: number) => polar.reduce((s, q) => s + (q.r / loadContourRadius(q.phi, a) - 1) ** 2, 0);
-  let lo = ALPHA_SEARCH_MIN;
-  let hi = ALPHA_SEARCH_MAX;
-  const g = (Math.sqrt(5) - 1) / 2;
-  let x1 = hi - g * (hi - lo);
-  let x2 = lo + g * (hi - lo);
-  let f1 = sse(x1);
-  let f2 = sse(x2);
-  while (hi - lo > 1e-9) {
-    if (f1 <= f2) {
-      hi = x2;
-      x2 = x1;
-      f2 = f1;
-      x1 = hi - g * (hi - lo);
-      f1 = sse(x1);
-    } else {
-      lo = x1;
-      x1 = x2;
-      f1 = f2;
-      x2 = lo + g * (hi - lo);
-      f2 = sse(x2);
-    }
-  }
+  const { lo, hi } = goldenSection(sse, ALPHA_SEARCH_MIN, ALPHA_SEARCH_MAX, (l, h) => h - l <= 1e-9);
   const alpha = (lo + hi) / 2;
   const misfit = polar.reduce((m, q) => Math.max(m, Math.abs(q.r / loadContourRadius(q.phi, alpha) - 1)), 0);
   return { alpha, misfit };

@@ -69,3 +69,32 @@ export function findRootOnGrid(f: (x: number) => number, grid: ArrayLike<number>
   }
   return NaN;
 }
+
+/**
+ * Golden-section search for a minimum of f on [lo, hi] (Press et al., Numerical Recipes, 3rd ed., 10.2): the
+ * bracket shrinks by 0.618 per evaluation until `done(lo, hi, step)`; returns the final bracket. f is assumed
+ * unimodal on the bracket; a caller that cannot assume so keeps the best value it saw.
+ */
+export function goldenSection(f: (x: number) => number, lo: number, hi: number, done: (lo: number, hi: number, step: number) => boolean): { lo: number; hi: number } {
+  const g = (Math.sqrt(5) - 1) / 2;
+  let x1 = hi - g * (hi - lo);
+  let x2 = lo + g * (hi - lo);
+  let f1 = f(x1);
+  let f2 = f(x2);
+  for (let step = 0; !done(lo, hi, step); step++) {
+    if (f1 <= f2) {
+      hi = x2;
+      x2 = x1;
+      f2 = f1;
+      x1 = hi - g * (hi - lo);
+      f1 = f(x1);
+    } else {
+      lo = x1;
+      x1 = x2;
+      f1 = f2;
+      x2 = lo + g * (hi - lo);
+      f2 = f(x2);
+    }
+  }
+  return { lo, hi };
+}

@@ -18,6 +18,7 @@
 import { DEFAULT_ANGLE_STEP_DEG } from '../analysis/biaxial-family.js';
 import { capacityAlongRay as biaxialRay, prepareBiaxial, type BiaxialSection } from '../analysis/biaxial.js';
 import { prepareSection } from '../analysis/prepared-section.js';
+import { goldenSection } from '../analysis/solve.js';
 import type { RuleFinding } from '../codes/rules.js';
 import type { Basis, CapContext, StrainClass } from '../codes/types.js';
 import { layoutBars, mirroredBars, symmetricAboutBendingAxis, type LayoutOptions } from '../section/arrangements.js';
@@ -774,28 +775,8 @@ function weakestDirection(turns: readonly number[], at: (deg: number) => ReturnT
       k = i;
     }
   }
-  let a = turns[Math.max(0, k - 1)]!;
-  let b = turns[Math.min(turns.length - 1, k + 1)]!;
-  const g = (Math.sqrt(5) - 1) / 2;
-  let x1 = b - g * (b - a);
-  let x2 = a + g * (b - a);
-  let f1 = see(x1);
-  let f2 = see(x2);
-  for (let i = 0; i < RING_REFINE_ITERATIONS; i++) {
-    if (f1 >= f2) {
-      b = x2;
-      x2 = x1;
-      f2 = f1;
-      x1 = b - g * (b - a);
-      f1 = see(x1);
-    } else {
-      a = x1;
-      x1 = x2;
-      f1 = f2;
-      x2 = a + g * (b - a);
-      f2 = see(x2);
-    }
-  }
+  // the search minimises −u; `see` keeps the largest utilisation seen, so the refinement can only raise it
+  goldenSection((x) => -see(x), turns[Math.max(0, k - 1)]!, turns[Math.min(turns.length - 1, k + 1)]!, (_l, _h, step) => step >= RING_REFINE_ITERATIONS);
   return best!;
 }
 
